@@ -1,0 +1,5 @@
+"""Allow ``python -m gate``."""
+
+from gate.cli import main
+
+main()

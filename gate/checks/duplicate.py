@@ -1,0 +1,275 @@
+"""duplicate: is the document a copy or near-copy of one already kept?
+
+A corpus check: it sees every candidate of the batch and every document accepted in
+earlier runs. Only documents that pass every other check compete to be kept, so a stale
+or denied copy never knocks out a good one; documents already held for other reasons are
+still compared with the keepers, so their reasons say they are duplicates too.
+
+How similarity is measured (in the worker): the text is normalised (NFKC, case-folded,
+punctuation to spaces), split into words, and turned into the set of word 5-grams (the
+shingles of Broder 1997, with w = 5 as in published corpus pipelines, for example FineWeb
+and RefinedWeb). A MinHash sketch of 256 permutations (datasketch, ``affine32`` scheme,
+seed 1) estimates the Jaccard similarity of two shingle sets with a standard error of
+``sqrt(J(1-J)/256)``, 0.025 at J = 0.8. Exact copies (same bytes, or same normalised text,
+whatever the format) are caught first by hash. Documents with fewer than ``min_shingles``
+shingles are compared only exactly, because sketches of tiny sets collide.
+
+Candidates come from MinHash LSH with ``b`` bands of ``r`` rows chosen so that a pair at
+the threshold becomes a candidate with probability at least 0.995 (1-(1-t^r)^b, Mining of
+Massive Datasets section 3.4.2); each candidate is then confirmed by the estimated Jaccard
+``>= duplicates.threshold``.
+
+Which one is kept: documents are ranked by the ``trust`` of their allow rule (higher
+first), then by date (newer first; undated last), then by first seen (earlier runs first,
+then inbox order), and taken greedily: a document is kept unless it is a near-duplicate of
+one already kept. The finding names the keeper, the similarity and, when the two differ in
+numbers, dates or amounts, the differing tokens side by side. When the keeper replaces a
+document accepted in an earlier run, that one is superseded.
+
+Example::
+
+    duplicates:
+      threshold: 0.80
+"""
+
+from __future__ import annotations
+
+import difflib
+import hashlib
+import re
+import unicodedata
+from collections.abc import Callable, Sequence
+from dataclasses import dataclass, field
+from datetime import datetime
+from functools import lru_cache
+from typing import Any
+
+import numpy as np
+from datasketch import LeanMinHash, MinHash, MinHashLSH
+from pydantic import Field
+
+from gate.checks.base import CorpusCheck
+from gate.extract.model import Extraction
+from gate.findings import Finding, define
+from gate.policy.base import Section
+
+NUM_PERM = 256
+SEED = 1
+SCHEME = "affine32"
+SHINGLE = 5
+MIN_CANDIDATE_PROBABILITY = 0.995
+
+EXACT = define("duplicate.exact", "an exact copy of a kept document",
+               "this is an exact copy ({how}) of {keeper}, which is kept{why}")
+NEAR = define("duplicate.near", "a near-duplicate of a kept document",
+              "this is a near-duplicate of {keeper} (estimated Jaccard {similarity:.2f}, "
+              "threshold {threshold:.2f}), which is kept{why}{diverging}")
+SUPERSEDED = define("duplicate.superseded", "replaced by a newer or more trusted version",
+                    "accepted in an earlier run, now replaced by {keeper} (estimated "
+                    "Jaccard {similarity:.2f}){why}{diverging}")
+
+
+class DuplicatesSettings(Section):
+    """Near-duplicate detection."""
+
+    threshold: float = Field(0.80, ge=0.3, le=1.0, description="Estimated Jaccard "
+                             "similarity at or above which two documents are "
+                             "near-duplicates.", examples=[0.8])
+    min_shingles: int = Field(20, ge=1, description="Documents with fewer word 5-grams are "
+                              "only compared exactly.")
+
+
+_NONWORD = re.compile(r"[\W_]+", re.UNICODE)
+
+
+def words(text: str) -> list[str]:
+    """The normalised words of a text: NFKC, case-folded, punctuation removed."""
+    return _NONWORD.sub(" ", unicodedata.normalize("NFKC", text).casefold()).split()
+
+
+def shingles(tokens: Sequence[str], w: int = SHINGLE) -> set[str]:
+    """Broder's w-shingling: the set of contiguous w-token sequences."""
+    if len(tokens) < w:
+        return {" ".join(tokens)} if tokens else set()
+    return {" ".join(tokens[i:i + w]) for i in range(len(tokens) - w + 1)}
+
+
+@lru_cache(maxsize=1)
+def _permutations() -> Any:
+    return MinHash(num_perm=NUM_PERM, seed=SEED).permutations
+
+
+def sketch(items: set[str]) -> MinHash:
+    """A MinHash of a set of strings (datasketch, affine32, seed 1, 256 permutations)."""
+    m = MinHash(num_perm=NUM_PERM, seed=SEED, permutations=_permutations(), scheme=SCHEME)
+    if items:
+        m.update_batch([s.encode("utf-8") for s in sorted(items)])
+    return m
+
+
+def lean(hashvalues: bytes) -> LeanMinHash:
+    values = np.frombuffer(hashvalues, dtype="<u4").astype(np.uint64)
+    return LeanMinHash(seed=SEED, hashvalues=values, scheme=SCHEME)
+
+
+def measure(extraction: Extraction) -> dict[str, Any]:
+    """Shingle the text and sketch it (runs in the worker)."""
+    tokens = words(extraction.text)
+    normal = " ".join(tokens)
+    grams = shingles(tokens)
+    values = sketch(grams).hashvalues.astype("<u4").tobytes()
+    return {"text_sha256": hashlib.sha256(normal.encode("utf-8")).hexdigest(),
+            "shingles": len(grams), "minhash": values}
+
+
+def band_params(threshold: float, num_perm: int = NUM_PERM) -> tuple[int, int]:
+    """The (bands, rows) with the most rows that still catch a pair at ``threshold``
+    with probability >= 0.995, by the S-curve 1-(1-t^r)^b (MMDS section 3.4.2)."""
+    best = (num_perm, 1)
+    for rows in range(1, num_perm + 1):
+        bands = num_perm // rows
+        if bands < 2:
+            break
+        if 1 - (1 - threshold ** rows) ** bands >= MIN_CANDIDATE_PROBABILITY:
+            best = (bands, rows)
+    return best
+
+
+@dataclass(frozen=True)
+class Item:
+    """One document taking part in duplicate detection."""
+
+    key: str  # document id
+    path: str
+    sha256: str
+    text_sha256: str | None
+    minhash: bytes | None  # None: too few shingles for a sketch comparison
+    trust: int
+    date: datetime | None  # the date freshness used (latest instant); None: undated
+    seen: tuple  # first-seen order: (run sequence, inbox order)
+    in_batch: bool = True  # False: accepted in an earlier run and not in this inbox
+    accepted_before: bool = False  # accepted in an earlier run (in this inbox or not)
+    candidate: bool = True  # False: already held by another check
+
+
+@dataclass
+class Outcome:
+    findings: dict[str, list[Finding]] = field(default_factory=dict)
+    superseded: dict[str, Finding] = field(default_factory=dict)  # stored, not in batch
+    keepers: set[str] = field(default_factory=set)
+
+
+def _rank(item: Item) -> tuple:
+    date = item.date.timestamp() if item.date is not None else float("-inf")
+    return (-item.trust, -date, item.seen, item.key)
+
+
+def _why(kept: Item, other: Item) -> str:
+    if kept.trust != other.trust:
+        return f" (its source is more trusted: trust {kept.trust} over {other.trust})"
+    if kept.date and (other.date is None or kept.date > other.date):
+        return " (it is newer)"
+    return " (it was seen first)"
+
+
+_NUMBERISH = re.compile(r"\d")
+
+
+def diverging_tokens(left: str, right: str, limit: int = 8) -> list[list[str]]:
+    """Pairs of differing word runs that involve digits (numbers, dates, amounts)."""
+    a, b = left.split(), right.split()
+    pairs: list[list[str]] = []
+    matcher = difflib.SequenceMatcher(a=a, b=b, autojunk=False)
+    for op, i1, i2, j1, j2 in matcher.get_opcodes():
+        if op == "equal":
+            continue
+        old, new = " ".join(a[i1:i2]), " ".join(b[j1:j2])
+        if _NUMBERISH.search(old) or _NUMBERISH.search(new):
+            pairs.append([old[:80], new[:80]])
+            if len(pairs) >= limit:
+                break
+    return pairs
+
+
+def evaluate(items: Sequence[Item], settings: DuplicatesSettings,
+             text_of: Callable[[str], str | None] | None = None) -> Outcome:
+    """Decide keepers among ``items`` (pure, apart from reading texts for diffs)."""
+    outcome = Outcome()
+    bands, rows = band_params(settings.threshold)
+    lsh = MinHashLSH(num_perm=NUM_PERM, params=(bands, rows))
+    sketches: dict[str, LeanMinHash] = {}
+    by_bytes: dict[str, Item] = {}
+    by_text: dict[str, Item] = {}
+    kept: dict[str, Item] = {}
+    competing = sorted((i for i in items if i.candidate), key=_rank)
+    held = [i for i in items if not i.candidate]
+
+    def find(item: Item) -> tuple[Item, str, float] | None:
+        if item.sha256 in by_bytes:
+            return by_bytes[item.sha256], "same bytes", 1.0
+        if item.text_sha256 and item.text_sha256 in by_text:
+            return by_text[item.text_sha256], "same text", 1.0
+        if item.minhash is None:
+            return None
+        mine = sketches.get(item.key) or lean(item.minhash)
+        best: tuple[Item, str, float] | None = None
+        for key in sorted(lsh.query(mine)):
+            similarity = float(mine.jaccard(sketches[key]))
+            if similarity >= settings.threshold and (best is None or similarity > best[2]):
+                best = (kept[key], "near", similarity)
+        return best
+
+    for item in competing:
+        hit = find(item)
+        if hit is None:
+            kept[item.key] = item
+            by_bytes.setdefault(item.sha256, item)
+            if item.text_sha256:
+                by_text.setdefault(item.text_sha256, item)
+            if item.minhash is not None:
+                sketches[item.key] = lean(item.minhash)
+                lsh.insert(item.key, sketches[item.key], check_duplication=False)
+            continue
+        keeper, how, similarity = hit
+        finding = _finding(item, keeper, how, similarity, settings, text_of)
+        if not item.in_batch:
+            outcome.superseded[item.key] = finding
+        else:
+            outcome.findings.setdefault(item.key, []).append(finding)
+    for item in held:
+        hit = find(item)
+        if hit is not None:
+            keeper, how, similarity = hit
+            outcome.findings.setdefault(item.key, []).append(
+                _finding(item, keeper, how, similarity, settings, text_of))
+    outcome.keepers = set(kept)
+    return outcome
+
+
+def _finding(item: Item, keeper: Item, how: str, similarity: float,
+             settings: DuplicatesSettings, text_of: Callable[[str], str | None] | None
+             ) -> Finding:
+    why = _why(keeper, item)
+    pairs: list[list[str]] = []
+    if how == "near" and text_of is not None:
+        left, right = text_of(item.key), text_of(keeper.key)
+        if left is not None and right is not None:
+            pairs = diverging_tokens(left, right)
+    diverging = ""
+    if pairs:
+        diverging = "; the versions disagree: " + ", ".join(
+            f"{old!r} here vs {new!r} in the keeper" for old, new in pairs[:3])
+    details = dict(keeper=keeper.path, keeper_id=keeper.key, similarity=round(similarity, 4),
+                   threshold=settings.threshold, why=why, diverging=diverging,
+                   differences=pairs)
+    if item.accepted_before and not keeper.accepted_before:
+        return SUPERSEDED(**details)
+    if how != "near":
+        return EXACT(how=how, **{k: v for k, v in details.items()
+                                 if k not in ("diverging", "differences", "threshold",
+                                              "similarity")})
+    return NEAR(**details)
+
+
+CHECK = CorpusCheck(id="duplicate", section="duplicates", settings=DuplicatesSettings,
+                    measure=measure, doc=__doc__ or "")

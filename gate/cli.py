@@ -1,0 +1,233 @@
+"""The command line: a thin layer over :mod:`gate.pipeline` and :mod:`gate.policy`.
+
+Every command turns the library's errors into one paragraph on stderr and an exit code:
+0 the command completed (whatever was quarantined), 2 it could not run (bad policy,
+missing inbox, unreadable manifest, busy or unusable output folder), 130 interrupted (re-run
+the same command to resume), 70 an internal error in gate itself.
+"""
+
+from __future__ import annotations
+
+import os
+import sys
+import time
+from pathlib import Path
+from typing import Annotated, Optional
+
+os.environ.setdefault("OPENBLAS_NUM_THREADS", "1")  # numpy is used single-threaded here
+
+import typer  # noqa: E402
+from rich.console import Console  # noqa: E402
+from rich.progress import (BarColumn, MofNCompleteColumn, Progress, TextColumn,  # noqa: E402
+                           TimeElapsedColumn)
+
+from gate import __version__  # noqa: E402
+from gate.errors import GateError, UsageError  # noqa: E402
+
+EXIT_UNABLE = 2
+EXIT_INTERNAL = 70
+EXIT_INTERRUPTED = 130
+
+app = typer.Typer(add_completion=False, pretty_exceptions_enable=False, no_args_is_help=True,
+                  help="gate: check documents against a policy before they reach a "
+                       "retrieval index.")
+policy_app = typer.Typer(add_completion=False, no_args_is_help=True,
+                         help="Validate policy files and print their schema.")
+app.add_typer(policy_app, name="policy")
+
+err_console = Console(stderr=True, highlight=False)
+out_console = Console(highlight=False)
+
+
+def _fail(message: str, code: int = EXIT_UNABLE) -> None:
+    err_console.print(f"error: {message}", markup=False, soft_wrap=True)
+    raise typer.Exit(code)
+
+
+def _guard(fn):
+    """Run a command body, mapping every failure to one paragraph and an exit code."""
+    try:
+        return fn()
+    except typer.Exit:
+        raise
+    except GateError as err:
+        _fail(str(err))
+    except KeyboardInterrupt:
+        _fail("interrupted. Nothing is lost: re-run the same command to complete the run.",
+              EXIT_INTERRUPTED)
+    except Exception as err:  # noqa: BLE001 - the last line of defence against tracebacks
+        if os.environ.get("GATE_DEBUG"):
+            raise
+        _fail(f"gate hit an internal error ({type(err).__name__}: {err}). This is a bug; "
+              "please report it with the command you ran. Set GATE_DEBUG=1 to see the "
+              "traceback.", EXIT_INTERNAL)
+
+
+class BarReporter:
+    """Progress on stderr, drawn only when stderr is a terminal. No refresh thread: the
+    worker pool forks, and a forked child must not inherit a thread's locks."""
+
+    def __init__(self, enabled: bool):
+        self.enabled = enabled
+        self.progress: Progress | None = None
+        self.task = None
+        self.last = 0.0
+
+    def stage(self, name: str, total: int | None) -> None:
+        if not self.enabled:
+            return
+        if self.progress is None:
+            self.progress = Progress(TextColumn("{task.description:<11}"), BarColumn(),
+                                     MofNCompleteColumn(), TimeElapsedColumn(),
+                                     TextColumn("{task.fields[path]}", style="dim"),
+                                     console=err_console, auto_refresh=False, transient=True)
+            self.progress.start()
+        if self.task is not None:
+            self.progress.update(self.task, visible=False)
+        self.task = self.progress.add_task(name, total=total, path="")
+        self.progress.refresh()
+
+    def advance(self, path: str | None = None) -> None:
+        if self.progress is None or self.task is None:
+            return
+        shown = (path or "")[-50:]
+        self.progress.update(self.task, advance=1, path=shown)
+        now = time.monotonic()
+        if now - self.last > 0.1:
+            self.last = now
+            self.progress.refresh()
+
+    def note(self, message: str) -> None:
+        err_console.print(message, markup=False)
+
+    def close(self) -> None:
+        if self.progress is not None:
+            self.progress.stop()
+            self.progress = None
+
+
+def _print_summary(result, report: dict) -> None:
+    s = result.summary
+    run = report.get("run", {})
+    out_console.print(f"{result.run_id}: {s['documents']} documents, {s['accepted']} "
+                      f"accepted, {s['quarantined']} quarantined (as of {run.get('as_of')}"
+                      f"{', resumed' if result.resumed else ''})", markup=False)
+    if s["quarantined_by_code"]:
+        out_console.print("quarantined by reason (a document can have several):",
+                          markup=False)
+        for code, count in sorted(s["quarantined_by_code"].items(), key=lambda kv: (-kv[1],
+                                                                                    kv[0])):
+            out_console.print(f"  {code:<28} {count:>6}", markup=False)
+    if s["warnings_by_code"]:
+        out_console.print("warnings (documents accepted):", markup=False)
+        for code, count in sorted(s["warnings_by_code"].items()):
+            out_console.print(f"  {code:<28} {count:>6}", markup=False)
+    if s["changes"]:
+        changes = ", ".join(f"{k} {v}" for k, v in s["changes"].items())
+        out_console.print(f"changes for the index: {changes}", markup=False)
+    rate = s["documents"] / result.seconds if result.seconds > 0 else 0.0
+    out_console.print(f"report: {result.report_path}  ({result.seconds:.1f} s, "
+                      f"{rate:.1f} documents/s)", markup=False)
+
+
+@app.command("run")
+def run_command(
+    inbox: Annotated[Path, typer.Argument(help="Folder of incoming documents (walked "
+                                               "recursively; never modified).")],
+    policy: Annotated[Path, typer.Option("--policy", help="Policy file (YAML).")],
+    out: Annotated[Path, typer.Option("--out", help="Output folder: accepted/, quarantine/, "
+                                                    "report.json, changes.jsonl, state/.")],
+    manifest: Annotated[Optional[Path], typer.Option(  # noqa: UP007
+        "--manifest", help="Manifest (JSON lines); default INBOX/manifest.jsonl.")] = None,
+    as_of: Annotated[Optional[str], typer.Option(  # noqa: UP007
+        "--as-of", help="Clock for freshness, ISO 8601 (default: now, UTC).")] = None,
+    workers: Annotated[Optional[int], typer.Option(  # noqa: UP007
+        "--workers", min=1, max=256, help="Worker processes (default: the number of "
+                                          "cores).")] = None,
+    incremental: Annotated[bool, typer.Option(
+        "--incremental", help="The inbox holds only new or changed documents: do not "
+                              "remove earlier documents that are missing from it.")] = False,
+    quiet: Annotated[bool, typer.Option("--quiet", "-q", help="No progress bar.")] = False,
+) -> None:
+    """Check every document of INBOX and route it to accepted/ or quarantine/."""
+    reporter = BarReporter(enabled=not quiet and err_console.is_terminal)
+
+    def body():
+        from gate import dates
+        from gate.pipeline import RunOptions
+        from gate.pipeline import run as run_pipeline
+        from gate.policy import load_policy
+
+        when = None
+        if as_of is not None:
+            try:
+                when = dates.parse_as_of(as_of)
+            except dates.DateProblem as err:
+                raise UsageError(str(err)) from None
+        loaded = load_policy(policy)
+        options = RunOptions(inbox=inbox, policy=loaded, out=out, manifest=manifest,
+                             as_of=when, workers=workers or os.cpu_count() or 1,
+                             incremental=incremental)
+        try:
+            result = run_pipeline(options, reporter)
+        finally:
+            reporter.close()
+        import json
+        report = json.loads(result.report_path.read_text(encoding="utf-8"))
+        _print_summary(result, report)
+
+    _guard(body)
+
+
+@policy_app.command("check")
+def policy_check(file: Annotated[Path, typer.Argument(help="Policy file to validate.")]
+                 ) -> None:
+    """Validate a policy file; errors name the line and the key path."""
+
+    def body():
+        from gate.policy import load_policy
+        loaded = load_policy(file)
+        sections = [name for name in ("sources", "integrity", "freshness", "language",
+                                      "duplicates", "injection", "quality", "format")
+                    if getattr(loaded.policy, name, None) is not None]
+        out_console.print(f"{file}: valid policy {loaded.name!r} (checks on: "
+                          f"{', '.join(sections) or 'format only'})", markup=False)
+
+    _guard(body)
+
+
+@policy_app.command("schema")
+def policy_schema() -> None:
+    """Print the JSON Schema of policy files (for editor completion)."""
+
+    def body():
+        from gate.policy import schema_text
+        sys.stdout.write(schema_text())
+
+    _guard(body)
+
+
+@app.command("codes")
+def codes_command(markdown: Annotated[bool, typer.Option(
+        "--markdown", help="Print the table as Markdown (docs/codes.md).")] = False) -> None:
+    """List every finding code with its check and meaning."""
+
+    def body():
+        from gate.codes import markdown_table, text_table
+        sys.stdout.write(markdown_table() if markdown else text_table())
+
+    _guard(body)
+
+
+@app.command("version")
+def version_command() -> None:
+    """Print gate's version."""
+    out_console.print(f"gate {__version__}", markup=False)
+
+
+def main() -> None:
+    try:
+        app()
+    except KeyboardInterrupt:
+        err_console.print("error: interrupted.", markup=False)
+        sys.exit(EXIT_INTERRUPTED)

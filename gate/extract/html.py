@@ -1,0 +1,191 @@
+"""HTML documents: decoding, one lxml parse, text by trafilatura, metadata from the head.
+
+The page is decoded here (BOM, then the declared charset, then detection), parsed once
+with lxml and the same tree is handed to trafilatura, so the text, the metadata and the
+raw view the injection screen reads all come from one parse. Dates are taken only from
+explicit meta tags; htmldate's guessing from URLs and body text is not used, because a
+freshness decision must be explainable ("the page's article:modified_time says ...").
+
+A page nested deeper than ``limits.max_nesting`` is refused: libxml2 silently drops every
+element past depth ~255 (and past ~2,048 with ``huge_tree``), including everything after
+the deep part, so extracted text would not be the page.
+"""
+
+from __future__ import annotations
+
+import codecs
+import re
+
+import lxml.etree
+import lxml.html
+import trafilatura
+
+from gate.extract.model import DateClaim, Extracted, Extraction, failed
+from gate.extract.text import clean_text, decode
+
+_META_CHARSET = re.compile(
+    rb"""<meta[^>]+?charset\s*=\s*["']?\s*([A-Za-z0-9_.:-]+)""", re.I)
+# WHATWG Encoding Standard: these labels all mean windows-1252 in a browser.
+_WINDOWS_1252_LABELS = {"iso-8859-1", "iso8859-1", "latin1", "latin-1", "l1", "ascii",
+                        "us-ascii", "iso_8859-1", "cp819", "ibm819", "windows-1252", "cp1252"}
+
+# Meta tags read for dates, as (attribute, value, role); the first found per role wins.
+DATE_META = (
+    ("property", "article:published_time", "published"),
+    ("itemprop", "datepublished", "published"),
+    ("name", "dcterms.created", "published"),
+    ("name", "dc.date.issued", "published"),
+    ("name", "dc.date", "published"),
+    ("name", "date", "published"),
+    ("property", "article:modified_time", "modified"),
+    ("property", "og:updated_time", "modified"),
+    ("itemprop", "datemodified", "modified"),
+    ("name", "dcterms.modified", "modified"),
+    ("http-equiv", "last-modified", "modified"),
+)
+_SKIP_TEXT = {"script", "style", "noscript", "template", "head", "title"}
+_BLOCKS = {"p", "div", "br", "li", "h1", "h2", "h3", "h4", "h5", "h6", "tr", "section",
+           "article", "table", "ul", "ol", "blockquote", "pre"}
+
+
+def declared_charset(data: bytes) -> str | None:
+    """The charset a page declares in its first 1024 bytes (WHATWG prescan, simplified)."""
+    m = _META_CHARSET.search(data[:1024])
+    return m.group(1).decode("ascii").lower() if m else None
+
+
+def decode_html(data: bytes, encoding: str | None) -> tuple[str, str, str | None, bool] | None:
+    """Decode a page; returns (text, encoding used, declared charset, declaration lied)."""
+    if encoding is not None:  # a byte-order mark outranks any declaration
+        decoded = decode(data, encoding)
+        return (decoded[0], decoded[1], None, False) if decoded else None
+    declared = declared_charset(data)
+    if declared:
+        label = "cp1252" if declared in _WINDOWS_1252_LABELS else declared
+        try:
+            codecs.lookup(label)
+        except LookupError:
+            label = None
+        if label:
+            try:
+                return data.decode(label), label, declared, False
+            except UnicodeDecodeError:
+                if label == "cp1252":  # five bytes are undefined in cp1252; latin-1 has them
+                    return data.decode("latin-1"), "latin-1", declared, False
+    decoded = decode(data)
+    if decoded is None:
+        return None
+    text, used = decoded
+    return text, used, declared, bool(declared) and codecs.lookup(used).name != \
+        _lookup_name(declared)
+
+
+def _lookup_name(label: str) -> str:
+    try:
+        return codecs.lookup("cp1252" if label in _WINDOWS_1252_LABELS else label).name
+    except LookupError:
+        return label
+
+
+def max_depth(root: lxml.etree._Element) -> int:
+    """Deepest element nesting below ``root`` (iterative: no recursion limit)."""
+    deepest = 0
+    stack = [(root, 1)]
+    while stack:
+        node, depth = stack.pop()
+        if depth > deepest:
+            deepest = depth
+        stack.extend((child, depth + 1) for child in node)
+    return deepest
+
+
+def _meta_dates(root: lxml.etree._Element) -> tuple[DateClaim, ...]:
+    found: dict[str, DateClaim] = {}
+    metas = [m for m in root.iter("meta")]
+    for attr, value, role in DATE_META:
+        if role in found:
+            continue
+        for meta in metas:
+            if (meta.get(attr) or "").strip().lower() == value:
+                content = (meta.get("content") or "").strip()
+                if content:
+                    found[role] = DateClaim(role, f"meta {value}", content[:200])
+                    break
+    return tuple(found[r] for r in ("published", "modified") if r in found)
+
+
+def _first(root: lxml.etree._Element, xpath: str) -> str | None:
+    values = root.xpath(xpath)
+    for value in values:
+        value = str(value).strip()
+        if value:
+            return value[:2000]
+    return None
+
+
+def fallback_text(root: lxml.etree._Element) -> str:
+    """Body text without scripts, styles, templates or comments.
+
+    Used only when trafilatura returns nothing (it does so for short pages), so a short
+    but real page is not mistaken for an empty one.
+    """
+    body = root.find("body")
+    start = body if body is not None else root
+    parts: list[str] = []
+    skip = 0
+    for event, node in lxml.etree.iterwalk(start, events=("start", "end")):
+        skipped = not isinstance(node.tag, str) or node.tag in _SKIP_TEXT
+        if event == "start":
+            if skipped:
+                skip += 1
+            elif skip == 0 and node.text:
+                parts.append(node.text)
+            continue
+        if skipped:
+            skip -= 1
+        if skip == 0:
+            if node.tag in _BLOCKS:
+                parts.append("\n")
+            if node.tail and node is not start:
+                parts.append(node.tail)
+    return re.sub(r"[ \t]+", " ", "".join(parts))
+
+
+def extract_html(data: bytes, encoding: str | None, max_nesting: int) -> Extraction:
+    """Extract an HTML page (``encoding`` comes from a byte-order mark, if any)."""
+    decoded = decode_html(data, encoding)
+    if decoded is None:
+        return failed("html", "undecodable",
+                      "the page is in no character encoding that could be detected")
+    markup, used, declared, mismatch = decoded
+    parser = lxml.html.HTMLParser(encoding="utf-8", huge_tree=True, remove_comments=False,
+                                  remove_pis=True, no_network=True)
+    try:
+        root = lxml.html.document_fromstring(markup.encode("utf-8", "surrogatepass"),
+                                             parser=parser)
+    except (lxml.etree.ParserError, ValueError) as err:
+        if not markup.strip():
+            return failed("html", "empty-text", "the page holds only white space")
+        return failed("html", "broken", f"the HTML could not be parsed ({err})")
+    depth = max_depth(root)
+    common = dict(type="html", encoding=used, declared_charset=declared,
+                  charset_mismatch=mismatch, nesting_depth=depth)
+    if depth > max_nesting:
+        return failed(problem="too-deep",
+                      detail=f"elements are nested {depth} levels deep (limit "
+                             f"{max_nesting}); HTML parsers silently drop content past "
+                             "about 255 levels, so the extracted text would not be the page",
+                      type_="html", **{k: v for k, v in common.items() if k != "type"})
+    text = trafilatura.extract(root, include_comments=False, include_tables=True,
+                               deduplicate=False, with_metadata=False) or ""
+    if not text.strip():
+        text = fallback_text(root)
+    text = clean_text(text)
+    title = _first(root, "//meta[@property='og:title']/@content") or \
+        _first(root, "//title/text()")
+    canonical = _first(root, "//link[translate(@rel,'CANONICAL','canonical')='canonical']/@href") \
+        or _first(root, "//meta[@property='og:url']/@content")
+    lang = _first(root, "/html/@lang")
+    summary = Extracted(title=title, canonical_url=canonical, declared_lang=lang,
+                        text_chars=len(text), dates=_meta_dates(root), **common)
+    return Extraction(summary=summary, text=text, raw=data, decoded=markup, tree=root)

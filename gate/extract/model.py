@@ -1,0 +1,87 @@
+"""What extraction produces.
+
+:class:`Extraction` lives only inside the worker process: besides the summary it holds the
+raw bytes and the parsed objects (lxml tree, PDF reader) that measurements such as the
+injection screen read. Only :class:`Extracted`, a small picklable summary, and the text
+travel back to the parent process.
+"""
+
+from __future__ import annotations
+
+from dataclasses import asdict, dataclass, field
+from typing import Any
+
+# Extraction problems. Each one becomes a ``format`` finding in the parent.
+PROBLEMS = {
+    "empty-file", "unsupported", "undecodable", "broken", "encrypted", "too-large",
+    "too-many-pages", "too-deep", "timeout", "crashed", "memory", "unreadable",
+    "not-regular", "empty-text", "bomb",
+}
+
+
+@dataclass(frozen=True)
+class DateClaim:
+    """A date a document or its manifest states, and where it was found."""
+
+    role: str  # published | modified
+    source: str  # e.g. "manifest published_at", "meta article:published_time", "PDF /ModDate"
+    text: str
+
+
+@dataclass(frozen=True)
+class Extracted:
+    """The picklable summary of one extraction (no text; the text travels separately)."""
+
+    type: str | None  # pdf | html | text, or None when the type is not supported
+    problem: str | None = None  # one of PROBLEMS, or None when extraction succeeded
+    problem_detail: str = ""
+    sniffed: str = ""  # what sniffing said, e.g. "a PNG image"
+    text_chars: int = 0
+    title: str | None = None
+    canonical_url: str | None = None
+    declared_lang: str | None = None
+    encoding: str | None = None
+    declared_charset: str | None = None
+    charset_mismatch: bool = False
+    pages: int | None = None
+    encrypted: bool = False
+    nesting_depth: int | None = None
+    dates: tuple[DateClaim, ...] = ()
+    metadata: dict[str, str] = field(default_factory=dict)
+
+    @property
+    def ok(self) -> bool:
+        return self.problem is None
+
+    def to_json(self) -> dict[str, Any]:
+        out = asdict(self)
+        out["dates"] = [asdict(d) for d in self.dates]
+        return {k: v for k, v in out.items() if v not in (None, "", {}, [], False)
+                or k in ("type", "text_chars")}
+
+    @classmethod
+    def from_json(cls, data: dict[str, Any]) -> Extracted:
+        data = dict(data)
+        data["dates"] = tuple(DateClaim(**d) for d in data.get("dates", ()))
+        return cls(**data)
+
+
+@dataclass
+class Extraction:
+    """Worker-side result: the summary, the text and the raw material measurements use."""
+
+    summary: Extracted
+    text: str = ""
+    raw: bytes = b""
+    decoded: str | None = None  # the decoded markup or text, for HTML and text documents
+    tree: Any = None  # lxml root element, for HTML
+    reader: Any = None  # pypdf.PdfReader, for PDF
+    extras: dict[str, Any] = field(default_factory=dict)  # e.g. PDF annotations, XMP text
+
+
+def failed(type_: str | None, problem: str, detail: str, sniffed: str = "",
+           **more: Any) -> Extraction:
+    """An extraction that did not produce usable text."""
+    assert problem in PROBLEMS, problem
+    return Extraction(Extracted(type=type_, problem=problem, problem_detail=detail,
+                                sniffed=sniffed, **more))

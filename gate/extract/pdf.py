@@ -1,0 +1,189 @@
+"""PDF documents: text, page count, Info and XMP metadata, annotations, with pypdf.
+
+pypdf has had denial-of-service bugs on crafted files, so this runs only inside a worker
+process that the parent kills on a deadline (see :mod:`gate.extract.pool`); here its own
+decompression caps are lowered as a first line of defence and the external ``jbig2dec``
+binary is switched off, so a PDF never makes pypdf run another program.
+"""
+
+from __future__ import annotations
+
+import io
+import logging
+import re
+from typing import Any
+
+import pypdf
+from pypdf.errors import DependencyError, FileNotDecryptedError, LimitReachedError, PyPdfError
+
+from gate.extract.model import DateClaim, Extracted, Extraction, failed
+from gate.extract.text import clean_text
+
+logging.getLogger("pypdf").setLevel(logging.ERROR)
+
+# Output cap for any one decoded stream. pypdf's own default is 75 MB; a text document's
+# content streams are far smaller, and a lower cap makes a decompression bomb fail fast.
+STREAM_CAP = 32_000_000
+META_KEYS = ("/Title", "/Author", "/Subject", "/Keywords", "/Creator", "/Producer",
+             "/CreationDate", "/ModDate")
+_XMP_DATE = re.compile(
+    r"(xmp|xap):(CreateDate|ModifyDate)\s*(?:=\s*[\"']([^\"']{1,80})[\"']|>\s*([^<]{1,80})<)")
+_TAGS = re.compile(r"<[^>]{0,2000}>")
+MAX_META_CHARS = 65_536
+
+
+def _config() -> dict[str, Any]:
+    return dict(zlib_maximum_output_length=STREAM_CAP, lzw_maximum_output_length=STREAM_CAP,
+                run_length_maximum_output_length=STREAM_CAP,
+                brotli_maximum_output_length=STREAM_CAP,
+                jbig2_maximum_output_length=STREAM_CAP,
+                array_based_stream_maximum_output_length=STREAM_CAP,
+                maximum_declared_stream_length=STREAM_CAP,
+                jbig2dec_binary=None)
+
+
+def _text(value: Any) -> str:
+    try:
+        return str(value)[:MAX_META_CHARS]
+    except Exception:  # noqa: BLE001 - a hostile object must not stop extraction
+        return ""
+
+
+def _metadata(reader: pypdf.PdfReader) -> dict[str, str]:
+    info = reader.trailer.get("/Info")
+    if info is None:
+        return {}
+    try:
+        info = info.get_object()
+    except PyPdfError:
+        return {}
+    if not hasattr(info, "get"):
+        return {}
+    out: dict[str, str] = {}
+    for key in META_KEYS:
+        value = info.get(key)
+        if value is not None:
+            out[key[1:]] = _text(value)
+    return out
+
+
+def _xmp(reader: pypdf.PdfReader) -> str:
+    try:
+        root = reader.trailer["/Root"].get_object()
+        meta = root.get("/Metadata")
+        if meta is None:
+            return ""
+        data = meta.get_object().get_data()
+    except (PyPdfError, KeyError, AttributeError, TypeError, ValueError):
+        return ""
+    return data[:5_000_000].decode("utf-8", errors="replace")
+
+
+def _annotations(reader: pypdf.PdfReader, pages: int) -> list[dict[str, Any]]:
+    found: list[dict[str, Any]] = []
+    for number in range(pages):
+        try:
+            annots = reader.pages[number].get("/Annots")
+            annots = annots.get_object() if annots is not None else []
+            for ref in annots or []:
+                annot = ref.get_object()
+                for key in ("/Contents", "/T", "/TU", "/Alt"):
+                    value = annot.get(key)
+                    if value:
+                        found.append({"page": number + 1, "key": key[1:],
+                                      "subtype": _text(annot.get("/Subtype", "")),
+                                      "text": _text(value)})
+        except (PyPdfError, KeyError, AttributeError, TypeError, ValueError):
+            continue
+        if len(found) > 10_000:
+            break
+    return found
+
+
+def _dates(meta: dict[str, str], xmp: str) -> tuple[DateClaim, ...]:
+    claims: list[DateClaim] = []
+    if meta.get("ModDate"):
+        claims.append(DateClaim("modified", "PDF /ModDate", meta["ModDate"][:200]))
+    if meta.get("CreationDate"):
+        claims.append(DateClaim("published", "PDF /CreationDate", meta["CreationDate"][:200]))
+    for m in _XMP_DATE.finditer(xmp):
+        value = (m.group(3) or m.group(4) or "").strip()
+        if not value:
+            continue
+        role = "modified" if m.group(2) == "ModifyDate" else "published"
+        source = f"XMP {m.group(1)}:{m.group(2)}"
+        if not any(c.source == source for c in claims):
+            claims.append(DateClaim(role, source, value))
+    return tuple(claims)
+
+
+def extract_pdf(data: bytes, max_pages: int) -> Extraction:
+    """Extract a PDF: check encryption and page count first, then pull the text."""
+    try:
+        with pypdf.apply_configuration(**_config()):
+            return _extract(data, max_pages)
+    except LimitReachedError as err:
+        return failed("pdf", "bomb", "a stream of the PDF decompresses past the "
+                                     f"{STREAM_CAP:,}-byte cap ({_why(err)})")
+
+
+def _extract(data: bytes, max_pages: int) -> Extraction:
+    try:
+        reader = pypdf.PdfReader(io.BytesIO(data), strict=False)
+    except DependencyError as err:
+        return failed("pdf", "encrypted", f"the PDF uses encryption gate cannot open ({err})")
+    except LimitReachedError:
+        raise
+    except (PyPdfError, ValueError, KeyError, TypeError, AttributeError, IndexError,
+            RecursionError, AssertionError) as err:
+        return failed("pdf", "broken", f"the PDF cannot be read: {_why(err)}")
+    encrypted = False
+    try:
+        if reader.is_encrypted:
+            encrypted = True
+            if reader.decrypt("") == pypdf.PasswordType.NOT_DECRYPTED:
+                return failed("pdf", "encrypted",
+                              "the PDF is encrypted with a user password, so its text "
+                              "cannot be read", encrypted=True)
+        pages = len(reader.pages)
+    except (FileNotDecryptedError, DependencyError) as err:
+        return failed("pdf", "encrypted", f"the PDF is encrypted ({err})", encrypted=True)
+    except LimitReachedError:
+        raise
+    except (PyPdfError, ValueError, KeyError, TypeError, AttributeError, IndexError,
+            RecursionError, AssertionError) as err:
+        return failed("pdf", "broken", f"the PDF's page tree cannot be read: {_why(err)}")
+    try:
+        meta = _metadata(reader)
+        xmp = _xmp(reader)
+    except LimitReachedError:
+        raise
+    except (PyPdfError, ValueError, KeyError, TypeError, AttributeError, RecursionError):
+        meta, xmp = {}, ""
+    common = dict(pages=pages, encrypted=encrypted, metadata=meta, dates=_dates(meta, xmp),
+                  title=meta.get("Title") or None)
+    if pages > max_pages:
+        return failed("pdf", "too-many-pages",
+                      f"the PDF has {pages} pages (limit {max_pages})", **common)
+    texts: list[str] = []
+    try:
+        for page in reader.pages:
+            texts.append(page.extract_text() or "")
+    except LimitReachedError:
+        raise
+    except (PyPdfError, ValueError, KeyError, TypeError, AttributeError, IndexError,
+            RecursionError, AssertionError, ZeroDivisionError, OverflowError) as err:
+        return failed("pdf", "broken", f"text extraction failed on page {len(texts) + 1}: "
+                                       f"{_why(err)}", **common)
+    text = clean_text("\n\n".join(texts))
+    summary = Extracted(type="pdf", text_chars=len(text), **common)
+    extraction = Extraction(summary=summary, text=text, raw=data, reader=reader)
+    extraction.extras["xmp"] = _TAGS.sub(" ", xmp)[:MAX_META_CHARS]
+    extraction.extras["annotations"] = _annotations(reader, pages)
+    extraction.extras["page_texts"] = texts
+    return extraction
+
+
+def _why(err: BaseException) -> str:
+    text = str(err).strip() or type(err).__name__
+    return text[:300]

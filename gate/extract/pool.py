@@ -1,0 +1,224 @@
+"""Worker processes with a wall-clock deadline and a memory cap per task.
+
+Parsers of untrusted bytes can loop forever or balloon (neither trafilatura nor pypdf can
+interrupt itself), so each task runs in a long-lived worker process forked from the parent
+after the heavy imports. The parent waits on the workers' pipes with a deadline; a worker
+that overruns is killed with SIGKILL and replaced, and its task comes back as a
+:class:`Failure` instead of a result. Each worker caps its own address space
+(``RLIMIT_AS``) so a decompression bomb ends in a ``MemoryError`` inside the worker rather
+than in the machine's OOM killer. Workers are recycled after a number of tasks so slow leaks
+in a parser cannot accumulate.
+
+The parent must not hold threads when it forks (a forked child inherits locks held by
+threads that do not exist in it), so callers refresh progress displays themselves instead
+of using background refresh threads.
+"""
+
+from __future__ import annotations
+
+import multiprocessing
+import os
+import resource
+import signal
+import time
+from collections import deque
+from collections.abc import Callable, Iterable, Iterator
+from dataclasses import dataclass
+from multiprocessing.connection import Connection, wait
+from typing import Any
+
+
+@dataclass(frozen=True)
+class Failure:
+    """A task that produced no result: ``kind`` is timeout, crashed or memory."""
+
+    kind: str
+    detail: str
+
+
+def _address_space() -> int:
+    with open("/proc/self/statm", encoding="ascii") as fh:
+        pages = int(fh.read().split()[0])
+    return pages * os.sysconf("SC_PAGE_SIZE")
+
+
+def _serve(conn: Connection, fn: Callable[[Any], Any], memory_bytes: int | None) -> None:
+    signal.signal(signal.SIGINT, signal.SIG_IGN)  # the parent decides about interrupts
+    if memory_bytes:
+        limit = _address_space() + memory_bytes
+        resource.setrlimit(resource.RLIMIT_AS, (limit, limit))
+    resource.setrlimit(resource.RLIMIT_CORE, (0, 0))
+    while True:
+        try:
+            message = conn.recv()
+        except (EOFError, OSError):
+            break
+        if message is None:
+            break
+        task_id, payload = message
+        try:
+            result: Any = ("ok", fn(payload))
+        except MemoryError:
+            result = ("memory", "the task ran out of its memory allowance")
+        except BaseException as err:  # noqa: BLE001 - reported to the parent, which fails closed
+            result = ("error", f"{type(err).__name__}: {err}")
+        try:
+            conn.send((task_id, result))
+        except MemoryError:
+            conn.send((task_id, ("memory", "the result was too large to return")))
+        if result[0] == "memory":
+            break  # the heap may be fragmented or half-built: start afresh
+    conn.close()
+    os._exit(0)
+
+
+class _Worker:
+    def __init__(self, ctx: Any, fn: Callable, memory_bytes: int | None):
+        self.conn, child = ctx.Pipe(duplex=True)
+        self.process = ctx.Process(target=_serve, args=(child, fn, memory_bytes), daemon=True)
+        self.process.start()
+        child.close()
+        self.task: Any = None
+        self.task_id = -1
+        self.deadline = 0.0
+        self.done = 0
+
+    def kill(self) -> None:
+        try:
+            self.process.kill()
+        except (OSError, AttributeError):
+            pass
+        self.process.join(5)
+        self.conn.close()
+
+    def stop(self) -> None:
+        try:
+            self.conn.send(None)
+        except OSError:
+            pass
+        self.process.join(2)
+        if self.process.is_alive():
+            self.kill()
+        else:
+            self.conn.close()
+
+
+class WorkerPool:
+    """Run ``fn(task)`` for each task in worker processes; see the module docstring."""
+
+    def __init__(self, fn: Callable[[Any], Any], *, workers: int, timeout_s: float,
+                 memory_bytes: int | None, recycle_after: int = 250):
+        self.fn = fn
+        self.size = max(1, workers)
+        self.timeout_s = timeout_s
+        self.memory_bytes = memory_bytes
+        self.recycle_after = recycle_after
+        self._ctx = multiprocessing.get_context("fork")
+        self._workers: list[_Worker] = []
+
+    def __enter__(self) -> WorkerPool:
+        return self
+
+    def __exit__(self, *exc: object) -> None:
+        self.close()
+
+    def close(self) -> None:
+        for worker in self._workers:
+            if worker.task is not None:
+                worker.kill()
+            else:
+                worker.stop()
+        self._workers = []
+
+    def _spawn(self) -> _Worker:
+        worker = _Worker(self._ctx, self.fn, self.memory_bytes)
+        self._workers.append(worker)
+        return worker
+
+    def _retire(self, worker: _Worker, kill: bool) -> None:
+        self._workers.remove(worker)
+        if kill:
+            worker.kill()
+        else:
+            worker.stop()
+
+    def run(self, tasks: Iterable[tuple[Any, Any]]) -> Iterator[tuple[Any, Any]]:
+        """Run ``fn(payload)`` for each ``(tag, payload)``; yield ``(tag, result)`` in
+        completion order. Only the payload crosses to the worker; ``result`` may be a
+        :class:`Failure`."""
+        pending = iter(tasks)
+        idle: deque[_Worker] = deque()
+        busy: dict[Connection, _Worker] = {}
+        exhausted = False
+        next_id = 0
+        while True:
+            while not exhausted and len(busy) < self.size:
+                try:
+                    task, payload = next(pending)
+                except StopIteration:
+                    exhausted = True
+                    break
+                worker = idle.popleft() if idle else self._spawn()
+                worker.task, worker.task_id = task, next_id
+                next_id += 1
+                worker.deadline = time.monotonic() + self.timeout_s
+                try:
+                    worker.conn.send((worker.task_id, payload))
+                except (OSError, ValueError):
+                    # the worker died between tasks; replace it and retry once
+                    self._retire(worker, kill=True)
+                    worker = self._spawn()
+                    worker.task, worker.task_id = task, next_id - 1
+                    worker.deadline = time.monotonic() + self.timeout_s
+                    worker.conn.send((worker.task_id, payload))
+                busy[worker.conn] = worker
+            if not busy:
+                return
+            now = time.monotonic()
+            soonest = min(w.deadline for w in busy.values())
+            ready = wait(list(busy), timeout=max(0.0, soonest - now))
+            for conn in ready:
+                worker = busy.pop(conn)
+                task = worker.task
+                worker.task = None
+                try:
+                    task_id, (status, value) = conn.recv()
+                except (EOFError, OSError, ConnectionError):
+                    code = worker.process.exitcode
+                    worker.process.join(1)
+                    code = worker.process.exitcode if code is None else code
+                    self._retire(worker, kill=True)
+                    yield task, Failure("crashed", _death(code))
+                    continue
+                worker.done += 1
+                if status == "ok":
+                    result: Any = value
+                elif status == "memory":
+                    result = Failure("memory", value)
+                else:
+                    result = Failure("error", value)
+                if status == "memory" or worker.done >= self.recycle_after:
+                    self._retire(worker, kill=status == "memory")
+                else:
+                    idle.append(worker)
+                yield task, result
+            now = time.monotonic()
+            for conn, worker in list(busy.items()):
+                if worker.deadline <= now and conn not in ready:
+                    busy.pop(conn)
+                    task = worker.task
+                    worker.task = None
+                    self._retire(worker, kill=True)
+                    yield task, Failure("timeout", f"no result within {self.timeout_s:g} s")
+
+
+def _death(code: int | None) -> str:
+    if code is None:
+        return "the worker process stopped answering"
+    if code < 0:
+        try:
+            name = signal.Signals(-code).name
+        except ValueError:
+            name = f"signal {-code}"
+        return f"the worker process was killed by {name}"
+    return f"the worker process exited with status {code}"

@@ -1,0 +1,673 @@
+"""The run: discovery -> extraction -> per-document checks -> corpus checks -> decision ->
+commit -> report.
+
+:func:`run` is the library entry point behind ``gate run``. It never prints; it tells a
+:class:`Reporter` what happens. Crash safety comes from the order of work:
+
+1. Every document is read once, hashed, staged (``state/blobs``) and extracted in a worker;
+   results go to the digest-keyed cache as they arrive, so a killed run loses at most a
+   few seconds of extraction.
+2. Checks and decisions are computed from the cache only, deterministically, in inbox order.
+3. One SQLite transaction records the decisions, the new corpus, the change set and every
+   placement still to do. Until it commits, nothing visible has changed.
+4. Placements are applied idempotently and marked done; report.json and changes.jsonl are
+   written atomically; the run is marked complete.
+
+Re-running the same command after a kill finds the unfinished run and completes it.
+"""
+
+from __future__ import annotations
+
+import hashlib
+import json
+import os
+import time
+from dataclasses import dataclass, field
+from datetime import UTC, datetime
+from pathlib import Path
+from typing import Any, Protocol
+
+from gate import __version__, dates
+from gate import manifest as manifest_mod
+from gate.checks import CORPUS_CHECKS, DOCUMENT_CHECKS
+from gate.checks import duplicate as duplicate_check
+from gate.checks import freshness as freshness_check
+from gate.checks import source as source_check
+from gate.checks.base import Document, RunContext
+from gate.commit import Blobs, Placer, write_atomic
+from gate.decide import decide, outcome
+from gate.discovery import Entry, walk
+from gate.errors import InboxError, OutputError
+from gate.extract.model import Extracted
+from gate.extract.pool import Failure, WorkerPool
+from gate.extract.sniff import sniff
+from gate.findings import Finding, internal_error
+from gate.intake import Intake, read_entry
+from gate.lock import RunLock
+from gate.policy import LoadedPolicy
+from gate.report import build as build_report
+from gate.report import dumps as dumps_report
+from gate.report import dumps_line, reason_json
+from gate.state import State, open_state
+from gate.work import Params, process, warm_up
+
+CACHE_BATCH = 64
+
+
+class Reporter(Protocol):
+    """Receives progress; the CLI draws a bar, tests collect calls."""
+
+    def stage(self, name: str, total: int | None) -> None: ...
+
+    def advance(self, path: str | None = None) -> None: ...
+
+    def note(self, message: str) -> None: ...
+
+
+class SilentReporter:
+    def stage(self, name: str, total: int | None) -> None:
+        pass
+
+    def advance(self, path: str | None = None) -> None:
+        pass
+
+    def note(self, message: str) -> None:
+        pass
+
+
+@dataclass(frozen=True)
+class RunOptions:
+    inbox: Path
+    policy: LoadedPolicy
+    out: Path
+    manifest: Path | None = None
+    as_of: datetime | None = None
+    workers: int = 1
+    incremental: bool = False
+
+
+@dataclass
+class Item:
+    """One inbox document on its way through the run."""
+
+    index: int
+    entry: Entry
+    doc_id: str
+    intake: Intake
+    record: manifest_mod.ManifestRecord | None
+    cache_key: str | None = None
+    extracted: Extracted | None = None
+    measures: dict[str, Any] = field(default_factory=dict)
+    measure_errors: dict[str, str] = field(default_factory=dict)
+
+
+@dataclass
+class RunResult:
+    run_id: str
+    report_path: Path
+    summary: dict[str, Any]
+    resumed: bool = False
+    seconds: float = 0.0
+
+
+def doc_id(path: str) -> str:
+    """A document's id: stable for its inbox path, safe as a folder name."""
+    raw = path.encode("utf-8", "surrogateescape")
+    return hashlib.sha256(b"gate-document\x00" + raw).hexdigest()[:20]
+
+
+def _inside(child: Path, parent: Path) -> bool:
+    try:
+        child.relative_to(parent)
+    except ValueError:
+        return False
+    return True
+
+
+def _prepare(opts: RunOptions) -> tuple[Path, Path, manifest_mod.Manifest]:
+    inbox = Path(os.path.abspath(opts.inbox))
+    if not inbox.exists():
+        raise InboxError(f"the inbox {opts.inbox} does not exist.")
+    if not inbox.is_dir():
+        raise InboxError(f"the inbox {opts.inbox} is not a folder.")
+    try:
+        os.listdir(inbox)
+    except OSError as err:
+        raise InboxError(f"the inbox {opts.inbox} cannot be read ({err.strerror}).") from None
+    out = Path(os.path.abspath(opts.out))
+    real_inbox, real_out = inbox.resolve(), out.resolve()
+    if _inside(real_out, real_inbox):
+        raise OutputError(f"the output folder {opts.out} is inside the inbox; gate never "
+                          "writes into the inbox. Choose an --out folder outside it.")
+    if _inside(real_inbox, real_out):
+        raise OutputError(f"the inbox {opts.inbox} is inside the output folder {opts.out}; "
+                          "keep them apart.")
+    try:
+        (out / "state").mkdir(parents=True, exist_ok=True)
+    except OSError as err:
+        raise OutputError(f"cannot create the output folder {opts.out} "
+                          f"({err.strerror}).") from None
+    if not os.access(out, os.W_OK):
+        raise OutputError(f"the output folder {opts.out} is not writable.")
+    if opts.manifest is not None:
+        manifest = manifest_mod.load(opts.manifest)
+    elif (inbox / "manifest.jsonl").is_file():
+        manifest = manifest_mod.load(inbox / "manifest.jsonl")
+    else:
+        manifest = manifest_mod.EMPTY
+    return inbox, out, manifest
+
+
+def _fingerprint(*parts: Any) -> str:
+    return hashlib.sha256(json.dumps(parts, sort_keys=True, default=str).encode()).hexdigest()
+
+
+def run(opts: RunOptions, reporter: Reporter | None = None) -> RunResult:
+    """Run the gate over an inbox. Raises :class:`~gate.errors.GateError` subclasses for
+    anything that stops the run; a document's problems never do."""
+    reporter = reporter or SilentReporter()
+    started = time.monotonic()
+    inbox, out, manifest = _prepare(opts)
+    with RunLock(out / "state" / "lock"):
+        state = open_state(out / "state" / "gate.sqlite")
+        try:
+            try:
+                result = _run_locked(opts, inbox, out, manifest, state, reporter)
+            except OSError as err:
+                raise OutputError(_os_message(err, out)) from None
+        finally:
+            state.close()
+    result.seconds = time.monotonic() - started
+    return result
+
+
+def _os_message(err: OSError, out: Path) -> str:
+    import errno
+    where = f" ({err.filename})" if err.filename else ""
+    if err.errno == errno.ENOSPC:
+        return (f"the disk holding {out} is full{where}. Nothing is lost: free some space "
+                "and re-run the same command to complete the run.")
+    return (f"writing the output failed: {err.strerror or err}{where}. Fix the problem and "
+            "re-run the same command; the run resumes where it stopped.")
+
+
+def _run_locked(opts: RunOptions, inbox: Path, out: Path, manifest: manifest_mod.Manifest,
+                state: State, reporter: Reporter) -> RunResult:
+    blobs = Blobs(out / "state" / "blobs")
+    placer = Placer(out, state, blobs)
+    policy = opts.policy
+    mode = "incremental" if opts.incremental else "full"
+    base = _fingerprint(str(inbox), policy.sha256, manifest.sha256, manifest.source, mode,
+                        __version__)
+    unfinished = state.unfinished_run()
+    if unfinished and unfinished["state"] == "decided":
+        reporter.note(f"completing the interrupted run {unfinished['run_id']}")
+        _finish(state, placer, blobs, out, unfinished["run_id"], reporter)
+        if unfinished["info"].get("base") == base and (
+                opts.as_of is None or dates.parse_as_of(unfinished["as_of"]) == opts.as_of):
+            summary = json.loads(json.dumps(_load_summary(state, unfinished["run_id"])))
+            return RunResult(unfinished["run_id"], out / "report.json", summary, resumed=True)
+        unfinished = None
+    as_of = opts.as_of
+    resume = None
+    if unfinished and unfinished["info"].get("base") == base and (
+            as_of is None or dates.parse_as_of(unfinished["as_of"]) == as_of):
+        resume = unfinished
+        as_of = dates.parse_as_of(unfinished["as_of"])
+    elif unfinished:
+        state.set_run_state(unfinished["run_id"], "abandoned")
+    if as_of is None:
+        as_of = datetime.now(UTC).replace(microsecond=0)
+    as_of_text = as_of.isoformat().replace("+00:00", "Z")
+    if resume:
+        run_id, seq = resume["run_id"], resume["seq"]
+        reporter.note(f"resuming the interrupted run {run_id}")
+    else:
+        seq = state.next_seq()
+        run_id = f"run-{seq:04d}"
+        state.begin_run(run_id, seq, _fingerprint(base, as_of_text), as_of_text, mode,
+                        {"base": base, "inbox": str(inbox)})
+    ctx = RunContext(as_of=as_of)
+    limits = policy.policy.limits
+    params = Params(max_pages=limits.max_pages, max_nesting=limits.max_nesting,
+                    timeout_s=limits.timeout_s, memory_mb=limits.memory_mb)
+
+    items = _extract_all(inbox, manifest, params, limits.max_bytes, opts.workers, state,
+                         blobs, reporter)
+    reporter.stage("checking", None)
+    documents, findings, outcomes = _check_documents(items, policy.policy, ctx)
+    corpus_rows = state.corpus()
+    removed_rows, superseded = _corpus_checks(items, documents, findings, outcomes,
+                                              corpus_rows, policy.policy, ctx, seq, mode,
+                                              state)
+    run_info = {"id": run_id, "as_of": as_of_text, "mode": mode, "inbox": str(inbox),
+                "policy": {"name": policy.name, "path": policy.path, "sha256": policy.sha256},
+                "manifest": {"path": manifest.source, "sha256": manifest.sha256,
+                             "records": len(manifest.records)}}
+    _commit(state, placer, blobs, out, run_id, seq, run_info, items, documents, findings,
+            outcomes, corpus_rows, removed_rows, superseded, manifest, policy, mode, reporter)
+    summary = _load_summary(state, run_id)
+    return RunResult(run_id, out / "report.json", summary, resumed=resume is not None)
+
+
+# -- extraction ------------------------------------------------------------------------
+
+
+def _extract_all(inbox: Path, manifest: manifest_mod.Manifest, params: Params,
+                 max_bytes: int, workers: int, state: State, blobs: Blobs,
+                 reporter: Reporter) -> list[Item]:
+    entries = list(walk(inbox))
+    reporter.stage("extracting", len(entries))
+    fingerprint = params.fingerprint()
+    known = state.entries()
+    items: list[Item] = []
+    pending: list[tuple[str, str, dict, dict, str]] = []
+
+    def flush() -> None:
+        if pending:
+            state.cache_put_many(pending)
+            pending.clear()
+
+    def tasks():
+        for index, entry in enumerate(entries):
+            item = Item(index=index, entry=entry, doc_id=doc_id(entry.path),
+                        intake=read_entry(inbox, entry, max_bytes),
+                        record=manifest.get(entry.path))
+            items.append(item)
+            intake = item.intake
+            if intake.problem is not None:
+                item.extracted = Extracted(type=None, problem=intake.problem,
+                                           problem_detail=intake.detail)
+                reporter.advance(entry.path)
+                continue
+            item.cache_key = f"{intake.sha256}:{fingerprint}"
+            placed = known.get(item.doc_id)
+            if placed is None or placed[1] != intake.sha256:
+                blobs.put(intake.sha256, intake.data)
+            cached = state.cache_meta(item.cache_key)
+            if cached is not None:
+                item.extracted = Extracted.from_json(cached[0])
+                item.measures = cached[1].get("measures", {})
+                item.measure_errors = cached[1].get("errors", {})
+                intake.data = None
+                reporter.advance(entry.path)
+                continue
+            yield item
+
+    if workers > 0:
+        warm_up()
+    pool = WorkerPool(process, workers=max(1, workers), timeout_s=params.timeout_s,
+                      memory_bytes=params.memory_mb * 1024 * 1024)
+    with pool:
+        for item, result in pool.run(
+                (item, (item.entry.path, item.intake.data, params)) for item in tasks()):
+            _absorb(item, result)
+            item.intake.data = None
+            bug = item.measure_errors or (isinstance(result, Failure) and result.kind == "error")
+            if not bug:  # a bug in gate is retried on the next run, not remembered
+                pending.append((item.cache_key, item.intake.sha256, item.extracted.to_json(),
+                                {"measures": item.measures, "errors": {}},
+                                result.get("text", "") if isinstance(result, dict) else ""))
+            if len(pending) >= CACHE_BATCH:
+                flush()
+            reporter.advance(item.entry.path)
+    flush()
+    return items
+
+
+def _absorb(item: Item, result: Any) -> None:
+    if isinstance(result, Failure):
+        kind = {"timeout": "timeout", "memory": "memory"}.get(result.kind, "crashed")
+        detail = result.detail if result.kind != "error" else f"internal error: {result.detail}"
+        head = sniff(item.intake.data[:2048]) if item.intake.data else None
+        item.extracted = Extracted(type=head.type if head and head.type in
+                                   ("pdf", "html", "text") else None,
+                                   problem=kind, problem_detail=detail)
+        return
+    item.extracted = Extracted.from_json(result["extracted"])
+    item.measures = result["measures"]
+    item.measure_errors = result["measure_errors"]
+
+
+# -- checks ----------------------------------------------------------------------------
+
+
+def _document(item: Item) -> Document:
+    assert item.extracted is not None
+    return Document(path=item.entry.path, kind=item.entry.kind, size=item.intake.size,
+                    sha256=item.intake.sha256, manifest=item.record,
+                    extracted=item.extracted, measures=item.measures,
+                    link_target=item.entry.link_target)
+
+
+def _check_documents(items: list[Item], policy: Any, ctx: RunContext):
+    documents: list[Document] = []
+    findings: list[list[Finding]] = []
+    outcomes: list[dict[str, str]] = []
+    for item in items:
+        document = _document(item)
+        found: list[Finding] = []
+        marks: dict[str, str] = {}
+        for check in DOCUMENT_CHECKS:
+            enabled = check.always_on or getattr(policy, check.section, None) is not None
+            result: list[Finding] | None
+            if not enabled:
+                result = None
+            elif check.id in item.measure_errors:
+                result = [internal_error(check.id, RuntimeError(item.measure_errors[check.id]))]
+            else:
+                try:
+                    result = check.evaluate(document, policy, ctx)
+                except Exception as err:  # noqa: BLE001 - a bug in a check fails closed
+                    result = [internal_error(check.id, err)]
+            marks[check.id] = outcome(result, policy, enabled)
+            found.extend(result or [])
+        documents.append(document)
+        findings.append(found)
+        outcomes.append(marks)
+    return documents, findings, outcomes
+
+
+def _date_of(document: Document, ctx: RunContext) -> datetime | None:
+    chosen = freshness_check.choose(document, ctx)
+    if chosen is None or isinstance(chosen, Finding):
+        return None
+    return chosen[1].latest
+
+
+def _trust_of(document: Document, policy: Any) -> int:
+    if policy.sources is None:
+        return source_check.UNMATCHED_TRUST
+    return source_check.match(document, policy.sources).trust
+
+
+def _corpus_checks(items, documents, findings, outcomes, corpus_rows, policy, ctx, seq,
+                   mode, state: State):
+    """Run the corpus checks; returns (stored rows to remove, superseded stored rows)."""
+    in_batch = {item.doc_id for item in items}
+    stored = {row["doc_id"]: row for row in corpus_rows}
+    removed = [row for row in corpus_rows if row["doc_id"] not in in_batch] \
+        if mode == "full" else []
+    superseded: dict[str, tuple[dict, Finding]] = {}
+    for check in CORPUS_CHECKS:
+        settings = getattr(policy, check.section, None)
+        if settings is None:
+            for marks in outcomes:
+                marks[check.id] = "off"
+            continue
+        assert check is duplicate_check.CHECK
+        dup_items: list[duplicate_check.Item] = []
+        keys: dict[str, str] = {}
+        for item, document, found, marks in zip(items, documents, findings, outcomes):
+            measured = item.measures.get(check.id)
+            if check.id in item.measure_errors:
+                found.append(internal_error(check.id,
+                                            RuntimeError(item.measure_errors[check.id])))
+                marks[check.id] = "fail"
+                continue
+            if measured is None or not document.has_text:
+                marks[check.id] = "n/a"
+                continue
+            keys[item.doc_id] = item.cache_key
+            small = measured["shingles"] < settings.min_shingles
+            dup_items.append(duplicate_check.Item(
+                key=item.doc_id, path=item.entry.path, sha256=item.intake.sha256,
+                text_sha256=measured["text_sha256"],
+                minhash=None if small else measured["minhash"],
+                trust=_trust_of(document, policy), date=_date_of(document, ctx),
+                seen=(stored[item.doc_id]["first_seen"] if item.doc_id in stored else seq,
+                      item.index),
+                in_batch=True, accepted_before=item.doc_id in stored,
+                candidate=decide(found, policy).decision == "accepted"))
+        if mode == "incremental":
+            for row in corpus_rows:
+                if row["doc_id"] in in_batch:
+                    continue
+                keys[row["doc_id"]] = row["cache_key"]
+                dup_items.append(duplicate_check.Item(
+                    key=row["doc_id"], path=row["path"], sha256=row["sha256"],
+                    text_sha256=row["text_sha256"], minhash=row["minhash"],
+                    trust=row["trust"],
+                    date=datetime.fromisoformat(row["date"]) if row["date"] else None,
+                    seen=(row["first_seen"], -1), in_batch=False, accepted_before=True))
+        result = duplicate_check.evaluate(dup_items, settings,
+                                          text_of=lambda key: state.cache_text(keys[key]))
+        for item, found, marks in zip(items, findings, outcomes):
+            if marks.get(check.id) in ("n/a", "fail"):
+                continue
+            extra = result.findings.get(item.doc_id, [])
+            found.extend(extra)
+            marks[check.id] = outcome(extra, policy, True)
+        for key, finding in result.superseded.items():
+            superseded[key] = (stored[key], finding)
+    return removed, superseded
+
+
+# -- decision and commit ---------------------------------------------------------------
+
+
+def _provenance(item: Item, document: Document, decision: Any, marks: dict[str, str],
+                policy: LoadedPolicy, ctx: RunContext, run_info: dict[str, Any]
+                ) -> dict[str, Any]:
+    """Every input the decision used, for the entry's provenance.json / reasons.json."""
+    record: dict[str, Any] = {
+        "document": {"id": item.doc_id, "path": item.entry.path, "kind": item.entry.kind,
+                     "sha256": item.intake.sha256, "size": item.intake.size,
+                     "link_target": item.entry.link_target},
+        "extraction": document.extracted.to_json(),
+        "manifest": item.record.to_json() if item.record else None,
+        "policy": run_info["policy"],
+        "checks": marks,
+        "decision": decision.decision,
+        "reasons": [reason_json(f) for f in decision.reasons],
+        "warnings": [reason_json(f) for f in decision.warnings],
+        "measures": _public_measures(item.measures),
+        "gate": {"version": __version__},
+    }
+    pol = policy.policy
+    if pol.sources is not None:
+        match = source_check.match(document, pol.sources)
+        record["source"] = {"url": match.url, "trust": match.trust,
+                            "allowed_by": None if match.allowed_by is None else
+                            f"sources.allow[{match.allowed_by}] "
+                            f"({source_check.rule_text(pol.sources.allow[match.allowed_by])})"}
+    chosen = freshness_check.choose(document, ctx)
+    if chosen is not None and not isinstance(chosen, Finding):
+        record["date"] = {"value": chosen[1].iso(), "source": chosen[0].source}
+    return record
+
+
+def _public_measures(measures: dict[str, Any]) -> dict[str, Any]:
+    out = {}
+    for key, value in measures.items():
+        if isinstance(value, dict):
+            out[key] = {k: v for k, v in value.items() if not isinstance(v, bytes)}
+        else:
+            out[key] = value
+    return out
+
+
+def _report_entry(item: Item, document: Document, decision: Any, marks: dict[str, str],
+                  record: dict[str, Any], location: str, change: str) -> dict[str, Any]:
+    entry: dict[str, Any] = {
+        "path": item.entry.path,
+        "id": item.doc_id,
+        "decision": decision.decision,
+        "reasons": [reason_json(f) for f in decision.reasons],
+        "warnings": [reason_json(f) for f in decision.warnings],
+        "checks": marks,
+        "sha256": item.intake.sha256,
+        "size": item.intake.size,
+        "type": document.extracted.type,
+        "location": location,
+        "change": change,
+    }
+    for key in ("source", "date"):
+        if key in record:
+            entry[key] = record[key]
+    if document.extracted.title:
+        entry["title"] = document.extracted.title
+    language = item.measures.get("language")
+    if language and language.get("languages"):
+        entry["language"] = {"code": language["languages"][0][0],
+                             "probability": language["languages"][0][1]}
+    injection = item.measures.get("injection")
+    if isinstance(injection, dict) and "score" in injection:
+        entry["injection_score"] = injection["score"]
+    return entry
+
+
+def _placement_fingerprint(folder: str, record: dict[str, Any], text_key: str | None) -> str:
+    return _fingerprint(folder, record, text_key)
+
+
+def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, seq: int,
+            run_info: dict[str, Any], items: list[Item], documents: list[Document],
+            findings: list[list[Finding]], outcomes: list[dict[str, str]],
+            corpus_rows: list[dict], removed_rows: list[dict],
+            superseded: dict[str, tuple[dict, Finding]], manifest: manifest_mod.Manifest,
+            policy: LoadedPolicy, mode: str, reporter: Reporter) -> None:
+    reporter.stage("committing", None)
+    pol = policy.policy
+    ctx = RunContext(as_of=dates.parse_as_of(run_info["as_of"]))
+    stored = {row["doc_id"]: row for row in corpus_rows}
+    known = state.entries()
+    report_docs: list[dict[str, Any]] = []
+    decisions_rows = []
+    corpus_upserts = []
+    corpus_deletes = []
+    placements = []
+    entries_rows = []
+    changes: list[dict[str, Any]] = []
+    seen_ids: dict[str, str] = {}
+    for item, document, found, marks in zip(items, documents, findings, outcomes):
+        if item.doc_id in seen_ids:  # 80-bit ids: a collision is astronomically unlikely
+            raise OutputError(f"document id collision between {seen_ids[item.doc_id]!r} and "
+                              f"{item.entry.path!r}; please report this")
+        seen_ids[item.doc_id] = item.entry.path
+        decision = decide(found, pol)
+        record = _provenance(item, document, decision, marks, policy, ctx, run_info)
+        folder = "accepted" if decision.decision == "accepted" else "quarantine"
+        before = stored.get(item.doc_id)
+        if folder == "accepted":
+            change = "add" if before is None else (
+                "update" if before["sha256"] != item.intake.sha256 else "unchanged")
+        else:
+            change = "remove" if before is not None else "none"
+        text_key = item.cache_key if document.has_text else None
+        fingerprint = _placement_fingerprint(folder, record, text_key)
+        placed = known.get(item.doc_id)
+        if placed is None or placed[0] != folder or placed[2] != fingerprint:
+            payload = {"path": item.entry.path, "sha256": item.intake.sha256
+                       if item.intake.problem is None else None,
+                       "text_key": text_key,
+                       "record": {**record, "run": run_info}}
+            placements.append((run_id, item.doc_id, folder, json.dumps(payload)))
+        entries_rows.append((item.doc_id, folder, item.entry.path, item.intake.sha256,
+                             fingerprint, run_id))
+        location = f"{folder}/{item.doc_id}"
+        report_docs.append(_report_entry(item, document, decision, marks, record, location,
+                                         change))
+        decisions_rows.append((run_id, item.entry.path, item.doc_id, decision.decision,
+                               json.dumps(report_docs[-1], sort_keys=True)))
+        if folder == "accepted":
+            dup = item.measures.get("duplicate") or {}
+            date = _date_of(document, ctx)
+            corpus_upserts.append((
+                item.doc_id, item.entry.path, item.intake.sha256, dup.get("text_sha256"),
+                dup.get("minhash"), _trust_of(document, pol),
+                date.isoformat() if date else None,
+                before["first_seen"] if before else seq, run_id, folder, item.cache_key))
+            if change in ("add", "update"):
+                changes.append({"action": change, "id": item.doc_id, "path": item.entry.path,
+                                "sha256": item.intake.sha256,
+                                "text": f"accepted/{item.doc_id}/text.txt"})
+        elif before is not None:
+            corpus_deletes.append(item.doc_id)
+            changes.append({"action": "remove", "id": item.doc_id, "path": item.entry.path,
+                            "sha256": before["sha256"], "why": "quarantined in this run"})
+    removed_report: list[dict[str, Any]] = []
+    for row in removed_rows:
+        corpus_deletes.append(row["doc_id"])
+        placements.append((run_id, row["doc_id"], "absent", json.dumps({"path": row["path"]})))
+        changes.append({"action": "remove", "id": row["doc_id"], "path": row["path"],
+                        "sha256": row["sha256"], "why": "no longer in the inbox"})
+        removed_report.append({"id": row["doc_id"], "path": row["path"], "change": "remove",
+                               "why": "no longer in the inbox"})
+    for key, (row, finding) in sorted(superseded.items()):
+        corpus_deletes.append(key)
+        record = {"document": {"id": key, "path": row["path"], "sha256": row["sha256"]},
+                  "decision": "quarantined", "reasons": [reason_json(finding)],
+                  "policy": run_info["policy"], "gate": {"version": __version__}}
+        payload = {"path": row["path"], "sha256": row["sha256"], "text_key": row["cache_key"],
+                   "reused": True, "record": {**record, "run": run_info}}
+        placements.append((run_id, key, "quarantine", json.dumps(payload)))
+        entries_rows.append((key, "quarantine", row["path"], row["sha256"],
+                             _placement_fingerprint("quarantine", record, row["cache_key"]),
+                             run_id))
+        changes.append({"action": "remove", "id": key, "path": row["path"],
+                        "sha256": row["sha256"], "why": finding.message})
+        removed_report.append({"id": key, "path": row["path"], "change": "superseded",
+                               "why": finding.message, "location": f"quarantine/{key}"})
+    unmatched = sorted(set(manifest.records) - {i.entry.path for i in items})
+    report = build_report(run_info, report_docs, removed_report, unmatched)
+    summary = report["summary"]
+    os.sync()  # the staged blobs must be durable before the decision refers to them
+    with state.transaction() as conn:
+        conn.executemany("INSERT OR REPLACE INTO decisions (run_id, path, doc_id, decision, "
+                         "record) VALUES (?, ?, ?, ?, ?)", decisions_rows)
+        conn.executemany("DELETE FROM corpus WHERE doc_id = ?", [(k,) for k in corpus_deletes])
+        conn.executemany("INSERT OR REPLACE INTO corpus (doc_id, path, sha256, text_sha256, "
+                         "minhash, trust, date, first_seen, run_id, placed, cache_key) "
+                         "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", corpus_upserts)
+        conn.execute("DELETE FROM placements WHERE run_id = ?", (run_id,))
+        conn.executemany("INSERT INTO placements (run_id, doc_id, target, payload) "
+                         "VALUES (?, ?, ?, ?)", placements)
+        conn.executemany("DELETE FROM entries WHERE doc_id = ?",
+                         [(row["doc_id"],) for row in removed_rows])
+        conn.executemany("INSERT OR REPLACE INTO entries (doc_id, folder, path, sha256, "
+                         "fingerprint, run_id) VALUES (?, ?, ?, ?, ?, ?)", entries_rows)
+        conn.execute("DELETE FROM changes WHERE run_id = ?", (run_id,))
+        conn.executemany("INSERT INTO changes (run_id, seq, line) VALUES (?, ?, ?)",
+                         [(run_id, i, dumps_line(c)) for i, c in enumerate(changes)])
+        conn.execute("INSERT OR REPLACE INTO meta (key, value) VALUES (?, ?)",
+                     (f"report:{run_id}", json.dumps(report, sort_keys=True)))
+        conn.execute("UPDATE runs SET state = 'decided', summary = ? WHERE run_id = ?",
+                     (json.dumps(summary, sort_keys=True), run_id))
+    _finish(state, placer, blobs, out, run_id, reporter)
+
+
+def _finish(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str,
+            reporter: Reporter) -> None:
+    """Apply the run's outstanding placements, then write the report and change set."""
+    pending = [p for p in state.pending_placements() if p[0] == run_id]
+    reporter.stage("placing", len(pending))
+    done: list[tuple[str, str]] = []
+    for _run, doc, target, payload in pending:
+        placer.apply(doc, target, payload)
+        done.append((run_id, doc))
+        reporter.advance(payload.get("path"))
+        if len(done) >= 256:
+            os.sync()
+            state.mark_placed(done)
+            done = []
+    os.sync()
+    state.mark_placed(done)
+    row = state.conn.execute("SELECT value FROM meta WHERE key = ?",
+                             (f"report:{run_id}",)).fetchone()
+    report = json.loads(row[0])
+    write_atomic(out / "report.json", dumps_report(report))
+    lines = state.changes(run_id)
+    write_atomic(out / "changes.jsonl", "".join(line + "\n" for line in lines).encode("utf-8"))
+    placer.empty_trash()
+    blobs.clear()
+    with state.transaction() as conn:
+        conn.execute("UPDATE runs SET state = 'complete' WHERE run_id = ?", (run_id,))
+        conn.execute("DELETE FROM placements WHERE run_id = ? AND done = 1", (run_id,))
+        conn.execute("DELETE FROM meta WHERE key LIKE 'report:%' AND key != ?",
+                     (f"report:{run_id}",))
+
+
+def _load_summary(state: State, run_id: str) -> dict[str, Any]:
+    row = state.conn.execute("SELECT summary FROM runs WHERE run_id = ?", (run_id,)).fetchone()
+    return json.loads(row[0]) if row and row[0] else {}

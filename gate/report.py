@@ -1,0 +1,85 @@
+"""Report: report.json, changes.jsonl, and the summary printed at the end of a run.
+
+report.json lists every inbox document exactly once, in inbox order, with its decision,
+the reasons it was held (every failing check, not just the first), warnings, its digest and
+each check's outcome. Keys are sorted and nothing in it depends on the wall clock, so two
+runs over the same inputs and ``--as-of`` produce byte-identical reports.
+"""
+
+from __future__ import annotations
+
+import json
+from collections import Counter
+from typing import Any
+
+from gate import __version__
+from gate.checks import CHECK_IDS
+
+CAUTIONS = (
+    "gate's checks are heuristics: they lower the risk that a tampered, stale, off-language, "
+    "duplicated or instruction-laden document reaches the index; they do not remove it.",
+    "An accepted document is not proven safe. Keep defence in depth (treat retrieved text "
+    "as untrusted in prompts, restrict what the assistant can do, monitor answers) and "
+    "follow your organisation's security practice.",
+)
+
+
+def reason_json(finding: Any) -> dict[str, Any]:
+    return {"check": finding.check, "code": finding.code, "message": finding.message,
+            "details": finding.details}
+
+
+def summary(documents: list[dict[str, Any]], removed: list[dict[str, Any]]) -> dict[str, Any]:
+    decisions = Counter(d["decision"] for d in documents)
+    by_code: Counter[str] = Counter()
+    by_check: Counter[str] = Counter()
+    warn_codes: Counter[str] = Counter()
+    for doc in documents:
+        codes = {r["code"] for r in doc["reasons"]}
+        by_code.update(codes)
+        by_check.update({r["check"] for r in doc["reasons"]})
+        warn_codes.update({w["code"] for w in doc["warnings"]})
+    changes = Counter(d["change"] for d in documents if d["change"] not in ("unchanged", "none"))
+    changes.update(r["change"] for r in removed)
+    return {
+        "documents": len(documents),
+        "accepted": decisions.get("accepted", 0),
+        "quarantined": decisions.get("quarantined", 0),
+        "quarantined_by_code": dict(sorted(by_code.items())),
+        "quarantined_by_check": {c: by_check[c] for c in CHECK_IDS if by_check[c]},
+        "warnings_by_code": dict(sorted(warn_codes.items())),
+        "changes": dict(sorted(changes.items())),
+    }
+
+
+def build(run: dict[str, Any], documents: list[dict[str, Any]],
+          removed: list[dict[str, Any]], manifest_unmatched: list[str]) -> dict[str, Any]:
+    return {
+        "gate": {"version": __version__},
+        "run": run,
+        "summary": summary(documents, removed),
+        "documents": documents,
+        "removed": removed,
+        "manifest_unmatched": manifest_unmatched,
+        "cautions": list(CAUTIONS),
+    }
+
+
+def dumps(report: Any) -> bytes:
+    """Pretty, sorted JSON in UTF-8. File names that are not valid UTF-8 (held as lone
+    surrogates) force ASCII escapes, so the output is always valid JSON and UTF-8."""
+    text = json.dumps(report, indent=2, sort_keys=True, ensure_ascii=False) + "\n"
+    try:
+        return text.encode("utf-8")
+    except UnicodeEncodeError:
+        return (json.dumps(report, indent=2, sort_keys=True) + "\n").encode("ascii")
+
+
+def dumps_line(obj: Any) -> str:
+    """One compact JSON line (for changes.jsonl), escaping what UTF-8 cannot hold."""
+    text = json.dumps(obj, sort_keys=True, ensure_ascii=False, separators=(",", ":"))
+    try:
+        text.encode("utf-8")
+    except UnicodeEncodeError:
+        text = json.dumps(obj, sort_keys=True, separators=(",", ":"))
+    return text

@@ -1,0 +1,300 @@
+"""The corpus state kept with the output: one SQLite file, ``DIR/state/gate.sqlite``.
+
+It remembers, between runs, what was accepted (with the MinHash sketch the duplicate check
+needs), every run and its decisions, the placements still to be carried out, and a cache of
+extraction results keyed by content digest, so unchanged documents are not parsed again.
+The database is the source of truth: ``accepted/`` and ``quarantine/`` are materialised from
+it, and a run killed at any point is completed by re-applying what the database says.
+
+The schema is versioned. A file that is not a gate state, or one written by a newer gate,
+is refused with a message instead of being overwritten.
+"""
+
+from __future__ import annotations
+
+import base64
+import json
+import sqlite3
+import zlib
+from collections.abc import Iterable, Iterator
+from contextlib import contextmanager
+from pathlib import Path
+from typing import Any
+
+from gate import __version__
+from gate.errors import StateError
+
+APP_ID = 0x67617465  # "gate": SQLite's application_id marks the file as ours
+SCHEMA_VERSION = 1
+
+SCHEMA = """
+CREATE TABLE meta (key TEXT PRIMARY KEY, value TEXT NOT NULL);
+CREATE TABLE cache (
+    key TEXT PRIMARY KEY,
+    sha256 TEXT NOT NULL,
+    extracted TEXT NOT NULL,
+    measures TEXT NOT NULL,
+    text BLOB NOT NULL
+);
+CREATE TABLE runs (
+    run_id TEXT PRIMARY KEY,
+    seq INTEGER NOT NULL UNIQUE,
+    state TEXT NOT NULL,
+    fingerprint TEXT NOT NULL,
+    as_of TEXT NOT NULL,
+    mode TEXT NOT NULL,
+    info TEXT NOT NULL,
+    summary TEXT
+);
+CREATE TABLE decisions (
+    run_id TEXT NOT NULL,
+    path TEXT NOT NULL,
+    doc_id TEXT NOT NULL,
+    decision TEXT NOT NULL,
+    record TEXT NOT NULL,
+    PRIMARY KEY (run_id, path)
+);
+CREATE TABLE corpus (
+    doc_id TEXT PRIMARY KEY,
+    path TEXT NOT NULL,
+    sha256 TEXT NOT NULL,
+    text_sha256 TEXT,
+    minhash BLOB,
+    trust INTEGER NOT NULL,
+    date TEXT,
+    first_seen INTEGER NOT NULL,
+    run_id TEXT NOT NULL,
+    placed TEXT NOT NULL,
+    cache_key TEXT NOT NULL
+);
+CREATE TABLE placements (
+    run_id TEXT NOT NULL,
+    doc_id TEXT NOT NULL,
+    target TEXT NOT NULL,
+    payload TEXT NOT NULL,
+    done INTEGER NOT NULL DEFAULT 0,
+    PRIMARY KEY (run_id, doc_id)
+);
+CREATE TABLE entries (
+    doc_id TEXT PRIMARY KEY,
+    folder TEXT NOT NULL,
+    path TEXT NOT NULL,
+    sha256 TEXT,
+    fingerprint TEXT NOT NULL,
+    run_id TEXT NOT NULL
+);
+CREATE TABLE changes (
+    run_id TEXT NOT NULL,
+    seq INTEGER NOT NULL,
+    line TEXT NOT NULL,
+    PRIMARY KEY (run_id, seq)
+);
+"""
+
+
+def encode(value: Any) -> Any:
+    """JSON-safe form of measurement values (bytes become ``{"$b64": ...}``)."""
+    if isinstance(value, bytes):
+        return {"$b64": base64.b64encode(value).decode("ascii")}
+    if isinstance(value, dict):
+        return {k: encode(v) for k, v in value.items()}
+    if isinstance(value, (list, tuple)):
+        return [encode(v) for v in value]
+    return value
+
+
+def decode(value: Any) -> Any:
+    if isinstance(value, dict):
+        if set(value) == {"$b64"}:
+            return base64.b64decode(value["$b64"])
+        return {k: decode(v) for k, v in value.items()}
+    if isinstance(value, list):
+        return [decode(v) for v in value]
+    return value
+
+
+def dumps(value: Any) -> str:
+    return json.dumps(encode(value), sort_keys=True, ensure_ascii=False,
+                      separators=(",", ":"))
+
+
+def loads(text: str) -> Any:
+    return decode(json.loads(text))
+
+
+class State:
+    """A connection to the state database. Use :func:`open_state`."""
+
+    def __init__(self, conn: sqlite3.Connection, path: Path):
+        self.conn = conn
+        self.path = path
+
+    def close(self) -> None:
+        self.conn.close()
+
+    @contextmanager
+    def transaction(self) -> Iterator[sqlite3.Connection]:
+        """One atomic transaction: all of it lands, or none of it."""
+        self.conn.execute("BEGIN IMMEDIATE")
+        try:
+            yield self.conn
+        except BaseException:
+            self.conn.execute("ROLLBACK")
+            raise
+        else:
+            self.conn.execute("COMMIT")
+
+    # -- cache -------------------------------------------------------------------------
+
+    def cache_get(self, key: str) -> tuple[dict, dict, str] | None:
+        row = self.conn.execute("SELECT extracted, measures, text FROM cache WHERE key = ?",
+                                (key,)).fetchone()
+        if row is None:
+            return None
+        return loads(row[0]), loads(row[1]), zlib.decompress(row[2]).decode("utf-8")
+
+    def cache_has(self, key: str) -> bool:
+        return self.conn.execute("SELECT 1 FROM cache WHERE key = ?", (key,)).fetchone() \
+            is not None
+
+    def cache_meta(self, key: str) -> tuple[dict, dict] | None:
+        row = self.conn.execute("SELECT extracted, measures FROM cache WHERE key = ?",
+                                (key,)).fetchone()
+        return (loads(row[0]), loads(row[1])) if row else None
+
+    def cache_text(self, key: str) -> str | None:
+        row = self.conn.execute("SELECT text FROM cache WHERE key = ?", (key,)).fetchone()
+        return zlib.decompress(row[0]).decode("utf-8") if row else None
+
+    def cache_put_many(self, rows: Iterable[tuple[str, str, dict, dict, str]]) -> None:
+        with self.transaction() as conn:
+            conn.executemany(
+                "INSERT OR REPLACE INTO cache (key, sha256, extracted, measures, text) "
+                "VALUES (?, ?, ?, ?, ?)",
+                [(key, sha, dumps(ex), dumps(me),
+                  zlib.compress(text.encode("utf-8", "surrogatepass"), 6))
+                 for key, sha, ex, me, text in rows])
+
+    # -- runs ----------------------------------------------------------------------------
+
+    def unfinished_run(self) -> dict[str, Any] | None:
+        row = self.conn.execute(
+            "SELECT run_id, seq, state, fingerprint, as_of, mode, info FROM runs "
+            "WHERE state != 'complete' AND state != 'abandoned' ORDER BY seq DESC LIMIT 1"
+        ).fetchone()
+        if row is None:
+            return None
+        keys = ("run_id", "seq", "state", "fingerprint", "as_of", "mode", "info")
+        out = dict(zip(keys, row))
+        out["info"] = json.loads(out["info"])
+        return out
+
+    def next_seq(self) -> int:
+        row = self.conn.execute("SELECT MAX(seq) FROM runs").fetchone()
+        return (row[0] or 0) + 1
+
+    def begin_run(self, run_id: str, seq: int, fingerprint: str, as_of: str, mode: str,
+                  info: dict[str, Any]) -> None:
+        with self.transaction() as conn:
+            conn.execute("INSERT INTO runs (run_id, seq, state, fingerprint, as_of, mode, "
+                         "info) VALUES (?, ?, 'processing', ?, ?, ?, ?)",
+                         (run_id, seq, fingerprint, as_of, mode, json.dumps(info)))
+
+    def set_run_state(self, run_id: str, state: str, summary: dict | None = None) -> None:
+        with self.transaction() as conn:
+            if summary is None:
+                conn.execute("UPDATE runs SET state = ? WHERE run_id = ?", (state, run_id))
+            else:
+                conn.execute("UPDATE runs SET state = ?, summary = ? WHERE run_id = ?",
+                             (state, json.dumps(summary, sort_keys=True), run_id))
+
+    def completed_runs(self) -> int:
+        return self.conn.execute("SELECT COUNT(*) FROM runs WHERE state = 'complete'"
+                                 ).fetchone()[0]
+
+    # -- corpus ------------------------------------------------------------------------
+
+    def corpus(self) -> list[dict[str, Any]]:
+        cols = ("doc_id", "path", "sha256", "text_sha256", "minhash", "trust", "date",
+                "first_seen", "run_id", "placed", "cache_key")
+        rows = self.conn.execute(f"SELECT {', '.join(cols)} FROM corpus ORDER BY first_seen, "
+                                 "path").fetchall()
+        return [dict(zip(cols, row)) for row in rows]
+
+    def first_seen(self) -> dict[str, int]:
+        return dict(self.conn.execute("SELECT doc_id, first_seen FROM corpus").fetchall())
+
+    def pending_placements(self) -> list[tuple[str, str, str, dict]]:
+        rows = self.conn.execute(
+            "SELECT run_id, doc_id, target, payload FROM placements WHERE done = 0 "
+            "ORDER BY run_id, doc_id").fetchall()
+        return [(r, d, t, json.loads(p)) for r, d, t, p in rows]
+
+    def mark_placed(self, items: Iterable[tuple[str, str]]) -> None:
+        with self.transaction() as conn:
+            conn.executemany("UPDATE placements SET done = 1 WHERE run_id = ? AND doc_id = ?",
+                             list(items))
+
+    def entries(self) -> dict[str, tuple[str, str | None, str]]:
+        """The intended content of the folders: id -> (folder, sha256, fingerprint)."""
+        return {d: (f, s, fp) for d, f, s, fp in self.conn.execute(
+            "SELECT doc_id, folder, sha256, fingerprint FROM entries")}
+
+    def changes(self, run_id: str) -> list[str]:
+        return [r[0] for r in self.conn.execute(
+            "SELECT line FROM changes WHERE run_id = ? ORDER BY seq", (run_id,))]
+
+    def decisions(self, run_id: str) -> list[dict[str, Any]]:
+        return [json.loads(r[0]) for r in self.conn.execute(
+            "SELECT record FROM decisions WHERE run_id = ? ORDER BY rowid", (run_id,))]
+
+
+def open_state(path: Path) -> State:
+    """Open (creating if needed) the state database, refusing foreign or newer files."""
+    path.parent.mkdir(parents=True, exist_ok=True)
+    existed = path.exists() and path.stat().st_size > 0
+    try:
+        conn = sqlite3.connect(path, isolation_level=None, timeout=30)
+        conn.execute("PRAGMA journal_mode=WAL")
+        conn.execute("PRAGMA synchronous=FULL")
+        conn.execute("PRAGMA foreign_keys=ON")
+        app_id = conn.execute("PRAGMA application_id").fetchone()[0]
+    except sqlite3.DatabaseError as err:
+        raise StateError(
+            f"{path} is not a gate state database ({err}). It may be damaged or belong to "
+            "another program; move it away to start a fresh corpus state, or restore it "
+            "from a backup.") from None
+    if existed:
+        if app_id != APP_ID:
+            conn.close()
+            raise StateError(f"{path} is an SQLite file but not a gate state database; gate "
+                             "will not overwrite it. Use another --out folder or move the "
+                             "file away.")
+        try:
+            row = conn.execute("SELECT value FROM meta WHERE key = 'schema_version'"
+                               ).fetchone()
+            integrity = conn.execute("PRAGMA quick_check").fetchone()[0]
+        except sqlite3.DatabaseError as err:
+            conn.close()
+            raise StateError(f"{path} is damaged ({err}); restore it from a backup or move "
+                             "it away to start a fresh corpus state.") from None
+        if integrity != "ok":
+            conn.close()
+            raise StateError(f"{path} failed SQLite's integrity check ({integrity}); restore "
+                             "it from a backup or move it away.")
+        version = int(row[0]) if row else None
+        if version is None:
+            conn.close()
+            raise StateError(f"{path} has no schema version; it was not written by gate.")
+        if version > SCHEMA_VERSION:
+            conn.close()
+            raise StateError(f"{path} was written by a newer gate (state schema {version}; "
+                             f"this gate {__version__} reads up to {SCHEMA_VERSION}). "
+                             "Upgrade gate, or use another --out folder.")
+        return State(conn, path)
+    with conn:
+        conn.executescript(SCHEMA)
+        conn.execute(f"PRAGMA application_id = {APP_ID}")
+        conn.execute("INSERT INTO meta VALUES ('schema_version', ?)", (str(SCHEMA_VERSION),))
+        conn.execute("INSERT INTO meta VALUES ('created_by', ?)", (f"gate {__version__}",))
+    return State(conn, path)

@@ -1,0 +1,68 @@
+"""The per-document work done in a worker process: extract, then measure.
+
+:func:`process` takes a document's bytes (the parent has already read and hashed them) and
+returns a plain, picklable dict. It is the only function the worker pool, and a cluster
+scheduler, needs to run; it never touches the file system.
+"""
+
+from __future__ import annotations
+
+import hashlib
+import json
+from dataclasses import dataclass
+from typing import Any
+
+from gate import __version__
+from gate.checks import ALL_CHECKS
+from gate.extract import extract
+
+
+@dataclass(frozen=True)
+class Params:
+    """The limits that change what extraction produces (part of the cache key)."""
+
+    max_pages: int
+    max_nesting: int
+    timeout_s: float
+    memory_mb: int
+
+    def fingerprint(self) -> str:
+        """Identifies gate's version, the measurements' versions and these limits."""
+        material = {"gate": __version__, "params": self.__dict__,
+                    "measures": {c.id: c.measure_version for c in ALL_CHECKS
+                                 if c.measure is not None}}
+        blob = json.dumps(material, sort_keys=True).encode("utf-8")
+        return hashlib.sha256(blob).hexdigest()[:16]
+
+
+def process(task: tuple[str, bytes, Params]) -> dict[str, Any]:
+    """Extract and measure one document. Bad input is reported, never raised."""
+    _path, data, params = task
+    extraction = extract(data, max_pages=params.max_pages, max_nesting=params.max_nesting)
+    measures: dict[str, Any] = {}
+    errors: dict[str, str] = {}
+    if extraction.summary.ok:
+        for check in ALL_CHECKS:
+            if check.measure is None:
+                continue
+            try:
+                measures[check.id] = check.measure(extraction)
+            except MemoryError:
+                raise
+            except Exception as err:  # noqa: BLE001 - recorded; the parent fails closed
+                errors[check.id] = f"{type(err).__name__}: {err}"
+    return {"extracted": extraction.summary.to_json(), "text": extraction.text,
+            "measures": measures, "measure_errors": errors}
+
+
+def warm_up() -> None:
+    """Load what every worker needs before forking (language profiles, parsers)."""
+    import langdetect
+
+    try:
+        langdetect.detect_langs("warm up the language profiles before forking")
+    except Exception:  # noqa: BLE001 - warming up is an optimisation only
+        pass
+    import gate.extract.html  # noqa: F401
+    import gate.extract.pdf  # noqa: F401
+    import gate.extract.text  # noqa: F401
