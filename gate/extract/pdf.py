@@ -168,6 +168,9 @@ def _extract(data: bytes, max_pages: int) -> Extraction:
     texts: list[str] = []
     try:
         for page in reader.pages:
+            # decode the content streams first: extract_text swallows the decompression
+            # limit and would return "" for a bomb instead of saying what happened
+            page.get_contents()
             texts.append(page.extract_text() or "")
     except LimitReachedError:
         raise

@@ -46,9 +46,15 @@ def decode(data: bytes, encoding: str | None = None) -> tuple[str, str] | None:
         return data.decode("utf-8"), "utf-8"
     except UnicodeDecodeError:
         pass
-    best = charset_normalizer.from_bytes(data).best()
-    if best is None or best.encoding is None:
+    matches = list(charset_normalizer.from_bytes(data))
+    if not matches:
         return None
+    # charset detection is unreliable on short texts; among the least garbled candidates,
+    # prefer windows-1252, which is what browsers fall back to for undeclared pages
+    # (WHATWG HTML standard, "determining the character encoding", default for most locales).
+    least = min(m.chaos for m in matches)
+    calm = [m for m in matches if m.chaos == least]
+    best = next((m for m in calm if m.encoding == "cp1252"), calm[0])
     return str(best), best.encoding
 
 

@@ -114,7 +114,7 @@ def _explain(err: dict[str, Any], loc: tuple, raw_loc: tuple) -> str:
         owner = _model_at(loc, raw_loc)
         known = sorted(owner.model_fields) if owner else []
         hint = ""
-        close = difflib.get_close_matches(str(key), known, n=1)
+        close = difflib.get_close_matches(str(key), known, n=1, cutoff=0.75)
         if close:
             hint = f"; did you mean {close[0]!r}?"
         elif known:

@@ -1,0 +1,176 @@
+"""Near-duplicates: shingling, MinHash accuracy, LSH banding and the keeper rules."""
+
+import math
+import random
+from datetime import UTC, datetime
+
+import pytest
+from datasketch import MinHashLSH
+
+from gate.checks import duplicate as dup
+
+from .helpers import policy
+
+SETTINGS = policy("duplicates:\n  threshold: 0.8\n").duplicates
+
+
+def test_broder_rose_example():
+    # Broder 1997: A = "a rose is a rose is a rose", B = "a rose is a flower which is a rose";
+    # plain-set resemblance 60% / 50% / 42.86% for w = 1 / 2 / 3 (check-values.md section 2).
+    a = "a rose is a rose is a rose".split()
+    b = "a rose is a flower which is a rose".split()
+    expected = {1: 0.6, 2: 0.5, 3: 3 / 7}
+    for w, value in expected.items():
+        sa, sb = dup.shingles(a, w), dup.shingles(b, w)
+        assert len(sa & sb) / len(sa | sb) == pytest.approx(value)
+
+
+def test_words_normalise_case_punctuation_and_compatibility_forms():
+    assert dup.words("The DEPOT, north—open: ﬁve days!") == \
+        ["the", "depot", "north", "open", "five", "days"]
+
+
+def _pair(rng, size, jaccard):
+    """Two sets of random tokens with a chosen exact Jaccard (invented test data)."""
+    shared = int(round(size * 2 * jaccard / (1 + jaccard)))
+    only = size - shared
+    common = {f"c{rng.random()}" for _ in range(shared)}
+    a = common | {f"a{rng.random()}" for _ in range(only)}
+    b = common | {f"b{rng.random()}" for _ in range(only)}
+    return a, b
+
+
+def test_minhash_estimates_agree_with_exact_jaccard():
+    # The estimator's standard error is sqrt(J(1-J)/k) (MMDS section 3.3; library-notes.md
+    # 1.1); with k = 256 every one of 40 estimates should fall within 4 standard errors.
+    rng = random.Random(11)
+    for target in (0.2, 0.5, 0.8, 0.9):
+        for _ in range(10):
+            a, b = _pair(rng, 400, target)
+            exact = len(a & b) / len(a | b)
+            estimate = dup.sketch(a).jaccard(dup.sketch(b))
+            sigma = math.sqrt(exact * (1 - exact) / dup.NUM_PERM)
+            assert abs(estimate - exact) <= 4 * sigma + 1e-9
+
+
+def s_curve(s, b, r):
+    return 1 - (1 - s ** r) ** b
+
+
+def test_s_curve_matches_mmds_figure_3_8():
+    # Leskovec, Rajaraman, Ullman, Mining of Massive Datasets, 2nd ed., Example 3.11 /
+    # Figure 3.8: b = 20, r = 5 (check-values.md section 1).
+    figure = {0.2: 0.006, 0.3: 0.047, 0.4: 0.186, 0.5: 0.470, 0.6: 0.802, 0.7: 0.975,
+              0.8: 0.9996}
+    for s, value in figure.items():
+        assert s_curve(s, 20, 5) == pytest.approx(value, abs=0.0006)
+
+
+def test_lsh_candidate_rate_follows_the_s_curve():
+    # The measured candidate rate of datasketch's MinHashLSH with b = 20, r = 5 on generated
+    # pairs should track 1-(1-s^r)^b within sampling error (200 pairs per point).
+    rng = random.Random(5)
+    for s in (0.4, 0.5, 0.6):
+        hits = 0
+        trials = 200
+        for i in range(trials):
+            a, b = _pair(rng, 150, s)
+            lsh = MinHashLSH(num_perm=dup.NUM_PERM, params=(20, 5))
+            lsh.insert("a", dup.sketch(a))
+            hits += "a" in lsh.query(dup.sketch(b))
+        p = s_curve(s, 20, 5)
+        assert abs(hits / trials - p) <= 4 * math.sqrt(p * (1 - p) / trials) + 0.02
+
+
+def test_band_params_catch_pairs_at_the_threshold():
+    bands, rows = dup.band_params(0.8)
+    assert bands * rows <= dup.NUM_PERM
+    assert s_curve(0.8, bands, rows) >= 0.995
+    # and reject most pairs at 0.5 (fewer false candidates than the 0.8 default's 9x13
+    # would still give up only 1/3 of true pairs, library-notes.md 1.3)
+    assert s_curve(0.5, bands, rows) < 0.2
+
+
+def item(key, text, *, trust=1, date=None, seen=(1, 0), in_batch=True, before=False,
+         candidate=True, sha=None):
+    measured = dup.measure(type("E", (), {"text": text})())
+    return dup.Item(key=key, path=f"{key}.txt", sha256=sha or key,
+                    text_sha256=measured["text_sha256"], minhash=measured["minhash"],
+                    trust=trust, date=date, seen=seen, in_batch=in_batch,
+                    accepted_before=before, candidate=candidate)
+
+
+BASE = " ".join(f"word{i % 97} token{i % 89} part{i % 83}" for i in range(300))
+
+
+def test_exact_copies_by_bytes_and_by_text():
+    items = [item("a", BASE, seen=(1, 0), sha="s1"), item("b", BASE, seen=(1, 1), sha="s1"),
+             item("c", BASE.upper(), seen=(1, 2), sha="s3")]  # same words, other bytes
+    out = dup.evaluate(items, SETTINGS)
+    assert out.keepers == {"a"}
+    assert [f.code for f in out.findings["b"]] == ["duplicate.exact"]
+    assert out.findings["b"][0].details["keeper"] == "a.txt"
+    assert "same text" in out.findings["c"][0].message
+
+
+def test_near_duplicate_keeper_by_trust_then_date_then_first_seen():
+    near = BASE + " an extra closing sentence"
+    old, new = datetime(2025, 1, 1, tzinfo=UTC), datetime(2026, 1, 1, tzinfo=UTC)
+    # trust wins over date
+    out = dup.evaluate([item("a", BASE, trust=1, date=new),
+                        item("b", near, trust=3, date=old, seen=(1, 1))], SETTINGS)
+    assert out.keepers == {"b"} and out.findings["a"][0].code == "duplicate.near"
+    assert "more trusted" in out.findings["a"][0].message
+    # then the newer date
+    out = dup.evaluate([item("a", BASE, date=old), item("b", near, date=new, seen=(1, 1))],
+                       SETTINGS)
+    assert out.keepers == {"b"} and "newer" in out.findings["a"][0].message
+    # then first seen
+    out = dup.evaluate([item("a", BASE, seen=(1, 5)), item("b", near, seen=(1, 1))], SETTINGS)
+    assert out.keepers == {"b"}
+
+
+def test_unrelated_documents_are_all_kept():
+    rng = random.Random(1)
+    texts = [" ".join(f"w{rng.randrange(10_000)}" for _ in range(300)) for _ in range(20)]
+    out = dup.evaluate([item(str(i), t, seen=(1, i)) for i, t in enumerate(texts)], SETTINGS)
+    assert len(out.keepers) == 20 and not out.findings
+
+
+def test_held_documents_are_compared_but_never_keep():
+    out = dup.evaluate([item("a", BASE, candidate=False), item("b", BASE, seen=(1, 1))],
+                       SETTINGS)
+    assert out.keepers == {"b"}
+    assert out.findings["a"][0].details["keeper"] == "b.txt"
+
+
+def test_superseding_an_earlier_version():
+    newer = datetime(2026, 6, 1, tzinfo=UTC)
+    older = datetime(2025, 6, 1, tzinfo=UTC)
+    stored = item("old", BASE, date=older, seen=(1, -1), in_batch=False, before=True)
+    fresh = item("new", BASE + " revised", date=newer, seen=(2, 0))
+    out = dup.evaluate([stored, fresh], SETTINGS)
+    assert out.keepers == {"new"}
+    assert out.superseded["old"].code == "duplicate.superseded"
+
+
+def test_diverging_numbers_are_shown_side_by_side():
+    left = BASE + " The fee is 120 EUR from 1 March 2026."
+    right = BASE + " The fee is 150 EUR from 1 April 2026."
+    texts = {"a": left, "b": right}
+    out = dup.evaluate([item("a", left), item("b", right, seen=(1, 1))], SETTINGS,
+                       text_of=texts.get)
+    finding = out.findings["b"][0]
+    assert finding.code == "duplicate.near"
+    pairs = finding.details["differences"]
+    assert ["150", "120"] in pairs and ["April", "March"] not in pairs  # only digit runs
+    assert "disagree" in finding.message
+
+
+def test_tiny_documents_only_compared_exactly():
+    short = policy("duplicates:\n  min_shingles: 50\n").duplicates
+    a = item("a", "short note about the depot")
+    b = item("b", "short note about the depot too")
+    a = dup.Item(**{**a.__dict__, "minhash": None})
+    b = dup.Item(**{**b.__dict__, "minhash": None})
+    assert dup.evaluate([a, b], short).keepers == {"a", "b"}

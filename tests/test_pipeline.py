@@ -1,0 +1,285 @@
+"""End-to-end runs of the pipeline on generated inboxes (invented fixture content)."""
+
+import fcntl
+import json
+import os
+import random
+import signal
+import subprocess
+import sys
+import time
+from datetime import UTC, datetime
+from pathlib import Path
+
+import pytest
+
+from gate.errors import InboxError, LockError, ManifestError, OutputError, StateError
+from gate.pipeline import RunOptions, run
+from gate.policy import LoadedPolicy, load_policy
+
+from .helpers import make_pdf
+
+AS_OF = datetime(2026, 12, 1, tzinfo=UTC)
+POLICY = """version: 1
+name: pipeline-test
+sources:
+  allow:
+    - domain: docs.example.org
+      subdomains: true
+      trust: 2
+    - path: local/
+  deny:
+    - domain: paste.example.net
+freshness:
+  max_age_days: 365
+  undated: warn
+language:
+  allowed: [en]
+  min_chars: 100
+  undetermined: warn
+duplicates:
+  threshold: 0.8
+"""
+
+PARAGRAPH = ("The northern depot of the invented Quillby Freight cooperative schedules "
+             "deliveries in three windows each weekday, and drivers confirm every window "
+             "by radio before they leave the yard. ")
+_VOCAB = ("depot route window driver pallet invoice customer harbour siding crane gate "
+          "ledger barge schedule weekday morning evening north south river bridge yard "
+          "permit tariff season cargo shift relay station canal").split()
+
+
+def prose(seed: int, words: int = 120) -> str:
+    """Invented English-like text that differs from seed to seed."""
+    rng = random.Random(seed)
+    out = []
+    for i in range(words):
+        out.append(rng.choice(_VOCAB))
+        if i % 12 == 11:
+            out[-1] += ". The"
+    return "The " + " ".join(out) + "."
+
+
+def make_inbox(root: Path, n: int = 12) -> Path:
+    inbox = root / "inbox"
+    (inbox / "local").mkdir(parents=True)
+    lines = []
+    for i in range(n):
+        body = PARAGRAPH + prose(i) + f" Route {i} serves {i * 7 + 3} customers."
+        name = f"page-{i:02d}.html"
+        (inbox / name).write_text(f"<html><head><title>Route {i}</title></head><body>"
+                                  f"<article><p>{body}</p><p>{prose(i + 500)}</p></article>"
+                                  "</body></html>")
+        lines.append({"path": name, "source_url": f"https://docs.example.org/routes/{i}",
+                      "published_at": "2026-10-01"})
+    (inbox / "copy.html").write_bytes((inbox / "page-00.html").read_bytes())
+    lines.append({"path": "copy.html", "source_url": "https://docs.example.org/copy",
+                  "published_at": "2026-10-01"})
+    (inbox / "report.pdf").write_bytes(make_pdf([prose(901)]))
+    lines.append({"path": "report.pdf", "source_url": "https://docs.example.org/r.pdf",
+                  "published_at": "2026-09-01"})
+    (inbox / "local" / "notes.txt").write_text(prose(902))
+    (inbox / "stale.txt").write_text(prose(903) + " Timetable of an older year.")
+    lines.append({"path": "stale.txt", "source_url": "https://docs.example.org/old",
+                  "published_at": "2020-01-01"})
+    (inbox / "pasted.txt").write_text(prose(904) + " Copied from a paste site.")
+    lines.append({"path": "pasted.txt", "source_url": "https://paste.example.net/x"})
+    (inbox / "empty.html").write_bytes(b"")
+    (inbox / "binary.html").write_bytes(bytes(range(256)) * 4)
+    os.symlink("/etc/hostname", inbox / "link.txt")
+    (inbox / "manifest.jsonl").write_text("".join(json.dumps(x) + "\n" for x in lines))
+    return inbox
+
+
+def loaded(tmp_path: Path, text: str = POLICY) -> LoadedPolicy:
+    path = tmp_path / "policy.yaml"
+    path.write_text(text)
+    return load_policy(path)
+
+
+def go(tmp_path, inbox, out, **kw):
+    opts = RunOptions(inbox=inbox, policy=loaded(tmp_path), out=out, as_of=AS_OF,
+                      workers=kw.pop("workers", 1), **kw)
+    return run(opts)
+
+
+def report(out: Path) -> dict:
+    return json.loads((out / "report.json").read_text())
+
+
+def decisions(out: Path) -> dict:
+    return {d["path"]: (d["decision"], sorted(r["code"] for r in d["reasons"]))
+            for d in report(out)["documents"]}
+
+
+def assert_placed_once(inbox: Path, out: Path) -> None:
+    rep = report(out)
+    paths = [d["path"] for d in rep["documents"]]
+    assert len(paths) == len(set(paths))
+    accepted = set(os.listdir(out / "accepted"))
+    quarantined = set(os.listdir(out / "quarantine"))
+    assert not accepted & quarantined
+    for doc in rep["documents"]:
+        folder, _, doc_id = doc["location"].partition("/")
+        assert doc_id in (accepted if folder == "accepted" else quarantined)
+        assert folder == ("accepted" if doc["decision"] == "accepted" else "quarantine")
+    assert accepted == {d["id"] for d in rep["documents"] if d["decision"] == "accepted"}
+
+
+def test_every_document_ends_in_exactly_one_place(tmp_path):
+    inbox = make_inbox(tmp_path)
+    before = sorted((p, p.stat().st_mtime_ns) for p in inbox.rglob("*") if p.is_file())
+    go(tmp_path, inbox, tmp_path / "out")
+    got = decisions(tmp_path / "out")
+    assert len(got) == 12 + 8
+    # copy.html comes first in inbox order, so it is the keeper of the exact pair
+    assert got["copy.html"] == ("accepted", [])
+    assert got["page-00.html"] == ("quarantined", ["duplicate.exact"])
+    assert got["stale.txt"] == ("quarantined", ["freshness.stale"])
+    assert got["pasted.txt"] == ("quarantined", ["source.denied"])
+    # no manifest entry and not under local/: the source check holds them too
+    assert got["empty.html"][1] == ["format.empty-file", "source.missing"]
+    assert got["binary.html"][1] == ["format.unsupported", "source.missing"]
+    assert got["link.txt"] == ("quarantined", ["format.not-regular", "source.missing"])
+    assert got["local/notes.txt"] == ("accepted", [])
+    assert got["report.pdf"] == ("accepted", [])
+    assert_placed_once(inbox, tmp_path / "out")
+    after = sorted((p, p.stat().st_mtime_ns) for p in inbox.rglob("*") if p.is_file())
+    assert before == after  # the inbox is never modified
+    first = next(d for d in report(tmp_path / "out")["documents"] if d["decision"] == "accepted")
+    entry = tmp_path / "out" / "accepted" / first["id"]
+    assert sorted(os.listdir(entry)) == ["original", "provenance.json", "text.txt"]
+    prov = json.loads((entry / "provenance.json").read_text())
+    assert prov["policy"]["name"] == "pipeline-test" and prov["run"]["as_of"] == \
+        "2026-12-01T00:00:00Z"
+    assert prov["checks"]["source"] == "pass" and prov["gate"]["version"]
+    link = tmp_path / "out" / "quarantine" / next(
+        d["id"] for d in report(tmp_path / "out")["documents"] if d["path"] == "link.txt")
+    assert os.listdir(link) == ["reasons.json"]  # a link is never followed or copied
+
+
+def test_same_inputs_give_byte_identical_reports_for_any_worker_count(tmp_path):
+    inbox = make_inbox(tmp_path)
+    go(tmp_path, inbox, tmp_path / "one", workers=1)
+    go(tmp_path, inbox, tmp_path / "two", workers=2)
+    assert (tmp_path / "one" / "report.json").read_bytes() == \
+        (tmp_path / "two" / "report.json").read_bytes()
+
+
+def test_second_run_is_unchanged_and_served_from_the_cache(tmp_path):
+    inbox = make_inbox(tmp_path)
+    out = tmp_path / "out"
+    go(tmp_path, inbox, out)
+    first = report(out)
+    changes = [json.loads(x) for x in (out / "changes.jsonl").read_text().splitlines()]
+    assert {c["action"] for c in changes} == {"add"}
+    assert len(changes) == first["summary"]["accepted"]
+    result = go(tmp_path, inbox, out)
+    second = report(out)
+    assert result.run_id == "run-0002"
+    assert (out / "changes.jsonl").read_text() == ""
+    for a, b in zip(first["documents"], second["documents"]):
+        assert (a["path"], a["decision"], a["reasons"]) == (b["path"], b["decision"],
+                                                            b["reasons"])
+        assert b["change"] in ("unchanged", "none")
+
+
+def test_full_run_removes_missing_documents_incremental_does_not(tmp_path):
+    inbox = make_inbox(tmp_path)
+    out = tmp_path / "out"
+    go(tmp_path, inbox, out)
+    gone = next(d for d in report(out)["documents"] if d["path"] == "page-05.html")
+    assert gone["decision"] == "accepted"
+    (inbox / gone["path"]).unlink()
+    go(tmp_path, inbox, out, incremental=True)
+    assert (out / "accepted" / gone["id"]).exists()
+    assert (out / "changes.jsonl").read_text() == ""
+    go(tmp_path, inbox, out)
+    assert not (out / "accepted" / gone["id"]).exists()
+    changes = [json.loads(x) for x in (out / "changes.jsonl").read_text().splitlines()]
+    assert changes == [{"action": "remove", "id": gone["id"], "path": gone["path"],
+                        "sha256": gone["sha256"], "why": "no longer in the inbox"}]
+    assert report(out)["removed"][0]["path"] == gone["path"]
+
+
+def test_update_and_quarantine_of_an_accepted_document(tmp_path):
+    inbox = make_inbox(tmp_path)
+    out = tmp_path / "out"
+    go(tmp_path, inbox, out)
+    notes = inbox / "local" / "notes.txt"
+    notes.write_text(prose(902) + " Updated opening hours for the winter.")
+    go(tmp_path, inbox, out)
+    changes = [json.loads(x) for x in (out / "changes.jsonl").read_text().splitlines()]
+    assert [(c["action"], c["path"]) for c in changes] == [("update", "local/notes.txt")]
+    notes.write_bytes(b"\x00\x01binary now")
+    go(tmp_path, inbox, out)
+    changes = [json.loads(x) for x in (out / "changes.jsonl").read_text().splitlines()]
+    assert [(c["action"], c["path"]) for c in changes] == [("remove", "local/notes.txt")]
+    assert_placed_once(inbox, out)
+
+
+def test_bad_inputs_stop_the_run_with_a_clear_error(tmp_path):
+    inbox = make_inbox(tmp_path)
+    with pytest.raises(InboxError, match="does not exist"):
+        go(tmp_path, tmp_path / "missing", tmp_path / "out")
+    with pytest.raises(OutputError, match="inside the inbox"):
+        go(tmp_path, inbox, inbox / "out")
+    (inbox / "manifest.jsonl").write_text('{"path": "a"}\n{broken\n')
+    with pytest.raises(ManifestError, match="line 2"):
+        go(tmp_path, inbox, tmp_path / "out")
+
+
+def test_foreign_state_file_is_refused_not_overwritten(tmp_path):
+    inbox = make_inbox(tmp_path)
+    state = tmp_path / "out" / "state"
+    state.mkdir(parents=True)
+    (state / "gate.sqlite").write_bytes(b"this is not a database, it is someone's notes")
+    with pytest.raises(StateError, match="not a gate state database"):
+        go(tmp_path, inbox, tmp_path / "out")
+    assert (state / "gate.sqlite").read_bytes().startswith(b"this is not")
+
+
+def test_second_concurrent_run_is_refused(tmp_path):
+    inbox = make_inbox(tmp_path)
+    lock = tmp_path / "out" / "state" / "lock"
+    lock.parent.mkdir(parents=True)
+    fd = os.open(lock, os.O_RDWR | os.O_CREAT)
+    os.write(fd, b'{"pid": 4242, "host": "h", "started": "t"}')
+    fcntl.flock(fd, fcntl.LOCK_EX)
+    try:
+        with pytest.raises(LockError, match="pid 4242"):
+            go(tmp_path, inbox, tmp_path / "out")
+    finally:
+        os.close(fd)
+    go(tmp_path, inbox, tmp_path / "out")  # the lock died with its holder: taken over
+
+
+def _cli(inbox, out, policy_path):
+    return [sys.executable, "-m", "gate", "run", str(inbox), "--policy", str(policy_path),
+            "--out", str(out), "--as-of", "2026-12-01T00:00:00Z", "--workers", "2", "-q"]
+
+
+def test_killed_runs_resume_to_the_same_result(tmp_path):
+    """Kill a run with SIGKILL at random moments, re-run, and compare with a clean run."""
+    inbox = make_inbox(tmp_path, n=30)
+    policy_path = tmp_path / "policy.yaml"
+    policy_path.write_text(POLICY)
+    clean = tmp_path / "clean"
+    started = time.monotonic()
+    subprocess.run(_cli(inbox, clean, policy_path), check=True, capture_output=True)
+    full = time.monotonic() - started
+    expected = decisions(clean)
+    rng = random.Random(2026)
+    for attempt in range(4):
+        out = tmp_path / f"killed-{attempt}"
+        proc = subprocess.Popen(_cli(inbox, out, policy_path), stdout=subprocess.DEVNULL,
+                                stderr=subprocess.DEVNULL, start_new_session=True)
+        time.sleep(rng.uniform(0.3, full))
+        os.killpg(proc.pid, signal.SIGKILL)  # the run and its workers
+        proc.wait()
+        finish = subprocess.run(_cli(inbox, out, policy_path), capture_output=True,
+                                text=True)
+        assert finish.returncode == 0, finish.stderr
+        assert decisions(out) == expected
+        assert_placed_once(inbox, out)
+        assert not list((out / "state" / "tmp").iterdir())
