@@ -35,8 +35,8 @@ policy_app = typer.Typer(add_completion=False, no_args_is_help=True,
                          help="Validate policy files and print their schema.")
 app.add_typer(policy_app, name="policy")
 
-err_console = Console(stderr=True, highlight=False)
-out_console = Console(highlight=False)
+err_console = Console(stderr=True, highlight=False, soft_wrap=True)
+out_console = Console(highlight=False, soft_wrap=True)
 
 
 def _fail(message: str, code: int = EXIT_UNABLE) -> None:

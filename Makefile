@@ -1,0 +1,33 @@
+# make demo  - set up .venv and run gate on the bundled sample_docs/
+# make test  - set up .venv with the test tools and run the test suite
+# make bench - run the benchmark scripts (they print figures)
+
+PYTHON ?= python3
+VENV   ?= .venv
+BIN    := $(VENV)/bin
+STAMP  := $(VENV)/.installed
+
+.PHONY: demo test bench docs clean
+
+$(STAMP): pyproject.toml constraints.txt
+	$(PYTHON) -m venv $(VENV)
+	$(BIN)/python -m pip install --quiet --upgrade pip
+	$(BIN)/python -m pip install --quiet -c constraints.txt -e '.[test]'
+	touch $(STAMP)
+
+demo: $(STAMP)
+	rm -rf demo-out
+	$(BIN)/gate run sample_docs --policy policies/demo.yaml --out demo-out \
+		--as-of 2026-12-01T00:00:00Z
+
+test: $(STAMP)
+	$(BIN)/python -m pytest -q
+
+bench: $(STAMP)
+	$(BIN)/python benchmarks/throughput.py
+
+docs: $(STAMP)
+	$(BIN)/python -m gate.docsgen
+
+clean:
+	rm -rf demo-out bench-out .pytest_cache
