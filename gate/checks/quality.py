@@ -1,0 +1,270 @@
+"""quality: does the text look like prose a reader would want retrieved?
+
+The filters are the document-quality and repetition filters of the Gopher paper (Rae et
+al. 2021, "Scaling Language Models: Methods, Analysis & Insights from Training Gopher",
+appendix A, MassiveWeb quality filtering; the repetition limits are its Table A1). Every
+default below is the paper's value; every limit can be changed or switched off with
+``null``. Words are whitespace-separated tokens; lines and paragraphs (blocks separated by a
+blank line) are counted without empty ones.
+
+* word count within ``min_words`` .. ``max_words`` (50 .. 100,000);
+* mean word length within 3 .. 10 characters;
+* symbol-to-word ratio at most 0.1, separately for ``#`` and for ellipses (``...``, ``…``);
+* at most 90 % of lines starting with a bullet, at most 30 % ending with an ellipsis;
+* at least 80 % of words containing an alphabetic character;
+* at least ``min_stop_words`` (2) distinct stop words. The paper's list is English (the, be,
+  to, of, and, that, have, with) and is applied to English text; gate ships lists for a few
+  other languages (compiled from common usage, not from the paper) and skips the rule for
+  languages it has no list for;
+* repetition: duplicate lines and paragraphs (fraction 0.30, character fraction 0.20), the
+  most frequent 2-, 3-, 4-gram's character share (0.20, 0.18, 0.16), and the character share
+  covered by duplicated 5- to 10-grams (0.15 down to 0.10).
+
+Example::
+
+    quality:
+      min_words: 20            # short notices are welcome in this corpus
+      min_stop_words: null     # switch the stop-word rule off
+      action: warn
+"""
+
+from __future__ import annotations
+
+import re
+from typing import Any
+
+import numpy as np
+from pydantic import Field
+
+from gate.checks.base import Document, DocumentCheck, RunContext
+from gate.extract.model import Extraction
+from gate.findings import Finding, define
+from gate.policy.base import Section
+
+MAX_SCANNED_WORDS = 120_000  # beyond max_words the document fails anyway
+
+WORD_COUNT = define("quality.word-count", "too few or too many words",
+                    "the text has {words} words; the limits are {low} to {high}")
+WORD_LENGTH = define("quality.word-length", "unusual mean word length",
+                     "the mean word length is {mean:.1f} characters; the limits are {low} to "
+                     "{high}")
+SYMBOLS = define("quality.symbols", "too many '#' or ellipses per word",
+                 "there are {ratio:.2f} {symbol} per word, more than {limit}")
+BULLETS = define("quality.bullets", "mostly bullet lines",
+                 "{share:.0%} of lines start with a bullet, more than {limit:.0%}")
+ELLIPSIS_LINES = define("quality.ellipsis-lines", "many lines trail off with an ellipsis",
+                        "{share:.0%} of lines end with an ellipsis, more than {limit:.0%}")
+NON_ALPHA = define("quality.non-alphabetic", "too few words with letters",
+                   "only {share:.0%} of words contain a letter, fewer than {limit:.0%}")
+STOP_WORDS = define("quality.no-stop-words", "almost no ordinary function words",
+                    "the {language} text contains {found} distinct stop words ({words}); at "
+                    "least {limit} are expected in running prose")
+REPEATED = define("quality.repetition", "the text repeats itself",
+                  "the text repeats itself: {summary}")
+
+# Gopher's stop-word list (English). The others are common function words compiled for
+# gate from general knowledge of each language (not from the paper; from memory).
+STOP_LISTS: dict[str, tuple[str, ...]] = {
+    "en": ("the", "be", "to", "of", "and", "that", "have", "with"),
+    "de": ("der", "die", "das", "und", "ist", "zu", "mit", "von", "nicht", "ein"),
+    "fr": ("le", "la", "les", "et", "de", "des", "est", "que", "pour", "dans"),
+    "es": ("el", "la", "los", "las", "y", "de", "que", "en", "es", "para"),
+    "nl": ("de", "het", "een", "en", "van", "is", "dat", "op", "te", "met"),
+    "it": ("il", "la", "di", "e", "che", "per", "un", "una", "con", "non"),
+}
+_BULLETS = ("•", "●", "○", "◦", "▪", "▫", "‣", "⁃", "-", "*", "–", "—", "·")
+_ELLIPSES = ("...", "…")
+_ALPHA = re.compile(r"[^\W\d_]", re.UNICODE)
+_PARAGRAPH = re.compile(r"\n\s*\n")
+_STRIP = re.compile(r"^\W+|\W+$", re.UNICODE)
+
+
+class QualitySettings(Section):
+    """Gopher document-quality filters; defaults are the paper's values, null disables."""
+
+    min_words: int | None = Field(50, ge=0, description="Fewest words.")
+    max_words: int | None = Field(100_000, ge=1, description="Most words.")
+    min_mean_word_length: float | None = Field(3, ge=0, description="Shortest mean word "
+                                               "length, characters.")
+    max_mean_word_length: float | None = Field(10, ge=0, description="Longest mean word "
+                                               "length, characters.")
+    max_symbol_ratio: float | None = Field(0.1, ge=0, description="Most '#' (or ellipses) "
+                                           "per word.")
+    max_bullet_lines: float | None = Field(0.9, ge=0, le=1, description="Largest share of "
+                                           "lines starting with a bullet.")
+    max_ellipsis_lines: float | None = Field(0.3, ge=0, le=1, description="Largest share of "
+                                             "lines ending with an ellipsis.")
+    min_alphabetic_words: float | None = Field(0.8, ge=0, le=1, description="Smallest share "
+                                               "of words containing a letter.")
+    min_stop_words: int | None = Field(2, ge=0, description="Fewest distinct stop words "
+                                       "(for languages gate has a list for).")
+    max_duplicate_lines: float | None = Field(0.30, ge=0, le=1, description="Largest share "
+                                              "of lines that repeat an earlier line.")
+    max_duplicate_paragraphs: float | None = Field(0.30, ge=0, le=1, description="Largest "
+                                                   "share of repeated paragraphs.")
+    max_duplicate_line_chars: float | None = Field(0.20, ge=0, le=1, description="Largest "
+                                                   "character share of repeated lines.")
+    max_duplicate_paragraph_chars: float | None = Field(0.20, ge=0, le=1, description=""
+                                                        "Largest character share of "
+                                                        "repeated paragraphs.")
+    max_top_ngram_chars: dict[int, float] = Field(
+        {2: 0.20, 3: 0.18, 4: 0.16}, description="n -> largest character share of the most "
+        "frequent n-gram (Gopher Table A1); remove an entry to switch it off.")
+    max_duplicate_ngram_chars: dict[int, float] = Field(
+        {5: 0.15, 6: 0.14, 7: 0.13, 8: 0.12, 9: 0.11, 10: 0.10},
+        description="n -> largest character share covered by n-grams that occur more "
+        "than once (Gopher Table A1).")
+
+
+def _duplicates(parts: list[str]) -> tuple[float, float]:
+    """Share of parts that repeat an earlier part, and their share of characters."""
+    if not parts:
+        return 0.0, 0.0
+    seen: set[str] = set()
+    repeated = repeated_chars = 0
+    for part in parts:
+        if part in seen:
+            repeated += 1
+            repeated_chars += len(part)
+        seen.add(part)
+    total = sum(len(p) for p in parts)
+    return repeated / len(parts), repeated_chars / total if total else 0.0
+
+
+def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]:
+    """Top 2..4-gram and duplicated 5..10-gram character shares, vectorised.
+
+    Each n-gram is identified by a 64-bit polynomial hash of its word ids (a collision
+    would need two different n-grams of one document to hash alike: negligible).
+    """
+    top = {str(n): 0.0 for n in range(2, 5)}
+    dup = {str(n): 0.0 for n in range(5, 11)}
+    if len(words) < 2:
+        return top, dup
+    ids: dict[str, int] = {}
+    seq = np.fromiter((ids.setdefault(w, len(ids) + 1) for w in words), dtype=np.uint64,
+                      count=len(words))
+    lengths = np.fromiter((len(w) for w in words), dtype=np.int64, count=len(words))
+    total = int(lengths.sum())
+    if not total:
+        return top, dup
+    prefix = np.concatenate(([0], np.cumsum(lengths)))
+    prime = np.uint64(1_000_003)
+    hashes = seq.copy()
+    with np.errstate(over="ignore"):
+        for n in range(2, 11):
+            if len(words) < n:
+                break
+            hashes = hashes[:-1] * prime + seq[n - 1:]
+            _, inverse, counts = np.unique(hashes, return_inverse=True, return_counts=True)
+            per_gram = counts[inverse]
+            if n <= 4:
+                best = int(np.argmax(per_gram))
+                if per_gram[best] > 1:
+                    chars = int(prefix[best + n] - prefix[best])
+                    top[str(n)] = round(float(per_gram[best]) * chars / total, 4)
+            else:
+                starts = np.flatnonzero(per_gram > 1)
+                if starts.size:
+                    marks = np.zeros(len(words) + 1, dtype=np.int64)
+                    np.add.at(marks, starts, 1)
+                    np.add.at(marks, starts + n, -1)
+                    covered = np.cumsum(marks[:-1]) > 0
+                    dup[str(n)] = round(float(lengths[covered].sum()) / total, 4)
+    return top, dup
+
+
+def measure(extraction: Extraction) -> dict[str, Any]:
+    """Text statistics for the Gopher filters (runs in the worker)."""
+    text = extraction.text
+    tokens = text.split()
+    words = tokens[:MAX_SCANNED_WORDS]
+    lines = [line.strip() for line in text.split("\n") if line.strip()]
+    paragraphs = [p.strip() for p in _PARAGRAPH.split(text) if p.strip()]
+    lower = [_STRIP.sub("", w).lower() for w in words]
+    stats: dict[str, Any] = {
+        "words": len(tokens),
+        "mean_word_length": (sum(len(w) for w in words) / len(words)) if words else 0.0,
+        "hash_ratio": text.count("#") / len(tokens) if tokens else 0.0,
+        "ellipsis_ratio": (text.count("...") + text.count("…")) / len(tokens) if tokens
+        else 0.0,
+        "bullet_lines": sum(line.startswith(_BULLETS) for line in lines) / len(lines)
+        if lines else 0.0,
+        "ellipsis_lines": sum(line.endswith(_ELLIPSES) for line in lines) / len(lines)
+        if lines else 0.0,
+        "alphabetic_words": sum(bool(_ALPHA.search(w)) for w in words) / len(words)
+        if words else 0.0,
+        "stop_words": {lang: sorted(set(lower) & set(words_))
+                       for lang, words_ in STOP_LISTS.items()},
+    }
+    stats["duplicate_lines"], stats["duplicate_line_chars"] = _duplicates(lines)
+    stats["duplicate_paragraphs"], stats["duplicate_paragraph_chars"] = _duplicates(paragraphs)
+    stats["top_ngram_chars"], stats["duplicate_ngram_chars"] = \
+        _ngram_shares([w for w in lower if w])
+    return {k: round(v, 4) if isinstance(v, float) else v for k, v in stats.items()}
+
+
+def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding] | None:
+    settings: QualitySettings = policy.quality
+    m = document.measures.get("quality")
+    if not document.has_text or m is None:
+        return None
+    s = settings
+    found: list[Finding] = []
+    words = m["words"]
+    low = s.min_words if s.min_words is not None else 0
+    high = s.max_words if s.max_words is not None else "unlimited"
+    if (s.min_words is not None and words < s.min_words) or \
+            (s.max_words is not None and words > s.max_words):
+        found.append(WORD_COUNT(words=words, low=low, high=high))
+    mean = m["mean_word_length"]
+    if (s.min_mean_word_length is not None and mean < s.min_mean_word_length) or \
+            (s.max_mean_word_length is not None and mean > s.max_mean_word_length):
+        found.append(WORD_LENGTH(mean=mean, low=s.min_mean_word_length,
+                                 high=s.max_mean_word_length))
+    if s.max_symbol_ratio is not None:
+        for key, symbol in (("hash_ratio", "'#'"), ("ellipsis_ratio", "ellipses")):
+            if m[key] > s.max_symbol_ratio:
+                found.append(SYMBOLS(ratio=m[key], symbol=symbol, limit=s.max_symbol_ratio))
+    if s.max_bullet_lines is not None and m["bullet_lines"] > s.max_bullet_lines:
+        found.append(BULLETS(share=m["bullet_lines"], limit=s.max_bullet_lines))
+    if s.max_ellipsis_lines is not None and m["ellipsis_lines"] > s.max_ellipsis_lines:
+        found.append(ELLIPSIS_LINES(share=m["ellipsis_lines"], limit=s.max_ellipsis_lines))
+    if s.min_alphabetic_words is not None and m["alphabetic_words"] < s.min_alphabetic_words:
+        found.append(NON_ALPHA(share=m["alphabetic_words"], limit=s.min_alphabetic_words))
+    language = (document.measures.get("language") or {}).get("languages") or []
+    lang = language[0][0] if language else None
+    if s.min_stop_words is not None and lang in m["stop_words"]:
+        present = m["stop_words"][lang]
+        if len(present) < s.min_stop_words:
+            found.append(STOP_WORDS(language=lang, found=len(present),
+                                    words=", ".join(present) or "none", limit=s.min_stop_words))
+    repeats: list[dict[str, Any]] = []
+    for key, limit, name in (
+            ("duplicate_lines", s.max_duplicate_lines, "repeated lines"),
+            ("duplicate_paragraphs", s.max_duplicate_paragraphs, "repeated paragraphs"),
+            ("duplicate_line_chars", s.max_duplicate_line_chars,
+             "characters in repeated lines"),
+            ("duplicate_paragraph_chars", s.max_duplicate_paragraph_chars,
+             "characters in repeated paragraphs")):
+        if limit is not None and m[key] > limit:
+            repeats.append({"measure": key, "name": name, "value": m[key], "limit": limit})
+    for n, limit in sorted(s.max_top_ngram_chars.items()):
+        value = m["top_ngram_chars"].get(str(n))
+        if value is not None and value > limit:
+            repeats.append({"measure": f"top_{n}gram_chars", "value": value, "limit": limit,
+                            "name": f"characters in the most frequent {n}-gram"})
+    for n, limit in sorted(s.max_duplicate_ngram_chars.items()):
+        value = m["duplicate_ngram_chars"].get(str(n))
+        if value is not None and value > limit:
+            repeats.append({"measure": f"duplicate_{n}gram_chars", "value": value,
+                            "limit": limit, "name": f"characters in repeated {n}-grams"})
+    if repeats:
+        summary = "; ".join(f"{r['value']:.0%} {r['name']} (limit {r['limit']:.0%})"
+                            for r in repeats)
+        found.append(REPEATED(summary=summary, measures=repeats))
+    return found
+
+
+CHECK = DocumentCheck(id="quality", section="quality", evaluate=evaluate,
+                      settings=QualitySettings, measure=measure, doc=__doc__ or "")

@@ -1,0 +1,127 @@
+"""The Gopher quality filters: the paper's values as defaults, and each rule's behaviour."""
+
+import random
+from collections import Counter
+
+import pytest
+
+from gate.checks import quality
+from gate.checks.base import Document, RunContext
+from gate.extract.model import Extracted
+
+from .helpers import policy
+
+RUN = RunContext(as_of=None)
+
+
+class _Extraction:
+    def __init__(self, text):
+        self.text = text
+
+
+def test_defaults_are_the_gopher_values():
+    # Rae et al. 2021, appendix A (quality filters) and Table A1 (repetition), as verified
+    # via an implementation quoting the paper (check-values.md section 4).
+    s = quality.QualitySettings()
+    assert (s.min_words, s.max_words) == (50, 100_000)
+    assert (s.min_mean_word_length, s.max_mean_word_length) == (3, 10)
+    assert s.max_symbol_ratio == 0.1
+    assert (s.max_bullet_lines, s.max_ellipsis_lines, s.min_alphabetic_words) == (0.9, 0.3, 0.8)
+    assert s.min_stop_words == 2
+    assert quality.STOP_LISTS["en"] == ("the", "be", "to", "of", "and", "that", "have", "with")
+    assert (s.max_duplicate_lines, s.max_duplicate_paragraphs) == (0.30, 0.30)
+    assert (s.max_duplicate_line_chars, s.max_duplicate_paragraph_chars) == (0.20, 0.20)
+    assert s.max_top_ngram_chars == {2: 0.20, 3: 0.18, 4: 0.16}
+    assert s.max_duplicate_ngram_chars == {5: 0.15, 6: 0.14, 7: 0.13, 8: 0.12, 9: 0.11,
+                                           10: 0.10}
+
+
+def _reference_shares(words):
+    """Straightforward definitions, to check the vectorised implementation against."""
+    total = sum(len(w) for w in words)
+    top, dup = {}, {}
+    for n in range(2, 5):
+        grams = Counter(tuple(words[i:i + n]) for i in range(len(words) - n + 1))
+        gram, count = max(grams.items(), key=lambda kv: kv[1])
+        top[str(n)] = round(count * sum(map(len, gram)) / total, 4) if count > 1 else 0.0
+    for n in range(5, 11):
+        grams = Counter(tuple(words[i:i + n]) for i in range(len(words) - n + 1))
+        covered = [False] * len(words)
+        for i in range(len(words) - n + 1):
+            if grams[tuple(words[i:i + n])] > 1:
+                covered[i:i + n] = [True] * n
+        dup[str(n)] = round(sum(len(w) for w, c in zip(words, covered) if c) / total, 4)
+    return top, dup
+
+
+@pytest.mark.parametrize("seed", range(5))
+def test_ngram_shares_match_the_plain_definition(seed):
+    rng = random.Random(seed)
+    vocab = [f"w{i}" * rng.randint(1, 3) for i in range(rng.randint(5, 40))]
+    words = [rng.choice(vocab) for _ in range(rng.randint(30, 400))]
+    top, dup = quality._ngram_shares(words)
+    ref_top, ref_dup = _reference_shares(words)
+    for n in top:
+        assert top[n] == pytest.approx(ref_top[n], abs=1e-4)
+    for n in dup:
+        assert dup[n] == pytest.approx(ref_dup[n], abs=1e-4)
+
+
+PROSE = ("The northern depot of the invented Quillby Freight cooperative schedules "
+         "deliveries in three windows each weekday. Drivers confirm every window by radio "
+         "before they leave the yard, and the dispatcher keeps a ledger of each confirmed "
+         "slot. When a lorry is late, the next customer on the route is called and offered "
+         "a later window or a pick-up at the depot counter, which is open until seven in the "
+         "evening. Pallets that miss their window stay in the covered bay overnight and are "
+         "loaded first the following morning.")
+
+
+def evaluate(text, settings="quality: {}\n", language="en"):
+    doc = Document(path="a.txt", kind="file", size=len(text), sha256="0" * 64, manifest=None,
+                   extracted=Extracted(type="text", text_chars=len(text)),
+                   measures={"quality": quality.measure(_Extraction(text)),
+                             "language": {"languages": [[language, 0.99]]}})
+    return sorted(f.code for f in quality.evaluate(doc, policy(settings), RUN))
+
+
+def test_ordinary_prose_passes():
+    assert evaluate(PROSE) == []
+
+
+@pytest.mark.parametrize("text,code", [
+    ("The depot opens at seven and closes at nineteen on weekdays.", "quality.word-count"),
+    ("# " * 30 + PROSE, "quality.symbols"),
+    ("\n".join(f"- item {i} of the list of depot supplies" for i in range(30)),
+     "quality.bullets"),
+    ("\n".join(f"and then the driver of lorry {i} waited..." for i in range(30)),
+     "quality.ellipsis-lines"),
+    (" ".join(["12345", "67890", "--", "the", "of"] * 20), "quality.non-alphabetic"),
+    (" ".join(["depot", "lorry", "yard", "ledger", "window"] * 20), "quality.no-stop-words"),
+    ("\n".join([PROSE] * 4), "quality.repetition"),
+    ("a b c d e f g " * 20, "quality.word-length"),
+])
+def test_each_rule_fires(text, code):
+    assert code in evaluate(text)
+
+
+def test_rules_can_be_switched_off_or_changed():
+    short = "The depot opens at seven and closes at nineteen on weekdays."
+    assert evaluate(short, "quality:\n  min_words: 5\n") == []
+    assert evaluate(short, "quality:\n  min_words: null\n") == []
+
+
+def test_stop_word_rule_follows_the_detected_language():
+    german = ("Das Depot im Norden öffnet um sieben Uhr und schließt um neunzehn Uhr. Die "
+              "Fahrer bestätigen jedes Zeitfenster per Funk, bevor sie den Hof verlassen, und "
+              "der Disponent führt ein Buch über jede bestätigte Lieferung. Wenn ein Lastwagen "
+              "zu spät ist, wird der nächste Kunde auf der Route angerufen und bekommt ein "
+              "späteres Fenster angeboten, oder die Abholung am Schalter des Depots, der bis "
+              "sieben Uhr abends geöffnet ist.")
+    assert evaluate(german, language="de") == []
+    assert "quality.no-stop-words" in evaluate(german, language="en")
+    assert "quality.no-stop-words" not in evaluate(german, language="sw")  # no list: skipped
+
+
+def test_repetition_is_one_finding_listing_every_measure():
+    doc_codes = evaluate("\n".join([PROSE] * 5))
+    assert doc_codes.count("quality.repetition") == 1
