@@ -23,7 +23,6 @@ Example::
 from __future__ import annotations
 
 import os
-import re
 from typing import Any, Literal
 
 import langdetect
@@ -96,19 +95,15 @@ def sample(text: str) -> str:
     return "\n".join(parts)
 
 
-_LETTER = re.compile(r"[^\W\d_]", re.UNICODE)
-
-
 def measure(extraction: Extraction) -> dict[str, Any]:
     """Detect the language of a bounded sample (runs in the worker)."""
     text = extraction.text
-    letters = len(_LETTER.findall(text[:100_000]))
     piece = sample(text)
     try:
         found = langdetect.detect_langs(piece)
     except LangDetectException:
-        return {"chars": len(text), "letters": letters, "languages": []}
-    return {"chars": len(text), "letters": letters,
+        return {"chars": len(text), "languages": []}
+    return {"chars": len(text),
             "languages": [[str(lang.lang), round(float(lang.prob), 4)] for lang in found]}
 
 

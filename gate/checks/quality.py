@@ -74,9 +74,7 @@ STOP_LISTS: dict[str, tuple[str, ...]] = {
 }
 _BULLETS = ("•", "●", "○", "◦", "▪", "▫", "‣", "⁃", "-", "*", "–", "—", "·")
 _ELLIPSES = ("...", "…")
-_ALPHA = re.compile(r"[^\W\d_]", re.UNICODE)
 _PARAGRAPH = re.compile(r"\n\s*\n")
-_STRIP = re.compile(r"^\W+|\W+$", re.UNICODE)
 
 
 class QualitySettings(Section):
@@ -174,29 +172,37 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
     return top, dup
 
 
+_PUNCT = "".join(chr(c) for c in range(0x21, 0x7F) if not chr(c).isalnum()) + \
+    "\u2026\u201c\u201d\u2018\u2019\u00ab\u00bb\u2013\u2014"
+_WITH_LETTER = re.compile(r"\S*[^\W\d_]\S*", re.UNICODE)
+
+
 def measure(extraction: Extraction) -> dict[str, Any]:
     """Text statistics for the Gopher filters (runs in the worker)."""
     text = extraction.text
     tokens = text.split()
     words = tokens[:MAX_SCANNED_WORDS]
+    scanned = " ".join(words)
     lines = [line.strip() for line in text.split("\n") if line.strip()]
     paragraphs = [p.strip() for p in _PARAGRAPH.split(text) if p.strip()]
-    lower = [_STRIP.sub("", w).lower() for w in words]
+    lower = [w for w in scanned.lower().split() if w]
+    lower = [w.strip(_PUNCT) for w in lower]
+    n = len(tokens)
     stats: dict[str, Any] = {
-        "words": len(tokens),
-        "mean_word_length": (sum(len(w) for w in words) / len(words)) if words else 0.0,
-        "hash_ratio": text.count("#") / len(tokens) if tokens else 0.0,
-        "ellipsis_ratio": (text.count("...") + text.count("…")) / len(tokens) if tokens
-        else 0.0,
+        "words": n,
+        "mean_word_length": (len(scanned) - len(words) + 1) / len(words) if words else 0.0,
+        "hash_ratio": text.count("#") / n if n else 0.0,
+        "ellipsis_ratio": (text.count("...") + text.count("\u2026")) / n if n else 0.0,
         "bullet_lines": sum(line.startswith(_BULLETS) for line in lines) / len(lines)
         if lines else 0.0,
         "ellipsis_lines": sum(line.endswith(_ELLIPSES) for line in lines) / len(lines)
         if lines else 0.0,
-        "alphabetic_words": sum(bool(_ALPHA.search(w)) for w in words) / len(words)
+        "alphabetic_words": sum(1 for _ in _WITH_LETTER.finditer(scanned)) / len(words)
         if words else 0.0,
-        "stop_words": {lang: sorted(set(lower) & set(words_))
-                       for lang, words_ in STOP_LISTS.items()},
     }
+    vocabulary = set(lower)
+    stats["stop_words"] = {lang: sorted(vocabulary.intersection(stop))
+                           for lang, stop in STOP_LISTS.items()}
     stats["duplicate_lines"], stats["duplicate_line_chars"] = _duplicates(lines)
     stats["duplicate_paragraphs"], stats["duplicate_paragraph_chars"] = _duplicates(paragraphs)
     stats["top_ngram_chars"], stats["duplicate_ngram_chars"] = \

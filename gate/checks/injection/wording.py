@@ -55,12 +55,15 @@ class Rule:
 RULES: list[Rule] = []
 
 
-def rule(signal: str, lang: str, weight: float, pattern: str, anchors: str, **kw: Any) -> None:
+def rule(signal: str, lang: str, weight: float, pattern: str, anchors: str | tuple[str, ...],
+         **kw: Any) -> None:
+    """Register a rule; ``anchors`` is "a|b|c" or a tuple (for anchors holding "|")."""
     strong = kw.pop("strong", None)
     needs = kw.pop("needs", None)
     RULES.append(Rule(signal=signal, lang=lang, weight=weight,
                       pattern=re.compile(pattern),
-                      anchors=tuple(anchors.split("|")),
+                      anchors=tuple(anchors.split("|")) if isinstance(anchors, str)
+                      else anchors,
                       strong=re.compile(strong) if strong else None,
                       needs=re.compile(needs) if needs else None, **kw))
 
@@ -115,7 +118,8 @@ rule("override", "en", 0.35,
      rf"\b{EN_VERB}\b(?P<mid>{W}{{0,5}}?)\W+{EN_OBJ}\b"
      rf"(?P<tail>\W+(?:\w+\W+){{0,2}}?(?:above|before|earlier|so\W+far|previously|given|"
      rf"you\W+(?:were|have\W+been)\W+given|you\W+received))?",
-     "ignor|disre|forge|overr|bypas|disca|dismi|aband|negle|aside|throw|follo|atten|obey|heed",
+     "ignor|disre|forge|overr|bypas|disca|dismi|aband|negle|aside|throw|obey|heed|not follow|"
+     "t follow|stop following|longer follow|cease following|no attention",
      needs=EN_QUAL.pattern, strong=EN_STRONG, strong_weight=0.55, memo_damped=True)
 rule("override", "en", 0.55,
      r"\b(?:ignore|disregard|forget)\W+(?:everything|anything|all|whatever)\W+(?:(?:that|which|"
@@ -236,8 +240,7 @@ rule("prompt-leak", "en", 0.3,
      r"|(?:the\W+)?(?:initial|hidden|secret|confidential|original|internal)\W+instructions"
      r"|(?:the\W+)?developer\W+(?:message|prompt|instructions)"
      r"|everything\W+(?:above|before\W+this)|the\W+(?:text|words|content)\W+above)\b",
-     "revea|show|print|outpu|displ|repea|recit|leak|tell|give|write|dump|discl|share|expos|"
-     "spell|list|echo|paste|trans|what",
+     "promp|instr|direc|above|befor",
      strong=LEAK_STRONG, strong_weight=0.45)
 rule("prompt-leak", "de", 0.3,
      r"\b(?:zeig\w*|gib|nenn\w*|verrat\w*|wiederhol\w*|druck\w*|schreib\w*|offenbar\w*|"
@@ -248,7 +251,7 @@ rule("prompt-leak", "de", 0.3,
      r"|(?:den\W+)?system-?prompt\w*|(?:die\W+)?(?:versteckt|geheim|ursprunglich)\w*\W+"
      r"(?:anweisung|instruktion)\w*|(?:den\W+)?text\W+(?:oben|daruber)|alles\W+(?:oben|davor|"
      r"daruber))\b",
-     "zeig|zeige|gib|nenn|nenne|verra|wiede|druck|schre|offen|teil|teile|liste|was",
+     "promp|anwei|instr|vorga|syste|oben|darub|davor",
      strong=LEAK_STRONG, strong_weight=0.45)
 rule("prompt-leak", "fr", 0.3,
      r"\b(?:revele\w*|montre\w*|affiche\w*|repete\w*|donne\w*|ecri[st]\w*|imprime\w*|"
@@ -259,8 +262,7 @@ rule("prompt-leak", "fr", 0.3,
      r"invite\W+systeme|message\W+systeme)|prompt\W+systeme|invite\W+systeme|"
      r"(?:tes|vos)\W+(?:instructions|consignes|regles)|tout\W+ce\W+qui\W+precede|"
      r"le\W+texte\W+ci-dessus)\b",
-     "revel|montr|affic|repet|donne|ecris|ecrit|impri|divul|parta|recit|moi|quel|quels|"
-     "quell",
+     "promp|invit|instr|consi|direc|regle|prece|dessu",
      strong=LEAK_STRONG, strong_weight=0.45)
 rule("prompt-leak", "es", 0.3,
      r"\b(?:revela\w*|muestra\w*|imprime|repite|dime|dinos|escribe|divulga\w*|comparte|"
@@ -269,7 +271,7 @@ rule("prompt-leak", "es", 0.3,
      r"ocultas|secretas|originales|internas|completas)|(?:el|tu|su)\W+prompt\W+(?:del\W+sistema|"
      r"inicial|oculto)|prompt\W+del\W+sistema|mensaje\W+del\W+sistema|(?:tus|sus)\W+"
      r"instrucciones|todo\W+lo\W+anterior|el\W+texto\W+(?:de\W+arriba|anterior))\b",
-     "revel|muest|impri|repit|dime|dinos|escri|divul|compa|ensen|cual|cuale|expon|lista",
+     "promp|instr|indic|regla|mensa|anter|arrib",
      strong=LEAK_STRONG, strong_weight=0.45)
 
 # -- role-change: a new identity, persona or mode -------------------------------------------------
@@ -306,7 +308,8 @@ rule("role-change", "en", 0.25,
      r"\byour\W+(?:new|real|true|actual|updated)\W+(?:role|persona|identity|task|goal|objective|"
      r"purpose|instructions?|mission|directive|name)\W+(?:is|are|will\W+be)\b|"
      r"\byour\W+(?:new|real|true|actual|updated)\W+(?:role|persona|identity|task|goal|"
-     r"objective|purpose|instructions?|mission|directive)\s*:", "your")
+     r"objective|purpose|instructions?|mission|directive)\s*:",
+     "your new|your real|your true|your actual|your updated")
 rule("role-change", "en", 0.4,
      r"\b(?:enter|enable|activate|switch\W+(?:to|into)|you\W+are\W+(?:now\W+)?in)\W+"
      r"(?:\w+\W+){0,1}?(?:jailbreak|jailbroken|dan|unrestricted|unfiltered|god|evil)\W+mode\b|"
@@ -315,7 +318,7 @@ rule("role-change", "de", 0.4,
      r"\b(?:du\W+bist|sie\W+sind|ihr\W+seid)\W+(?:jetzt|nun|ab\W+sofort|ab\W+jetzt|"
      r"von\W+nun\W+an)\W+(?:\w+\W+){0,3}?(?:ki|assistent\w*|bot|chatbot|modell|agent|persona|"
      r"charakter|hacker|administrator|pirat|uneingeschrankt\w*|ungefiltert\w*|unzensiert\w*|"
-     r"kein\w*\W+(?:ki|assistent|sprachmodell|modell))\b", "bist|sind|seid")
+     r"kein\w*\W+(?:ki|assistent|sprachmodell|modell))\b", "jetzt|nun|sofor")
 rule("role-change", "de", 0.3,
      r"\bab\W+(?:sofort|jetzt)\W+(?:\w+\W+){0,2}?(?:antwortest|verhaltst|handelst|agierst|"
      r"sprichst|bist)\W+du\b(?:\W+\w+){0,5}?\W+(?:als|wie|ki|assistent|bot|modell|rolle|ohne)\b",
@@ -323,12 +326,13 @@ rule("role-change", "de", 0.3,
 rule("role-change", "de", 0.3,
      r"\btu\W+so,?\W+als\W+(?:ob\W+)?(?:du|sie)\W+(?:\w+\W+){0,3}?(?:warst|waerst|seist|bist|"
      r"waren)\b|\bdeine\W+neue\W+(?:rolle|aufgabe|identitat|personlichkeit)\W+(?:ist|lautet)\b|"
-     r"\bspiel\w*\W+(?:ab\W+jetzt\W+)?die\W+rolle\W+(?:eines|einer|des|der)\b", "tu|deine|spiel")
+     r"\bspiel\w*\W+(?:ab\W+jetzt\W+)?die\W+rolle\W+(?:eines|einer|des|der)\b",
+     "tu so|deine neue|rolle")
 rule("role-change", "fr", 0.4,
      r"\b(?:tu\W+es|vous\W+etes)\W+(?:maintenant|desormais|a\W+present|dorenavant)\W+"
      r"(?:\w+\W+){0,3}?(?:ia|assistant\w*|bot|chatbot|modele|agent|personnage|pirate|"
      r"administrateur|sans\W+restrictions?|plus\W+(?:une|un)\W+(?:ia|assistant))\b",
-     "es|etes")
+     "maint|desor|prese|doren")
 rule("role-change", "fr", 0.3,
      r"\b(?:a\W+partir\W+de\W+maintenant|desormais|dorenavant)\W+(?:\w+\W+){0,2}?(?:tu|vous)\W+"
      r"(?:\w+\W+){0,3}?(?:reponds|repondez|agis|agissez|joues|jouez|seras|serez|parles|"
@@ -428,9 +432,10 @@ rule("fake-notice", "en", 0.15,
      r"alert|update|announcement|note)" + LABEL_END,
      "syste|devel|admin|opera", ai_near=True)
 rule("fake-notice", "en", 0.4,
-     r"(?:^|\n|[\[\(<{]|#{1,6}|\*\*)\W{0,3}(?:system|sys)" + LABEL_END.replace(r"|:", "") +
-     r"|<\W{0,2}/?\W{0,2}(?:system|sys|system_prompt|systemprompt|developer)\W{0,2}>",
-     "syste|sys")
+     r"[\[\(<{]\W{0,2}(?:system|sys|system_prompt|systemprompt|developer)\W{0,2}[\]\)>}]|"
+     r"<\W{0,2}/\W{0,2}(?:system|sys|system_prompt|developer)\W{0,2}>", "syste|sys|devel")
+rule("fake-notice", "en", 0.12,
+     r"(?:^|\n)[ \t]*(?:system|sys)[ \t]*:", "syste|sys", ai_near=True)
 rule("fake-notice", "en", 0.25,
      r"\b(?:new|updated|revised|real|actual|true|secret|hidden|additional)\W+(?:system\W+)?"
      r"instructions?\s*:", "instr", ai_near=True)
@@ -474,9 +479,8 @@ rule("fake-notice", "es", 0.25,
 
 rule("chat-markup", "any", 0.45,
      r"<\|[a-z_]{2,24}\|>|\[/?inst\]|<</?sys>>|<(?:start|end)_of_turn>|<\|?(?:begin|end)_of_"
-     r"(?:text|turn)\|?>", "<|im_start|>|<|im_end|>|<|system|>|<|user|>|<|assistant|>|"
-     "<|endoftext|>|<|eot_id|>|<|start_header_id|>|<|end_header_id|>|<|begin_of_text|>|"
-     "<|end|>|[inst]|[/inst]|<<sys>>|_of_turn>|<|")
+     r"(?:text|turn)\|?>", ("<|", "[inst]", "[/inst]", "<<sys>>", "<</sys>>", "_of_turn>",
+                            "_of_text"))
 rule("chat-markup", "any", 0.15,
      r"(?:^|\n)[ \t]{0,3}#{2,4}[ \t]*(?:instruction|instructions|response|system|input|human|"
      r"assistant|user)[ \t]*:?[ \t]*(?=\n|$)", "###|##")
@@ -656,13 +660,13 @@ class Match:
 
 _WORD_ANCHORS: dict[str, list[int]] = {}
 _PHRASE_ANCHORS: dict[str, list[int]] = {}
+_WORDLIKE = re.compile(r"[a-z0-9.']+")
 for _i, _r in enumerate(RULES):
     for _a in _r.anchors:
-        target = _PHRASE_ANCHORS if (" " in _a or not _a.isalnum()) and \
-            not _a.replace(".", "").replace("'", "").isalnum() or " " in _a else _WORD_ANCHORS
-        if target is _WORD_ANCHORS:
-            _a = _a[:5]
-        target.setdefault(_a, []).append(_i)
+        if _WORDLIKE.fullmatch(_a):
+            _WORD_ANCHORS.setdefault(_a.strip(".'")[:5], []).append(_i)
+        else:
+            _PHRASE_ANCHORS.setdefault(_a, []).append(_i)
 _PUNCT = bytes(c if (48 <= c <= 57 or 97 <= c <= 122 or c >= 128 or c in b".'") else 32
                for c in range(256))
 WINDOW_BEFORE = 160

