@@ -75,7 +75,11 @@ class YamlProblem(ValueError):
 
 def load(text: str) -> tuple[Any, dict[tuple, int]]:
     """Parse ``text``; return the data and a map from key path to 1-based line."""
-    loader = StrictLoader(text)
+    try:
+        loader = StrictLoader(text)
+    except yaml.YAMLError as err:  # the reader rejects control characters up front
+        mark = getattr(err, "problem_mark", None)
+        raise YamlProblem(mark.line + 1 if mark else None, str(err).splitlines()[0]) from None
     try:
         node = loader.get_single_node()
         if node is None:
