@@ -1,4 +1,4 @@
-# make demo  - set up .venv and run gate on the bundled sample_docs/
+# make demo  - set up .venv and run gate on the bundled sample_docs/inbox/
 # make test  - set up .venv with the test tools and run the test suite
 # make bench - run the benchmark scripts (they print figures)
 
@@ -17,7 +17,7 @@ $(STAMP): pyproject.toml constraints.txt
 
 demo: $(STAMP)
 	rm -rf demo-out
-	$(BIN)/gate run sample_docs --policy policies/demo.yaml --out demo-out \
+	$(BIN)/gate run sample_docs/inbox --policy policies/demo.yaml --out demo-out \
 		--as-of 2026-12-01T00:00:00Z
 
 test: $(STAMP)

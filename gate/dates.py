@@ -106,7 +106,7 @@ def _offset(sign: str, hours: str | None, minutes: str | None, text: str) -> tim
 _ISO = re.compile(
     r"^(\d{4})(?:-(\d{2})(?:-(\d{2})"
     r"(?:[Tt ](\d{2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?"
-    r"(?:([Zz])|([+\-\u2212])(\d{2})(?::?(\d{2}))?)?)?)?)?$")
+    r"(?:([Zz])|([+\-\u2212])(\d{2})(?::?(\d{2}))?)?)?)?)?\Z")
 
 
 def parse_iso8601(text: str) -> Stamp:
@@ -139,9 +139,9 @@ _WKDAY = r"(?:Mon|Tue|Wed|Thu|Fri|Sat|Sun)"
 _WEEKDAY = r"(?:Monday|Tuesday|Wednesday|Thursday|Friday|Saturday|Sunday)"
 _MON = r"(Jan|Feb|Mar|Apr|May|Jun|Jul|Aug|Sep|Oct|Nov|Dec)"
 # RFC 9110 section 5.6.7: IMF-fixdate, then the two obsolete forms.
-_IMF = re.compile(rf"^{_WKDAY}, (\d{{2}}) {_MON} (\d{{4}}) (\d{{2}}):(\d{{2}}):(\d{{2}}) GMT$")
-_RFC850 = re.compile(rf"^{_WEEKDAY}, (\d{{2}})-{_MON}-(\d{{2}}) (\d{{2}}):(\d{{2}}):(\d{{2}}) GMT$")
-_ASCTIME = re.compile(rf"^{_WKDAY} {_MON} ([ \d]\d) (\d{{2}}):(\d{{2}}):(\d{{2}}) (\d{{4}})$")
+_IMF = re.compile(rf"^{_WKDAY}, (\d{{2}}) {_MON} (\d{{4}}) (\d{{2}}):(\d{{2}}):(\d{{2}}) GMT\Z")
+_RFC850 = re.compile(rf"^{_WEEKDAY}, (\d{{2}})-{_MON}-(\d{{2}}) (\d{{2}}):(\d{{2}}):(\d{{2}}) GMT\Z")
+_ASCTIME = re.compile(rf"^{_WKDAY} {_MON} ([ \d]\d) (\d{{2}}):(\d{{2}}):(\d{{2}}) (\d{{4}})\Z")
 
 
 def parse_http_date(text: str, now: datetime | None = None) -> Stamp:
@@ -175,7 +175,7 @@ def parse_http_date(text: str, now: datetime | None = None) -> Stamp:
 # read. U+2212 MINUS SIGN appears in some renderings of the standard and is read as "-".
 _PDF = re.compile(
     r"^(?:D:)?(\d{4})(?:(\d{2})(?:(\d{2})(?:(\d{2})(?:(\d{2})(?:(\d{2}))?)?)?)?)?"
-    r"(?:([Zz+\-\u2212])(?:(\d{2})'?(?:(\d{2})'?)?)?)?$")
+    r"(?:([Zz+\-\u2212])(?:(\d{2})'?(?:(\d{2})'?)?)?)?\Z")
 
 
 def parse_pdf_date(text: str) -> Stamp:

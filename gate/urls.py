@@ -17,13 +17,13 @@ from dataclasses import dataclass
 import idna
 
 # RFC 3986 Appendix B: the regular expression that splits any URI reference.
-_SPLIT = re.compile(r"^(([^:/?#]+):)?(//([^/?#]*))?([^?#]*)(\?([^#]*))?(#(.*))?$", re.S)
-_SCHEME = re.compile(r"^[A-Za-z][A-Za-z0-9+.-]*$")
+_SPLIT = re.compile(r"^(([^:/?#]+):)?(//([^/?#]*))?([^?#]*)(\?([^#]*))?(#(.*))?\Z", re.S)
+_SCHEME = re.compile(r"^[A-Za-z][A-Za-z0-9+.-]*\Z")
 _UNRESERVED = frozenset("ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789-._~")
 # RFC 3986 section 2: unreserved, reserved (gen-delims and sub-delims) and "%".
 _ALLOWED_ASCII = _UNRESERVED | frozenset(":/?#[]@!$&'()*+,;=%")
 _HEX = frozenset("0123456789abcdefABCDEF")
-_LABEL = re.compile(r"^[a-z0-9_](?:[a-z0-9_-]{0,61}[a-z0-9_])?$")
+_LABEL = re.compile(r"^[a-z0-9_](?:[a-z0-9_-]{0,61}[a-z0-9_])?\Z")
 
 DEFAULT_PORTS = {"http": 80, "https": 443, "ftp": 21, "ws": 80, "wss": 443}
 

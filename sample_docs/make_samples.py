@@ -33,6 +33,7 @@ from datetime import UTC, datetime
 from email.utils import format_datetime
 from pathlib import Path
 
+import fpdf
 from fpdf import FPDF
 
 ROOT = Path(__file__).resolve().parent
@@ -255,10 +256,11 @@ LOST_PROPERTY_V2 = tuple(p.replace("Monday to Friday", "Monday to Saturday")
 
 MIXED_BULLETIN = (
     "Passengers travelling on line 4 this weekend should allow extra time. Buses replace "
-    "trams between the harbour and the old market while the track is renewed. "
+    "trams between the harbour and the old market while the track is renewed. Thank you "
+    "for your patience while we improve the network.",
     "Fahrgäste der Linie 4 sollten am Wochenende mehr Zeit einplanen. Zwischen dem Hafen "
     "und dem Altmarkt ersetzen Busse die Straßenbahn, weil die Gleise erneuert werden. "
-    "Passengers travelling on line 4"
+    "Vielen Dank für Ihre Geduld, während wir das Netz verbessern.",
 )
 
 
@@ -393,10 +395,11 @@ def documents() -> list[Doc]:
             "cross-format exact copy (same normalised text). The PDF is newer and kept.",
             source_url=f"{MIRROR}/accessibility/step-free.html", published_at="2026-09-01",
             **q("duplicate.exact")),
-        Doc("wiki/tarife-zusammenfassung.txt", text_file(*TARIF_WIKI_DE), lang="de",
+        Doc("wiki/tarife-zusammenfassung.txt",
+            text_file("Tarifbestimmungen ab 1. Januar 2027", *TARIF_WIKI_DE), lang="de",
             note="The staff wiki's copy of portal/tarifbestimmungen.pdf with one place name "
-                 "edited. It is newer and comes first in no way that matters: the portal's "
-                 "PDF wins on trust (3 over 1).",
+                 "edited. It is newer, but the portal's PDF is kept because its source is "
+                 "more trusted (trust 3 over 1).",
             source_url=f"{WIKI}/tarife/zusammenfassung.txt", published_at="2026-11-20",
             **q("duplicate.near")),
 
@@ -505,7 +508,7 @@ def documents() -> list[Doc]:
             note="The manifest gives no sha256 and the policy requires one.",
             source_url=f"{PORTAL}/de/baustellen/linie-6.html", sha256=None,
             published_at="2026-11-26", **q("integrity.missing")),
-        Doc("integrity/sha1-digest.txt", text_file(
+        Doc("integrity/sha1-digest.txt", cleaning := text_file(
             "Cleaning schedule for tram stops. Shelters in the city centre are cleaned every "
             "night between one and four o'clock; stops on the outer lines twice a week. "
             "Graffiti that is offensive is removed within one working day of being reported, "
@@ -513,7 +516,8 @@ def documents() -> list[Doc]:
             "The manifest's 'sha256' is really a 40-digit SHA-1: not a SHA-256 digest, so it "
             "is held as malformed rather than ignored.",
             source_url=f"{PORTAL}/service/stop-cleaning.txt",
-            sha256="sha1-placeholder", published_at="2026-11-12",
+            sha256=hashlib.sha1(cleaning).hexdigest(),  # noqa: S324 - SHA-1 is the point
+            published_at="2026-11-12",
             **q("integrity.malformed")),
 
         # -- freshness -----------------------------------------------------------------
@@ -580,7 +584,7 @@ def documents() -> list[Doc]:
             "'undetermined: warn', so it is accepted with a warning.",
             source_url=f"{PORTAL}/notices/line-4-sunday.txt", published_at="2026-11-27",
             warnings=["language.undetermined"]),
-        Doc("language/mixed-bulletin.txt", text_file(MIXED_BULLETIN), lang="en+de",
+        Doc("language/mixed-bulletin.txt", text_file(*MIXED_BULLETIN), lang="en+de",
             note="Half English, half German: the most likely language is allowed, but its "
                  "probability is below min_confidence 0.80.",
             source_url=f"{PORTAL}/notices/line-4-weekend.txt", published_at="2026-11-26",
@@ -657,15 +661,12 @@ def documents() -> list[Doc]:
             **q("format.empty-text")),
         Doc("format/oversized-export.txt", "".join(
             f"{stop:04d};Altmarkt;{stop % 24:02d}:{stop % 60:02d};tram;line {stop % 6 + 1}\n"
-            for stop in range(480)).encode("ascii"),
+            for stop in range(560)).encode("ascii"),
             "A stop-list export of about 17 KB, over the demo's limits.max_bytes 16384; it "
             "is hashed but never parsed.", lang="-",
             source_url=f"{PORTAL}/exports/stops.txt", published_at="2026-11-20",
             **q("format.too-large")),
     ]
-    for doc in docs:
-        if doc.sha256 == "sha1-placeholder":
-            doc.sha256 = hashlib.sha1(doc.data).hexdigest()  # noqa: S324 - the point
     return docs
 
 
@@ -701,6 +702,7 @@ def expected(docs: list[Doc]) -> dict:
         "as_of": AS_OF,
         "policy": POLICY,
         "inbox": "sample_docs/inbox",
+        "generated_with": {"fpdf2": fpdf.__version__},
         "manifest_unmatched": [UNMATCHED["path"]],
         "documents": {
             d.path: {"decision": d.decision, "reasons": sorted(d.reasons),
@@ -744,8 +746,8 @@ gate run sample_docs/inbox --policy policies/demo.yaml --out demo-out \\
 
 The fixed `--as-of` clock makes the freshness outcomes below hold whenever you run it.
 Then look at `demo-out/report.json`, and at `demo-out/accepted/<id>/` and
-`demo-out/quarantine/<id>/` (each holds the original, the extracted `text.txt` and
-`provenance.json` or `reasons.json`).
+`demo-out/quarantine/<id>/`: each holds `provenance.json` (accepted) or `reasons.json`
+(quarantined) and, where there is one, the original file and the extracted `text.txt`.
 
 ## Layout
 

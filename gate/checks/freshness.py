@@ -18,7 +18,8 @@ A malformed date in the manifest is held (the operator's record is broken); a ma
 date inside a document is skipped in favour of the next one.
 
 ``max_age_days`` may be overridden per allow rule in ``sources``. ``undated`` says what
-happens to a document with no usable date: ``quarantine`` (default), ``warn`` or ``allow``.
+happens to a document with no usable date: ``quarantine``, ``warn`` or ``allow``; left out,
+the section's ``action`` decides (quarantine by default).
 ``published_at`` later than ``retrieved_at`` in the manifest is held as inconsistent.
 
 Example::
@@ -64,8 +65,9 @@ class FreshnessSettings(Section):
                                      "(days before the as-of time); none: no age limit.",
                                      examples=[365])
     reject_future: bool = Field(True, description="Hold documents dated after the as-of time.")
-    undated: Literal["quarantine", "warn", "allow"] = Field(
-        "quarantine", description="What to do with a document that has no usable date.")
+    undated: Literal["quarantine", "warn", "allow"] | None = Field(
+        None, description="What to do with a document that has no usable date; default: "
+        "the section's action.", examples=["warn"])
 
 
 def _claims(document: Document) -> list[DateClaim]:
@@ -106,7 +108,7 @@ def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding] 
         return findings + [chosen]
     if chosen is None:
         if settings.undated != "allow":
-            findings.append(UNDATED(action=settings.undated))
+            findings.append(UNDATED(action=settings.undated))  # None: the section decides
         return findings
     claim, stamp = chosen
     if retrieved is not None and claim.source == "manifest published_at" and \

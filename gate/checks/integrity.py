@@ -36,7 +36,7 @@ UNHASHED = define("integrity.unhashable", "the document's bytes could not be rea
                   "the document's bytes could not be read, so its SHA-256 is unknown",
                   fail_closed=True)
 
-_HEX64 = re.compile(r"^[0-9a-fA-F]{64}$")
+_HEX64 = re.compile(r"^[0-9a-fA-F]{64}\Z")
 
 
 class IntegritySettings(Section):

@@ -6,8 +6,8 @@ library's README prescribes for reproducible results) on a bounded sample: three
 same as a short one and a document that switches language part-way lowers the confidence
 instead of going unnoticed. langdetect is confidently wrong on short strings, so text
 shorter than ``min_chars`` is *undetermined*; ``undetermined`` says what that means
-(``quarantine`` by default, ``warn`` or ``allow``). Text with no letters at all is
-undetermined too.
+(``quarantine``, ``warn`` or ``allow``; left out, the section's ``action`` decides). Text
+with no letters at all is undetermined too.
 
 Codes are langdetect's: ISO 639-1 (``en``, ``de``, ``fr`` ...) plus ``zh-cn`` and ``zh-tw``.
 
@@ -63,8 +63,9 @@ class LanguageSettings(Section):
                                   "most likely language is less probable than this.")
     min_chars: int = Field(200, ge=1, description="Below this many characters of text the "
                            "language is undetermined.")
-    undetermined: Literal["quarantine", "warn", "allow"] = Field(
-        "quarantine", description="What to do when the language cannot be determined.")
+    undetermined: Literal["quarantine", "warn", "allow"] | None = Field(
+        None, description="What to do when the language cannot be determined; default: the "
+        "section's action.", examples=["warn"])
 
     @field_validator("allowed")
     @classmethod

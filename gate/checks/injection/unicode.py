@@ -41,6 +41,8 @@ _RTL = re.compile("[\u0590-\u08ff\ufb1d-\ufdff\ufe70-\ufefc\U00010800-\U00010fff
                   "\U0001e800-\U0001efff]")
 _WORD = re.compile(r"[^\W\d_]{2,64}")
 _ASCII_LETTER = re.compile(r"[A-Za-z]")
+_ZW_RUN = re.compile("[" + ZERO_WIDTH + "]{16,}")
+MIN_ZW_RUN = 16
 MAX_SPECIAL = 20_000
 
 
@@ -57,7 +59,7 @@ class UnicodeHit:
 @dataclass
 class Found:
     hits: list[UnicodeHit] = field(default_factory=list)
-    payloads: list[tuple[int, int, str]] = field(default_factory=list)  # tag messages
+    payloads: list[tuple[int, int, str, str]] = field(default_factory=list)  # hidden messages
 
 
 def _letter_script(ch: str) -> str:
@@ -143,6 +145,34 @@ def _special(text: str, found: Found) -> None:
         found.hits.append(UnicodeHit("bidi-control", weight, first, end,
                                      visible(text[max(0, first - 20):end + 20]), detail))
     _tags(text, found)
+    _zero_width_runs(text, found)
+
+
+def _zero_width_runs(text: str, found: Found) -> None:
+    """Long runs of zero-width characters: an invisible message in two symbols, maybe."""
+    from gate.checks.injection.encoded import readable
+    runs = 0
+    for m in _ZW_RUN.finditer(text):
+        runs += 1
+        if runs > 20:
+            break
+        run = m.group()[:8 * 4096]
+        symbols = sorted(set(run) - {"\u2060"})
+        message = None
+        if len(symbols) == 2:
+            for zero, one in ((symbols[0], symbols[1]), (symbols[1], symbols[0])):
+                bits = "".join("0" if c == zero else "1" for c in run if c in symbols)
+                data = bytes(int(bits[i:i + 8], 2) for i in range(0, len(bits) - 7, 8))
+                message = readable(data)
+                if message:
+                    break
+        detail = {"characters": len(m.group()), "distinct": len(set(run))}
+        if message:
+            detail["decoded"] = message[:600]
+            found.payloads.append((m.start(), m.end(), message[:4000], "zero-width characters"))
+        found.hits.append(UnicodeHit("zero-width", 0.45 if message else 0.3, m.start(), m.end(),
+                                     visible(text[max(0, m.start() - 20):m.start() + 12], 120),
+                                     detail))
 
 
 def _bidi_end(text: str, start: int) -> int:
@@ -174,16 +204,17 @@ def _tags(text: str, found: Found) -> None:
         message = "".join(chr(c - TAG_FIRST) for c in cps if 0xE0020 <= c <= 0xE007E)
         if not message.strip():
             continue
-        found.payloads.append((start, m.end(), message[:4000]))
-    if found.payloads:
-        total = sum(len(p[2]) for p in found.payloads)
-        first = found.payloads[0]
+        found.payloads.append((start, m.end(), message[:4000], "tag characters"))
+    tags = [p for p in found.payloads if p[3] == "tag characters"]
+    if tags:
+        total = sum(len(p[2]) for p in tags)
+        first = tags[0]
         weight = 0.5 if total >= 8 else 0.3
-        decoded = " ".join(p[2] for p in found.payloads)[:600]
+        decoded = " ".join(p[2] for p in tags)[:600]
         found.hits.append(UnicodeHit(
             "tag-characters", weight, first[0], first[1],
-            visible(text[max(0, first[0] - 20):first[0]] + "…", 60),
-            {"runs": len(found.payloads), "characters": total, "decoded": decoded}))
+            visible(text[max(0, first[0] - 20):first[0] + 12], 120),
+            {"runs": len(tags), "characters": total, "decoded": decoded}))
 
 
 def _mixed_script(text: str, found: Found) -> None:

@@ -1,0 +1,322 @@
+"""The measurement: every text a document carries, scanned by every detector, as JSON.
+
+Sources scanned, in order:
+
+1. the extracted text that will be indexed (spans refer to it);
+2. HTML: each hidden or unrendered piece of the page (:mod:`.html_hidden`);
+   PDF: each hidden run (:mod:`.pdf_hidden`) and the Info, XMP and annotation text;
+   text and Markdown: HTML comments, which a Markdown renderer hides;
+3. payloads found inside any of these: Unicode tag messages and decoded encodings, to a
+   depth of :data:`MAX_DEPTH`.
+
+A hit found in a concealed source is looked up in the indexed text, so its finding says
+whether the hidden words reach the index (and where), and the same words found in the
+indexed text are reported once, with the concealment. Results are plain dicts, lists,
+strings and numbers.
+"""
+
+from __future__ import annotations
+
+import re
+from dataclasses import dataclass
+from typing import Any
+
+from gate.checks.injection import encoded, exfil, html_hidden, pdf_hidden, score, unicode, \
+    wording
+from gate.checks.injection.normalize import View, fold, visible
+from gate.extract.model import Extraction
+
+MAX_TEXT = 2_000_000
+MAX_SOURCE = 200_000
+MAX_SOURCES = 400
+MAX_DEPTH = 2
+MAX_HITS = 60
+TOPIC_DAMPING = 0.5
+TOPIC_MIN = 2
+MEASURE_VERSION = 1
+
+_MD_COMMENT = re.compile(r"<!--(.{0,20000}?)-->", re.S)
+
+
+@dataclass
+class Source:
+    text: str
+    where: str
+    technique: str | None  # None: the visible indexed text
+    family: str  # text | html | pdf | encoded | tags
+    page: int | None = None
+    parent: tuple[Source, int, int] | None = None  # (source, start, end) of an encoded run
+    decoded_by: str | None = None
+    indexed: bool = False  # True only for the indexed text itself
+
+
+class Screen:
+    """One document's screening state."""
+
+    def __init__(self, text: str):
+        self.text = text
+        self.view: View = fold(text)
+        self.topic = wording.topic_count(self.view.text) >= TOPIC_MIN
+        self.hits: list[dict[str, Any]] = []
+        self.budget = [encoded.MAX_DECODED]
+        self.sources = 0
+
+    # -- locating ----------------------------------------------------------------------------
+
+    def locate(self, source: Source, start: int, end: int) -> tuple[list[int] | None, bool]:
+        """The span of ``source[start:end]`` in the indexed text, if it is there."""
+        if source.indexed:
+            return [start, end], True
+        if source.parent is not None:
+            parent, ps, pe = source.parent
+            return self.locate(parent, ps, pe)
+        raw = source.text[start:end]
+        if not raw.strip():
+            return None, False
+        at = self.text.find(raw)
+        if at >= 0:
+            return [at, at + len(raw)], True
+        folded = fold(raw).text.strip()
+        if folded:
+            at = self.view.text.find(folded)
+            if at >= 0:
+                s, e = self.view.orig_span(at, at + len(folded))
+                return [s, e], True
+            words = re.findall(r"\w+", folded)[:40]
+            if words:
+                pattern = r"\W+".join(re.escape(w) for w in words)
+                m = re.search(pattern, self.view.text)
+                if m:
+                    s, e = self.view.orig_span(m.start(), m.end())
+                    return [s, e], True
+        return None, False
+
+    # -- scanning ---------------------------------------------------------------------------
+
+    def scan(self, source: Source, depth: int = 0,
+             links: list[tuple[str, str]] | None = None) -> list[dict[str, Any]]:
+        """Scan one source; returns the content hits (wording and exfiltration) it held."""
+        self.sources += 1
+        if self.sources > MAX_SOURCES:
+            return []
+        text = source.text[:MAX_TEXT if source.family == "text" and source.technique is None
+                           else MAX_SOURCE]
+        visible_text = source.technique is None
+        view = self.view if source.indexed else fold(text)
+        content: list[dict[str, Any]] = []
+        for m in wording.scan(view, visible=visible_text):
+            weight = m.weight
+            note = m.note
+            if visible_text and self.topic:
+                weight = round(weight * TOPIC_DAMPING, 4)
+                note = "; ".join(x for x in (note, "the document discusses the topic") if x)
+            content.append(self._hit(source, m.signal, weight, m.start, m.end, text,
+                                     lang=m.lang, note=note, obfuscation=m.obfuscation))
+        for u in exfil.scan(text, links):
+            weight = u.weight * (TOPIC_DAMPING if visible_text and self.topic else 1.0)
+            if u.start >= 0:
+                content.append(self._hit(source, "exfil-url", round(weight, 4), u.start, u.end,
+                                         text, note=u.why, detail={"url": visible(u.url, 200),
+                                                                   "kind": u.kind}))
+            else:
+                hit = self._hit(source, "exfil-url", round(weight, 4), 0, 0, text, note=u.why,
+                                detail={"url": visible(u.url, 200), "kind": u.kind})
+                hit["snippet"] = visible(u.url, 200)
+                hit["span"], hit["reaches_index"] = self._find_url(u.url)
+                content.append(hit)
+        self.hits.extend(content)
+        found = unicode.scan(text)
+        for u in found.hits:
+            hit = self._hit(source, u.signal, u.weight, u.start, u.end, text, detail=u.detail)
+            hit["snippet"] = u.snippet
+            if u.detail.get("decoded"):
+                hit["decoded"] = u.detail.get("decoded")
+            self.hits.append(hit)
+        if depth < MAX_DEPTH:
+            for start, end, message, kind in found.payloads:
+                inner = Source(message, f"invisible {kind} in {source.where}",
+                               "unicode-" + kind.split()[0], "tags", source.page,
+                               (source, start, end), kind)
+                for hit in self.scan(inner, depth + 1):
+                    hit["decoded"] = visible(message, 300)
+                    content.append(hit)
+            for payload in encoded.find(text, self.budget):
+                inner = Source(payload.text, f"{payload.encoding} in {source.where}",
+                               payload.encoding, "encoded", source.page,
+                               (source, payload.start, payload.end), payload.encoding)
+                inner_hits = self.scan(inner, depth + 1)
+                if inner_hits:
+                    for hit in inner_hits:
+                        hit["decoded"] = visible(payload.text, 300)
+                    strongest = max(h["weight"] for h in inner_hits)
+                    hit = self._hit(source, "encoded-payload",
+                                    score.concealment_weight(strongest),
+                                    payload.start, payload.end, text,
+                                    detail={"encoding": payload.encoding})
+                    hit["decoded"] = visible(payload.text, 300)
+                    hit["technique"] = payload.encoding
+                    self.hits.append(hit)
+                    content.extend(inner_hits)
+        if source.technique is not None and source.family in ("html", "pdf", "text") and content:
+            strongest = max(h["weight"] for h in content)
+            first = min(content, key=lambda h: h["segment_span"][0])
+            signal = "pdf-hidden" if source.family == "pdf" else "html-hidden"
+            hit = dict(first)
+            hit.update(signal=signal, weight=score.concealment_weight(strongest),
+                       snippet=visible(text, 200), note="", lang=None,
+                       decoded=first.get("decoded"), detail={"content_signals": sorted(
+                           {h["signal"] for h in content})})
+            hit.pop("obfuscation", None)
+            self.hits.append(hit)
+        return content
+
+    def _find_url(self, url: str) -> tuple[list[int] | None, bool]:
+        at = self.text.find(url)
+        return ([at, at + len(url)], True) if at >= 0 else (None, False)
+
+    def _hit(self, source: Source, signal: str, weight: float, start: int, end: int,
+             text: str, *, lang: str | None = None, note: str = "",
+             obfuscation: list[str] | None = None,
+             detail: dict[str, Any] | None = None) -> dict[str, Any]:
+        span, reaches = self.locate(source, start, end)
+        hit: dict[str, Any] = {
+            "signal": signal, "weight": round(float(weight), 4), "where": source.where,
+            "technique": source.technique, "reaches_index": reaches, "span": span,
+            "segment_span": [start, end],
+            "snippet": _snippet(text, start, end),
+            "decoded": None, "lang": lang, "note": note,
+        }
+        if source.page is not None:
+            hit["page"] = source.page
+        if obfuscation:
+            hit["obfuscation"] = list(obfuscation)
+        if detail:
+            hit["detail"] = detail
+        return hit
+
+    # -- finishing ---------------------------------------------------------------------------
+
+    def finish(self) -> list[dict[str, Any]]:
+        hits = self.hits
+        # Character tricks that hid model-directed wording.
+        for hit in list(hits):
+            kinds = hit.pop("obfuscation", None)
+            if kinds and hit["signal"] in score.CONTENT:
+                extra = dict(hit)
+                extra.update(signal="obfuscated", technique=", ".join(kinds),
+                             weight=score.concealment_weight(hit["weight"],
+                                                             score.OBFUSCATION_WEIGHT),
+                             note="", detail={"hides": hit["signal"], "tricks": kinds})
+                hits.append(extra)
+        # Bidi controls wrapped around model-directed wording.
+        for hit in list(hits):
+            if hit["signal"] != "bidi-control" or not hit["span"]:
+                continue
+            for other in hits:
+                if other["signal"] in score.CONTENT and other["span"] and \
+                        other["span"][0] < hit["span"][1] and hit["span"][0] < other["span"][1]:
+                    extra = dict(other)
+                    extra.update(signal="obfuscated", technique="bidi reordering",
+                                 weight=score.concealment_weight(other["weight"],
+                                                                 score.OBFUSCATION_WEIGHT),
+                                 note="", detail={"hides": other["signal"],
+                                                  "tricks": ["bidi reordering"]})
+                    extra.pop("obfuscation", None)
+                    hits.append(extra)
+                    break
+        # The same words found in the visible text and in a concealed source: keep the latter.
+        concealed = [h for h in hits if h["technique"] is not None and h["span"]]
+        kept = []
+        seen: set[tuple[Any, ...]] = set()
+        for hit in hits:
+            if hit["technique"] is None and hit["span"] and any(
+                    c["signal"] == hit["signal"] and c["span"][0] < hit["span"][1] and
+                    hit["span"][0] < c["span"][1] for c in concealed):
+                continue
+            key = (hit["signal"], hit["where"], tuple(hit["span"] or ()),
+                   tuple(hit["segment_span"]), hit["technique"])
+            if key in seen:
+                continue
+            seen.add(key)
+            kept.append(hit)
+        kept.sort(key=lambda h: (-h["weight"], h["span"][0] if h["span"] else 1 << 60))
+        for hit in kept:
+            hit.pop("segment_span", None)
+        return kept
+
+
+def _snippet(text: str, start: int, end: int) -> str:
+    """The match with the rest of its sentence (bounded), invisible characters shown."""
+    if end <= start:
+        return visible(text[:120], 200)
+    a = start
+    while a > 0 and start - a < 40 and text[a - 1] != "\n" and not (
+            text[a - 1] == " " and a > 1 and text[a - 2] in ".!?"):
+        a -= 1
+    b = end
+    while b < len(text) and b - end < 120 and text[b] != "\n" and not (
+            text[b] in ".!?" and (b + 1 == len(text) or text[b + 1].isspace())):
+        b += 1
+    if b < len(text) and text[b] in ".!?":
+        b += 1
+    return visible(text[a:b], 240)
+
+
+def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]], dict]:
+    kind = extraction.summary.type
+    sources: list[Source] = []
+    links: list[tuple[str, str]] = []
+    stats: dict[str, Any] = {}
+    if kind == "html":
+        collected = html_hidden.collect(extraction.tree)
+        for piece in collected.pieces:
+            sources.append(Source(piece.text, piece.where, piece.technique, "html"))
+        links = collected.links
+        stats["hidden_pieces"] = len(collected.pieces)
+        stats["hidden_chars"] = collected.hidden_chars
+    elif kind == "pdf":
+        found = pdf_hidden.hidden_runs(extraction.reader)
+        for run in found.runs:
+            sources.append(Source(run.text, f"page {run.page} of the PDF", run.technique, "pdf",
+                                  run.page))
+        for text, technique, where in pdf_hidden.outside_text(extraction.summary.metadata,
+                                                              extraction.extras):
+            sources.append(Source(text, where, technique, "pdf"))
+        stats.update(pdf_pages_replayed=found.pages_replayed,
+                     pdf_pages_skipped=found.pages_skipped,
+                     pdf_replay_truncated=found.truncated, pdf_errors=found.errors,
+                     hidden_pieces=len(found.runs))
+    elif kind == "text":
+        raw = extraction.decoded or extraction.text
+        if "<!--" in raw:
+            for i, m in enumerate(_MD_COMMENT.finditer(raw[:MAX_TEXT])):
+                if i >= 200:
+                    break
+                if m.group(1).strip():
+                    sources.append(Source(m.group(1), "an HTML comment in the text", "comment",
+                                          "text"))
+    return sources, links, stats
+
+
+def measure(extraction: Extraction) -> dict[str, Any]:
+    """Screen one document (runs in the worker); see the module docstring."""
+    text = extraction.text or ""
+    screen = Screen(text[:MAX_TEXT])
+    sources, links, stats = _sources(extraction)
+    screen.scan(Source(screen.text, "the indexed text", None, "text", indexed=True))
+    if links:
+        screen.scan(Source("", "a link or image address in the page markup", None, "html"),
+                    links=links)
+    for source in sources[:MAX_SOURCES]:
+        screen.scan(source)
+    hits = screen.finish()
+    total = len(hits)
+    hits = hits[:MAX_HITS]
+    counts: dict[str, int] = {}
+    for hit in hits:
+        counts[hit["signal"]] = counts.get(hit["signal"], 0) + 1
+    stats.update(text_chars=len(text), text_truncated=len(text) > MAX_TEXT,
+                 sources=screen.sources, topic=screen.topic, hits=total)
+    return {"version": MEASURE_VERSION, "score": score.combine(hits),
+            "signal_scores": score.signal_scores(hits), "signals": hits, "counts": counts,
+            "stats": stats}
