@@ -18,9 +18,11 @@ Re-running the same command after a kill finds the unfinished run and completes 
 
 from __future__ import annotations
 
+import errno
 import hashlib
 import json
 import os
+import sqlite3
 import time
 from dataclasses import dataclass, field
 from datetime import UTC, datetime
@@ -37,7 +39,7 @@ from gate.checks.base import Document, RunContext
 from gate.commit import Blobs, Placer, write_atomic
 from gate.decide import decide, outcome
 from gate.discovery import Entry, walk
-from gate.errors import InboxError, OutputError
+from gate.errors import InboxError, OutputError, StateError
 from gate.extract.model import Extracted
 from gate.extract.pool import Failure, WorkerPool
 from gate.extract.sniff import sniff
@@ -175,6 +177,13 @@ def run(opts: RunOptions, reporter: Reporter | None = None) -> RunResult:
                 result = _run_locked(opts, inbox, out, manifest, state, reporter)
             except OSError as err:
                 raise OutputError(_os_message(err, out)) from None
+            except sqlite3.OperationalError as err:
+                if "full" in str(err):
+                    raise OutputError(_os_message(OSError(errno.ENOSPC, str(err)), out)) \
+                        from None
+                raise StateError(f"the state database {out / 'state' / 'gate.sqlite'} "
+                                 f"failed: {err}. Re-run the same command; if it fails "
+                                 "again, the file may be damaged.") from None
         finally:
             state.close()
     result.seconds = time.monotonic() - started
@@ -182,7 +191,6 @@ def run(opts: RunOptions, reporter: Reporter | None = None) -> RunResult:
 
 
 def _os_message(err: OSError, out: Path) -> str:
-    import errno
     where = f" ({err.filename})" if err.filename else ""
     if err.errno == errno.ENOSPC:
         return (f"the disk holding {out} is full{where}. Nothing is lost: free some space "

@@ -283,3 +283,40 @@ def test_killed_runs_resume_to_the_same_result(tmp_path):
         assert decisions(out) == expected
         assert_placed_once(inbox, out)
         assert not list((out / "state" / "tmp").iterdir())
+
+
+def _can_mount() -> bool:
+    return os.geteuid() == 0 and subprocess.run(["which", "mount"], capture_output=True
+                                                ).returncode == 0
+
+
+@pytest.mark.skipif(not _can_mount(), reason="needs root to mount a small tmpfs")
+def test_disk_full_stops_cleanly_and_resumes(tmp_path):
+    inbox = make_inbox(tmp_path, n=40)
+    for i in range(40):  # make the inbox larger than the small disk
+        (inbox / f"bulk-{i:02d}.txt").write_text(prose(2000 + i, words=6000))
+    out = tmp_path / "small"
+    out.mkdir()
+    mounted = subprocess.run(["mount", "-t", "tmpfs", "-o", "size=1200k", "tmpfs", str(out)],
+                             capture_output=True)
+    if mounted.returncode != 0:
+        pytest.skip("mounting a tmpfs is not permitted here")
+    try:
+        policy_path = tmp_path / "policy.yaml"
+        policy_path.write_text(POLICY)
+        first = subprocess.run(_cli(inbox, out, policy_path), capture_output=True, text=True)
+        assert first.returncode == 2
+        assert "is full" in first.stderr and "re-run the same command" in first.stderr
+        assert "Traceback" not in first.stderr
+        subprocess.run(["mount", "-o", "remount,size=64m", str(out)], check=True)
+        second = subprocess.run(_cli(inbox, out, policy_path), capture_output=True, text=True)
+        assert second.returncode == 0, second.stderr
+        assert_placed_once(inbox, out)
+        assert len(report(out)["documents"]) == len(list(walk_paths(inbox)))
+    finally:
+        subprocess.run(["umount", str(out)], capture_output=True)
+
+
+def walk_paths(inbox):
+    from gate.discovery import walk
+    return [e.path for e in walk(inbox)]
