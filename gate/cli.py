@@ -39,8 +39,19 @@ err_console = Console(stderr=True, highlight=False, soft_wrap=True)
 out_console = Console(highlight=False, soft_wrap=True)
 
 
+_CONTROL = {c: f"\\x{c:02x}" for c in [*range(0x00, 0x20), 0x7F, *range(0x80, 0xA0)]}
+
+
+def shown(text: str) -> str:
+    """A document-controlled string made safe for a terminal: control characters (an
+    ESC sequence in a file name could rewrite the screen) become visible escapes, and
+    surrogates from undecodable file names become backslash escapes."""
+    text = text.encode("utf-8", "backslashreplace").decode("utf-8")
+    return text.translate(_CONTROL)
+
+
 def _fail(message: str, code: int = EXIT_UNABLE) -> None:
-    err_console.print(f"error: {message}", markup=False, soft_wrap=True)
+    err_console.print(f"error: {shown(message)}", markup=False, soft_wrap=True)
     raise typer.Exit(code)
 
 
@@ -79,7 +90,8 @@ class BarReporter:
         if self.progress is None:
             self.progress = Progress(TextColumn("{task.description:<11}"), BarColumn(),
                                      MofNCompleteColumn(), TimeElapsedColumn(),
-                                     TextColumn("{task.fields[path]}", style="dim"),
+                                     TextColumn("{task.fields[path]}", style="dim",
+                                                markup=False),
                                      console=err_console, auto_refresh=False, transient=True)
             self.progress.start()
         if self.task is not None:
@@ -90,15 +102,14 @@ class BarReporter:
     def advance(self, path: str | None = None) -> None:
         if self.progress is None or self.task is None:
             return
-        shown = (path or "")[-50:]
-        self.progress.update(self.task, advance=1, path=shown)
+        self.progress.update(self.task, advance=1, path=shown((path or "")[-50:]))
         now = time.monotonic()
         if now - self.last > 0.1:
             self.last = now
             self.progress.refresh()
 
     def note(self, message: str) -> None:
-        err_console.print(message, markup=False)
+        err_console.print(shown(message), markup=False)
 
     def close(self) -> None:
         if self.progress is not None:
@@ -126,7 +137,7 @@ def _print_summary(result, report: dict) -> None:
         changes = ", ".join(f"{k} {v}" for k, v in s["changes"].items())
         out_console.print(f"changes for the index: {changes}", markup=False)
     rate = s["documents"] / result.seconds if result.seconds > 0 else 0.0
-    out_console.print(f"report: {result.report_path}  ({result.seconds:.1f} s, "
+    out_console.print(f"report: {shown(str(result.report_path))}  ({result.seconds:.1f} s, "
                       f"{rate:.1f} documents/s)", markup=False)
 
 

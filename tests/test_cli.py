@@ -97,3 +97,19 @@ def test_codes_lists_every_code():
     result = gate("codes")
     assert result.returncode == 0
     assert "source.denied" in result.stdout and "format.timeout" in result.stdout
+
+
+def test_terminal_output_escapes_control_characters():
+    from gate.cli import shown
+    assert shown("evil\x1b[2J\x07name") == "evil\\x1b[2J\\x07name"
+    assert shown("bad-\udcff.txt") == "bad-\\udcff.txt"
+    assert shown("Grüße.txt") == "Grüße.txt"
+
+
+def test_error_messages_with_hostile_names_are_escaped(tmp_path):
+    policy = tmp_path / "p.yaml"
+    policy.write_text("version: 1\nname: p\n")
+    missing = tmp_path / "in\x1b[31mred"
+    result = gate("run", missing, "--policy", policy, "--out", tmp_path / "o")
+    assert result.returncode == 2 and "\x1b" not in result.stderr
+    assert "in\\x1b[31mred" in result.stderr

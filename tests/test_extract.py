@@ -209,3 +209,26 @@ def test_pdf_with_html_extension_is_still_a_pdf():
 
 def test_zlib_helper_roundtrip():  # sanity of the bomb helper itself
     assert len(zlib.decompress(zlib.compress(b" " * 1000))) == 1000
+
+
+def test_unreadable_file_gets_a_reason(tmp_path, monkeypatch):
+    # Running as root, permissions are not enforced, so the refusal is simulated at the
+    # system call the intake makes.
+    import gate.intake as intake_mod
+    (tmp_path / "secret.txt").write_text("x")
+
+    def refuse(path):
+        raise PermissionError(13, "Permission denied", path)
+
+    monkeypatch.setattr(intake_mod, "_open", refuse)
+    got = read_entry(tmp_path, Entry(path="secret.txt", kind="file", size=1), 100)
+    assert got.problem == "unreadable" and got.detail == "Permission denied"
+
+
+def test_file_swapped_for_a_link_after_discovery_is_not_followed(tmp_path):
+    import os
+    (tmp_path / "target.txt").write_text("outside")
+    os.symlink(tmp_path / "target.txt", tmp_path / "doc.txt")
+    # discovery saw a regular file, but it is a link by the time it is read
+    got = read_entry(tmp_path, Entry(path="doc.txt", kind="file", size=7), 100)
+    assert got.problem == "not-regular" and got.data is None
