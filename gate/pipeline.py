@@ -29,7 +29,7 @@ from datetime import UTC, datetime
 from pathlib import Path
 from typing import Any, Protocol
 
-from gate import __version__, dates
+from gate import __version__, audit, dates
 from gate import manifest as manifest_mod
 from gate.checks import CORPUS_CHECKS, DOCUMENT_CHECKS
 from gate.checks import duplicate as duplicate_check
@@ -43,7 +43,7 @@ from gate.errors import InboxError, OutputError, StateError
 from gate.extract.model import Extracted
 from gate.extract.pool import Failure, WorkerPool
 from gate.extract.sniff import sniff
-from gate.findings import Finding, internal_error
+from gate.findings import CODES, Finding, internal_error
 from gate.intake import Intake, read_entry
 from gate.lock import RunLock
 from gate.policy import LoadedPolicy
@@ -101,6 +101,7 @@ class Item:
     extracted: Extracted | None = None
     measures: dict[str, Any] = field(default_factory=dict)
     measure_errors: dict[str, str] = field(default_factory=dict)
+    policy: Any = None  # the effective policy (with per-source overrides), set when checked
 
 
 @dataclass
@@ -243,13 +244,17 @@ def _run_locked(opts: RunOptions, inbox: Path, out: Path, manifest: manifest_mod
     items = _extract_all(inbox, manifest, params, limits.max_bytes, opts.workers, state,
                          blobs, reporter)
     reporter.stage("checking", None)
-    documents, findings, outcomes = _check_documents(items, policy.policy, ctx)
+    documents, findings, outcomes = _check_documents(items, policy, ctx)
+    releases = state.releases()
+    _apply_releases(items, findings, releases)
     corpus_rows = state.corpus()
     removed_rows, superseded = _corpus_checks(items, documents, findings, outcomes,
                                               corpus_rows, policy.policy, ctx, seq, mode,
                                               state)
+    _apply_releases(items, findings, releases)
     run_info = {"id": run_id, "as_of": as_of_text, "mode": mode, "inbox": str(inbox),
-                "policy": {"name": policy.name, "path": policy.path, "sha256": policy.sha256},
+                "policy": {"name": policy.name, "path": policy.path, "sha256": policy.sha256,
+                           "files": list(policy.files)},
                 "manifest": {"path": manifest.source, "sha256": manifest.sha256,
                              "records": len(manifest.records)}}
     _commit(state, placer, blobs, out, run_id, seq, run_info, items, documents, findings,
@@ -348,12 +353,21 @@ def _document(item: Item) -> Document:
                     link_target=item.entry.link_target)
 
 
-def _check_documents(items: list[Item], policy: Any, ctx: RunContext):
+def effective_policy(document: Document, loaded: LoadedPolicy) -> Any:
+    """The policy for one document: the file's, with the matching allow rule's overrides."""
+    base = loaded.policy
+    if not loaded.by_rule or base.sources is None:
+        return base
+    return loaded.for_rule(source_check.match(document, base.sources).allowed_by)
+
+
+def _check_documents(items: list[Item], loaded: LoadedPolicy, ctx: RunContext):
     documents: list[Document] = []
     findings: list[list[Finding]] = []
     outcomes: list[dict[str, str]] = []
     for item in items:
         document = _document(item)
+        policy = item.policy = effective_policy(document, loaded)
         found: list[Finding] = []
         marks: dict[str, str] = {}
         for check in DOCUMENT_CHECKS:
@@ -374,6 +388,24 @@ def _check_documents(items: list[Item], policy: Any, ctx: RunContext):
         findings.append(found)
         outcomes.append(marks)
     return documents, findings, outcomes
+
+
+def _apply_releases(items: list[Item], findings: list[list[Finding]],
+                    releases: dict[tuple[str, str], dict[str, str]]) -> None:
+    """Findings a reviewer released for these exact bytes become warnings."""
+    if not releases:
+        return
+    for item, found in zip(items, findings):
+        for index, finding in enumerate(found):
+            release = releases.get((item.intake.sha256 or "", finding.code))
+            if release is None or finding.action == "warn" or \
+                    CODES[finding.code].fail_closed:
+                continue
+            found[index] = Finding(
+                check=finding.check, code=finding.code,
+                message=f"{finding.message} (released by {release['by']} on "
+                        f"{release['at'][:10]}: {release['note']})",
+                details={**finding.details, "released": release}, action="warn")
 
 
 def _date_of(document: Document, ctx: RunContext) -> datetime | None:
@@ -426,7 +458,7 @@ def _corpus_checks(items, documents, findings, outcomes, corpus_rows, policy, ct
                 seen=(stored[item.doc_id]["first_seen"] if item.doc_id in stored else seq,
                       item.index),
                 in_batch=True, accepted_before=item.doc_id in stored,
-                candidate=decide(found, policy).decision == "accepted"))
+                candidate=decide(found, item.policy).decision == "accepted"))
         if mode == "incremental":
             for row in corpus_rows:
                 if row["doc_id"] in in_batch:
@@ -464,7 +496,8 @@ def _provenance(item: Item, document: Document, decision: Any, marks: dict[str, 
                      "link_target": item.entry.link_target},
         "extraction": document.extracted.to_json(),
         "manifest": item.record.to_json() if item.record else None,
-        "policy": run_info["policy"],
+        "policy": {**run_info["policy"], **({"overrides_from": _override_rule(document, policy)}
+                                             if item.policy is not policy.policy else {})},
         "checks": marks,
         "decision": decision.decision,
         "reasons": [reason_json(f) for f in decision.reasons],
@@ -483,6 +516,11 @@ def _provenance(item: Item, document: Document, decision: Any, marks: dict[str, 
     if chosen is not None and not isinstance(chosen, Finding):
         record["date"] = {"value": chosen[1].iso(), "source": chosen[0].source}
     return record
+
+
+def _override_rule(document: Document, policy: LoadedPolicy) -> str:
+    index = source_check.match(document, policy.policy.sources).allowed_by
+    return f"sources.allow[{index}]"
 
 
 def _public_measures(measures: dict[str, Any]) -> dict[str, Any]:
@@ -546,6 +584,7 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
     corpus_deletes = []
     placements = []
     entries_rows = []
+    audit_entries: list[dict[str, Any]] = []
     changes: list[dict[str, Any]] = []
     seen_ids: dict[str, str] = {}
     for item, document, found, marks in zip(items, documents, findings, outcomes):
@@ -553,9 +592,16 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
             raise OutputError(f"document id collision between {seen_ids[item.doc_id]!r} and "
                               f"{item.entry.path!r}; please report this")
         seen_ids[item.doc_id] = item.entry.path
-        decision = decide(found, pol)
+        decision = decide(found, item.policy)
         record = _provenance(item, document, decision, marks, policy, ctx, run_info)
         folder = "accepted" if decision.decision == "accepted" else "quarantine"
+        placed = known.get(item.doc_id)
+        status, review = "open", None
+        if placed is not None and placed[0] == folder == "quarantine" and \
+                placed[1] == item.intake.sha256 and placed[3] == "rejected":
+            # a reviewer rejected these bytes: keep the verdict while they are unchanged
+            status, review = "rejected", placed[4]
+            record["review"] = json.loads(review)
         before = stored.get(item.doc_id)
         if folder == "accepted":
             change = "add" if before is None else (
@@ -564,15 +610,22 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
             change = "remove" if before is not None else "none"
         text_key = item.cache_key if document.has_text else None
         fingerprint = _placement_fingerprint(folder, record, text_key)
-        placed = known.get(item.doc_id)
         if placed is None or placed[0] != folder or placed[2] != fingerprint:
             payload = {"path": item.entry.path, "sha256": item.intake.sha256
                        if item.intake.problem is None else None,
                        "text_key": text_key,
                        "record": {**record, "run": run_info}}
             placements.append((run_id, item.doc_id, folder, json.dumps(payload)))
+        date = _date_of(document, ctx)
+        trust = _trust_of(document, pol)
         entries_rows.append((item.doc_id, folder, item.entry.path, item.intake.sha256,
-                             fingerprint, run_id))
+                             fingerprint, run_id, item.cache_key, trust,
+                             date.isoformat() if date else None, status, review))
+        audit_entries.append({"action": "decision", "run": run_id, "id": item.doc_id,
+                              "path": item.entry.path, "sha256": item.intake.sha256,
+                              "decision": decision.decision,
+                              "codes": sorted({f.code for f in decision.reasons}),
+                              "warnings": sorted({f.code for f in decision.warnings})})
         location = f"{folder}/{item.doc_id}"
         report_docs.append(_report_entry(item, document, decision, marks, record, location,
                                          change))
@@ -580,26 +633,30 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
                                json.dumps(report_docs[-1], sort_keys=True)))
         if folder == "accepted":
             dup = item.measures.get("duplicate") or {}
-            date = _date_of(document, ctx)
             corpus_upserts.append((
                 item.doc_id, item.entry.path, item.intake.sha256, dup.get("text_sha256"),
-                dup.get("minhash"), _trust_of(document, pol),
-                date.isoformat() if date else None,
+                dup.get("minhash"), trust, date.isoformat() if date else None,
                 before["first_seen"] if before else seq, run_id, folder, item.cache_key))
             if change in ("add", "update"):
-                changes.append({"action": change, "id": item.doc_id, "path": item.entry.path,
+                changes.append({"action": change, "run": run_id, "id": item.doc_id,
+                                "path": item.entry.path,
                                 "sha256": item.intake.sha256,
                                 "text": f"accepted/{item.doc_id}/text.txt"})
         elif before is not None:
             corpus_deletes.append(item.doc_id)
-            changes.append({"action": "remove", "id": item.doc_id, "path": item.entry.path,
-                            "sha256": before["sha256"], "why": "quarantined in this run"})
+            changes.append({"action": "remove", "run": run_id, "id": item.doc_id,
+                            "path": item.entry.path, "sha256": before["sha256"],
+                            "why": "quarantined in this run"})
     removed_report: list[dict[str, Any]] = []
     for row in removed_rows:
         corpus_deletes.append(row["doc_id"])
         placements.append((run_id, row["doc_id"], "absent", json.dumps({"path": row["path"]})))
-        changes.append({"action": "remove", "id": row["doc_id"], "path": row["path"],
-                        "sha256": row["sha256"], "why": "no longer in the inbox"})
+        changes.append({"action": "remove", "run": run_id, "id": row["doc_id"],
+                        "path": row["path"], "sha256": row["sha256"],
+                        "why": "no longer in the inbox"})
+        audit_entries.append({"action": "removal", "run": run_id, "id": row["doc_id"],
+                              "path": row["path"], "sha256": row["sha256"],
+                              "why": "no longer in the inbox"})
         removed_report.append({"id": row["doc_id"], "path": row["path"], "change": "remove",
                                "why": "no longer in the inbox"})
     for key, (row, finding) in sorted(superseded.items()):
@@ -612,8 +669,12 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
         placements.append((run_id, key, "quarantine", json.dumps(payload)))
         entries_rows.append((key, "quarantine", row["path"], row["sha256"],
                              _placement_fingerprint("quarantine", record, row["cache_key"]),
-                             run_id))
-        changes.append({"action": "remove", "id": key, "path": row["path"],
+                             run_id, row["cache_key"], row["trust"], row["date"], "open",
+                             None))
+        audit_entries.append({"action": "superseded", "run": run_id, "id": key,
+                              "path": row["path"], "sha256": row["sha256"],
+                              "codes": [finding.code], "keeper": finding.details["keeper"]})
+        changes.append({"action": "remove", "run": run_id, "id": key, "path": row["path"],
                         "sha256": row["sha256"], "why": finding.message})
         removed_report.append({"id": key, "path": row["path"], "change": "superseded",
                                "why": finding.message, "location": f"quarantine/{key}"})
@@ -634,7 +695,12 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
         conn.executemany("DELETE FROM entries WHERE doc_id = ?",
                          [(row["doc_id"],) for row in removed_rows])
         conn.executemany("INSERT OR REPLACE INTO entries (doc_id, folder, path, sha256, "
-                         "fingerprint, run_id) VALUES (?, ?, ?, ?, ?, ?)", entries_rows)
+                         "fingerprint, run_id, cache_key, trust, date, status, review) "
+                         "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", entries_rows)
+        audit_entries.append({"action": "run", "run": run_id, "as_of": run_info["as_of"],
+                              "mode": mode, "policy": run_info["policy"],
+                              "summary": summary})
+        report["run"]["audit_head"] = audit.append(conn, audit_entries)
         conn.execute("DELETE FROM changes WHERE run_id = ?", (run_id,))
         conn.executemany("INSERT INTO changes (run_id, seq, line) VALUES (?, ?, ?)",
                          [(run_id, i, dumps_line(c)) for i, c in enumerate(changes)])
@@ -663,10 +729,10 @@ def _finish(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str,
     state.mark_placed(done)
     row = state.conn.execute("SELECT value FROM meta WHERE key = ?",
                              (f"report:{run_id}",)).fetchone()
-    report = json.loads(row[0])
-    write_atomic(out / "report.json", dumps_report(report))
-    lines = state.changes(run_id)
-    write_atomic(out / "changes.jsonl", "".join(line + "\n" for line in lines).encode("utf-8"))
+    if row is not None:  # review actions change the folders but write no run report
+        write_atomic(out / "report.json", dumps_report(json.loads(row[0])))
+    write_atomic(out / "changes.jsonl",
+                 "".join(line + "\n" for line in change_lines(state)).encode("utf-8"))
     placer.empty_trash()
     blobs.clear()
     with state.transaction() as conn:
@@ -674,6 +740,20 @@ def _finish(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str,
         conn.execute("DELETE FROM placements WHERE run_id = ? AND done = 1", (run_id,))
         conn.execute("DELETE FROM meta WHERE key LIKE 'report:%' AND key != ?",
                      (f"report:{run_id}",))
+
+
+def change_lines(state: State) -> list[str]:
+    """What changes.jsonl holds: the latest run's changes, then those of every review
+    action after it, each line naming the run or review that made it."""
+    rows = state.conn.execute(
+        "SELECT run_id, seq, mode FROM runs WHERE state IN ('decided', 'complete') "
+        "ORDER BY seq").fetchall()
+    latest = max((seq for _rid, seq, mode in rows if mode != "review"), default=0)
+    lines: list[str] = []
+    for rid, seq, _mode in rows:
+        if seq >= latest:
+            lines.extend(state.changes(rid))
+    return lines
 
 
 def _load_summary(state: State, run_id: str) -> dict[str, Any]:

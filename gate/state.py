@@ -81,7 +81,27 @@ CREATE TABLE entries (
     path TEXT NOT NULL,
     sha256 TEXT,
     fingerprint TEXT NOT NULL,
-    run_id TEXT NOT NULL
+    run_id TEXT NOT NULL,
+    cache_key TEXT,
+    trust INTEGER NOT NULL DEFAULT 0,
+    date TEXT,
+    status TEXT NOT NULL DEFAULT 'open',
+    review TEXT
+);
+CREATE TABLE releases (
+    sha256 TEXT NOT NULL,
+    code TEXT NOT NULL,
+    note TEXT NOT NULL,
+    by TEXT NOT NULL,
+    at TEXT NOT NULL,
+    PRIMARY KEY (sha256, code)
+);
+CREATE TABLE audit (
+    seq INTEGER PRIMARY KEY,
+    action TEXT NOT NULL,
+    entry TEXT NOT NULL,
+    prev TEXT NOT NULL,
+    hash TEXT NOT NULL
 );
 CREATE TABLE changes (
     run_id TEXT NOT NULL,
@@ -235,10 +255,23 @@ class State:
             conn.executemany("UPDATE placements SET done = 1 WHERE run_id = ? AND doc_id = ?",
                              list(items))
 
-    def entries(self) -> dict[str, tuple[str, str | None, str]]:
-        """The intended content of the folders: id -> (folder, sha256, fingerprint)."""
-        return {d: (f, s, fp) for d, f, s, fp in self.conn.execute(
-            "SELECT doc_id, folder, sha256, fingerprint FROM entries")}
+    def entries(self) -> dict[str, tuple[str, str | None, str, str, str | None]]:
+        """The intended content of the folders:
+        id -> (folder, sha256, fingerprint, status, review JSON)."""
+        return {row[0]: row[1:] for row in self.conn.execute(
+            "SELECT doc_id, folder, sha256, fingerprint, status, review FROM entries")}
+
+    def entry(self, doc_id: str) -> dict[str, Any] | None:
+        cols = ("doc_id", "folder", "path", "sha256", "fingerprint", "run_id", "cache_key",
+                "trust", "date", "status", "review")
+        row = self.conn.execute(f"SELECT {', '.join(cols)} FROM entries WHERE doc_id = ?",
+                                (doc_id,)).fetchone()
+        return dict(zip(cols, row)) if row else None
+
+    def releases(self) -> dict[tuple[str, str], dict[str, str]]:
+        """Reviewer releases: (sha256, code) -> note, by, at."""
+        return {(sha, code): {"note": note, "by": by, "at": at} for sha, code, note, by, at
+                in self.conn.execute("SELECT sha256, code, note, by, at FROM releases")}
 
     def changes(self, run_id: str) -> list[str]:
         return [r[0] for r in self.conn.execute(

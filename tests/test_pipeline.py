@@ -197,8 +197,9 @@ def test_full_run_removes_missing_documents_incremental_does_not(tmp_path):
     go(tmp_path, inbox, out)
     assert not (out / "accepted" / gone["id"]).exists()
     changes = [json.loads(x) for x in (out / "changes.jsonl").read_text().splitlines()]
-    assert changes == [{"action": "remove", "id": gone["id"], "path": gone["path"],
-                        "sha256": gone["sha256"], "why": "no longer in the inbox"}]
+    assert changes == [{"action": "remove", "run": "run-0003", "id": gone["id"],
+                        "path": gone["path"], "sha256": gone["sha256"],
+                        "why": "no longer in the inbox"}]
     assert report(out)["removed"][0]["path"] == gone["path"]
 
 

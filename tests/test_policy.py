@@ -134,3 +134,93 @@ def test_schema_validates_the_contract_example_with_jsonschema():
     jsonschema.validate(data, schema())
     with pytest.raises(jsonschema.ValidationError):
         jsonschema.validate({**data, "sorces": {}}, schema())
+
+
+def write(tmp_path, name, text):
+    path = tmp_path / name
+    path.write_text(text)
+    return path
+
+
+def test_extends_merges_and_null_removes(tmp_path):
+    write(tmp_path, "base.yaml", "version: 1\nname: base\nlanguage:\n  allowed: [en]\n"
+          "  min_chars: 300\nfreshness:\n  max_age_days: 100\nintegrity: {}\n")
+    child = write(tmp_path, "child.yaml", "extends: base.yaml\nname: child\nlanguage:\n"
+                  "  allowed: [en, de]\nintegrity: null\n")
+    loaded = load_policy(child)
+    policy = loaded.policy
+    assert policy.name == "child"
+    assert policy.language.allowed == ("en", "de") and policy.language.min_chars == 300
+    assert policy.freshness.max_age_days == 100
+    assert policy.integrity is None  # null switched the inherited section off
+    assert [Path(f).name for f in loaded.files] == ["child.yaml", "base.yaml"]
+
+
+def test_errors_in_a_base_file_name_that_file(tmp_path):
+    write(tmp_path, "base.yaml", "version: 1\nname: base\nlanguage:\n  allowed: [en]\n"
+          "  min_confidance: 0.9\n")
+    child = write(tmp_path, "child.yaml", "extends: base.yaml\nname: child\n")
+    with pytest.raises(PolicyError) as info:
+        load_policy(child)
+    assert info.value.problems == [f"{tmp_path / 'base.yaml'} line 5: "
+                                   "language.min_confidance: unknown key 'min_confidance'; "
+                                   "did you mean 'min_confidence'?"]
+
+
+def test_extends_loops_and_missing_bases(tmp_path):
+    write(tmp_path, "a.yaml", "extends: b.yaml\nversion: 1\nname: a\n")
+    write(tmp_path, "b.yaml", "extends: a.yaml\nversion: 1\nname: b\n")
+    with pytest.raises(PolicyError, match="in a loop"):
+        load_policy(tmp_path / "a.yaml")
+    write(tmp_path, "c.yaml", "extends: nowhere.yaml\nversion: 1\nname: c\n")
+    with pytest.raises(PolicyError, match="cannot read the file"):
+        load_policy(tmp_path / "c.yaml")
+
+
+def test_per_source_overrides(tmp_path):
+    path = write(tmp_path, "p.yaml", """version: 1
+name: o
+sources:
+  allow:
+    - domain: docs.example.org
+    - domain: partner.example.net
+      overrides:
+        language:
+          allowed: [fr]
+        freshness:
+          max_age_days: 30
+language:
+  allowed: [en]
+freshness:
+  max_age_days: 365
+""")
+    loaded = load_policy(path)
+    assert loaded.for_rule(0).language.allowed == ("en",)
+    partner = loaded.for_rule(1)
+    assert partner.language.allowed == ("fr",) and partner.freshness.max_age_days == 30
+    assert partner.language.min_confidence == loaded.policy.language.min_confidence
+
+
+def test_bad_overrides_name_the_line(tmp_path):
+    path = write(tmp_path, "p.yaml", """version: 1
+name: o
+sources:
+  allow:
+    - domain: partner.example.net
+      overrides:
+        language:
+          allowed: [fr]
+          min_confidence: 7
+        limits:
+          max_bytes: 5
+""")
+    with pytest.raises(PolicyError) as info:
+        load_policy(path)
+    problems = info.value.problems
+    assert any(p.startswith("line 10: sources.allow[0].overrides.limits: 'limits' cannot be "
+                            "overridden") for p in problems), problems
+    path.write_text(path.read_text().replace("        limits:\n          max_bytes: 5\n", ""))
+    with pytest.raises(PolicyError) as info:
+        load_policy(path)
+    assert info.value.problems[0].startswith(
+        "line 9: sources.allow[0].overrides.language.min_confidence: Input should be less")

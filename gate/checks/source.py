@@ -97,7 +97,14 @@ class _Rule(Strict):
     note: str | None = Field(None, description="Free text: why this rule exists.")
 
 
-class DomainAllow(_Rule):
+class _AllowRule(_Rule):
+    overrides: dict[str, Any] | None = Field(
+        None, description="Policy sections (integrity, freshness, language, injection, "
+        "quality, format) that apply differently to the documents this rule admits; merged "
+        "onto the policy.", examples=[{"language": {"allowed": ["en", "fr"]}}])
+
+
+class DomainAllow(_AllowRule):
     domain: str = Field(description="Exact host name (IDNs may be written in Unicode).",
                         examples=["docs.example.org"])
     subdomains: bool = Field(False, description="Also admit any depth of names below it.")
@@ -120,7 +127,7 @@ class DomainAllow(_Rule):
         return tuple(s.lower() for s in value)
 
 
-class PrefixAllow(_Rule):
+class PrefixAllow(_AllowRule):
     url_prefix: str = Field(description="URL prefix, matched on path-segment boundaries "
                                         "after RFC 3986 normalisation.",
                             examples=["https://wiki.example.org/public/"])
@@ -135,7 +142,7 @@ class PrefixAllow(_Rule):
         return _prefix(value)
 
 
-class PathAllow(_Rule):
+class PathAllow(_AllowRule):
     path: str = Field(description="Inbox-relative path prefix, for documents with no "
                                   "source_url.", examples=["local/"])
     trust: int = Field(1, ge=1, le=100, description="Higher wins when near-duplicates "

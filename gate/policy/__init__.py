@@ -1,9 +1,18 @@
-"""Policy files: loading, validation with line numbers, and the JSON Schema.
+"""Policy files: loading, layering, validation with line numbers, and the JSON Schema.
 
 ``load_policy(path)`` is the one way to get a :class:`~gate.policy.model.Policy`. Every
 problem is collected and reported as ``line N: key.path: what is wrong`` inside one
 :class:`~gate.errors.PolicyError`; unknown keys are errors (with a suggestion when the key
 looks like a typo), so a misspelt key never switches a check off silently.
+
+Layering: ``extends: base.yaml`` (a path relative to the file) starts from another policy.
+Mappings merge key by key, a list or a value replaces the base's, and ``null`` removes a
+key or a whole section (switching that check off). Problems in a base file are reported
+with that file's name and line.
+
+Per-source overrides: an allow rule may carry ``overrides`` with sections (integrity,
+freshness, language, injection, quality, format) merged the same way onto the policy for
+the documents that rule admits, for example a partner site allowed to publish in French.
 """
 
 from __future__ import annotations
@@ -34,17 +43,27 @@ def __getattr__(name: str) -> Any:
     raise AttributeError(name)
 
 
+OVERRIDABLE = ("integrity", "freshness", "language", "injection", "quality", "format")
+
+
 @dataclass(frozen=True)
 class LoadedPolicy:
-    """A validated policy and where it came from."""
+    """A validated policy, where it came from, and its per-source variants."""
 
     policy: Policy
     path: str
-    sha256: str  # of the file's bytes: recorded in every provenance record
+    sha256: str  # of the files' bytes (the policy and its bases): in every provenance record
+    files: tuple[str, ...] = ()
+    by_rule: Any = None  # sources.allow index -> the Policy with that rule's overrides
 
     @property
     def name(self) -> str:
         return self.policy.name
+
+    def for_rule(self, index: int | None) -> Policy:
+        if index is None or not self.by_rule:
+            return self.policy
+        return self.by_rule.get(index, self.policy)
 
 
 def _clean_loc(loc: tuple) -> tuple:
@@ -126,8 +145,35 @@ def _explain(err: dict[str, Any], loc: tuple, raw_loc: tuple) -> str:
     return message.removeprefix("Value error, ")
 
 
-def parse_policy(text: str, source: str) -> Policy:
-    """Validate policy text; ``source`` names it in error messages."""
+def _problems(exc: ValidationError, where: dict[tuple, tuple[str, int]], top: str,
+              prefix: tuple = ()) -> list[str]:
+    problems = []
+    for err in exc.errors(include_url=False):
+        raw_loc = tuple(err.get("loc", ()))
+        loc = _clean_loc(raw_loc)
+        found = None
+        for candidate in ((prefix + loc) if prefix else None, loc):
+            if candidate is None:
+                continue
+            for cut in range(len(candidate), -1, -1):
+                if candidate[:cut] in where and (cut or not prefix):
+                    found = where[candidate[:cut]]
+                    break
+            if found:
+                break
+        shown = prefix + loc if prefix else loc
+        if found:
+            file, line = found
+            place = f"line {line}: " if file == top else f"{file} line {line}: "
+        else:
+            file, line, place = top, 0, ""
+        problems.append(((file != top, line), f"{place}{_dotted(shown)}: "
+                                              f"{_explain(err, loc, raw_loc)}"))
+    problems.sort(key=lambda p: p[0])
+    return [text for _key, text in problems]
+
+
+def _parse_text(text: str, source: str) -> tuple[dict, dict[tuple, int]]:
     try:
         data, lines = yamlload.load(text)
     except yamlload.YamlProblem as err:
@@ -138,41 +184,130 @@ def parse_policy(text: str, source: str) -> Policy:
                                    "'version: 1' and 'name'"])
     if not isinstance(data, dict):
         raise PolicyError(source, ["line 1: the top level must be a mapping of keys"])
-    from gate.policy.model import Policy
-    try:
-        return Policy.model_validate(data)
-    except ValidationError as exc:
-        problems = []
-        for err in exc.errors(include_url=False):
-            raw_loc = tuple(err.get("loc", ()))
-            loc = _clean_loc(raw_loc)
-            line = None
-            for cut in range(len(loc), -1, -1):
-                if loc[:cut] in lines:
-                    line = lines[loc[:cut]]
-                    break
-            where = f"line {line}: " if line else ""
-            problems.append((line or 0, f"{where}{_dotted(loc)}: "
-                                        f"{_explain(err, loc, raw_loc)}"))
-        problems.sort(key=lambda p: p[0])
-        raise PolicyError(source, [text for _line, text in problems]) from None
+    return data, lines
 
 
-def load_policy(path: str | Path) -> LoadedPolicy:
-    """Read, parse and validate a policy file."""
-    path = Path(path)
+def _merge(base: Any, child: Any) -> Any:
+    if not isinstance(base, dict) or not isinstance(child, dict):
+        return child
+    out = dict(base)
+    for key, value in child.items():
+        if value is None:
+            out.pop(key, None)
+        elif isinstance(value, dict) and isinstance(out.get(key), dict):
+            out[key] = _merge(out[key], value)
+        else:
+            out[key] = value
+    return out
+
+
+def _merge_where(base: dict, child: dict, data: Any, path: tuple = ()) -> dict:
+    """Line origins after a merge: the child's lines win, and the base's lines under a
+    value the child replaced wholesale are dropped."""
+    out = dict(base)
+    replaced = [p for p in child if p[:len(path)] == path and not _is_mapping_at(data, p)]
+    for key in list(out):
+        if any(key[:len(p)] == p and len(key) > len(p) for p in replaced):
+            del out[key]
+    out.update(child)
+    return out
+
+
+def _is_mapping_at(data: Any, path: tuple) -> bool:
+    for part in path:
+        if isinstance(data, dict) and part in data:
+            data = data[part]
+        elif isinstance(data, list) and isinstance(part, int) and part < len(data):
+            data = data[part]
+        else:
+            return False
+    return isinstance(data, dict)
+
+
+def _read_layers(path: Path, chain: tuple[Path, ...] = ()) -> tuple[dict, dict, list]:
+    """The merged data of a policy and its bases, line origins, and (file, bytes) read."""
     try:
-        data = path.read_bytes()
+        raw = path.read_bytes()
     except OSError as err:
         raise PolicyError(str(path), [f"cannot read the file ({err.strerror or err})"]) \
             from None
     try:
-        text = data.decode("utf-8")
+        text = raw.decode("utf-8")
     except UnicodeDecodeError as err:
         raise PolicyError(str(path), [f"the file is not UTF-8 (byte {err.start})"]) from None
-    policy = parse_policy(text, str(path))
-    return LoadedPolicy(policy=policy, path=str(path),
-                        sha256=hashlib.sha256(data).hexdigest())
+    data, lines = _parse_text(text, str(path))
+    where = {key: (str(path), line) for key, line in lines.items()}
+    files = [(str(path), raw)]
+    base_ref = data.get("extends")
+    if base_ref is None:
+        return data, where, files
+    if not isinstance(base_ref, str) or not base_ref:
+        raise PolicyError(str(path), [f"line {lines.get(('extends',), 1)}: extends: give the "
+                                      "path of the base policy file"])
+    base_path = (path.parent / base_ref).resolve()
+    if base_path in chain or base_path == path.resolve():
+        loop = " -> ".join(str(p) for p in (*chain, path.resolve(), base_path))
+        raise PolicyError(str(path), [f"line {lines.get(('extends',), 1)}: extends: the "
+                                      f"policies extend each other in a loop ({loop})"])
+    base_data, base_where, base_files = _read_layers(base_path, (*chain, path.resolve()))
+    child = {k: v for k, v in data.items() if k != "extends"}
+    merged = _merge({k: v for k, v in base_data.items() if k != "extends"}, child)
+    where = _merge_where(base_where, where, merged)
+    return merged, where, files + base_files
+
+
+def _validate(data: dict, where: dict, top: str) -> tuple[Any, dict[int, Any]]:
+    from gate.policy.model import Policy
+    try:
+        policy = Policy.model_validate(data)
+    except ValidationError as exc:
+        raise PolicyError(top, _problems(exc, where, top)) from None
+    by_rule: dict[int, Any] = {}
+    rules = (data.get("sources") or {}).get("allow") or []
+    problems: list[str] = []
+    for index, rule in enumerate(rules):
+        overrides = rule.get("overrides") if isinstance(rule, dict) else None
+        if not overrides:
+            continue
+        prefix = ("sources", "allow", index, "overrides")
+        bad = [k for k in overrides if k not in OVERRIDABLE]
+        if bad:
+            file, line = where.get(prefix + (bad[0],), (top, 0))
+            place = f"line {line}: " if file == top else f"{file} line {line}: "
+            problems.append(f"{place}{_dotted(prefix + (bad[0],))}: {bad[0]!r} cannot be "
+                            f"overridden per source (only {', '.join(OVERRIDABLE)})")
+            continue
+        effective = _merge(data, overrides)
+        try:
+            by_rule[index] = Policy.model_validate(effective)
+        except ValidationError as exc:
+            problems += _problems(exc, where, top, prefix)
+    if problems:
+        raise PolicyError(top, problems)
+    return policy, by_rule
+
+
+def parse_policy(text: str, source: str) -> Policy:
+    """Validate policy text (no ``extends``: that needs a file); ``source`` names it."""
+    data, lines = _parse_text(text, source)
+    if "extends" in data:
+        raise PolicyError(source, [f"line {lines.get(('extends',), 1)}: extends: only a "
+                                   "policy file can extend another (use load_policy)"])
+    where = {key: (source, line) for key, line in lines.items()}
+    return _validate(data, where, source)[0]
+
+
+def load_policy(path: str | Path) -> LoadedPolicy:
+    """Read, layer and validate a policy file."""
+    path = Path(path)
+    data, where, files = _read_layers(path)
+    policy, by_rule = _validate(data, where, str(path))
+    digest = hashlib.sha256()
+    for name, raw in files:
+        digest.update(hashlib.sha256(raw).digest())
+    sha = hashlib.sha256(files[0][1]).hexdigest() if len(files) == 1 else digest.hexdigest()
+    return LoadedPolicy(policy=policy, path=str(path), sha256=sha,
+                        files=tuple(name for name, _raw in files), by_rule=by_rule)
 
 
 def schema() -> dict[str, Any]:

@@ -17,6 +17,9 @@ from gate.policy.base import Strict
 
 class PolicyBase(Strict):
     version: Literal[1] = Field(description="Policy format version; must be 1.")
+    extends: str | None = Field(None, description="A base policy file this one builds on "
+                                "(relative path); mappings merge, lists and values replace, "
+                                "null removes.", examples=["base.yaml"])
     name: str = Field(min_length=1, max_length=200, description="Name recorded in every "
                       "provenance record.", examples=["example-policy"])
     description: str | None = Field(None, description="Free text for people.")
