@@ -2,8 +2,9 @@
 
 Every command turns the library's errors into one paragraph on stderr and an exit code:
 0 the command completed (whatever was quarantined), 2 it could not run (bad policy,
-missing inbox, unreadable manifest, busy or unusable output folder), 130 interrupted (re-run
-the same command to resume), 70 an internal error in gate itself.
+missing inbox, unreadable manifest, busy or unusable output folder), 3 the run completed
+but exceeded a --max-quarantine-rate or --max-code-rate limit, 130 interrupted (re-run the
+same command to resume), 70 an internal error in gate itself.
 """
 
 from __future__ import annotations
@@ -25,6 +26,7 @@ from gate import __version__  # noqa: E402
 from gate.errors import GateError, UsageError  # noqa: E402
 
 EXIT_UNABLE = 2
+EXIT_LIMITS = 3
 EXIT_INTERNAL = 70
 EXIT_INTERRUPTED = 130
 
@@ -159,6 +161,14 @@ def run_command(
         "--incremental", help="The inbox holds only new or changed documents: do not "
                               "remove earlier documents that are missing from it.")] = False,
     quiet: Annotated[bool, typer.Option("--quiet", "-q", help="No progress bar.")] = False,
+    max_quarantine_rate: Annotated[Optional[float], typer.Option(  # noqa: UP007
+        "--max-quarantine-rate", min=0.0, max=1.0,
+        help="Exit 3 when more than this share of documents is quarantined (the run still "
+             "completes), so a re-index job can stop on a poisoned batch.")] = None,
+    max_code_rate: Annotated[Optional[list[str]], typer.Option(  # noqa: UP007
+        "--max-code-rate", help="CODE=RATE: exit 3 when more than RATE of documents are "
+                                "quarantined for CODE (a code, or a check id such as "
+                                "injection). Repeatable.")] = None,
 ) -> None:
     """Check every document of INBOX and route it to accepted/ or quarantine/."""
     reporter = BarReporter(enabled=not quiet and err_console.is_terminal)
@@ -175,6 +185,7 @@ def run_command(
                 when = dates.parse_as_of(as_of)
             except dates.DateProblem as err:
                 raise UsageError(str(err)) from None
+        limits = _code_limits(max_code_rate or [])
         loaded = load_policy(policy)
         options = RunOptions(inbox=inbox, policy=loaded, out=out, manifest=manifest,
                              as_of=when, workers=workers or os.cpu_count() or 1,
@@ -186,8 +197,46 @@ def run_command(
         import json
         report = json.loads(result.report_path.read_text(encoding="utf-8"))
         _print_summary(result, report)
+        breaches = _breaches(report, max_quarantine_rate, limits)
+        if breaches:
+            err_console.print("error: the batch exceeds its quarantine limits: " +
+                              "; ".join(breaches) + ". The run completed; review the "
+                              "quarantine before re-indexing.", markup=False, soft_wrap=True)
+            raise typer.Exit(EXIT_LIMITS)
 
     _guard(body)
+
+
+def _code_limits(values: list[str]) -> dict[str, float]:
+    limits: dict[str, float] = {}
+    for value in values:
+        code, sep, rate = value.partition("=")
+        try:
+            number = float(rate)
+        except ValueError:
+            number = -1.0
+        if not sep or not code or not 0.0 <= number <= 1.0:
+            raise UsageError(f"--max-code-rate {value!r} must be CODE=RATE with RATE between "
+                             "0 and 1 (for example injection=0.01).")
+        limits[code] = number
+    return limits
+
+
+def _breaches(report: dict, overall: float | None, per_code: dict[str, float]) -> list[str]:
+    docs = report["documents"]
+    total = len(docs) or 1
+    out = []
+    held = sum(d["decision"] == "quarantined" for d in docs)
+    if overall is not None and held / total > overall:
+        out.append(f"{held} of {len(docs)} documents quarantined ({held / total:.1%}, limit "
+                   f"{overall:.1%})")
+    for code, limit in sorted(per_code.items()):
+        count = sum(any(r["code"] == code or r["code"].startswith(code + ".")
+                        for r in d["reasons"]) for d in docs)
+        if count / total > limit:
+            out.append(f"{count} documents quarantined for {code} ({count / total:.1%}, limit "
+                       f"{limit:.1%})")
+    return out
 
 
 @policy_app.command("check")
@@ -218,6 +267,57 @@ def policy_schema() -> None:
     _guard(body)
 
 
+report_app = typer.Typer(add_completion=False, no_args_is_help=True,
+                         help="Render the report of a completed run for people.")
+app.add_typer(report_app, name="report")
+
+
+@report_app.command("html")
+def report_html(
+    directory: Annotated[Path, typer.Argument(help="Output folder of a completed run "
+                                                   "(the one holding report.json).")],
+    output: Annotated[Optional[Path], typer.Option(  # noqa: UP007
+        "--output", "-o", help="HTML file to write (default: DIR/report.html).")] = None,
+) -> None:
+    """Write DIR/report.json as one self-contained HTML page (no scripts, loads nothing)."""
+
+    def body():
+        import json
+
+        from gate.commit import write_atomic
+        from gate.errors import OutputError
+        from gate.htmlreport import render
+
+        source = directory / "report.json"
+        target = output if output is not None else directory / "report.html"
+        hint = "DIR must be the output folder of a completed run (gate run ... --out DIR)."
+        try:
+            report = json.loads(source.read_bytes().decode("utf-8"))
+        except FileNotFoundError:
+            raise OutputError(f"there is no report {source}: {hint}") from None
+        except OSError as err:
+            raise OutputError(f"cannot read the report {source} "
+                              f"({err.strerror or err}).") from None
+        except (ValueError, RecursionError) as err:  # JSON and UTF-8 errors are ValueErrors
+            raise OutputError(f"the report {source} is not valid JSON ({err}); it may have "
+                              "been edited, or read before gate run exited with status "
+                              "0.") from None
+        if not isinstance(report, dict) or not isinstance(report.get("documents"), list):
+            raise OutputError(f"{source} is not a gate report (expected a JSON object with "
+                              f"a \"documents\" list). {hint}")
+        if target.resolve() == source.resolve():
+            raise OutputError(f"--output {target} would overwrite the report it is drawn "
+                              "from; choose another file.")
+        try:
+            write_atomic(target, render(report).encode("utf-8"))
+        except OSError as err:
+            raise OutputError(f"cannot write {target} ({err.strerror or err}); check that "
+                              "its folder exists and is writable.") from None
+        out_console.print(f"wrote {shown(str(target))}", markup=False)
+
+    _guard(body)
+
+
 @app.command("codes")
 def codes_command(markdown: Annotated[bool, typer.Option(
         "--markdown", help="Print the table as Markdown (docs/codes.md).")] = False) -> None:
@@ -234,6 +334,13 @@ def codes_command(markdown: Annotated[bool, typer.Option(
 def version_command() -> None:
     """Print gate's version."""
     out_console.print(f"gate {__version__}", markup=False)
+
+
+from gate.cli_ops import audit_app, explain_command, review_app  # noqa: E402
+
+app.add_typer(review_app, name="review")
+app.add_typer(audit_app, name="audit")
+app.command("explain")(explain_command)
 
 
 def main() -> None:

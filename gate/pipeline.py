@@ -545,6 +545,7 @@ def _report_entry(item: Item, document: Document, decision: Any, marks: dict[str
         "sha256": item.intake.sha256,
         "size": item.intake.size,
         "type": document.extracted.type,
+        "text_chars": document.extracted.text_chars,
         "location": location,
         "change": change,
     }
@@ -730,7 +731,10 @@ def _finish(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str,
     row = state.conn.execute("SELECT value FROM meta WHERE key = ?",
                              (f"report:{run_id}",)).fetchone()
     if row is not None:  # review actions change the folders but write no run report
-        write_atomic(out / "report.json", dumps_report(json.loads(row[0])))
+        report = json.loads(row[0])
+        write_atomic(out / "report.json", dumps_report(report))
+        from gate.htmlreport import render
+        write_atomic(out / "report.html", render(report).encode("utf-8"))
     write_atomic(out / "changes.jsonl",
                  "".join(line + "\n" for line in change_lines(state)).encode("utf-8"))
     placer.empty_trash()
