@@ -321,3 +321,38 @@ def test_disk_full_stops_cleanly_and_resumes(tmp_path):
 def walk_paths(inbox):
     from gate.discovery import walk
     return [e.path for e in walk(inbox)]
+
+
+def test_per_source_overrides_apply_to_the_documents_a_rule_admits(tmp_path):
+    inbox = tmp_path / "inbox"
+    inbox.mkdir()
+    french = ("Le dépôt du nord de la coopérative inventée ouvre à sept heures et ferme à "
+              "dix-neuf heures en semaine. Les chauffeurs confirment chaque créneau par radio "
+              "avant de quitter la cour, et le répartiteur tient un registre des livraisons.")
+    (inbox / "partner.txt").write_text(french)
+    (inbox / "own.txt").write_text(french)
+    (inbox / "manifest.jsonl").write_text(
+        json.dumps({"path": "partner.txt", "source_url": "https://partner.example.net/a"}) +
+        "\n" + json.dumps({"path": "own.txt", "source_url": "https://docs.example.org/a"}) +
+        "\n")
+    policy = tmp_path / "p.yaml"
+    policy.write_text("""version: 1
+name: overrides
+sources:
+  allow:
+    - domain: docs.example.org
+    - domain: partner.example.net
+      overrides:
+        language:
+          allowed: [fr]
+language:
+  allowed: [en]
+  min_chars: 50
+""")
+    out = tmp_path / "out"
+    run(RunOptions(inbox=inbox, policy=load_policy(policy), out=out, as_of=AS_OF, workers=1))
+    got = decisions(out)
+    assert got["partner.txt"] == ("accepted", [])
+    assert got["own.txt"] == ("quarantined", ["language.not-allowed"])
+    prov = json.loads(next((out / "accepted").glob("*/provenance.json")).read_text())
+    assert prov["policy"]["overrides_from"] == "sources.allow[1]"
