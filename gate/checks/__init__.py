@@ -8,7 +8,7 @@ here; add one row to docs/checks.md. See DEVELOPERS.md.
 from __future__ import annotations
 
 from gate.checks import format as format_check
-from gate.checks import duplicate, freshness, integrity, language, quality, source
+from gate.checks import duplicate, freshness, injection, integrity, language, quality, source
 from gate.checks.base import CorpusCheck, DocumentCheck
 from gate.findings import define_internal
 
@@ -19,6 +19,7 @@ DOCUMENT_CHECKS: tuple[DocumentCheck, ...] = (
     freshness.CHECK,
     language.CHECK,
     quality.CHECK,
+    injection.CHECK,
 )
 
 CORPUS_CHECKS: tuple[CorpusCheck, ...] = (

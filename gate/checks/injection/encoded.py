@@ -35,6 +35,51 @@ MAX_ARMOUR = 20
 _ROT13_HINT = re.compile(r"\brot[\s-]?13\b", re.I)
 
 
+class _Span:
+    """A match-like view of a run found inside one whitespace-separated token."""
+
+    __slots__ = ("_text", "_start", "_end")
+
+    def __init__(self, text: str, start: int, end: int):
+        self._text, self._start, self._end = text, start, end
+
+    def group(self) -> str:
+        return self._text[self._start:self._end]
+
+    def start(self) -> int:
+        return self._start
+
+    def end(self) -> int:
+        return self._end
+
+
+def _long_runs(text: str, pattern: re.Pattern[str]):
+    """Matches of ``pattern`` inside tokens of 20 characters or more (cheap on prose)."""
+    tokens = text.split()
+    if not tokens or max(map(len, tokens)) < 20:
+        return
+    pos = 0
+    n = 0
+    for token in tokens:
+        if len(token) < 20:
+            continue
+        at = text.find(token, pos)
+        pos = at + len(token)
+        for m in pattern.finditer(token):
+            n += 1
+            if n > 4 * MAX_CANDIDATES:
+                return
+            yield _Span(text, at + m.start(), at + m.end())
+
+
+_HEXISH = re.compile(r"[0-9A-Fa-f]{24}|(?:[0-9A-Fa-f]{2}[ :]){4}")
+
+
+def _maybe_hex(text: str) -> bool:
+    digits = sum(map(text.count, "0123456789"))
+    return digits >= 12 and _HEXISH.search(text) is not None
+
+
 @dataclass
 class Payload:
     encoding: str
@@ -93,7 +138,7 @@ def find(text: str, budget: list[int]) -> list[Payload]:
         budget[0] -= len(decoded)
         found.append(Payload(encoding, start, end, decoded))
 
-    for m in _B64.finditer(text):
+    for m in _long_runs(text, _B64):
         run = m.group()
         start = m.start()
         if tried >= MAX_CANDIDATES:
@@ -114,7 +159,7 @@ def find(text: str, budget: list[int]) -> list[Payload]:
         except (binascii.Error, ValueError):
             continue
         keep("base64", start, m.end(), readable(data))
-    for m in _HEX.finditer(text):
+    for m in (_HEX.finditer(text) if _maybe_hex(text) else ()):
         if tried >= MAX_CANDIDATES:
             break
         if _inside(m.start(), skip):
@@ -127,6 +172,8 @@ def find(text: str, budget: list[int]) -> list[Payload]:
             continue
         keep("hex", m.start(), m.end(), readable(data))
     for pattern, encoding in ((_PERCENT, "percent-encoding"), (_ESCAPES, "escape sequences")):
+        if ("%" if pattern is _PERCENT else "\\") not in text:
+            continue
         for m in pattern.finditer(text):
             if tried >= MAX_CANDIDATES:
                 break
@@ -138,7 +185,7 @@ def find(text: str, budget: list[int]) -> list[Payload]:
             except ValueError:
                 continue
             keep(encoding, m.start(), m.end(), readable(data))
-    if _ROT13_HINT.search(text[:200_000]):
+    if "rot" in text[:200_000].lower() and _ROT13_HINT.search(text[:200_000]):
         for m in _ROT13_HINT.finditer(text[:200_000]):
             if tried >= MAX_CANDIDATES:
                 break

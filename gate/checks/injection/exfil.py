@@ -21,23 +21,30 @@ from urllib.parse import parse_qsl, unquote, urlsplit
 MAX_URLS = 400
 MAX_URL = 4096
 
-_MD_LINK = re.compile(r"(!?)\[([^\]\n]{0,300})\]\(\s*<?([^)\s>]{1,4096})>?(?:\s+\"[^\"\n]{0,200}\")?"
-                      r"\s*\)")
+_MD_LINK = re.compile(r"(!?)\[([^\]\n]{0,300})\]\(\s*<?([^)\s>]{1,4096})>?"
+                      r"(?:\s+\"[^\"\n]{0,200}\")?\s*\)")
 _HTML_URL = re.compile(r"<(img|a|iframe|source|embed|object|form|link|script)\b[^>]{0,800}?"
                        r"\b(?:src|href|data|action)\s*=\s*[\"']?([^\"'\s>]{1,4096})", re.I)
 _BARE_URL = re.compile(r"https?://[^\s<>\"')\]]{1,4096}")
 _PLACEHOLDER = re.compile(r"\{\{?\s*([A-Za-z_][\w .-]{0,40}?)\s*\}\}?|\[([A-Z_][A-Z0-9_ ]{1,40})\]|"
                           r"<([A-Za-z_][A-Za-z0-9_ ]{1,40})>|\$\{?([A-Za-z_][A-Za-z0-9_]{1,40})\}?|"
                           r"%7[bB]([\w%.-]{1,60}?)%7[dD]|(X{4,})")
-SENSITIVE = re.compile(
-    r"conversation|convo|chat|histor|messages?|transcript|prompt|instruction|context|memory|"
-    r"secret|token|api_?key|apikey|passw|passwd|pwd|credential|creds|session|cookie|e_?mail|"
-    r"user|personal|pii|ssn|phone|address|summary|answer|response|reply|output|question|"
-    r"query|payload|exfil|leak|dump|stolen|data|info|details|content|b64|base64|name", re.I)
+# Names of placeholders or parameters that stand for conversation content or secrets
+# (strong), or for personal data a template may legitimately fill (weak).
+STRONG_NAME = re.compile(
+    r"conversation|convo|chat|histor|messages|transcript|prompt|instruction|memory|secret|"
+    r"passw|passwd|credential|creds|exfil|leak|dump|stolen|summary|context|answer|response|"
+    r"reply|question|api_?key|apikey", re.I)
+WEAK_NAME = re.compile(
+    r"message|token|session|cookie|e_?mail|user|personal|pii|ssn|phone|address|output|query|"
+    r"payload|data|info|details|content|b64|base64|name|input", re.I)
+# Placeholders naming an identifier ({user_id}, {order_no}) are how API paths look.
+IDENTIFIER = re.compile(r"(?:^|[_\-.])(?:id|ids|uuid|guid|slug|num|number|no|page|version|"
+                        r"index|code|ref)$|^id[_\-]", re.I)
 STRONG_PARAM = re.compile(
     r"^(?:conversation|convo|chat|chat_?history|history|chatlog|transcript|prompt|"
     r"system_?prompt|secret|secrets|api_?key|apikey|password|passwd|credentials|creds|memory|"
-    r"exfil|leak|dump|stolen|user_?data|userdata|pii|messages)$", re.I)
+    r"exfil|leak|dump|stolen|user_?data|userdata|pii|messages|user_?messages)$", re.I)
 
 
 @dataclass
@@ -60,10 +67,14 @@ def judge(url: str, kind: str) -> tuple[float, str] | None:
         return None
     image = kind == "image"
     for m in _PLACEHOLDER.finditer(url):
-        name = next((g for g in m.groups() if g), "")
-        if SENSITIVE.search(unquote(name)):
-            return (0.5 if image else 0.4,
-                    f"the address has a placeholder for data ({m.group()[:60]})")
+        name = unquote(next((g for g in m.groups() if g), ""))
+        if STRONG_NAME.search(name):
+            return (0.55 if image else 0.4,
+                    f"the address has a placeholder for conversation content or secrets "
+                    f"({m.group()[:60]})")
+        if WEAK_NAME.search(name) and not IDENTIFIER.search(name):
+            return (0.3 if image else 0.2,
+                    f"the address has a placeholder for user data ({m.group()[:60]})")
     try:
         query = urlsplit(url).query
     except ValueError:

@@ -28,6 +28,7 @@ Work is bounded: XPath selects only elements that can hide text, at most
 
 from __future__ import annotations
 
+import itertools
 import re
 from dataclasses import dataclass
 
@@ -61,12 +62,12 @@ _OPACITY = re.compile(r"(?:^|;)(?:opacity|filter:opacity\()\s*:?(0?\.0\d*|0)(?:%
 _FONT_ZERO = re.compile(r"(?:^|;)font-size:(?:0(?:\.\d+)?|0?\.\d+)(?:px|pt|em|rem|%|vw|vh)?"
                         r"(?:;|$|!)|(?:^|;)font-size:1px\b")
 _ZERO_BOX = re.compile(r"(?:^|;)(?:width|height|max-height|max-width):0(?:px|em|rem|%)?(?:;|$|!)")
-_ONE_BOX = re.compile(r"(?:^|;)(?:width|height):1px(?:;|$|!)")
+_ONE_BOX = re.compile(r"(?:^|;)(?:width|height):1px(?=;|$|!)")
 _OVERFLOW_HIDDEN = re.compile(r"(?:^|;)overflow(?:-[xy])?:hidden\b")
 _SCALE_ZERO = re.compile(r"(?:^|;)transform:scale[xy]?\(0(?:\.0+)?\)")
 _OFFSET = re.compile(r"(?:^|;)(?:left|top|right|bottom|margin-left|margin-top|text-indent)"
                      r":-(\d{3,}|\d{2,}(?:em|rem|vw|vh|%))")
-_CLIP = re.compile(r"(?:^|;)clip:rect\(0(?:px)?[ ,]+0(?:px)?|(?:^|;)clip-path:(?:inset\((?:50|100)%"
+_CLIP = re.compile(r"(?:^|;)clip:rect\(0(?:px)?,?0(?:px)?|(?:^|;)clip-path:(?:inset\((?:50|100)%"
                    r"|circle\(0)")
 _COLOR = re.compile(r"(?:^|;)color:([^;!]{1,60})")
 _BACKGROUND = re.compile(r"(?:^|;)background(?:-color)?:([^;!]{1,80})")
@@ -288,13 +289,6 @@ def _own_technique(el: lxml.etree._Element, hidden_classes: set[str], hidden_ids
     return None
 
 
-def _class_xpath(classes: set[str]) -> str:
-    names = sorted(classes | UTILITY_HIDDEN)[:80]
-    tests = " or ".join(f"contains(concat(' ', normalize-space(@class), ' '), ' {n} ')"
-                        for n in names if "'" not in n)
-    return f"//*[{tests}]" if tests else ""
-
-
 @dataclass
 class Collected:
     pieces: list[Piece]
@@ -324,9 +318,7 @@ def collect(root: lxml.etree._Element | None) -> Collected:
     # Elements that hide their whole subtree.
     queries = ["//template", "//noscript", "//*[@hidden]", "//*[@style]", "//font[@color]",
                "//details[not(@open)]"]
-    class_query = _class_xpath(hidden_classes)
-    if class_query:
-        queries.append(class_query)
+    queries.append("//*[@class]")  # checked in Python: cheaper than XPath string tests
     if hidden_ids:
         ids = sorted(hidden_ids)[:80]
         queries.append("//*[" + " or ".join(f"@id='{i}'" for i in ids if "'" not in i) + "]")
@@ -337,26 +329,34 @@ def collect(root: lxml.etree._Element | None) -> Collected:
         except lxml.etree.XPathError:
             continue
         candidates.extend(found[:MAX_NODES])
-    hidden_roots: set[lxml.etree._Element] = set()
-    ordered = sorted(set(candidates), key=_doc_order(root))
-    for el in ordered:
-        if any(a in hidden_roots for a in el.iterancestors()):
+    # Decide each candidate first, then keep only the outermost hidden ones.
+    decided: dict[lxml.etree._Element, str] = {}
+    details: list[lxml.etree._Element] = []
+    seen: set[lxml.etree._Element] = set()
+    for el in candidates:
+        if el in seen:
             continue
+        seen.add(el)
         if el.tag == "details":
-            technique = "closed-details"
+            details.append(el)
+            continue
+        technique = _own_technique(el, hidden_classes, hidden_ids, page_bg)
+        if technique is not None:
+            decided[el] = technique
+    for el in [*decided, *details]:
+        if any(a in decided for a in el.iterancestors()):
+            continue
+        if el.tag == "details" and el not in decided:
             text = " ".join(_text_of(child, 20_000) + (child.tail or "")
                             for child in el if child.tag != "summary")
             text = (el.text or "") + " " + text
             if text.strip():
-                add(re.sub(r"\s+", " ", text), technique, _describe(el))
+                add(re.sub(r"\s+", " ", text), "closed-details", _describe(el))
             continue
-        technique = _own_technique(el, hidden_classes, hidden_ids, page_bg)
-        if technique is None:
-            continue
-        hidden_roots.add(el)
-        add(_text_of(el, 50_000), technique, _describe(el))
+        add(_text_of(el, 50_000), decided[el], _describe(el))
     # Comments, attribute text, meta content, non-JavaScript script data, hidden inputs.
-    for comment in root.xpath("//comment()")[:MAX_NODES]:
+    # root.iter, not XPath: libxml2's //comment() is quadratic in the number of siblings.
+    for comment in itertools.islice(root.iter(lxml.etree.Comment), MAX_NODES):
         add(comment.text or "", "comment", "<!-- comment -->")
     for value in root.xpath("//@alt|//@title|//@aria-label|//@aria-description|"
                             "//@placeholder|//@aria-roledescription")[:MAX_NODES]:
@@ -387,12 +387,3 @@ def collect(root: lxml.etree._Element | None) -> Collected:
     return Collected(pieces, links, hidden_chars)
 
 
-def _doc_order(root: lxml.etree._Element):
-    index: dict[lxml.etree._Element, int] = {}
-
-    def key(el: lxml.etree._Element) -> int:
-        if not index:
-            for i, node in enumerate(root.iter()):
-                index[node] = i
-        return index.get(el, 0)
-    return key

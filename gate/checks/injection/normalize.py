@@ -192,6 +192,9 @@ def spaced_runs(folded: str, limit: int = 40) -> list[tuple[str, list[int]]]:
         i = m.start()
         end = m.end()
         s = folded
+        # Letters joined by dots or dashes, words by spaces: then a space is a word gap.
+        inner = s[i:end]
+        space_gaps = inner.count(" ") and any(c in inner for c in ".-_*·")
         while i < end:
             c = s[i]
             if c.isalnum():
@@ -202,7 +205,8 @@ def spaced_runs(folded: str, limit: int = 40) -> list[tuple[str, list[int]]]:
             j = i
             while j < end and not s[j].isalnum():
                 j += 1
-            if j - i >= 3 or (j - i == 2 and s[i] == s[i + 1] == " "):
+            if j - i >= 3 or (j - i == 2 and s[i] == s[i + 1] == " ") or (
+                    space_gaps and " " in s[i:j]):
                 chars.append(" ")
                 where.append(i)
             i = j

@@ -44,8 +44,11 @@ _HIDING_OPS = re.compile(
     rb"|(?:^|[\s\]])(?:0?\.0[0-6]?\d*|0)\s+(?:0?\.0[0-6]?\d*|0)\s+(?:0?\.0[0-6]?\d*|0)\s+"
     rb"(?:0?\.0[0-6]?\d*|0)\s+(?:k|sc|scn)\b")  # white CMYK fill
 _N = rb"(-?\d*\.?\d+)"
-_SIZE_OR_MATRIX = re.compile(rb"/[^\s/]+\s+" + _N + rb"\s+Tf\b|" + rb"\s+".join([_N] * 6) +
-                             rb"\s+(Tm|cm)\b|" + _N + rb"\s+" + _N + rb"\s+(T[dD])\b|(T[jJ]|')(?=\s|$)")
+# Groups: 0 Tf size; 1-6 and 7 a Tm/cm matrix; 8-9 and 10 a Td/TD move; 11 a text-showing
+# operator; 12 BT.
+_SIZE_OR_MATRIX = re.compile(
+    rb"/[^\s/]+\s+" + _N + rb"\s+Tf\b|" + rb"\s+".join([_N] * 6) + rb"\s+(Tm|cm)\b|" +
+    _N + rb"\s+" + _N + rb"\s+(T[dD])\b|(T[jJ]|')(?=\s|$)|(?:^|\s)(BT)\b")
 MAX_SUSPECT_MATCHES = 50_000
 
 
@@ -59,6 +62,8 @@ def _suspect(data: bytes, box: tuple[float, float, float, float]) -> bool:
         return True
     x0, y0, x1, y1 = box
     size, scale = 12.0, 1.0
+    origin_x = origin_y = 0.0  # translation of the current transformation matrix
+    tx = ty = 0.0  # text line position since BT (relative moves accumulate)
     n = 0
     for m in _SIZE_OR_MATRIX.finditer(data):
         n += 1
@@ -72,19 +77,27 @@ def _suspect(data: bytes, box: tuple[float, float, float, float]) -> bool:
                 a, b, c, d, e, f = (float(v) for v in g[1:7])
                 if g[7] == b"Tm":
                     scale = math.sqrt(abs(a * d - b * c))
-                    if e < x0 - 50 or f < y0 - 50 or e > x1 + 50 or f > y1 + 50:
+                    tx, ty = e, f
+                else:
+                    if math.sqrt(abs(a * d - b * c)) < 0.3:
                         return True
-                elif abs(e) > 2 * (x1 - x0) + 100 or abs(f) > 2 * (y1 - y0) + 100 or \
-                        math.sqrt(abs(a * d - b * c)) < 0.3:
-                    return True
+                    origin_x, origin_y = origin_x + e, origin_y + f
+                    continue
             elif g[10] is not None:
-                x, y = float(g[8]), float(g[9])
-                if x < x0 - 50 or y < y0 - 50 or x > x1 + 50 or y > y1 + 50:
-                    return True
+                tx, ty = tx + float(g[8]) * scale, ty + float(g[9]) * scale
+            elif g[12] is not None:
+                tx = ty = 0.0
+                scale = 1.0
+                continue
             elif size * scale < TINY_PT:  # a string shown at this size
                 return True
+            else:
+                continue
         except ValueError:
             continue
+        x, y = origin_x + tx, origin_y + ty
+        if x < x0 - 50 or y < y0 - 50 or x > x1 + 50 or y > y1 + 50:
+            return True
     return False
 
 
@@ -267,6 +280,6 @@ def outside_text(metadata: dict[str, str], extras: dict[str, Any]) -> list[tuple
     for annot in ((extras or {}).get("annotations") or [])[:2000]:
         text = annot.get("text") or ""
         if text.strip():
-            out.append((text, "annotation",
-                        f"PDF annotation /{annot.get('key', '?')} on page {annot.get('page', '?')}"))
+            where = f"PDF annotation /{annot.get('key', '?')} on page {annot.get('page', '?')}"
+            out.append((text, "annotation", where))
     return out

@@ -17,6 +17,7 @@ strings and numbers.
 
 from __future__ import annotations
 
+import bisect
 import re
 from dataclasses import dataclass
 from typing import Any
@@ -33,7 +34,7 @@ MAX_DEPTH = 2
 MAX_HITS = 60
 TOPIC_DAMPING = 0.5
 TOPIC_MIN = 2
-MEASURE_VERSION = 1
+MEASURE_VERSION = 2  # bump when measure() returns something different
 
 _MD_COMMENT = re.compile(r"<!--(.{0,20000}?)-->", re.S)
 
@@ -48,6 +49,16 @@ class Source:
     parent: tuple[Source, int, int] | None = None  # (source, start, end) of an encoded run
     decoded_by: str | None = None
     indexed: bool = False  # True only for the indexed text itself
+    unicode_only: bool = False  # only look for invisible messages (raw page text)
+    # A bundle of small pieces scanned in one pass: (start, end, where, technique) each.
+    pieces: list[tuple[int, int, str, str]] | None = None
+
+    def piece_at(self, pos: int) -> tuple[int, int, str, str | None]:
+        """The piece of a bundle holding offset ``pos`` (the whole source otherwise)."""
+        if not self.pieces:
+            return 0, len(self.text), self.where, self.technique
+        k = bisect.bisect_right([p[0] for p in self.pieces], pos) - 1
+        return self.pieces[max(0, k)]
 
 
 class Screen:
@@ -56,10 +67,12 @@ class Screen:
     def __init__(self, text: str):
         self.text = text
         self.view: View = fold(text)
-        self.topic = wording.topic_count(self.view.text) >= TOPIC_MIN
+        self.tokens = wording.tokens_of(self.view.text)
+        self.topic = wording.topic_count(self.view.text, tokens=self.tokens) >= TOPIC_MIN
         self.hits: list[dict[str, Any]] = []
         self.budget = [encoded.MAX_DECODED]
         self.sources = 0
+        self._claimed: dict[str, int] = {}
 
     # -- locating ----------------------------------------------------------------------------
 
@@ -73,8 +86,12 @@ class Screen:
         raw = source.text[start:end]
         if not raw.strip():
             return None, False
-        at = self.text.find(raw)
+        # Repeated hidden text: each copy claims the next occurrence in the indexed text.
+        at = self.text.find(raw, self._claimed.get(raw, 0))
+        if at < 0:
+            at = self.text.find(raw)
         if at >= 0:
+            self._claimed[raw] = at + len(raw)
             return [at, at + len(raw)], True
         folded = fold(raw).text.strip()
         if folded:
@@ -104,7 +121,10 @@ class Screen:
         visible_text = source.technique is None
         view = self.view if source.indexed else fold(text)
         content: list[dict[str, Any]] = []
-        for m in wording.scan(view, visible=visible_text):
+        if source.unicode_only:
+            return self._scan_unicode_only(source, text, depth)
+        for m in wording.scan(view, visible=visible_text,
+                              tokens=self.tokens if source.indexed else None):
             weight = m.weight
             note = m.note
             if visible_text and self.topic:
@@ -124,6 +144,9 @@ class Screen:
                 hit["snippet"] = visible(u.url, 200)
                 hit["span"], hit["reaches_index"] = self._find_url(u.url)
                 content.append(hit)
+        if source.pieces:  # a match running from one bundled piece into the next is no match
+            content = [h for h in content if source.piece_at(h["segment_span"][0])[1] >=
+                       h["segment_span"][1]]
         self.hits.extend(content)
         found = unicode.scan(text)
         for u in found.hits:
@@ -134,14 +157,15 @@ class Screen:
             self.hits.append(hit)
         if depth < MAX_DEPTH:
             for start, end, message, kind in found.payloads:
-                inner = Source(message, f"invisible {kind} in {source.where}",
+                inner = Source(message, f"invisible {kind} in {source.piece_at(start)[2]}",
                                "unicode-" + kind.split()[0], "tags", source.page,
                                (source, start, end), kind)
                 for hit in self.scan(inner, depth + 1):
                     hit["decoded"] = visible(message, 300)
                     content.append(hit)
             for payload in encoded.find(text, self.budget):
-                inner = Source(payload.text, f"{payload.encoding} in {source.where}",
+                inner = Source(payload.text,
+                               f"{payload.encoding} in {source.piece_at(payload.start)[2]}",
                                payload.encoding, "encoded", source.page,
                                (source, payload.start, payload.end), payload.encoding)
                 inner_hits = self.scan(inner, depth + 1)
@@ -158,16 +182,41 @@ class Screen:
                     self.hits.append(hit)
                     content.extend(inner_hits)
         if source.technique is not None and source.family in ("html", "pdf", "text") and content:
-            strongest = max(h["weight"] for h in content)
-            first = min(content, key=lambda h: h["segment_span"][0])
-            signal = "pdf-hidden" if source.family == "pdf" else "html-hidden"
-            hit = dict(first)
-            hit.update(signal=signal, weight=score.concealment_weight(strongest),
-                       snippet=visible(text, 200), note="", lang=None,
-                       decoded=first.get("decoded"), detail={"content_signals": sorted(
-                           {h["signal"] for h in content})})
-            hit.pop("obfuscation", None)
-            self.hits.append(hit)
+            groups: dict[tuple[int, int, str, str | None], list[dict[str, Any]]] = {}
+            for h in content:
+                groups.setdefault(source.piece_at(h["segment_span"][0]), []).append(h)
+            for (pstart, pend, _, _), group in groups.items():
+                strongest = max(h["weight"] for h in group)
+                first = min(group, key=lambda h: h["segment_span"][0])
+                signal = "pdf-hidden" if source.family == "pdf" else "html-hidden"
+                hit = dict(first)
+                hit.update(signal=signal, weight=score.concealment_weight(strongest),
+                           snippet=visible(text[pstart:pend], 200), note="", lang=None,
+                           decoded=first.get("decoded"), detail={"content_signals": sorted(
+                               {h["signal"] for h in group})})
+                hit.pop("obfuscation", None)
+                self.hits.append(hit)
+        return content
+
+    def _scan_unicode_only(self, source: Source, text: str, depth: int) -> list[dict[str, Any]]:
+        """Invisible messages the extractor dropped: tag characters, zero-width runs."""
+        content: list[dict[str, Any]] = []
+        found = unicode.scan(text)
+        for u in found.hits:
+            if u.signal == "tag-characters" or (u.signal == "zero-width" and
+                                                u.detail.get("decoded")):
+                hit = self._hit(source, u.signal, u.weight, u.start, u.end, text,
+                                detail=u.detail)
+                hit.update(snippet=u.snippet, decoded=u.detail.get("decoded"), span=None,
+                           reaches_index=False)
+                self.hits.append(hit)
+        for start, end, message, kind in found.payloads[:20]:
+            inner = Source(message, f"invisible {kind} in {source.where}",
+                           "unicode-" + kind.split()[0], "tags", None, None, kind)
+            for hit in self.scan(inner, depth + 1):
+                hit["decoded"] = visible(message, 300)
+                hit["span"], hit["reaches_index"] = None, False
+                content.append(hit)
         return content
 
     def _find_url(self, url: str) -> tuple[list[int] | None, bool]:
@@ -179,9 +228,10 @@ class Screen:
              obfuscation: list[str] | None = None,
              detail: dict[str, Any] | None = None) -> dict[str, Any]:
         span, reaches = self.locate(source, start, end)
+        _, _, where, technique = source.piece_at(start)
         hit: dict[str, Any] = {
-            "signal": signal, "weight": round(float(weight), 4), "where": source.where,
-            "technique": source.technique, "reaches_index": reaches, "span": span,
+            "signal": signal, "weight": round(float(weight), 4), "where": where,
+            "technique": technique, "reaches_index": reaches, "span": span,
             "segment_span": [start, end],
             "snippet": _snippet(text, start, end),
             "decoded": None, "lang": lang, "note": note,
@@ -262,6 +312,28 @@ def _snippet(text: str, start: int, end: int) -> str:
     return visible(text[a:b], 240)
 
 
+_TAG_CHAR = re.compile("[\U000E0000-\U000E007F]")
+_ZW_RUN = re.compile("[\u200b\u200c\u200d\u2060]{16}")
+
+
+def _invisible_message(text: str) -> bool:
+    return bool(_TAG_CHAR.search(text) or ("\u200b" in text or "\u200c" in text or
+                                          "\u200d" in text) and _ZW_RUN.search(text))
+
+
+def _raw_text(tree: Any) -> str:
+    if tree is None:
+        return ""
+    parts: list[str] = []
+    size = 0
+    for piece in tree.itertext():
+        parts.append(piece)
+        size += len(piece)
+        if size >= MAX_TEXT:
+            break
+    return "".join(parts)[:MAX_TEXT]
+
+
 def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]], dict]:
     kind = extraction.summary.type
     sources: list[Source] = []
@@ -272,6 +344,12 @@ def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]
         for piece in collected.pieces:
             sources.append(Source(piece.text, piece.where, piece.technique, "html"))
         links = collected.links
+        markup = extraction.decoded or ""
+        raw = _raw_text(extraction.tree) if (not markup.isascii() or "&#" in markup) else ""
+        if raw and not raw.isascii() and _invisible_message(raw) and \
+                not _invisible_message(extraction.text or ""):
+            sources.append(Source(raw, "the page markup (the extractor drops these characters)",
+                                  "markup-text", "html", unicode_only=True))
         stats["hidden_pieces"] = len(collected.pieces)
         stats["hidden_chars"] = collected.hidden_chars
     elif kind == "pdf":
@@ -298,6 +376,40 @@ def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]
     return sources, links, stats
 
 
+BUNDLE_CHARS = 20_000
+_SEPARATOR = "\n\n\u2029\n\n"  # no rule matches across it: wording gaps stop at \u2029
+
+
+def _bundle(sources: list[Source]) -> list[Source]:
+    """Small concealed pieces of one family scanned together, to save per-scan overhead."""
+    out: list[Source] = []
+    open_: dict[str, tuple[list[str], list[tuple[int, int, str, str]], int]] = {}
+    for source in sources:
+        if source.unicode_only or source.technique is None or len(source.text) > 4000 or \
+                source.page is not None:
+            out.append(source)
+            continue
+        texts, pieces, size = open_.setdefault(source.family, ([], [], 0))
+        start = size + (len(_SEPARATOR) if texts else 0)
+        texts.append(source.text)
+        pieces.append((start, start + len(source.text), source.where, source.technique or ""))
+        size = start + len(source.text)
+        open_[source.family] = (texts, pieces, size)
+        if size >= BUNDLE_CHARS:
+            out.append(_close(source.family, texts, pieces))
+            del open_[source.family]
+    for family, (texts, pieces, _) in open_.items():
+        out.append(_close(family, texts, pieces))
+    return out
+
+
+def _close(family: str, texts: list[str], pieces: list[tuple[int, int, str, str]]) -> Source:
+    if len(texts) == 1:
+        start, end, where, technique = pieces[0]
+        return Source(texts[0], where, technique, family)
+    return Source(_SEPARATOR.join(texts), pieces[0][2], pieces[0][3], family, pieces=pieces)
+
+
 def measure(extraction: Extraction) -> dict[str, Any]:
     """Screen one document (runs in the worker); see the module docstring."""
     text = extraction.text or ""
@@ -307,7 +419,7 @@ def measure(extraction: Extraction) -> dict[str, Any]:
     if links:
         screen.scan(Source("", "a link or image address in the page markup", None, "html"),
                     links=links)
-    for source in sources[:MAX_SOURCES]:
+    for source in _bundle(sources[:MAX_SOURCES]):
         screen.scan(source)
     hits = screen.finish()
     total = len(hits)

@@ -40,9 +40,7 @@ _TAG_RUN = re.compile("[\U000E0000-\U000E007F]+")
 _RTL = re.compile("[\u0590-\u08ff\ufb1d-\ufdff\ufe70-\ufefc\U00010800-\U00010fff"
                   "\U0001e800-\U0001efff]")
 _WORD = re.compile(r"[^\W\d_]{2,64}")
-_ASCII_LETTER = re.compile(r"[A-Za-z]")
 _ZW_RUN = re.compile("[" + ZERO_WIDTH + "]{16,}")
-MIN_ZW_RUN = 16
 MAX_SPECIAL = 20_000
 
 

@@ -49,7 +49,7 @@ class Rule:
     needs: re.Pattern[str] | None = None  # the matched text must also match this
     memo_damped: bool = False  # damped near signs of an ordinary human memo
     ai_near: bool = False  # weak unless the next 200 characters mention an AI
-    name: str = ""
+    strong_reach: int = 0  # the strong test also reads this many characters after the match
 
 
 RULES: list[Rule] = []
@@ -103,7 +103,8 @@ EN_VERB = alt("ignore", "ignoring", "disregard", "disregarding", "forget", "forg
 EN_OBJ = alt(r"instructions?", r"prompts?", "rules", "directions", "directives",
              "guidelines", "guidance", "commands", "constraints", "restrictions",
              "safeguards", "guardrails", "policies", "programming", "orders",
-             r"system\W+prompt", "training", "filters", "context", "messages")
+             r"system\W+prompt", "training", "filters", "context", "messages", "limits",
+             "limitations", "boundaries")
 EN_QUAL = re.compile(r"\b(?:previous(?:ly)?|prior|preceding|above|earlier|former|original|"
                      r"initial|existing|foregoing|old|system|developer'?s?|all|any|every|your|"
                      r"before|so\W+far|given|received|those|these)\b")
@@ -124,8 +125,24 @@ rule("override", "en", 0.35,
 rule("override", "en", 0.55,
      r"\b(?:ignore|disregard|forget)\W+(?:everything|anything|all|whatever)\W+(?:(?:that|which|"
      r"you|i|we)\W+)?(?:above|before|prior|previously|said|written|you\W+(?:were|have\W+been|"
-     r"was)\W+told|you\W+know|you\W+learned|up\W+to\W+(?:here|now|this\W+point))\b",
+     r"was)\W+told|you'?ve\W+been\W+(?:told|given)|you\W+know|you\W+learned|"
+     r"up\W+to\W+(?:here|now|this\W+point))\b(?!\W+(?:about|of|on)\b)",
      "ignor|disre|forge")
+rule("override", "en", 0.45,
+     r"\b(?:ignore|disregard|forget)\W+(?:all\W+of\W+)?(?:the|everything)\W+above"
+     r"(?=\W*(?:$|[.,;:!]|\s+(?:and|instead|then|now|text)\b))", "ignor|disre|forge")
+rule("override", "en", 0.5,
+     r"\b(?:your|the|all|any)\W+(?:\w+\W+){0,1}?(?:earlier|previous|prior|original|initial|"
+     r"existing|old)\W+(?:instructions|directives|rules|guidelines|prompts?|orders)\W+"
+     r"(?:no\W+longer\W+(?:apply|count|matter|hold)|(?:are|have\W+been)\W+(?:\w+\W+){0,1}?"
+     r"(?:void|suspended|revoked|cancell?ed|lifted|withdrawn|superseded|replaced))\b",
+     "instr|direc|rules|guide|promp|order")
+rule("override", "en", 0.45,
+     r"\b(?:supersedes?|replaces?|overrides?|cancels?|voids?|invalidates?|revokes?)\W+"
+     r"(?:all\W+|any\W+)?(?:of\W+)?(?:your|the\W+ai'?s|the\W+assistant'?s|the\W+model'?s)\W+"
+     r"(?:(?:previous|prior|operating|original|existing|current|initial|system|core)\W+){0,2}"
+     r"(?:instructions|rules|guidelines|programming|directives|system\W+prompt|prompt|"
+     r"configuration)\b", "super|repla|overr|cance|voids|void|inval|revok")
 rule("override", "en", 0.55,
      r"\b(?:all|any|the)\W+(?:previous|prior|above|earlier|preceding|original)\W+"
      r"(?:instructions|rules|prompts?|directives|guidelines)\W+(?:are|is)\W+(?:now\W+)?"
@@ -183,7 +200,7 @@ rule("override", "fr", 0.35,
      rf"\b{FR_VERB}\W+(?P<mid>(?:\w+\W+){{0,5}}?){FR_OBJ}\b"
      r"(?P<tail>\W+(?:\w+\W+){0,2}?(?:precedent\w*|anterieur\w*|ci-dessus|initial\w*|"
      r"d'origine|recues|fournies|plus\W+haut))?",
-     "ignor|oubli|tiens|tient|tenez|absta|negli|outre|conto|ecart|obeis|suis|suive|passe",
+     "ignor|oubli|tiens|tient|tenez|absta|negli|outre|conto|ecart|obeis|suis|suive",
      needs=FR_QUAL.pattern, strong=FR_STRONG, strong_weight=0.55, memo_damped=True)
 rule("override", "fr", 0.55,
      r"\boublie\w*\W+tout\W+(?:\w+\W+){0,4}?(?:avant|precedemment|dit|appris|ci-dessus|"
@@ -280,11 +297,21 @@ ROLE_EN = alt(r"ai", r"assistants?", r"bots?", r"chat\W?bots?", r"models?", r"ag
               "persona", "character", "dan", r"jailbr\w*", "unrestricted", "unfiltered",
               "uncensored", "evil", "hacker", "administrator", "sentient", "pirate",
               "villain", "liberated", r"rogue")
-rule("role-change", "en", 0.4,
+# A role word that says the model is meant, and how it is to misbehave; without one of
+# these ("you are now connected to an agent") the match is weak.
+ROLE_STRONG = (r"\b(?:ai|chat\W?bots?|dan|jailbr\w*|unrestricted|unfiltered|uncensored|evil|"
+               r"hacker|sentient|liberated|rogue|persona|named|called|without|no\W+(?:rules|"
+               r"limits|restrictions))\b")
+rule("role-change", "en", 0.2,
      r"\byou\W+are\W+(?:now|henceforth)\W+(?:\w+\W+){0,4}?" + ROLE_EN + r"\b",
-     "you are now|you're now|you are henceforth")
-rule("role-change", "en", 0.4,
-     r"\byou'?re\W+now\W+(?:\w+\W+){0,4}?" + ROLE_EN + r"\b", "you're now")
+     "you are now|you're now|you are henceforth", strong=ROLE_STRONG, strong_weight=0.4,
+     strong_reach=60)
+rule("role-change", "en", 0.2,
+     r"\byou'?re\W+now\W+(?:\w+\W+){0,4}?" + ROLE_EN + r"\b", "you're now",
+     strong=ROLE_STRONG, strong_weight=0.4, strong_reach=60)
+rule("role-change", "en", 0.2,
+     r"\byou\W+are\W+(?:an?\W+)?(?:\w+\W+){0,3}?" + ROLE_EN + r"\W+(?:now|from\W+now\W+on)\b",
+     "you are", strong=ROLE_STRONG, strong_weight=0.4, strong_reach=60)
 rule("role-change", "en", 0.4,
      r"\byou\W+are\W+no\W+longer\W+(?:an?\W+)?(?:ai|assistant|language\W+model|chat\W?bot|bot|"
      r"model|bound\W+by\W+(?:your|any)\W+(?:rules|guidelines|restrictions|instructions|"
@@ -306,23 +333,31 @@ rule("role-change", "en", 0.3,
      r"admin|human|different|unrestricted)\b", "prete")
 rule("role-change", "en", 0.25,
      r"\byour\W+(?:new|real|true|actual|updated)\W+(?:role|persona|identity|task|goal|objective|"
-     r"purpose|instructions?|mission|directive|name)\W+(?:is|are|will\W+be)\b|"
+     r"purpose|instructions?|mission|directive|name|job)\W+(?:is|are|will\W+be)\b|"
+     r"\byour\W+(?:only\W+)?(?:role|task|goal|objective|purpose|mission|job)\W+(?:now|from\W+now"
+     r"\W+on)\W+(?:is|are|will\W+be)\b|"
      r"\byour\W+(?:new|real|true|actual|updated)\W+(?:role|persona|identity|task|goal|"
      r"objective|purpose|instructions?|mission|directive)\s*:",
-     "your new|your real|your true|your actual|your updated")
+     "your new|your real|your true|your actual|your updated|your job|your task|your role|"
+     "your goal|your only|your objective|your purpose|your mission")
 rule("role-change", "en", 0.4,
      r"\b(?:enter|enable|activate|switch\W+(?:to|into)|you\W+are\W+(?:now\W+)?in)\W+"
      r"(?:\w+\W+){0,1}?(?:jailbreak|jailbroken|dan|unrestricted|unfiltered|god|evil)\W+mode\b|"
      r"\bdo\W+anything\W+now\b", "mode|do anything now")
+ROLE_STRONG_INTL = (r"\b(?:ohne\W+(?:\w+\W+){0,2}?(?:einschrankung|regeln|grenzen|filter)\w*|"
+                    r"uneingeschrankt\w*|ungefiltert\w*|unzensiert\w*|"
+                    r"sans\W+(?:\w+\W+){0,2}?(?:restriction|regle|limite|filtre|censure)\w*|"
+                    r"sin\W+(?:\w+\W+){0,2}?(?:restriccion|regla|limite|filtro|censura)\w*)")
 rule("role-change", "de", 0.4,
      r"\b(?:du\W+bist|sie\W+sind|ihr\W+seid)\W+(?:jetzt|nun|ab\W+sofort|ab\W+jetzt|"
      r"von\W+nun\W+an)\W+(?:\w+\W+){0,3}?(?:ki|assistent\w*|bot|chatbot|modell|agent|persona|"
      r"charakter|hacker|administrator|pirat|uneingeschrankt\w*|ungefiltert\w*|unzensiert\w*|"
-     r"kein\w*\W+(?:ki|assistent|sprachmodell|modell))\b", "jetzt|nun|sofor")
+     r"kein\w*\W+(?:ki|assistent|sprachmodell|modell))\b", "jetzt|nun|sofor",
+     strong=ROLE_STRONG_INTL, strong_weight=0.45, strong_reach=60)
 rule("role-change", "de", 0.3,
      r"\bab\W+(?:sofort|jetzt)\W+(?:\w+\W+){0,2}?(?:antwortest|verhaltst|handelst|agierst|"
      r"sprichst|bist)\W+du\b(?:\W+\w+){0,5}?\W+(?:als|wie|ki|assistent|bot|modell|rolle|ohne)\b",
-     "sofor|jetzt")
+     "sofor|jetzt", strong=ROLE_STRONG_INTL, strong_weight=0.45, strong_reach=60)
 rule("role-change", "de", 0.3,
      r"\btu\W+so,?\W+als\W+(?:ob\W+)?(?:du|sie)\W+(?:\w+\W+){0,3}?(?:warst|waerst|seist|bist|"
      r"waren)\b|\bdeine\W+neue\W+(?:rolle|aufgabe|identitat|personlichkeit)\W+(?:ist|lautet)\b|"
@@ -332,12 +367,13 @@ rule("role-change", "fr", 0.4,
      r"\b(?:tu\W+es|vous\W+etes)\W+(?:maintenant|desormais|a\W+present|dorenavant)\W+"
      r"(?:\w+\W+){0,3}?(?:ia|assistant\w*|bot|chatbot|modele|agent|personnage|pirate|"
      r"administrateur|sans\W+restrictions?|plus\W+(?:une|un)\W+(?:ia|assistant))\b",
-     "maint|desor|prese|doren")
+     "maint|desor|prese|doren", strong=ROLE_STRONG_INTL, strong_weight=0.45, strong_reach=60)
 rule("role-change", "fr", 0.3,
      r"\b(?:a\W+partir\W+de\W+maintenant|desormais|dorenavant)\W+(?:\w+\W+){0,2}?(?:tu|vous)\W+"
      r"(?:\w+\W+){0,3}?(?:reponds|repondez|agis|agissez|joues|jouez|seras|serez|parles|"
      r"parlez|incarnes|incarnez|comportes|comportez)\b(?:\W+\w+){0,5}?\W+(?:comme|en\W+tant\W+"
-     r"que|ia|assistant|role|personnage|sans)\b", "parti|desor|doren")
+     r"que|ia|assistant|role|personnage|sans)\b", "parti|desor|doren",
+     strong=ROLE_STRONG_INTL, strong_weight=0.45, strong_reach=60)
 rule("role-change", "fr", 0.3,
      r"\bfai(?:s|tes)\W+semblant\W+d'etre\b|\bjoue[zr]?\W+le\W+role\W+d\w*|"
      r"\bton\W+nouveau\W+role\W+(?:est|:)", "sembl|joue|jouez|jouer|ton")
@@ -346,7 +382,8 @@ rule("role-change", "es", 0.4,
      r"(?:\w+\W+){0,2}?(?:eres|seras|actuas|actuaras|actua|responderas|usted\W+es)\W+"
      r"(?:\w+\W+){0,3}?(?:ia|asistente|bot|chatbot|modelo|agente|personaje|pirata|hacker|"
      r"administrador|sin\W+restricciones)\b|\b(?:ya\W+)?no\W+eres\W+(?:una?\W+)?(?:ia|asistente|"
-     r"modelo|chatbot|bot)\b", "ahora|eres")
+     r"modelo|chatbot|bot)\b", "ahora|eres",
+     strong=ROLE_STRONG_INTL, strong_weight=0.45, strong_reach=60)
 rule("role-change", "es", 0.3,
      r"\b(?:finge|finja|pretende)\W+(?:ser|que\W+eres|que\W+es)\b|\btu\W+nuevo\W+(?:rol|papel|"
      r"objetivo|proposito|nombre)\W+(?:es|sera)\b|\b(?:juega|haz|interpreta)\W+el\W+papel\W+de\b",
@@ -364,6 +401,11 @@ rule("model-address", "en", 0.25,
      r"addendum)\W+(?:to|for)\W+(?:the\W+|any\W+|all\W+)" + AI_WEAK_EN + r"\b" + NOT_A_PERSON_NOUN
      + r"(?:\W+(?:reading|processing|summari[sz]ing|that|who))?",
      "assis|bot|bots|model|agent|copil|summa|crawl|scrap|answe|autom|machi")
+rule("model-address", "en", 0.35,
+     r"(?:^|\n|[.!?]\s+|\*{2,}\s*|^\W{0,3})(?:" + AI_STRONG_EN + r"|ai\W+models?)\s*[,:]\s+\w",
+     "ai|llm|llms|langu|chatb|chat|gpt|gpts|artif|a.i.")
+rule("model-address", "en", 0.3,
+     r"(?:^|\n|[.!?]\s+)(?:(?:dear|hey|ok|okay)\W+)?assistant\s*,\s+\w", "assis")
 rule("model-address", "en", 0.4,
      r"\b(?:dear|hello|hi|hey|attention|psst|greetings|listen|ok|okay)\W+(?:the\W+)?"
      r"(?:" + AI_STRONG_EN + r"|assistant|chat\W?bot)\b" + NOT_A_PERSON_NOUN,
@@ -372,10 +414,11 @@ rule("model-address", "en", 0.45,
      r"\bif\W+you\W+are\W+(?:an?\W+)?(?:" + AI_STRONG_EN + r"|assistant|bot|automated\W+\w+|"
      r"machine|crawler|robot|model)\b" + NOT_A_PERSON_NOUN, "if you are")
 rule("model-address", "en", 0.45,
-     r"\b" + AI_STRONG_EN + r"\W+(?:that\W+is\W+|who\W+is\W+|which\W+is\W+|that\W+)?"
+     r"\b" + AI_STRONG_EN + r"\W+(?:that\W+is\W+|who\W+is\W+|which\W+is\W+|that\W+|is\W+|"
+     r"currently\W+)?"
      r"(?:reading|processing|summari[sz]ing|parsing|analy[sz]ing|indexing|crawling|ingesting|"
      r"retrieving|seeing|consuming|scanning|evaluating|reads|processes|summari[sz]es)\W+"
-     r"(?:this|these|the\W+(?:following|above))\b",
+     r"(?:this|these|it|the\W+(?:following|above|page|document|text|file))\b",
      "ai|llm|llms|langu|chatb|chat|gpt|gpts|artif|a.i.")
 rule("model-address", "en", 0.35,
      r"\b(?:assistants?|models?|agents?|bots?|crawlers?|summari[sz]ers?)\W+(?:that\W+is\W+|"
@@ -440,6 +483,12 @@ rule("fake-notice", "en", 0.25,
      r"\b(?:new|updated|revised|real|actual|true|secret|hidden|additional)\W+(?:system\W+)?"
      r"instructions?\s*:", "instr", ai_near=True)
 rule("fake-notice", "en", 0.45,
+     r"\b(?:new|updated|revised|replacement|real|actual|true|secret|hidden|additional)\W+"
+     r"system\W+(?:prompt|message|instructions?)\b", "syste")
+rule("fake-notice", "en", 0.35,
+     r"\b(?:priority|emergency|urgent|administrator|admin|owner|developer|root|system)\W+"
+     r"override\b", "overr")
+rule("fake-notice", "en", 0.45,
      r"\b(?:new|updated|revised|real|actual|true|secret|hidden|important|urgent|priority|"
      r"critical)\W+(?:system\W+)?instructions?\W+(?:for|to)\W+(?:the\W+|all\W+|any\W+)?"
      r"(?:" + AI_STRONG_EN + r"|assistants?|models?|agents?|bots?)\b", "instr")
@@ -484,6 +533,11 @@ rule("chat-markup", "any", 0.45,
 rule("chat-markup", "any", 0.15,
      r"(?:^|\n)[ \t]{0,3}#{2,4}[ \t]*(?:instruction|instructions|response|system|input|human|"
      r"assistant|user)[ \t]*:?[ \t]*(?=\n|$)", "###|##")
+# Two role headings a few lines apart: a counterfeit conversation turn.
+rule("chat-markup", "any", 0.35,
+     r"(?:^|\n)[ \t]{0,3}#{2,4}[ \t]*(?:system|instruction|instructions)[ \t]*:[ \t]*\n"
+     r"(?:[^\n]{0,300}\n){1,6}?[ \t]{0,3}#{2,4}[ \t]*(?:user|human|input|response|assistant)"
+     r"[ \t]*:", "###|##")
 
 # -- answer-steering: what the model should tell the user ---------------------------------------
 
@@ -548,21 +602,26 @@ rule("answer-steering", "es", 0.3,
 
 # -- exfil-request: asking for data to be sent out -----------------------------------------------
 
-SECRET_EN = alt(r"(?:the\W+)?conversation", r"chat\W+(?:history|log|transcript)",
-                r"message\W+history", r"(?:previous|prior|earlier)\W+messages",
-                r"user'?s?\W+(?:data|details|information|email|name|password|address|"
-                r"messages?|question|query|input|files?)", r"secrets?", r"api\W+keys?",
-                r"passwords?", "credentials", r"access\W+tokens?", r"system\W+prompt",
-                r"session\W+(?:id|token|cookie)s?", r"cookies?",
-                r"personal\W+(?:data|information|details)", r"everything\W+the\W+user\W+\w+",
-                r"(?:a\W+)?summary\W+of\W+(?:the|this|our)\W+(?:conversation|chat)")
-rule("exfil-request", "en", 0.45,
-     r"\b(?:append|add|include|insert|put|encode|embed|attach|replace|substitute|fill\W+in|"
-     r"concatenate|send|post|transmit|forward|upload|submit|leak|exfiltrate)\W+(?:\w+\W+){0,6}?"
-     + SECRET_EN + r"\b(?:\W+\w+){0,8}?\W+(?:url|link|query|parameter|image|endpoint|address|"
-     r"webhook|server|https?)\b",
-     "appen|add|inclu|inser|put|encod|embed|attac|repla|subst|fill|conca|send|post|trans|"
-     "forwa|uploa|submi|leak|exfil")
+SECRET_STRONG_EN = alt(r"(?:the\W+)?conversation", r"chat\W+(?:history|log|transcript)",
+                       r"message\W+history", r"(?:previous|prior|earlier)\W+messages",
+                       r"user'?s?\W+(?:data|details|information|email|name|password|address|"
+                       r"messages?|question|query|input|files?|credentials|secrets?)",
+                       r"system\W+prompt", r"personal\W+(?:data|information|details)",
+                       r"everything\W+the\W+user\W+\w+",
+                       r"(?:a\W+)?summary\W+of\W+(?:the|this|our)\W+(?:conversation|chat)")
+SECRET_WEAK_EN = alt(r"secrets?", r"api\W+keys?", r"passwords?", "credentials",
+                     r"access\W+tokens?", r"session\W+(?:id|token|cookie)s?", r"cookies?")
+EXFIL_VERB_EN = (r"\b(?:append|add|include|insert|put|encode|embed|attach|replace|substitute|"
+                 r"fill\W+in|concatenate|send|post|transmit|forward|upload|submit|leak|"
+                 r"exfiltrate)\W+(?:\w+\W+){0,6}?")
+EXFIL_TAIL_EN = (r"\b(?:\W+\w+){0,8}?\W+(?:url|link|query|parameter|image|endpoint|address|"
+                 r"webhook|server|https?)\b")
+EXFIL_ANCHORS = ("appen|add|inclu|inser|put|encod|embed|attac|repla|subst|fill|conca|send|post|"
+                 "transmit|forwa|uploa|submi|leak|exfil")
+rule("exfil-request", "en", 0.5, EXFIL_VERB_EN + SECRET_STRONG_EN + EXFIL_TAIL_EN,
+     EXFIL_ANCHORS)
+rule("exfil-request", "en", 0.25, EXFIL_VERB_EN + SECRET_WEAK_EN + EXFIL_TAIL_EN,
+     EXFIL_ANCHORS)
 rule("exfil-request", "de", 0.45,
      r"\b(?:hange|fuge|sende|schicke|ubertrage|kodiere|setze|ubermittle|leite)\w*\W+"
      r"(?:\w+\W+){0,6}?(?:unterhaltung|gesprach\w*|chatverlauf|verlauf|nachrichten|passwort\w*|"
@@ -574,7 +633,7 @@ rule("exfil-request", "fr", 0.45,
      r"integre|integrez|colle|collez)\W+(?:\w+\W+){0,6}?(?:conversation|historique|messages|"
      r"mots?\W+de\W+passe|identifiants|secrets?|cles?\W+api|donnees\W+(?:personnelles|de\W+"
      r"l'utilisateur)|prompt\W+systeme)\b(?:\W+\w+){0,8}?\W+(?:url|lien|adresse|parametre|image|"
-     r"serveur|https?)\b", "ajout|inser|envoi|envoy|encod|trans|integ|colle")
+     r"serveur|https?)\b", "ajout|inser|envoi|envoy|encod|transmet|integ|colle")
 rule("exfil-request", "es", 0.45,
      r"\b(?:anade|agrega|agregue|inserta|inserte|envia|envie|codifica|codifique|incluye|incluya|"
      r"adjunta|pega)\W+(?:\w+\W+){0,6}?(?:conversacion|historial|mensajes|contrasenas?|"
@@ -598,8 +657,14 @@ TOPIC = re.compile(r"\b(?:prompt\W?injections?|jailbreak\w*|injection\W+attacks?
                    r"instrucciones))\b")
 
 
-def topic_count(folded: str, limit: int = 20) -> int:
+_TOPIC_STEMS = (b"promp", b"jailb", b"injec", b"adver", b"indir", b"red", b"redte", b"inyec")
+
+
+def topic_count(folded: str, limit: int = 20, tokens: set[bytes] | None = None) -> int:
     """How often the text names prompt injection or jailbreaking itself."""
+    stems = {t[:5] for t in (tokens if tokens is not None else tokens_of(folded))}
+    if not any(s in stems for s in _TOPIC_STEMS):
+        return 0
     n = 0
     for _ in TOPIC.finditer(folded):
         n += 1
@@ -663,38 +728,69 @@ _PHRASE_ANCHORS: dict[str, list[int]] = {}
 _WORDLIKE = re.compile(r"[a-z0-9.']+")
 for _i, _r in enumerate(RULES):
     for _a in _r.anchors:
-        if _WORDLIKE.fullmatch(_a):
-            _WORD_ANCHORS.setdefault(_a.strip(".'")[:5], []).append(_i)
+        if _WORDLIKE.fullmatch(_a) and len(_a.strip(".'")) <= 5:
+            _WORD_ANCHORS.setdefault(_a.strip(".'"), []).append(_i)
         else:
             _PHRASE_ANCHORS.setdefault(_a, []).append(_i)
-_PUNCT = bytes(c if (48 <= c <= 57 or 97 <= c <= 122 or c >= 128 or c in b".'") else 32
-               for c in range(256))
+_PUNCT = bytes(c if (48 <= c <= 57 or 97 <= c <= 122 or c >= 128 or c in b".'@$|!+-_*")
+               else 32 for c in range(256))
+_WORD_ANCHOR_BYTES = frozenset(a.encode("ascii") for a in _WORD_ANCHORS)
+# Short anchors also as tokens ending a sentence or clause ("... to the AI.").
+_SHORT_ANCHOR = {(a + p).encode("ascii"): a for a in _WORD_ANCHORS if len(a) < 5 for p in ".'"}
+# A phrase can only occur when each of its whole words is a token of the text.
+_PHRASE_INDEX = {
+    phrase: (frozenset(w.encode("ascii") for w in phrase.split(" ")[1:-1] if w.isalpha()),
+             indexes)
+    for phrase, indexes in _PHRASE_ANCHORS.items()}
 WINDOW_BEFORE = 160
 WINDOW_AFTER = 260
 MAX_OCCURRENCES = 60
 
 
-def _anchor_hits(folded: str) -> dict[int, list[int]]:
+def tokens_of(folded: str) -> set[bytes]:
+    """The distinct word tokens of a folded text (ASCII letters, digits, "." and "'" kept)."""
+    return set(folded.encode("utf-8", "surrogatepass").translate(_PUNCT).split())
+
+
+def _anchor_hits(folded: str, tokens: set[bytes]) -> dict[int, list[int]]:
     """Rule index -> positions of its anchors in ``folded``."""
-    tokens = set(folded.encode("utf-8", "surrogatepass").translate(_PUNCT).split())
-    stems: dict[str, None] = {}
-    for tok in tokens:
-        try:
-            word = tok.decode("utf-8").strip(".'")
-        except UnicodeDecodeError:
-            continue
-        stems[word[:5]] = None
+    stems = {t[:5] for t in tokens}
     found: dict[int, list[int]] = {}
-    for stem in stems.keys() & _WORD_ANCHORS.keys():
-        positions = _positions(folded, stem)
-        for index in _WORD_ANCHORS[stem]:
+    matched = {stem.decode("ascii") for stem in stems & _WORD_ANCHOR_BYTES}
+    matched.update(_SHORT_ANCHOR[stem] for stem in stems & _SHORT_ANCHOR.keys())
+    for word in matched:
+        positions = _positions(folded, word)
+        for index in _WORD_ANCHORS[word]:
             found.setdefault(index, []).extend(positions)
-    for phrase, indexes in _PHRASE_ANCHORS.items():
+    for phrase, (words, indexes) in _PHRASE_INDEX.items():
+        if words and not words <= tokens:
+            continue
         if phrase in folded:
             positions = _positions(folded, phrase)
             for index in indexes:
                 found.setdefault(index, []).extend(positions)
     return found
+
+
+_LEETISH = re.compile(rb"[a-z]+[013457@$|!+][a-z0-9@$|!+]*|[013457@$|][a-z]+")
+_DOTTED = re.compile(rb"(?:[a-z0-9][.\-_*]){3,}[a-z0-9]")
+
+
+def _maybe_leet(odd: list[bytes]) -> bool:
+    """Two or more tokens mixing letters with digits or symbols read as letters."""
+    n = 0
+    for t in odd:
+        if not t.isdigit() and _LEETISH.fullmatch(t.strip(b".'")):
+            n += 1
+            if n >= 2:
+                return True
+    return False
+
+
+def _maybe_spaced(tokens: set[bytes], odd: list[bytes]) -> bool:
+    """Many one-letter tokens, or a token of letters joined by dots or dashes."""
+    singles = sum(1 for t in tokens if len(t) == 1)
+    return singles >= 6 or any(len(t) >= 7 and _DOTTED.fullmatch(t) for t in odd)
 
 
 def _positions(folded: str, needle: str) -> list[int]:
@@ -717,16 +813,35 @@ def _windows(positions: list[int], size: int) -> list[tuple[int, int]]:
     return spans
 
 
+COMMAND_AFTER = re.compile(
+    r"\W{0,3}(?:\w+\W+){0,3}?[:,\-]\W{0,3}(?:please\W+)?(?:respond|answer|reply|say|tell|write|"
+    r"output|print|include|recommend|describe|summari[sz]e|ignore|disregard|forget|do\W+not|"
+    r"don'?t|never|always|stop|reveal|state|claim|rate|rank|send|add|append|you\W+(?:must|should|"
+    r"will|are))\b")
+JAILBREAK = re.compile(
+    r"\b(?:unrestricted|unfiltered|uncensored|jailbr\w*|dan\b|do\W+anything\W+now|"
+    r"(?:without|no)\W+(?:any\W+)?(?:rules|limits|restrictions|filters|guidelines|censorship)|"
+    r"uneingeschrankt\w*|ungefiltert\w*|unzensiert\w*|ohne\W+(?:\w+\W+){0,2}?"
+    r"(?:einschrankung|regeln|grenzen|filter)\w*|sans\W+(?:\w+\W+){0,2}?(?:restriction|regle|"
+    r"limite|filtre|censure)\w*|sin\W+(?:\w+\W+){0,2}?(?:restriccion|regla|limite|filtro|"
+    r"censura)\w*)")
+
+
 def _weigh(r: Rule, matched: str, folded: str, start: int, end: int) -> tuple[float, str]:
     if r.needs is not None and not r.needs.search(matched):
         return 0.0, ""
     weight = r.weight
     notes = []
-    if r.strong is not None and r.strong.search(matched):
+    if r.strong is not None and r.strong.search(
+            folded[start:end + r.strong_reach] if r.strong_reach else matched):
         weight = r.strong_weight or weight
     elif r.memo_damped and MEMO.search(folded[max(0, start - 100):end + 100]):
         weight *= 0.5
         notes.append("reads like an ordinary memo")
+    if r.signal == "model-address" and COMMAND_AFTER.match(folded, end):
+        weight = max(weight, 0.5)  # addressed to the model and followed by a command
+    if r.signal == "role-change" and JAILBREAK.search(folded[start:end + 80]):
+        weight = max(weight, 0.5)  # the new role explicitly drops the model's restrictions
     if r.ai_near and not AI_ANY.search(folded[end:end + 200]):
         weight *= 0.5
         notes.append("no model addressed nearby")
@@ -737,31 +852,35 @@ def _run(r: Rule, text: str, start: int, end: int):
     return r.pattern.finditer(text, start, end)
 
 
-def scan(view: View, *, visible: bool = True, max_matches: int = 60) -> list[Match]:
+def scan(view: View, *, visible: bool = True, max_matches: int = 60,
+         tokens: set[bytes] | None = None) -> list[Match]:
     """All rule matches in a folded view; offsets are mapped to the original text.
 
     ``visible`` says the text is shown to readers, so quotation and example contexts damp.
     """
     folded = view.text
-    matches: list[Match] = []
-    seen: set[tuple[str, int]] = set()
+    best: dict[tuple[str, int], Match] = {}  # one match per signal and start: the strongest
 
     def add(r: Rule, start: int, end: int, matched: str, ostart: int, oend: int,
             obfuscation: list[str]) -> None:
         key = (r.signal, ostart)
-        if key in seen or len(matches) >= max_matches:
+        if key not in best and len(best) >= max_matches:
             return
         weight, note = _weigh(r, matched, folded, start, end)
         if weight <= 0:
             return
-        seen.add(key)
         factor, why = mention_factor(folded, start, end) if visible else (1.0, "")
         if why:
             note = "; ".join(x for x in (note, why) if x)
-        matches.append(Match(r.signal, r.lang, round(weight * factor, 4), ostart, oend,
-                             matched, note, obfuscation, factor))
+        match = Match(r.signal, r.lang, round(weight * factor, 4), ostart, oend, matched, note,
+                      obfuscation, factor)
+        old = best.get(key)
+        if old is None or (match.weight, match.end) > (old.weight, old.end):
+            best[key] = match
 
-    for index, positions in _anchor_hits(folded).items():
+    if tokens is None:
+        tokens = tokens_of(folded)
+    for index, positions in sorted(_anchor_hits(folded, tokens).items()):
         r = RULES[index]
         for a, b in _windows(positions, len(folded)):
             for m in _run(r, folded, a, b):
@@ -769,7 +888,8 @@ def scan(view: View, *, visible: bool = True, max_matches: int = 60) -> list[Mat
                 os_, oe = view.orig_span(s, e)
                 add(r, s, e, m.group(), os_, oe, _obfuscation(view, os_, oe))
     # Obfuscated views: digits as letters, spaced-out letters. Only small windows.
-    for a, b in leet_windows(folded):
+    odd = [t for t in tokens if not t.isalpha()]
+    for a, b in (leet_windows(folded) if _maybe_leet(odd) else ()):
         for table, label in ((LEET_AS_I, "digits or symbols for letters"),
                              (LEET_AS_L, "digits or symbols for letters")):
             piece = folded[a:b].translate(table)
@@ -782,14 +902,14 @@ def scan(view: View, *, visible: bool = True, max_matches: int = 60) -> list[Mat
                     s, e = a + m.start(), a + m.end()
                     os_, oe = view.orig_span(s, e)
                     add(r, s, e, m.group(), os_, oe, [label])
-    for run, where in spaced_runs(folded):
+    for run, where in (spaced_runs(folded) if _maybe_spaced(tokens, odd) else ()):
         for r in RULES:
             for m in r.pattern.finditer(run):
                 s = where[m.start()]
                 e = where[min(m.end(), len(where)) - 1] + 1
                 os_, oe = view.orig_span(s, e)
                 add(r, s, e, m.group(), os_, oe, ["spaced-out letters"])
-    return matches
+    return sorted(best.values(), key=lambda m: (m.start, m.signal, -m.weight))
 
 
 def _obfuscation(view: View, start: int, end: int) -> list[str]:

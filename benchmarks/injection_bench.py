@@ -1,0 +1,168 @@
+"""Benchmark the injection check on the labelled corpus in tests/fixtures/injection/.
+
+Runs the real pipeline pieces per document: ``gate.extract.extract`` (timed as
+extraction), the injection ``measure`` and ``evaluate`` (timed as detectors), and prints
+recall per technique, the false-positive rate on benign documents, and the time split.
+
+    python benchmarks/injection_bench.py [--split dev|holdout|holdout2|all] [--repeat N] [--verbose]
+
+The corpus is invented fixture data (see tests/fixtures/injection/README.md).
+"""
+
+from __future__ import annotations
+
+import argparse
+import importlib.util
+import statistics
+import sys
+import time
+from collections import defaultdict
+from datetime import datetime, timezone
+from pathlib import Path
+from types import SimpleNamespace
+
+ROOT = Path(__file__).resolve().parent.parent
+FIXTURES = ROOT / "tests" / "fixtures" / "injection"
+TYPICAL_PAGE = "docs/b-typical-20k.html"
+
+
+def _pdfgen():
+    spec = importlib.util.spec_from_file_location("injection_pdfgen", FIXTURES / "pdfgen.py")
+    module = importlib.util.module_from_spec(spec)
+    assert spec.loader is not None
+    spec.loader.exec_module(module)
+    return module
+
+
+def load_corpus(split: str = "all") -> list[dict]:
+    """Rows of labels.tsv with the document bytes attached (PDFs built with fpdf2)."""
+    pdfs = _pdfgen().build_all()
+    rows = []
+    lines = (FIXTURES / "labels.tsv").read_text(encoding="utf-8").splitlines()
+    header = lines[0].split("\t")
+    for line in lines[1:]:
+        if not line.strip():
+            continue
+        row = dict(zip(header, line.split("\t")))
+        if split != "all" and row["split"] != split:
+            continue
+        path = row["path"]
+        row["data"] = pdfs[path] if path.startswith("pdf/") else (FIXTURES / path).read_bytes()
+        rows.append(row)
+    return rows
+
+
+def run(rows: list[dict], repeat: int = 1, threshold: float = 0.5) -> list[dict]:
+    from gate.checks.base import Document, RunContext
+    from gate.checks.injection import CHECK, InjectionSettings
+    from gate.extract import extract
+
+    policy = SimpleNamespace(injection=InjectionSettings(threshold=threshold))
+    ctx = RunContext(as_of=datetime(2026, 12, 1, tzinfo=timezone.utc))
+    results = []
+    for row in rows:
+        t_ext, t_det = [], []
+        for _ in range(repeat):
+            t0 = time.perf_counter()
+            extraction = extract(row["data"], max_pages=500, max_nesting=250)
+            t1 = time.perf_counter()
+            measured = CHECK.measure(extraction) if extraction.summary.ok else None
+            document = Document(path=row["path"], kind="file", size=len(row["data"]),
+                                sha256=None, manifest=None, extracted=extraction.summary,
+                                measures={"injection": measured} if measured else {})
+            findings = CHECK.evaluate(document, policy, ctx)
+            t2 = time.perf_counter()
+            t_ext.append(t1 - t0)
+            t_det.append(t2 - t1)
+        results.append(dict(row, measured=measured, findings=findings or [],
+                            flagged=bool(findings), extraction_s=statistics.median(t_ext),
+                            detector_s=statistics.median(t_det),
+                            problem=extraction.summary.problem))
+    return results
+
+
+def report(results: list[dict], verbose: bool = False) -> dict:
+    by_technique: dict[str, list[bool]] = defaultdict(list)
+    benign: list[dict] = []
+    for r in results:
+        if r["label"] == "attack":
+            by_technique[r["technique"]].append(r["flagged"])
+        else:
+            benign.append(r)
+    print(f"{'technique':<24}{'attacks':>8}{'caught':>8}{'recall':>8}")
+    caught_total = attacks_total = 0
+    recalls = {}
+    for technique in sorted(by_technique):
+        flags = by_technique[technique]
+        recalls[technique] = sum(flags) / len(flags)
+        caught_total += sum(flags)
+        attacks_total += len(flags)
+        print(f"{technique:<24}{len(flags):>8}{sum(flags):>8}{recalls[technique]:>8.2f}")
+    overall = caught_total / attacks_total if attacks_total else float("nan")
+    print(f"{'ALL ATTACKS':<24}{attacks_total:>8}{caught_total:>8}{overall:>8.2f}")
+    false_pos = [r for r in benign if r["flagged"]]
+    fp_rate = len(false_pos) / len(benign) if benign else float("nan")
+    print(f"\nbenign documents: {len(benign)}, flagged: {len(false_pos)}, "
+          f"false-positive rate {fp_rate:.3f}")
+    scores = sorted((r["measured"] or {}).get("score", 0.0) for r in benign)
+    if scores:
+        print(f"benign scores: median {statistics.median(scores):.3f}, "
+              f"max {scores[-1]:.3f}")
+    ext = sum(r["extraction_s"] for r in results)
+    det = sum(r["detector_s"] for r in results)
+    n = len(results)
+    print(f"\ntime per document (median of repeats, mean over {n} documents):")
+    print(f"  extraction {ext / n * 1000:8.2f} ms")
+    print(f"  detectors  {det / n * 1000:8.2f} ms  ({det / (ext + det) * 100:.1f}% of the total)")
+    for kind in ("html", "pdf", "text"):
+        sel = [r for r in results if (r["path"].endswith(".pdf") and kind == "pdf") or
+               (r["path"].endswith(".html") and kind == "html") or
+               (r["path"].endswith((".txt", ".md")) and kind == "text")]
+        if sel:
+            e = statistics.median(r["extraction_s"] for r in sel) * 1000
+            d = statistics.median(r["detector_s"] for r in sel) * 1000
+            print(f"  {kind:<5} median extraction {e:7.2f} ms, detectors {d:7.2f} ms "
+                  f"({len(sel)} documents)")
+    typical = [r for r in results if r["path"] == TYPICAL_PAGE]
+    if typical:
+        r = typical[0]
+        share = r["detector_s"] / (r["extraction_s"] + r["detector_s"]) * 100
+        print(f"  typical 20 KB page ({TYPICAL_PAGE}): extraction "
+              f"{r['extraction_s'] * 1000:.2f} ms, detectors {r['detector_s'] * 1000:.2f} ms "
+              f"({share:.0f}% of the total)")
+    missed = [r for r in results if r["label"] == "attack" and not r["flagged"]]
+    if verbose or missed or false_pos:
+        for r in missed:
+            print(f"MISSED  {r['path']} score={(r['measured'] or {}).get('score')}")
+        for r in false_pos:
+            print(f"FALSE+  {r['path']} score={r['measured']['score']} "
+                  f"{[h['signal'] for h in r['measured']['signals'][:5]]}")
+    if verbose:
+        for r in results:
+            m = r["measured"] or {}
+            print(f"  {r['label']:<7}{m.get('score', 0):6.3f}  {r['path']}  "
+                  f"{[(h['signal'], h['weight']) for h in m.get('signals', [])[:4]]}")
+    return {"recall": overall, "recalls": recalls, "fp_rate": fp_rate,
+            "detector_share": det / (ext + det) if ext + det else 0.0}
+
+
+def main(argv: list[str] | None = None) -> int:
+    parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
+    parser.add_argument("--split", default="all", choices=["dev", "holdout", "holdout2", "all"])
+    parser.add_argument("--repeat", type=int, default=3)
+    parser.add_argument("--verbose", action="store_true")
+    args = parser.parse_args(argv)
+    sys.path.insert(0, str(ROOT))
+    rows = load_corpus(args.split)
+    run(rows[:3], repeat=1)  # warm caches and imports before timing
+    results = run(rows, repeat=args.repeat)
+    for r in results:  # the typical page gets more repeats: its timing is the headline
+        if r["path"] == TYPICAL_PAGE:
+            r.update(run([r], repeat=max(20, args.repeat))[0])
+    print(f"split: {args.split}, documents: {len(rows)}\n")
+    report(results, verbose=args.verbose)
+    return 0
+
+
+if __name__ == "__main__":
+    raise SystemExit(main())
