@@ -161,6 +161,15 @@ def run_command(
         "--incremental", help="The inbox holds only new or changed documents: do not "
                               "remove earlier documents that are missing from it.")] = False,
     quiet: Annotated[bool, typer.Option("--quiet", "-q", help="No progress bar.")] = False,
+    cluster: Annotated[Optional[str], typer.Option(  # noqa: UP007
+        "--cluster", help="Run extraction on a Dask cluster: the scheduler address, e.g. "
+                          "tcp://10.0.0.5:8786 (decisions stay in this process).")] = None,
+    index: Annotated[Optional[str], typer.Option(  # noqa: UP007
+        "--index", help="Keep the near-duplicate index in Redis (redis://HOST:PORT/DB), "
+                        "shared with other output folders using the same --index-name.")
+    ] = None,
+    index_name: Annotated[str, typer.Option(
+        "--index-name", help="Name of the shared index in Redis.")] = "default",
     max_quarantine_rate: Annotated[Optional[float], typer.Option(  # noqa: UP007
         "--max-quarantine-rate", min=0.0, max=1.0,
         help="Exit 3 when more than this share of documents is quarantined (the run still "
@@ -189,7 +198,8 @@ def run_command(
         loaded = load_policy(policy)
         options = RunOptions(inbox=inbox, policy=loaded, out=out, manifest=manifest,
                              as_of=when, workers=workers or os.cpu_count() or 1,
-                             incremental=incremental)
+                             incremental=incremental, cluster=cluster, index=index,
+                             index_name=index_name)
         try:
             result = run_pipeline(options, reporter)
         finally:

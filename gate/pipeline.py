@@ -41,7 +41,8 @@ from gate.decide import decide, outcome
 from gate.discovery import Entry, walk
 from gate.errors import InboxError, OutputError, StateError
 from gate.extract.model import Extracted
-from gate.extract.pool import Failure, WorkerPool
+from gate.cluster import executor
+from gate.extract.pool import Failure
 from gate.extract.sniff import sniff
 from gate.findings import CODES, Finding, internal_error
 from gate.intake import Intake, read_entry
@@ -51,7 +52,7 @@ from gate.report import build as build_report
 from gate.report import dumps as dumps_report
 from gate.report import dumps_line, reason_json
 from gate.state import State, open_state
-from gate.work import Params, process, warm_up
+from gate.work import Params, warm_up
 
 CACHE_BATCH = 64
 
@@ -86,6 +87,9 @@ class RunOptions:
     as_of: datetime | None = None
     workers: int = 1
     incremental: bool = False
+    cluster: str | None = None  # a Dask scheduler address for the per-document stage
+    index: str | None = None  # a redis:// URL for a shared near-duplicate index
+    index_name: str | None = None
 
 
 @dataclass
@@ -202,6 +206,16 @@ def _os_message(err: OSError, out: Path) -> str:
 
 def _run_locked(opts: RunOptions, inbox: Path, out: Path, manifest: manifest_mod.Manifest,
                 state: State, reporter: Reporter) -> RunResult:
+    index = _open_index(opts, state, opts.policy)
+    try:
+        return _run_indexed(opts, inbox, out, manifest, state, reporter, index)
+    finally:
+        if index is not None:
+            index.unlock()
+
+
+def _run_indexed(opts: RunOptions, inbox: Path, out: Path, manifest: manifest_mod.Manifest,
+                 state: State, reporter: Reporter, index: Any) -> RunResult:
     blobs = Blobs(out / "state" / "blobs")
     placer = Placer(out, state, blobs)
     policy = opts.policy
@@ -211,7 +225,7 @@ def _run_locked(opts: RunOptions, inbox: Path, out: Path, manifest: manifest_mod
     unfinished = state.unfinished_run()
     if unfinished and unfinished["state"] == "decided":
         reporter.note(f"completing the interrupted run {unfinished['run_id']}")
-        _finish(state, placer, blobs, out, unfinished["run_id"], reporter)
+        _finish(state, placer, blobs, out, unfinished["run_id"], reporter, index)
         if unfinished["info"].get("base") == base and (
                 opts.as_of is None or dates.parse_as_of(unfinished["as_of"]) == opts.as_of):
             summary = json.loads(json.dumps(_load_summary(state, unfinished["run_id"])))
@@ -237,12 +251,43 @@ def _run_locked(opts: RunOptions, inbox: Path, out: Path, manifest: manifest_mod
         state.begin_run(run_id, seq, _fingerprint(base, as_of_text), as_of_text, mode,
                         {"base": base, "inbox": str(inbox)})
     ctx = RunContext(as_of=as_of)
+    return _run_body(opts, inbox, out, manifest, state, reporter, policy, placer, blobs,
+                     ctx, run_id, seq, mode, as_of_text, resume, index)
+
+
+def _open_index(opts: RunOptions, state: State, policy: LoadedPolicy) -> Any:
+    """The shared Redis index, when --index is given and duplicates are checked."""
+    if not opts.index or policy.policy.duplicates is None:
+        return None
+    from gate.index import SharedIndex, display_url
+    index = SharedIndex(opts.index, opts.index_name or "default", state.meta("folder_id") or
+                        "folder", policy.policy.duplicates.threshold)
+    index.lock()
+    state.set_meta("index", json.dumps({"url": display_url(opts.index),
+                                        "name": opts.index_name or "default",
+                                        "threshold": policy.policy.duplicates.threshold}))
+    return index
+
+
+def stored_index(state: State) -> Any:
+    """The shared index this folder last used (for review actions), or None."""
+    saved = state.meta("index")
+    if not saved:
+        return None
+    from gate.index import SharedIndex
+    info = json.loads(saved)
+    return SharedIndex(info["url"], info["name"], state.meta("folder_id") or "folder",
+                       info["threshold"])
+
+
+def _run_body(opts, inbox, out, manifest, state, reporter, policy, placer, blobs, ctx,
+              run_id, seq, mode, as_of_text, resume, index) -> RunResult:
     limits = policy.policy.limits
     params = Params(max_pages=limits.max_pages, max_nesting=limits.max_nesting,
                     timeout_s=limits.timeout_s, memory_mb=limits.memory_mb)
 
     items = _extract_all(inbox, manifest, params, limits.max_bytes, opts.workers, state,
-                         blobs, reporter)
+                         blobs, reporter, opts.cluster)
     reporter.stage("checking", None)
     documents, findings, outcomes = _check_documents(items, policy, ctx)
     releases = state.releases()
@@ -250,7 +295,7 @@ def _run_locked(opts: RunOptions, inbox: Path, out: Path, manifest: manifest_mod
     corpus_rows = state.corpus()
     removed_rows, superseded = _corpus_checks(items, documents, findings, outcomes,
                                               corpus_rows, policy.policy, ctx, seq, mode,
-                                              state)
+                                              state, index)
     _apply_releases(items, findings, releases)
     run_info = {"id": run_id, "as_of": as_of_text, "mode": mode, "inbox": str(inbox),
                 "policy": {"name": policy.name, "path": policy.path, "sha256": policy.sha256,
@@ -258,7 +303,8 @@ def _run_locked(opts: RunOptions, inbox: Path, out: Path, manifest: manifest_mod
                 "manifest": {"path": manifest.source, "sha256": manifest.sha256,
                              "records": len(manifest.records)}}
     _commit(state, placer, blobs, out, run_id, seq, run_info, items, documents, findings,
-            outcomes, corpus_rows, removed_rows, superseded, manifest, policy, mode, reporter)
+            outcomes, corpus_rows, removed_rows, superseded, manifest, policy, mode, reporter,
+            index)
     summary = _load_summary(state, run_id)
     return RunResult(run_id, out / "report.json", summary, resumed=resume is not None)
 
@@ -268,7 +314,7 @@ def _run_locked(opts: RunOptions, inbox: Path, out: Path, manifest: manifest_mod
 
 def _extract_all(inbox: Path, manifest: manifest_mod.Manifest, params: Params,
                  max_bytes: int, workers: int, state: State, blobs: Blobs,
-                 reporter: Reporter) -> list[Item]:
+                 reporter: Reporter, cluster: str | None = None) -> list[Item]:
     entries = list(walk(inbox))
     reporter.stage("extracting", len(entries))
     fingerprint = params.fingerprint()
@@ -307,11 +353,9 @@ def _extract_all(inbox: Path, manifest: manifest_mod.Manifest, params: Params,
                 continue
             yield item
 
-    if workers > 0:
+    if not cluster:
         warm_up()
-    pool = WorkerPool(process, workers=max(1, workers), timeout_s=params.timeout_s,
-                      memory_bytes=params.memory_mb * 1024 * 1024)
-    with pool:
+    with executor(cluster, workers, params) as pool:
         for item, result in pool.run(
                 (item, (item.entry.path, item.intake.data, params)) for item in tasks()):
             _absorb(item, result)
@@ -422,7 +466,7 @@ def _trust_of(document: Document, policy: Any) -> int:
 
 
 def _corpus_checks(items, documents, findings, outcomes, corpus_rows, policy, ctx, seq,
-                   mode, state: State):
+                   mode, state: State, index: Any = None):
     """Run the corpus checks; returns (stored rows to remove, superseded stored rows)."""
     in_batch = {item.doc_id for item in items}
     stored = {row["doc_id"]: row for row in corpus_rows}
@@ -459,7 +503,16 @@ def _corpus_checks(items, documents, findings, outcomes, corpus_rows, policy, ct
                       item.index),
                 in_batch=True, accepted_before=item.doc_id in stored,
                 candidate=decide(found, item.policy).decision == "accepted"))
-        if mode == "incremental":
+        if index is not None:
+            # only the stored documents that are candidates of this batch, from Redis
+            fetched = index.candidates(dup_items, batch_ids=in_batch,
+                                       include_own=mode == "incremental")
+            for extra_item in fetched:
+                if not extra_item.fixed:
+                    keys[extra_item.key] = stored[extra_item.key]["cache_key"] \
+                        if extra_item.key in stored else None
+            dup_items.extend(fetched)
+        elif mode == "incremental":
             for row in corpus_rows:
                 if row["doc_id"] in in_batch:
                     continue
@@ -470,8 +523,9 @@ def _corpus_checks(items, documents, findings, outcomes, corpus_rows, policy, ct
                     trust=row["trust"],
                     date=datetime.fromisoformat(row["date"]) if row["date"] else None,
                     seen=(row["first_seen"], -1), in_batch=False, accepted_before=True))
-        result = duplicate_check.evaluate(dup_items, settings,
-                                          text_of=lambda key: state.cache_text(keys[key]))
+        result = duplicate_check.evaluate(
+            dup_items, settings,
+            text_of=lambda key: state.cache_text(keys[key]) if keys.get(key) else None)
         for item, found, marks in zip(items, findings, outcomes):
             if marks.get(check.id) in ("n/a", "fail"):
                 continue
@@ -573,7 +627,7 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
             findings: list[list[Finding]], outcomes: list[dict[str, str]],
             corpus_rows: list[dict], removed_rows: list[dict],
             superseded: dict[str, tuple[dict, Finding]], manifest: manifest_mod.Manifest,
-            policy: LoadedPolicy, mode: str, reporter: Reporter) -> None:
+            policy: LoadedPolicy, mode: str, reporter: Reporter, index: Any = None) -> None:
     reporter.stage("committing", None)
     pol = policy.policy
     ctx = RunContext(as_of=dates.parse_as_of(run_info["as_of"]))
@@ -702,6 +756,8 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
                               "mode": mode, "policy": run_info["policy"],
                               "summary": summary})
         report["run"]["audit_head"] = audit.append(conn, audit_entries)
+        if index is not None:
+            report["run"]["index"] = {"url": index.url, "name": index.name}
         conn.execute("DELETE FROM changes WHERE run_id = ?", (run_id,))
         conn.executemany("INSERT INTO changes (run_id, seq, line) VALUES (?, ?, ?)",
                          [(run_id, i, dumps_line(c)) for i, c in enumerate(changes)])
@@ -709,11 +765,11 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
                      (f"report:{run_id}", json.dumps(report, sort_keys=True)))
         conn.execute("UPDATE runs SET state = 'decided', summary = ? WHERE run_id = ?",
                      (json.dumps(summary, sort_keys=True), run_id))
-    _finish(state, placer, blobs, out, run_id, reporter)
+    _finish(state, placer, blobs, out, run_id, reporter, index)
 
 
 def _finish(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str,
-            reporter: Reporter) -> None:
+            reporter: Reporter, index: Any = None) -> None:
     """Apply the run's outstanding placements, then write the report and change set."""
     pending = [p for p in state.pending_placements() if p[0] == run_id]
     reporter.stage("placing", len(pending))
@@ -728,6 +784,9 @@ def _finish(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str,
             done = []
     os.sync()
     state.mark_placed(done)
+    if index is not None:
+        reporter.stage("indexing", None)
+        index.sync(state.corpus())
     row = state.conn.execute("SELECT value FROM meta WHERE key = ?",
                              (f"report:{run_id}",)).fetchone()
     if row is not None:  # review actions change the folders but write no run report

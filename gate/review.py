@@ -230,7 +230,7 @@ def act(out: Path, action: str, refs: list[str], *, note: str, by: str | None = 
 
 def _act_locked(out: Path, state: State, action: str, refs: list[str], note: str,
                 reviewer: str, at: str) -> ActionResult:
-    from gate.pipeline import _finish, _fingerprint, _placement_fingerprint
+    from gate.pipeline import _finish, _fingerprint, _placement_fingerprint, stored_index
     blobs = Blobs(out / "state" / "blobs")
     placer = Placer(out, state, blobs)
     pending = state.unfinished_run()
@@ -318,7 +318,14 @@ def _act_locked(out: Path, state: State, action: str, refs: list[str], note: str
         conn.executemany("INSERT INTO changes (run_id, seq, line) VALUES (?, ?, ?)",
                          [(review_id, i, dumps_line(c)) for i, c in enumerate(changes)])
         audit.append(conn, audit_entries)
-    _finish(state, placer, blobs, out, review_id, _Quiet())
+    index = stored_index(state)  # keep a shared near-duplicate index in line, if one is used
+    if index is not None:
+        index.lock()
+    try:
+        _finish(state, placer, blobs, out, review_id, _Quiet(), index)
+    finally:
+        if index is not None:
+            index.unlock()
     return ActionResult(review_id, action, tuple(ids), tuple(paths))
 
 

@@ -15,6 +15,7 @@ from __future__ import annotations
 import base64
 import json
 import sqlite3
+import uuid
 import zlib
 from collections.abc import Iterable, Iterator
 from contextlib import contextmanager
@@ -228,6 +229,14 @@ class State:
                 conn.execute("UPDATE runs SET state = ?, summary = ? WHERE run_id = ?",
                              (state, json.dumps(summary, sort_keys=True), run_id))
 
+    def meta(self, key: str) -> str | None:
+        row = self.conn.execute("SELECT value FROM meta WHERE key = ?", (key,)).fetchone()
+        return row[0] if row else None
+
+    def set_meta(self, key: str, value: str) -> None:
+        with self.transaction() as conn:
+            conn.execute("INSERT OR REPLACE INTO meta (key, value) VALUES (?, ?)", (key, value))
+
     def completed_runs(self) -> int:
         return self.conn.execute("SELECT COUNT(*) FROM runs WHERE state = 'complete'"
                                  ).fetchone()[0]
@@ -330,4 +339,5 @@ def open_state(path: Path) -> State:
         conn.execute(f"PRAGMA application_id = {APP_ID}")
         conn.execute("INSERT INTO meta VALUES ('schema_version', ?)", (str(SCHEMA_VERSION),))
         conn.execute("INSERT INTO meta VALUES ('created_by', ?)", (f"gate {__version__}",))
+        conn.execute("INSERT INTO meta VALUES ('folder_id', ?)", (uuid.uuid4().hex[:16],))
     return State(conn, path)

@@ -178,6 +178,7 @@ class Item:
     in_batch: bool = True  # False: accepted in an earlier run and not in this inbox
     accepted_before: bool = False  # accepted in an earlier run (in this inbox or not)
     candidate: bool = True  # False: already held by another check
+    fixed: bool = False  # accepted by another output folder sharing the index: always kept
 
 
 @dataclass
@@ -189,10 +190,12 @@ class Outcome:
 
 def _rank(item: Item) -> tuple:
     date = item.date.timestamp() if item.date is not None else float("-inf")
-    return (-item.trust, -date, item.seen, item.key)
+    return (not item.fixed, -item.trust, -date, item.seen, item.key)
 
 
 def _why(kept: Item, other: Item) -> str:
+    if kept.fixed:
+        return " (another output folder sharing the index accepted it first)"
     if kept.trust != other.trust:
         return f" (its source is more trusted: trust {kept.trust} over {other.trust})"
     if kept.date and (other.date is None or kept.date > other.date):

@@ -107,13 +107,16 @@ class WorkerPool:
     """Run ``fn(task)`` for each task in worker processes; see the module docstring."""
 
     def __init__(self, fn: Callable[[Any], Any], *, workers: int, timeout_s: float,
-                 memory_bytes: int | None, recycle_after: int = 250):
+                 memory_bytes: int | None, recycle_after: int = 250,
+                 start_method: str = "fork"):
         self.fn = fn
         self.size = max(1, workers)
         self.timeout_s = timeout_s
         self.memory_bytes = memory_bytes
         self.recycle_after = recycle_after
-        self._ctx = multiprocessing.get_context("fork")
+        # fork after the heavy imports is fastest; a multi-threaded host (a Dask worker)
+        # must use "spawn" instead
+        self._ctx = multiprocessing.get_context(start_method)
         self._workers: list[_Worker] = []
 
     def __enter__(self) -> WorkerPool:

@@ -1,0 +1,199 @@
+"""A shared near-duplicate index in Redis (``--index redis://host:port/db``).
+
+By default the duplicate check builds its MinHash LSH in memory from the corpus state of
+the output folder. With ``--index``, the sketches of accepted documents live in Redis
+through datasketch's Redis storage, under a name (``--index-name``, default ``default``),
+so that:
+
+* a run only fetches the stored documents that are LSH candidates of its batch, instead of
+  loading the whole corpus, and
+* several output folders (several teams' inboxes, or shards of one) share one index: a
+  document accepted by one folder is a known keeper for all of them.
+
+Decisions for one folder are the same as without ``--index``. Documents another folder
+accepted are fixed keepers: a copy of one is held here, and gate never supersedes another
+folder's documents. The index is brought in line with the folder's corpus state at the end
+of every run and review, as part of committing (a killed run re-syncs when it resumes).
+Runs sharing an index must not overlap; a lock in Redis refuses a second one.
+
+Keys: ``gate:<name>:meta`` (hash: member -> JSON), ``gate:<name>:owner:<folder>`` (set),
+``gate:<name>:sha:<digest>`` and ``gate:<name>:text:<digest>`` (sets, exact copies),
+``gate:<name>:lock``, and datasketch's bucket keys under a basename that encodes the
+permutations, bands, rows, scheme and seed (an index built with other parameters is never
+read by mistake).
+"""
+
+from __future__ import annotations
+
+import json
+import os
+import socket
+from typing import Any
+from urllib.parse import urlsplit
+
+from gate.checks import duplicate as dup
+from gate.errors import LockError, UsageError
+
+LOCK_SECONDS = 6 * 3600
+
+
+def _connection(url: str) -> dict[str, Any]:
+    parts = urlsplit(url)
+    if parts.scheme != "redis" or not parts.hostname:
+        raise UsageError(f"--index {url!r} must look like redis://HOST:PORT/DB")
+    try:
+        db = int(parts.path.lstrip("/") or 0)
+    except ValueError:
+        raise UsageError(f"--index {url!r}: the database must be a number") from None
+    return {"host": parts.hostname, "port": parts.port or 6379, "db": db,
+            "password": parts.password or os.environ.get("GATE_REDIS_PASSWORD"),
+            "socket_connect_timeout": 5, "socket_timeout": 30}
+
+
+def display_url(url: str) -> str:
+    """The URL without a password, for state and reports."""
+    parts = urlsplit(url)
+    host = parts.hostname or ""
+    port = f":{parts.port}" if parts.port else ""
+    return f"{parts.scheme}://{host}{port}{parts.path}"
+
+
+class SharedIndex:
+    """The Redis-backed corpus index for one output folder (``owner``)."""
+
+    def __init__(self, url: str, name: str, owner: str, threshold: float):
+        try:
+            import redis
+        except ImportError:
+            raise UsageError("--index needs the 'redis' package: pip install "
+                             "'gate[cluster]'") from None
+        from datasketch import MinHashLSH
+        self.config = _connection(url)
+        self.url = display_url(url)
+        self.name = name
+        self.owner = owner
+        self.prefix = f"gate:{name}:"
+        self.redis = redis.Redis(**self.config)
+        try:
+            self.redis.ping()
+        except redis.RedisError as err:
+            raise UsageError(f"cannot reach the index at {self.url} ({err}); start Redis or "
+                             "run without --index.") from None
+        bands, rows = dup.band_params(threshold)
+        basename = (f"gate:{name}:lsh:{dup.NUM_PERM}:{bands}x{rows}:{dup.SCHEME}:"
+                    f"{dup.SEED}").encode()
+        self.lsh = MinHashLSH(num_perm=dup.NUM_PERM, params=(bands, rows),
+                              storage_config={"type": "redis", "basename": basename,
+                                              "redis": {k: v for k, v in self.config.items()
+                                                        if v is not None}})
+        self._token = f"{owner}:{socket.gethostname()}:{os.getpid()}"
+
+    # -- one run at a time -------------------------------------------------------------
+
+    def lock(self) -> None:
+        key = self.prefix + "lock"
+        if not self.redis.set(key, self._token, nx=True, ex=LOCK_SECONDS):
+            holder = self.redis.get(key)
+            holder = holder.decode(errors="replace") if holder else "unknown"
+            if holder.split(":")[0] == self.owner:  # our own folder, a killed earlier run
+                self.redis.set(key, self._token, ex=LOCK_SECONDS)
+                return
+            raise LockError(f"the index {self.name!r} at {self.url} is in use by another gate "
+                            f"run ({holder}); runs sharing an index must not overlap. It "
+                            f"frees itself within {LOCK_SECONDS // 3600} h if that run died.")
+
+    def unlock(self) -> None:
+        key = self.prefix + "lock"
+        if self.redis.get(key) == self._token.encode():
+            self.redis.delete(key)
+
+    # -- queries -----------------------------------------------------------------------
+
+    def _member(self, doc_id: str) -> str:
+        return f"{self.owner}:{doc_id}"
+
+    def candidates(self, batch: list[dup.Item], *, batch_ids: set[str],
+                   include_own: bool) -> list[dup.Item]:
+        """Stored documents that could be duplicates of the batch, as duplicate Items."""
+        members: set[str] = set()
+        pipe = self.redis.pipeline(transaction=False)
+        for item in batch:
+            pipe.smembers(self.prefix + "sha:" + item.sha256)
+            if item.text_sha256:
+                pipe.smembers(self.prefix + "text:" + item.text_sha256)
+        for found in pipe.execute():
+            members.update(m.decode() for m in found)
+        for item in batch:
+            if item.minhash is not None:
+                for key in self.lsh.query(dup.lean(item.minhash)):
+                    members.add(key.decode() if isinstance(key, bytes) else key)
+        out: list[dup.Item] = []
+        wanted = sorted(members)
+        metas = self.redis.hmget(self.prefix + "meta", wanted) if wanted else []
+        for member, raw in zip(wanted, metas):
+            if raw is None:
+                continue
+            meta = json.loads(raw)
+            owner, _, doc_id = member.partition(":")
+            own = owner == self.owner
+            if own and (not include_own or doc_id in batch_ids):
+                continue
+            from datetime import datetime
+            out.append(dup.Item(
+                key=doc_id if own else member, path=meta["path"] if own else
+                f"{meta['path']} (accepted in {owner})", sha256=meta["sha256"],
+                text_sha256=meta.get("text_sha256"),
+                minhash=bytes.fromhex(meta["minhash"]) if meta.get("minhash") else None,
+                trust=meta["trust"], date=datetime.fromisoformat(meta["date"])
+                if meta.get("date") else None, seen=(meta["first_seen"], -1), in_batch=False,
+                accepted_before=True, fixed=not own))
+        return out
+
+    # -- keeping it in line with the folder's corpus -------------------------------------
+
+    def sync(self, corpus_rows: list[dict[str, Any]]) -> tuple[int, int]:
+        """Make the index hold exactly this folder's accepted corpus; (added, removed)."""
+        owner_key = self.prefix + "owner:" + self.owner
+        current = {m.decode() for m in self.redis.smembers(owner_key)}
+        desired = {self._member(row["doc_id"]): row for row in corpus_rows}
+        metas = self.redis.hmget(self.prefix + "meta", sorted(current)) if current else []
+        stale = set(current) - set(desired)
+        for member, raw in zip(sorted(current), metas):
+            if member in desired and raw is not None:
+                if json.loads(raw).get("sha256") != desired[member]["sha256"]:
+                    stale.add(member)
+        for member, raw in zip(sorted(current), metas):
+            if member not in stale:
+                continue
+            meta = json.loads(raw) if raw else {}
+            if member in self.lsh:
+                self.lsh.remove(member)
+            pipe = self.redis.pipeline()
+            pipe.hdel(self.prefix + "meta", member)
+            pipe.srem(owner_key, member)
+            if meta.get("sha256"):
+                pipe.srem(self.prefix + "sha:" + meta["sha256"], member)
+            if meta.get("text_sha256"):
+                pipe.srem(self.prefix + "text:" + meta["text_sha256"], member)
+            pipe.execute()
+        added = 0
+        with self.lsh.insertion_session() as session:
+            for member, row in sorted(desired.items()):
+                if member in current and member not in stale:
+                    continue
+                meta = {"path": row["path"], "sha256": row["sha256"],
+                        "text_sha256": row["text_sha256"],
+                        "minhash": row["minhash"].hex() if row["minhash"] else None,
+                        "trust": row["trust"], "date": row["date"],
+                        "first_seen": row["first_seen"]}
+                pipe = self.redis.pipeline()
+                pipe.hset(self.prefix + "meta", member, json.dumps(meta, sort_keys=True))
+                pipe.sadd(owner_key, member)
+                pipe.sadd(self.prefix + "sha:" + row["sha256"], member)
+                if row["text_sha256"]:
+                    pipe.sadd(self.prefix + "text:" + row["text_sha256"], member)
+                pipe.execute()
+                if row["minhash"]:
+                    session.insert(member, dup.lean(row["minhash"]), check_duplication=False)
+                added += 1
+        return added, len(stale)

@@ -1,0 +1,169 @@
+"""Scale-out mode against real components on loopback: a Redis server (Debian's
+redis-server) and a Dask scheduler with two workers, all started here. Decisions must be
+identical to the local mode.
+
+Skipped when redis-server or the dask command is missing, unless GATE_REQUIRE_SCALEOUT=1
+(CI sets it after installing them), in which case their absence is a failure.
+"""
+
+import json
+import os
+import shutil
+import signal
+import socket
+import subprocess
+import sys
+import time
+from datetime import UTC, datetime
+from pathlib import Path
+
+import pytest
+
+from gate import review
+from gate.pipeline import RunOptions, run
+from gate.policy import load_policy
+
+ROOT = Path(__file__).resolve().parent.parent
+INBOX = ROOT / "sample_docs" / "inbox"
+POLICY = ROOT / "policies" / "demo.yaml"
+AS_OF = datetime(2026, 12, 1, tzinfo=UTC)
+DASK = Path(sys.executable).with_name("dask")
+REQUIRED = os.environ.get("GATE_REQUIRE_SCALEOUT") == "1"
+
+
+def _missing() -> str | None:
+    if shutil.which("redis-server") is None:
+        return "redis-server is not installed (apt-get install redis-server)"
+    if not DASK.exists():
+        return "the dask command is not installed (pip install distributed)"
+    return None
+
+
+def _port() -> int:
+    with socket.socket() as sock:
+        sock.bind(("127.0.0.1", 0))
+        return sock.getsockname()[1]
+
+
+def _wait_port(port: int, seconds: float = 30) -> None:
+    deadline = time.monotonic() + seconds
+    while time.monotonic() < deadline:
+        try:
+            with socket.create_connection(("127.0.0.1", port), timeout=1):
+                return
+        except OSError:
+            time.sleep(0.2)
+    raise RuntimeError(f"nothing listens on 127.0.0.1:{port}")
+
+
+@pytest.fixture(scope="module")
+def services(tmp_path_factory):
+    why = _missing()
+    if why:
+        if REQUIRED:
+            pytest.fail(why)
+        pytest.skip(why)
+    work = tmp_path_factory.mktemp("services")
+    redis_port, sched_port = _port(), _port()
+    procs = []
+    try:
+        procs.append(subprocess.Popen(
+            ["redis-server", "--port", str(redis_port), "--bind", "127.0.0.1", "--save", "",
+             "--appendonly", "no", "--dir", str(work)], stdout=subprocess.DEVNULL,
+            stderr=subprocess.DEVNULL, start_new_session=True))
+        procs.append(subprocess.Popen(
+            [str(DASK), "scheduler", "--host", "127.0.0.1", "--port", str(sched_port),
+             "--no-dashboard"], stdout=subprocess.DEVNULL, stderr=subprocess.DEVNULL,
+            start_new_session=True))
+        _wait_port(redis_port)
+        _wait_port(sched_port)
+        procs.append(subprocess.Popen(
+            [str(DASK), "worker", f"tcp://127.0.0.1:{sched_port}", "--nworkers", "2",
+             "--nthreads", "1", "--no-dashboard", "--local-directory", str(work)],
+            stdout=subprocess.DEVNULL, stderr=subprocess.DEVNULL, start_new_session=True))
+        from distributed import Client
+        with Client(f"tcp://127.0.0.1:{sched_port}", timeout=30) as client:
+            client.wait_for_workers(2, timeout=60)
+        yield {"redis": f"redis://127.0.0.1:{redis_port}/0",
+               "cluster": f"tcp://127.0.0.1:{sched_port}"}
+    finally:
+        for proc in reversed(procs):
+            try:
+                os.killpg(proc.pid, signal.SIGTERM)
+                proc.wait(10)
+            except (ProcessLookupError, subprocess.TimeoutExpired):
+                os.killpg(proc.pid, signal.SIGKILL)
+
+
+def go(out, *, inbox=INBOX, **kw):
+    run(RunOptions(inbox=inbox, policy=load_policy(POLICY), out=out, as_of=AS_OF,
+                   workers=kw.pop("workers", 2), **kw))
+    return json.loads((out / "report.json").read_text())
+
+
+def decisions(report):
+    return {d["path"]: (d["decision"], [r["code"] for r in d["reasons"]],
+                        [w["code"] for w in d["warnings"]]) for d in report["documents"]}
+
+
+def test_cluster_and_redis_index_give_the_local_decisions(services, tmp_path):
+    local = go(tmp_path / "local")
+    scaled = go(tmp_path / "scaled", cluster=services["cluster"], index=services["redis"],
+                index_name="same")
+    assert decisions(scaled) == decisions(local)
+    assert scaled["run"]["index"] == {"url": services["redis"], "name": "same"}
+    # the per-document records are the same too, apart from the run facts
+    strip = lambda doc: {k: v for k, v in doc.items() if k != "location"}  # noqa: E731
+    assert [strip(d) for d in scaled["documents"]] == [strip(d) for d in local["documents"]]
+
+
+def test_incremental_runs_against_the_shared_index_match_local(services, tmp_path):
+    inbox = tmp_path / "inbox"
+    shutil.copytree(INBOX, inbox, symlinks=True)
+    extra = tmp_path / "extra"
+    extra.mkdir()
+    import hashlib
+    original = (INBOX / "wiki" / "driver-handbook.txt").read_text()
+    revised = original + "\nRevision 2 of the handbook replaces the first edition.\n"
+    (extra / "handbook-v2.txt").write_text(revised)
+    (extra / "manifest.jsonl").write_text(json.dumps({
+        "path": "handbook-v2.txt",
+        "source_url": "https://wiki.example.org/public/handbook-v2.txt",
+        "sha256": hashlib.sha256(revised.encode()).hexdigest(),
+        "published_at": "2026-11-28"}) + "\n")
+    results = []
+    for mode in ("local", "redis"):
+        out = tmp_path / mode
+        index = dict(index=services["redis"], index_name=f"inc-{tmp_path.name}") \
+            if mode == "redis" else {}
+        go(out, inbox=inbox, **index)
+        report = go(out, inbox=extra, incremental=True, **index)
+        results.append((decisions(report), report["removed"]))
+    assert results[0] == results[1]
+    assert results[0][0]["handbook-v2.txt"][0] == "accepted"
+    # the newer version supersedes the one accepted in the first run, in both modes
+    assert [(r["path"], r["change"]) for r in results[0][1]] == \
+        [("wiki/driver-handbook.txt", "superseded")]
+
+
+def test_output_folders_sharing_an_index_deduplicate_across_each_other(services, tmp_path):
+    first = go(tmp_path / "team-a", index=services["redis"], index_name="shared")
+    second = go(tmp_path / "team-b", index=services["redis"], index_name="shared")
+    accepted_by_a = {p for p, (d, _r, _w) in decisions(first).items() if d == "accepted"}
+    got = decisions(second)
+    for path in accepted_by_a:  # team B holds its copies of what team A already accepted
+        assert got[path][0] == "quarantined" and "duplicate.exact" in got[path][1]
+    message = next(r["message"] for d in second["documents"]
+                   if d["path"] == sorted(accepted_by_a)[0] for r in d["reasons"])
+    assert "accepted in" in message
+
+
+def test_review_release_keeps_the_index_in_line(services, tmp_path):
+    import redis as redis_lib
+    out = tmp_path / "out"
+    go(out, index=services["redis"], index_name="review")
+    client = redis_lib.Redis.from_url(services["redis"])
+    before = client.hlen("gate:review:meta")
+    review.act(out, "release", ["language/avis-aux-voyageurs.html"], note="bilingual notice",
+               by="r")
+    assert client.hlen("gate:review:meta") == before + 1
