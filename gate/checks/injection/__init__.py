@@ -134,12 +134,19 @@ def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding] 
     else:
         return []
     findings = []
-    for hit in sorted(hits, key=lambda h: -h["weight"])[:MAX_FINDINGS]:
+    said: set[tuple[str, str]] = set()
+    for hit in sorted(hits, key=lambda h: -h["weight"]):
         details = {k: v for k, v in hit.items() if v is not None}
         details.update(what=score.SIGNALS[hit["signal"]][1], at=_at(hit), extra=_extra(hit),
                        snippet=hit.get("snippet") or "", score=value,
                        threshold=settings.threshold)
-        findings.append(score.CODES[hit["signal"]](action=action, **details))
+        finding = score.CODES[hit["signal"]](action=action, **details)
+        if (finding.code, finding.message) in said:  # several rules matched the same words
+            continue
+        said.add((finding.code, finding.message))
+        findings.append(finding)
+        if len(findings) >= MAX_FINDINGS:
+            break
     return findings
 
 
