@@ -21,7 +21,6 @@ import shutil
 import signal
 import subprocess
 import sys
-import threading
 import time
 from pathlib import Path
 
@@ -29,6 +28,7 @@ ROOT = Path(__file__).resolve().parent.parent
 sys.path.insert(0, str(ROOT))
 
 from benchmarks.corpus import BENCH_POLICY, make_corpus, pdf_document  # noqa: E402
+from benchmarks.procmem import Sampler  # noqa: E402
 from tests.helpers import flate_bomb_pdf, make_pdf  # noqa: E402
 
 HOSTILE = {
@@ -59,40 +59,6 @@ def add_hostile(inbox: Path) -> None:
     (folder / "random.html").write_bytes(bytes(rng.randrange(256) for _ in range(4096)))
     (folder / "empty.txt").write_bytes(b"")
     os.symlink("/etc/passwd", folder / "link-out.txt")
-
-
-def tree_rss(root_pid: int) -> int:
-    """Resident memory of a process and all its descendants, bytes."""
-    children: dict[int, list[int]] = {}
-    rss: dict[int, int] = {}
-    for entry in os.listdir("/proc"):
-        if not entry.isdigit():
-            continue
-        try:
-            with open(f"/proc/{entry}/stat", encoding="ascii", errors="replace") as fh:
-                fields = fh.read().rsplit(")", 1)[1].split()
-        except OSError:
-            continue
-        pid, ppid = int(entry), int(fields[1])
-        children.setdefault(ppid, []).append(pid)
-        rss[pid] = int(fields[21]) * os.sysconf("SC_PAGE_SIZE")
-    total, stack = 0, [root_pid]
-    while stack:
-        pid = stack.pop()
-        total += rss.get(pid, 0)
-        stack.extend(children.get(pid, []))
-    return total
-
-
-class Sampler(threading.Thread):
-    def __init__(self, pid: int):
-        super().__init__(daemon=True)
-        self.pid, self.peak, self.running = pid, 0, True
-
-    def run(self) -> None:
-        while self.running:
-            self.peak = max(self.peak, tree_rss(self.pid))
-            time.sleep(0.02)
 
 
 def command(inbox: Path, out: Path, policy: Path) -> list[str]:

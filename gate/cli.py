@@ -207,6 +207,9 @@ def run_command(
         import json
         report = json.loads(result.report_path.read_text(encoding="utf-8"))
         _print_summary(result, report)
+        if os.environ.get("GATE_TIMINGS"):  # for benchmarks/scale.py: worker seconds by stage
+            err_console.print("timings: " + json.dumps(result.timings, sort_keys=True),
+                              markup=False, soft_wrap=True)
         breaches = _breaches(report, max_quarantine_rate, limits)
         if breaches:
             err_console.print("error: the batch exceeds its quarantine limits: " +

@@ -123,13 +123,10 @@ class Placer:
                 shutil.rmtree(target, ignore_errors=True)
             os.replace(path, target)
 
-    def apply(self, doc_id: str, target: str, payload: dict[str, Any]) -> None:
-        """Make the folders say what the payload says (idempotent)."""
+    def build(self, doc_id: str, target: str, payload: dict[str, Any]) -> Path | None:
+        """Assemble an entry in state/tmp (not yet visible). None for removals."""
         if target == "absent":
-            for folder in FOLDERS:
-                self._aside(self.entry(folder, doc_id))
-            return
-        other = "quarantine" if target == "accepted" else "accepted"
+            return None
         build = self.tmp / doc_id
         shutil.rmtree(build, ignore_errors=True)
         build.mkdir(parents=True)
@@ -142,21 +139,45 @@ class Placer:
                 os.link(source, dest)
             except OSError:
                 shutil.copyfile(source, dest)
-                with open(dest, "rb") as fh:
-                    os.fsync(fh.fileno())
             os.chmod(dest, 0o444)
         text = self.state.cache_text(payload["text_key"]) if payload.get("text_key") else None
         if text is not None:
-            write_file(build / "text.txt", text.encode("utf-8", "surrogatepass"))
+            write_file(build / "text.txt", text.encode("utf-8", "surrogatepass"), sync=False)
         record_name = "provenance.json" if target == "accepted" else "reasons.json"
         record = json.dumps(payload["record"], indent=2, sort_keys=True, ensure_ascii=False)
-        write_file(build / record_name, record.encode("utf-8", "surrogatepass") + b"\n")
-        _fsync_dir(build)
+        write_file(build / record_name, record.encode("utf-8", "surrogatepass") + b"\n",
+                   sync=False)
+        return build
+
+    def install(self, doc_id: str, target: str, build: Path | None) -> None:
+        """Make an assembled entry visible (one rename) and remove the other folder's."""
+        if target == "absent":
+            for folder in FOLDERS:
+                self._aside(self.entry(folder, doc_id))
+            return
+        assert build is not None
+        other = "quarantine" if target == "accepted" else "accepted"
         final = self.entry(target, doc_id)
         self._aside(final)
         os.replace(build, final)
         self._aside(self.entry(other, doc_id))
-        _fsync_dir(final.parent)
+
+    def apply_batch(self, placements: list[tuple[str, str, dict[str, Any]]]) -> None:
+        """Apply placements durably with two syncs for the whole batch, not per file:
+        every entry is written in state/tmp, everything is flushed to disk, only then are
+        the entries renamed into place, and the renames are flushed before the caller
+        marks them done. A crash at any point leaves either the old entry or the complete
+        new one visible, and the placements not yet marked are simply applied again."""
+        built = [(doc_id, target, self.build(doc_id, target, payload))
+                 for doc_id, target, payload in placements]
+        os.sync()
+        for doc_id, target, path in built:
+            self.install(doc_id, target, path)
+        os.sync()
+
+    def apply(self, doc_id: str, target: str, payload: dict[str, Any]) -> None:
+        """Make the folders say what the payload says (idempotent)."""
+        self.apply_batch([(doc_id, target, payload)])
 
     def empty_trash(self) -> None:
         for item in self.trash.iterdir():

@@ -55,6 +55,7 @@ from gate.state import State, open_state
 from gate.work import Params, warm_up
 
 CACHE_BATCH = 64
+PLACE_BATCH = 256
 
 
 class Reporter(Protocol):
@@ -115,6 +116,7 @@ class RunResult:
     summary: dict[str, Any]
     resumed: bool = False
     seconds: float = 0.0
+    timings: dict[str, float] = field(default_factory=dict)  # worker seconds per stage
 
 
 def doc_id(path: str) -> str:
@@ -286,8 +288,9 @@ def _run_body(opts, inbox, out, manifest, state, reporter, policy, placer, blobs
     params = Params(max_pages=limits.max_pages, max_nesting=limits.max_nesting,
                     timeout_s=limits.timeout_s, memory_mb=limits.memory_mb)
 
+    timings: dict[str, float] = {}
     items = _extract_all(inbox, manifest, params, limits.max_bytes, opts.workers, state,
-                         blobs, reporter, opts.cluster)
+                         blobs, reporter, opts.cluster, timings)
     reporter.stage("checking", None)
     documents, findings, outcomes = _check_documents(items, policy, ctx)
     releases = state.releases()
@@ -306,7 +309,8 @@ def _run_body(opts, inbox, out, manifest, state, reporter, policy, placer, blobs
             outcomes, corpus_rows, removed_rows, superseded, manifest, policy, mode, reporter,
             index)
     summary = _load_summary(state, run_id)
-    return RunResult(run_id, out / "report.json", summary, resumed=resume is not None)
+    return RunResult(run_id, out / "report.json", summary, resumed=resume is not None,
+                     timings=timings)
 
 
 # -- extraction ------------------------------------------------------------------------
@@ -314,7 +318,8 @@ def _run_body(opts, inbox, out, manifest, state, reporter, policy, placer, blobs
 
 def _extract_all(inbox: Path, manifest: manifest_mod.Manifest, params: Params,
                  max_bytes: int, workers: int, state: State, blobs: Blobs,
-                 reporter: Reporter, cluster: str | None = None) -> list[Item]:
+                 reporter: Reporter, cluster: str | None = None,
+                 timings: dict[str, float] | None = None) -> list[Item]:
     entries = list(walk(inbox))
     reporter.stage("extracting", len(entries))
     fingerprint = params.fingerprint()
@@ -360,6 +365,9 @@ def _extract_all(inbox: Path, manifest: manifest_mod.Manifest, params: Params,
                 (item, (item.entry.path, item.intake.data, params)) for item in tasks()):
             _absorb(item, result)
             item.intake.data = None
+            if timings is not None and isinstance(result, dict):
+                for stage, seconds in result.get("timings", {}).items():
+                    timings[stage] = timings.get(stage, 0.0) + seconds
             bug = item.measure_errors or (isinstance(result, Failure) and result.kind == "error")
             if not bug:  # a bug in gate is retried on the next run, not remembered
                 pending.append((item.cache_key, item.intake.sha256, item.extracted.to_json(),
@@ -773,17 +781,12 @@ def _finish(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str,
     """Apply the run's outstanding placements, then write the report and change set."""
     pending = [p for p in state.pending_placements() if p[0] == run_id]
     reporter.stage("placing", len(pending))
-    done: list[tuple[str, str]] = []
-    for _run, doc, target, payload in pending:
-        placer.apply(doc, target, payload)
-        done.append((run_id, doc))
-        reporter.advance(payload.get("path"))
-        if len(done) >= 256:
-            os.sync()
-            state.mark_placed(done)
-            done = []
-    os.sync()
-    state.mark_placed(done)
+    for start in range(0, len(pending), PLACE_BATCH):
+        batch = pending[start:start + PLACE_BATCH]
+        placer.apply_batch([(doc, target, payload) for _run, doc, target, payload in batch])
+        state.mark_placed([(run_id, doc) for _run, doc, _target, _payload in batch])
+        for _run, _doc, _target, payload in batch:
+            reporter.advance(payload.get("path"))
     if index is not None:
         reporter.stage("indexing", None)
         index.sync(state.corpus())

@@ -193,7 +193,7 @@ class State:
                 "INSERT OR REPLACE INTO cache (key, sha256, extracted, measures, text) "
                 "VALUES (?, ?, ?, ?, ?)",
                 [(key, sha, dumps(ex), dumps(me),
-                  zlib.compress(text.encode("utf-8", "surrogatepass"), 6))
+                  zlib.compress(text.encode("utf-8", "surrogatepass"), 1))
                  for key, sha, ex, me, text in rows])
 
     # -- runs ----------------------------------------------------------------------------

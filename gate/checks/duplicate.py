@@ -9,7 +9,7 @@ How similarity is measured (in the worker): the text is normalised (NFKC, case-f
 punctuation to spaces), split into words, and turned into the set of word 5-grams (the
 shingles of Broder 1997, with w = 5 as in published corpus pipelines, for example FineWeb
 and RefinedWeb). A MinHash sketch of 256 permutations (datasketch, ``affine32`` scheme,
-seed 1, shingles hashed with CRC-32) estimates the Jaccard similarity of two shingle sets with a standard error of
+seed 1; each shingle hashed to 32 bits from the CRC-32 of its words) estimates the Jaccard similarity of two shingle sets with a standard error of
 ``sqrt(J(1-J)/256)``, 0.025 at J = 0.8. Exact copies (same bytes, or same normalised text,
 whatever the format) are caught first by hash. Documents with fewer than ``min_shingles``
 shingles are compared only exactly, because sketches of tiny sets collide.
@@ -80,12 +80,12 @@ class DuplicatesSettings(Section):
                               "only compared exactly.")
 
 
-_NONWORD = re.compile(r"[\W_]+", re.UNICODE)
+_WORD = re.compile(r"[^\W_]+", re.UNICODE)
 
 
 def words(text: str) -> list[str]:
     """The normalised words of a text: NFKC, case-folded, punctuation removed."""
-    return _NONWORD.sub(" ", unicodedata.normalize("NFKC", text).casefold()).split()
+    return _WORD.findall(unicodedata.normalize("NFKC", text).casefold())
 
 
 def shingles(tokens: Sequence[str], w: int = SHINGLE) -> set[str]:
@@ -120,12 +120,53 @@ def lean(hashvalues: bytes) -> LeanMinHash:
     return LeanMinHash(seed=SEED, hashvalues=values, scheme=SCHEME)
 
 
+_PRIME = np.uint64(1_099_511_628_211)  # the 64-bit FNV prime, as a multiplier
+
+
+def shingle_hashes(tokens: Sequence[str], w: int = SHINGLE) -> np.ndarray:
+    """32-bit hashes of the distinct word w-shingles, computed without building strings.
+
+    Each word is hashed with CRC-32; a shingle's hash folds its w word hashes with a
+    polynomial (mod 2^64) down to 32 bits. Equal shingles always hash equal, in every
+    document and process; two different shingles of one document colliding is as rare as
+    a 32-bit hash collision, which affects the MinHash estimate negligibly (checked against
+    exact Jaccard in tests/test_duplicate.py).
+    """
+    if not tokens:
+        return np.zeros(0, dtype=np.uint32)
+    table: dict[str, int] = {}
+    values = np.fromiter((table.get(t) or table.setdefault(t, zlib.crc32(t.encode("utf-8")))
+                          for t in tokens), dtype=np.uint64, count=len(tokens))
+    if len(tokens) < w:
+        folded = np.array([int.from_bytes(hashlib.sha256(" ".join(tokens).encode()).digest()[:4],
+                                          "little")], dtype=np.uint64)
+    else:
+        grams = values[:len(values) - w + 1].copy()
+        with np.errstate(over="ignore"):
+            for k in range(1, w):
+                grams = grams * _PRIME + values[k:len(values) - w + 1 + k]
+        folded = (grams ^ (grams >> np.uint64(32))) & np.uint64(0xFFFFFFFF)
+    return np.unique(folded).astype(np.uint32)
+
+
+def sketch_hashes(hashes: np.ndarray) -> MinHash:
+    """A MinHash (datasketch, affine32, seed 1) of precomputed 32-bit item hashes."""
+    m = MinHash(num_perm=NUM_PERM, seed=SEED, permutations=_permutations(), scheme=SCHEME,
+                hashfunc=int)
+    values = hashes.tolist()
+    # in slices: the permuted block (slice x 256) then stays in cache; measured 1.5x faster
+    # than one call on 8k shingles, with identical results
+    for start in range(0, len(values), 512):
+        m.update_batch(values[start:start + 512])
+    return m
+
+
 def measure(extraction: Extraction) -> dict[str, Any]:
     """Shingle the text and sketch it (runs in the worker)."""
     tokens = words(extraction.text)
     normal = " ".join(tokens)
-    grams = shingles(tokens)
-    values = sketch(grams).hashvalues.astype("<u4").tobytes()
+    grams = shingle_hashes(tokens)
+    values = sketch_hashes(grams).hashvalues.astype("<u4").tobytes()
     return {"text_sha256": hashlib.sha256(normal.encode("utf-8")).hexdigest(),
             "shingles": len(grams), "minhash": values}
 
@@ -303,4 +344,4 @@ def _finding(item: Item, keeper: Item, how: str, similarity: float,
 
 
 CHECK = CorpusCheck(id="duplicate", section="duplicates", settings=DuplicatesSettings,
-                    measure=measure, measure_version=2, doc=__doc__ or "")
+                    measure=measure, measure_version=3, doc=__doc__ or "")

@@ -2,7 +2,7 @@
 
 Detection uses langdetect with its seed fixed (``DetectorFactory.seed = 0``, as the
 library's README prescribes for reproducible results) on a bounded sample: three windows of
-700 characters from the start, middle and end of the text, so a long document costs the
+400 characters from the start, middle and end of the text, so a long document costs the
 same as a short one and a document that switches language part-way lowers the confidence
 instead of going unnoticed. langdetect is confidently wrong on short strings, so text
 shorter than ``min_chars`` is *undetermined*; ``undetermined`` says what that means
@@ -37,7 +37,7 @@ from gate.policy.base import Section
 
 DetectorFactory.seed = 0
 
-WINDOW = 700
+WINDOW = 400
 WINDOWS = 3
 
 NOT_ALLOWED = define("language.not-allowed", "the text is in a language not allowed",
@@ -82,7 +82,7 @@ class LanguageSettings(Section):
 
 
 def sample(text: str) -> str:
-    """Up to three 700-character windows (start, middle, end), cut at white space."""
+    """Up to three 400-character windows (start, middle, end), cut at white space."""
     if len(text) <= WINDOW * WINDOWS:
         return text
     starts = [0, (len(text) - WINDOW) // 2, len(text) - WINDOW]
@@ -138,4 +138,5 @@ def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding] 
 
 
 CHECK = DocumentCheck(id="language", section="language", evaluate=evaluate,
-                      settings=LanguageSettings, measure=measure, doc=__doc__ or "")
+                      settings=LanguageSettings, measure=measure, measure_version=2,
+                      doc=__doc__ or "")

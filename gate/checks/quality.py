@@ -139,10 +139,9 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
     dup = {str(n): 0.0 for n in range(5, 11)}
     if len(words) < 2:
         return top, dup
-    ids: dict[str, int] = {}
-    seq = np.fromiter((ids.setdefault(w, len(ids) + 1) for w in words), dtype=np.uint64,
-                      count=len(words))
-    lengths = np.fromiter((len(w) for w in words), dtype=np.int64, count=len(words))
+    ids = {w: i for i, w in enumerate(dict.fromkeys(words), 1)}
+    seq = np.array(list(map(ids.__getitem__, words)), dtype=np.uint64)
+    lengths = np.array(list(map(len, words)), dtype=np.int64)
     total = int(lengths.sum())
     if not total:
         return top, dup
@@ -163,6 +162,9 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
                     top[str(n)] = round(float(per_gram[best]) * chars / total, 4)
             else:
                 starts = np.flatnonzero(per_gram > 1)
+                if not starts.size:
+                    # no n-gram repeats, so no longer one can: the rest stay 0
+                    break
                 if starts.size:
                     marks = np.zeros(len(words) + 1, dtype=np.int64)
                     np.add.at(marks, starts, 1)
@@ -174,7 +176,8 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
 
 _PUNCT = "".join(chr(c) for c in range(0x21, 0x7F) if not chr(c).isalnum()) + \
     "\u2026\u201c\u201d\u2018\u2019\u00ab\u00bb\u2013\u2014"
-_WITH_LETTER = re.compile(r"\S*[^\W\d_]\S*", re.UNICODE)
+# one match per token that contains a letter: from its first letter to the token's end
+_WITH_LETTER = re.compile(r"[^\W\d_]\S*", re.UNICODE)
 
 
 def measure(extraction: Extraction) -> dict[str, Any]:
@@ -185,8 +188,7 @@ def measure(extraction: Extraction) -> dict[str, Any]:
     scanned = " ".join(words)
     lines = [line.strip() for line in text.split("\n") if line.strip()]
     paragraphs = [p.strip() for p in _PARAGRAPH.split(text) if p.strip()]
-    lower = [w for w in scanned.lower().split() if w]
-    lower = [w.strip(_PUNCT) for w in lower]
+    lower = [w.strip(_PUNCT) for w in scanned.lower().split()]
     n = len(tokens)
     stats: dict[str, Any] = {
         "words": n,
@@ -197,7 +199,7 @@ def measure(extraction: Extraction) -> dict[str, Any]:
         if lines else 0.0,
         "ellipsis_lines": sum(line.endswith(_ELLIPSES) for line in lines) / len(lines)
         if lines else 0.0,
-        "alphabetic_words": sum(1 for _ in _WITH_LETTER.finditer(scanned)) / len(words)
+        "alphabetic_words": len(_WITH_LETTER.findall(scanned)) / len(words)
         if words else 0.0,
     }
     vocabulary = set(lower)
@@ -273,4 +275,5 @@ def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding] 
 
 
 CHECK = DocumentCheck(id="quality", section="quality", evaluate=evaluate,
-                      settings=QualitySettings, measure=measure, doc=__doc__ or "")
+                      settings=QualitySettings, measure=measure, measure_version=2,
+                      doc=__doc__ or "")
