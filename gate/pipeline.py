@@ -48,8 +48,6 @@ from gate.findings import CODES, Finding, internal_error
 from gate.intake import Intake, read_entry
 from gate.lock import RunLock
 from gate.policy import LoadedPolicy
-from gate.report import build as build_report
-from gate.report import dumps as dumps_report
 from gate.report import dumps_line, reason_json
 from gate.state import State, open_state
 from gate.work import Params, warm_up
@@ -287,62 +285,94 @@ def _run_body(opts, inbox, out, manifest, state, reporter, policy, placer, blobs
     limits = policy.policy.limits
     params = Params(max_pages=limits.max_pages, max_nesting=limits.max_nesting,
                     timeout_s=limits.timeout_s, memory_mb=limits.memory_mb)
-
     timings: dict[str, float] = {}
-    items = _extract_all(inbox, manifest, params, limits.max_bytes, opts.workers, state,
-                         blobs, reporter, opts.cluster, timings)
-    reporter.stage("checking", None)
-    documents, findings, outcomes = _check_documents(items, policy, ctx)
     releases = state.releases()
-    _apply_releases(items, findings, releases)
-    corpus_rows = state.corpus()
-    removed_rows, superseded = _corpus_checks(items, documents, findings, outcomes,
-                                              corpus_rows, policy.policy, ctx, seq, mode,
-                                              state, index)
-    _apply_releases(items, findings, releases)
+    slims = _extract_and_check(inbox, manifest, params, limits.max_bytes, opts, state, blobs,
+                               reporter, timings, policy, ctx, run_id, releases)
+    reporter.stage("comparing", None)
+    corpus_rows = state.corpus(sketches=mode == "incremental" and index is None)
+    removed_rows, superseded = _corpus_checks(slims, corpus_rows, policy.policy, seq, mode,
+                                              state, index, releases)
     run_info = {"id": run_id, "as_of": as_of_text, "mode": mode, "inbox": str(inbox),
                 "policy": {"name": policy.name, "path": policy.path, "sha256": policy.sha256,
                            "files": list(policy.files)},
                 "manifest": {"path": manifest.source, "sha256": manifest.sha256,
                              "records": len(manifest.records)}}
-    _commit(state, placer, blobs, out, run_id, seq, run_info, items, documents, findings,
-            outcomes, corpus_rows, removed_rows, superseded, manifest, policy, mode, reporter,
-            index)
+    _commit(state, placer, blobs, out, run_id, seq, run_info, slims, corpus_rows,
+            removed_rows, superseded, manifest, policy, mode, reporter, index)
     summary = _load_summary(state, run_id)
     return RunResult(run_id, out / "report.json", summary, resumed=resume is not None,
                      timings=timings)
 
 
-# -- extraction ------------------------------------------------------------------------
+# -- extraction and per-document checks --------------------------------------------------
 
 
-def _extract_all(inbox: Path, manifest: manifest_mod.Manifest, params: Params,
-                 max_bytes: int, workers: int, state: State, blobs: Blobs,
-                 reporter: Reporter, cluster: str | None = None,
-                 timings: dict[str, float] | None = None) -> list[Item]:
+@dataclass
+class Slim:
+    """What stays in memory of a document between its checks and the commit (about a
+    kilobyte, mostly its MinHash sketch); everything else waits in the run_docs table."""
+
+    index: int
+    doc_id: str
+    path: str
+    sha256: str | None
+    cache_key: str | None
+    has_text: bool
+    dup: dict[str, Any] | None  # the duplicate check's measures, when there is text
+    dup_error: str | None
+    trust: int
+    date: datetime | None
+    candidate: bool  # accepted by the per-document checks
+    rule: int | None  # the allow rule whose overrides apply, if any
+    extra: list[Finding] = field(default_factory=list)  # corpus findings
+    dup_mark: str = "off"
+
+
+def _extract_and_check(inbox: Path, manifest: manifest_mod.Manifest, params: Params,
+                       max_bytes: int, opts: RunOptions, state: State, blobs: Blobs,
+                       reporter: Reporter, timings: dict[str, float], loaded: LoadedPolicy,
+                       ctx: RunContext, run_id: str,
+                       releases: dict[tuple[str, str], dict[str, str]]) -> list[Slim]:
+    """Read, extract, measure and check every document, streaming: each one's full record
+    goes to the run_docs table as soon as it is checked, and only its Slim stays here."""
     entries = list(walk(inbox))
     reporter.stage("extracting", len(entries))
     fingerprint = params.fingerprint()
     known = state.entries()
-    items: list[Item] = []
-    pending: list[tuple[str, str, dict, dict, str]] = []
+    slims: list[Slim | None] = [None] * len(entries)
+    cache_rows: list[tuple[str, str, dict, dict, str]] = []
+    doc_rows: list[tuple[str, int, str]] = []
+    state.conn.execute("DELETE FROM run_docs WHERE run_id = ?", (run_id,))
 
     def flush() -> None:
-        if pending:
-            state.cache_put_many(pending)
-            pending.clear()
+        if cache_rows:
+            state.cache_put_many(cache_rows)
+            cache_rows.clear()
+        if doc_rows:
+            with state.transaction() as conn:
+                conn.executemany("INSERT OR REPLACE INTO run_docs (run_id, idx, blob) "
+                                 "VALUES (?, ?, ?)", doc_rows)
+            doc_rows.clear()
+
+    def checked(item: Item) -> None:
+        slim, blob = _evaluate(item, loaded, ctx, releases)
+        slims[item.index] = slim
+        doc_rows.append((run_id, item.index, json.dumps(blob, sort_keys=True)))
+        if len(doc_rows) >= CACHE_BATCH:
+            flush()
+        reporter.advance(item.entry.path)
 
     def tasks():
         for index, entry in enumerate(entries):
             item = Item(index=index, entry=entry, doc_id=doc_id(entry.path),
                         intake=read_entry(inbox, entry, max_bytes),
                         record=manifest.get(entry.path))
-            items.append(item)
             intake = item.intake
             if intake.problem is not None:
                 item.extracted = Extracted(type=None, problem=intake.problem,
                                            problem_detail=intake.detail)
-                reporter.advance(entry.path)
+                checked(item)
                 continue
             item.cache_key = f"{intake.sha256}:{fingerprint}"
             placed = known.get(item.doc_id)
@@ -354,30 +384,29 @@ def _extract_all(inbox: Path, manifest: manifest_mod.Manifest, params: Params,
                 item.measures = cached[1].get("measures", {})
                 item.measure_errors = cached[1].get("errors", {})
                 intake.data = None
-                reporter.advance(entry.path)
+                checked(item)
                 continue
             yield item
 
-    if not cluster:
+    if not opts.cluster:
         warm_up()
-    with executor(cluster, workers, params) as pool:
+    with executor(opts.cluster, opts.workers, params) as pool:
         for item, result in pool.run(
                 (item, (item.entry.path, item.intake.data, params)) for item in tasks()):
             _absorb(item, result)
             item.intake.data = None
-            if timings is not None and isinstance(result, dict):
+            if isinstance(result, dict):
                 for stage, seconds in result.get("timings", {}).items():
                     timings[stage] = timings.get(stage, 0.0) + seconds
             bug = item.measure_errors or (isinstance(result, Failure) and result.kind == "error")
             if not bug:  # a bug in gate is retried on the next run, not remembered
-                pending.append((item.cache_key, item.intake.sha256, item.extracted.to_json(),
-                                {"measures": item.measures, "errors": {}},
-                                result.get("text", "") if isinstance(result, dict) else ""))
-            if len(pending) >= CACHE_BATCH:
-                flush()
-            reporter.advance(item.entry.path)
+                cache_rows.append((item.cache_key, item.intake.sha256,
+                                   item.extracted.to_json(),
+                                   {"measures": item.measures, "errors": {}},
+                                   result.get("text", "") if isinstance(result, dict) else ""))
+            checked(item)
     flush()
-    return items
+    return [slim for slim in slims if slim is not None]
 
 
 def _absorb(item: Item, result: Any) -> None:
@@ -392,9 +421,6 @@ def _absorb(item: Item, result: Any) -> None:
     item.extracted = Extracted.from_json(result["extracted"])
     item.measures = result["measures"]
     item.measure_errors = result["measure_errors"]
-
-
-# -- checks ----------------------------------------------------------------------------
 
 
 def _document(item: Item) -> Document:
@@ -413,51 +439,80 @@ def effective_policy(document: Document, loaded: LoadedPolicy) -> Any:
     return loaded.for_rule(source_check.match(document, base.sources).allowed_by)
 
 
-def _check_documents(items: list[Item], loaded: LoadedPolicy, ctx: RunContext):
-    documents: list[Document] = []
-    findings: list[list[Finding]] = []
-    outcomes: list[dict[str, str]] = []
-    for item in items:
-        document = _document(item)
-        policy = item.policy = effective_policy(document, loaded)
-        found: list[Finding] = []
-        marks: dict[str, str] = {}
-        for check in DOCUMENT_CHECKS:
-            enabled = check.always_on or getattr(policy, check.section, None) is not None
-            result: list[Finding] | None
-            if not enabled:
-                result = None
-            elif check.id in item.measure_errors:
-                result = [internal_error(check.id, RuntimeError(item.measure_errors[check.id]))]
-            else:
-                try:
-                    result = check.evaluate(document, policy, ctx)
-                except Exception as err:  # noqa: BLE001 - a bug in a check fails closed
-                    result = [internal_error(check.id, err)]
-            marks[check.id] = outcome(result, policy, enabled)
-            found.extend(result or [])
-        documents.append(document)
-        findings.append(found)
-        outcomes.append(marks)
-    return documents, findings, outcomes
+def _finding_json(finding: Finding) -> dict[str, Any]:
+    return {**finding.to_json(), "action": finding.action}
 
 
-def _apply_releases(items: list[Item], findings: list[list[Finding]],
+def _evaluate(item: Item, loaded: LoadedPolicy, ctx: RunContext,
+              releases: dict[tuple[str, str], dict[str, str]]) -> tuple[Slim, dict[str, Any]]:
+    """Every document check on one document; its Slim and its full record."""
+    document = _document(item)
+    policy = effective_policy(document, loaded)
+    found: list[Finding] = []
+    marks: dict[str, str] = {}
+    for check in DOCUMENT_CHECKS:
+        enabled = check.always_on or getattr(policy, check.section, None) is not None
+        result: list[Finding] | None
+        if not enabled:
+            result = None
+        elif check.id in item.measure_errors:
+            result = [internal_error(check.id, RuntimeError(item.measure_errors[check.id]))]
+        else:
+            try:
+                result = check.evaluate(document, policy, ctx)
+            except Exception as err:  # noqa: BLE001 - a bug in a check fails closed
+                result = [internal_error(check.id, err)]
+        marks[check.id] = outcome(result, policy, enabled)
+        found.extend(result or [])
+    _apply_releases(item.intake.sha256, found, releases)
+    base = loaded.policy
+    match = source_check.match(document, base.sources) if base.sources is not None else None
+    date = _date_of(document, ctx)
+    rule = match.allowed_by if policy is not base and match is not None else None
+    blob: dict[str, Any] = {
+        "path": item.entry.path, "id": item.doc_id, "kind": item.entry.kind,
+        "size": item.intake.size, "sha256": item.intake.sha256,
+        "link_target": item.entry.link_target, "problem": item.intake.problem,
+        "extraction": document.extracted.to_json(),
+        "manifest": item.record.to_json() if item.record else None,
+        "findings": [_finding_json(f) for f in found], "checks": marks,
+        "measures": _public_measures(item.measures), "cache_key": item.cache_key,
+        "has_text": document.has_text, "rule": rule,
+        "manifest_source": item.record.source_url if item.record else None,
+    }
+    if match is not None:
+        blob["source"] = {"url": match.url, "trust": match.trust,
+                          "allowed_by": None if match.allowed_by is None else
+                          f"sources.allow[{match.allowed_by}] "
+                          f"({source_check.rule_text(base.sources.allow[match.allowed_by])})"}
+    chosen = freshness_check.choose(document, ctx)
+    if chosen is not None and not isinstance(chosen, Finding):
+        blob["date"] = {"value": chosen[1].iso(), "source": chosen[0].source}
+    dup = item.measures.get("duplicate")
+    slim = Slim(index=item.index, doc_id=item.doc_id, path=item.entry.path,
+                sha256=item.intake.sha256, cache_key=item.cache_key,
+                has_text=document.has_text,
+                dup=dup if document.has_text else None,
+                dup_error=item.measure_errors.get("duplicate"),
+                trust=match.trust if match is not None else source_check.UNMATCHED_TRUST,
+                date=date, candidate=decide(found, policy).decision == "accepted", rule=rule)
+    return slim, blob
+
+
+def _apply_releases(sha256: str | None, found: list[Finding],
                     releases: dict[tuple[str, str], dict[str, str]]) -> None:
     """Findings a reviewer released for these exact bytes become warnings."""
     if not releases:
         return
-    for item, found in zip(items, findings):
-        for index, finding in enumerate(found):
-            release = releases.get((item.intake.sha256 or "", finding.code))
-            if release is None or finding.action == "warn" or \
-                    CODES[finding.code].fail_closed:
-                continue
-            found[index] = Finding(
-                check=finding.check, code=finding.code,
-                message=f"{finding.message} (released by {release['by']} on "
-                        f"{release['at'][:10]}: {release['note']})",
-                details={**finding.details, "released": release}, action="warn")
+    for index, finding in enumerate(found):
+        release = releases.get((sha256 or "", finding.code))
+        if release is None or finding.action == "warn" or CODES[finding.code].fail_closed:
+            continue
+        found[index] = Finding(
+            check=finding.check, code=finding.code,
+            message=f"{finding.message} (released by {release['by']} on "
+                    f"{release['at'][:10]}: {release['note']})",
+            details={**finding.details, "released": release}, action="warn")
 
 
 def _date_of(document: Document, ctx: RunContext) -> datetime | None:
@@ -473,10 +528,14 @@ def _trust_of(document: Document, policy: Any) -> int:
     return source_check.match(document, policy.sources).trust
 
 
-def _corpus_checks(items, documents, findings, outcomes, corpus_rows, policy, ctx, seq,
-                   mode, state: State, index: Any = None):
+# -- corpus checks -----------------------------------------------------------------------
+
+
+def _corpus_checks(slims: list[Slim], corpus_rows: list[dict], policy: Any, seq: int,
+                   mode: str, state: State, index: Any,
+                   releases: dict[tuple[str, str], dict[str, str]]):
     """Run the corpus checks; returns (stored rows to remove, superseded stored rows)."""
-    in_batch = {item.doc_id for item in items}
+    in_batch = {slim.doc_id for slim in slims}
     stored = {row["doc_id"]: row for row in corpus_rows}
     removed = [row for row in corpus_rows if row["doc_id"] not in in_batch] \
         if mode == "full" else []
@@ -484,33 +543,31 @@ def _corpus_checks(items, documents, findings, outcomes, corpus_rows, policy, ct
     for check in CORPUS_CHECKS:
         settings = getattr(policy, check.section, None)
         if settings is None:
-            for marks in outcomes:
-                marks[check.id] = "off"
+            for slim in slims:
+                slim.dup_mark = "off"
             continue
         assert check is duplicate_check.CHECK
         dup_items: list[duplicate_check.Item] = []
-        keys: dict[str, str] = {}
-        for item, document, found, marks in zip(items, documents, findings, outcomes):
-            measured = item.measures.get(check.id)
-            if check.id in item.measure_errors:
-                found.append(internal_error(check.id,
-                                            RuntimeError(item.measure_errors[check.id])))
-                marks[check.id] = "fail"
+        keys: dict[str, str | None] = {}
+        for slim in slims:
+            if slim.dup_error is not None:
+                slim.extra.append(internal_error(check.id, RuntimeError(slim.dup_error)))
+                slim.dup_mark = "fail"
                 continue
-            if measured is None or not document.has_text:
-                marks[check.id] = "n/a"
+            if slim.dup is None:
+                slim.dup_mark = "n/a"
                 continue
-            keys[item.doc_id] = item.cache_key
-            small = measured["shingles"] < settings.min_shingles
+            keys[slim.doc_id] = slim.cache_key
+            small = slim.dup["shingles"] < settings.min_shingles
             dup_items.append(duplicate_check.Item(
-                key=item.doc_id, path=item.entry.path, sha256=item.intake.sha256,
-                text_sha256=measured["text_sha256"],
-                minhash=None if small else measured["minhash"],
-                trust=_trust_of(document, policy), date=_date_of(document, ctx),
-                seen=(stored[item.doc_id]["first_seen"] if item.doc_id in stored else seq,
-                      item.index),
-                in_batch=True, accepted_before=item.doc_id in stored,
-                candidate=decide(found, item.policy).decision == "accepted"))
+                key=slim.doc_id, path=slim.path, sha256=slim.sha256 or "",
+                text_sha256=slim.dup["text_sha256"],
+                minhash=None if small else slim.dup["minhash"], trust=slim.trust,
+                date=slim.date,
+                seen=(stored[slim.doc_id]["first_seen"] if slim.doc_id in stored else seq,
+                      slim.index),
+                in_batch=True, accepted_before=slim.doc_id in stored,
+                candidate=slim.candidate))
         if index is not None:
             # only the stored documents that are candidates of this batch, from Redis
             fetched = index.candidates(dup_items, batch_ids=in_batch,
@@ -534,55 +591,19 @@ def _corpus_checks(items, documents, findings, outcomes, corpus_rows, policy, ct
         result = duplicate_check.evaluate(
             dup_items, settings,
             text_of=lambda key: state.cache_text(keys[key]) if keys.get(key) else None)
-        for item, found, marks in zip(items, findings, outcomes):
-            if marks.get(check.id) in ("n/a", "fail"):
+        for slim in slims:
+            if slim.dup_mark in ("n/a", "fail"):
                 continue
-            extra = result.findings.get(item.doc_id, [])
-            found.extend(extra)
-            marks[check.id] = outcome(extra, policy, True)
+            extra = result.findings.get(slim.doc_id, [])
+            _apply_releases(slim.sha256, extra, releases)
+            slim.extra.extend(extra)
+            slim.dup_mark = outcome(extra, policy, True)
         for key, finding in result.superseded.items():
             superseded[key] = (stored[key], finding)
     return removed, superseded
 
 
-# -- decision and commit ---------------------------------------------------------------
-
-
-def _provenance(item: Item, document: Document, decision: Any, marks: dict[str, str],
-                policy: LoadedPolicy, ctx: RunContext, run_info: dict[str, Any]
-                ) -> dict[str, Any]:
-    """Every input the decision used, for the entry's provenance.json / reasons.json."""
-    record: dict[str, Any] = {
-        "document": {"id": item.doc_id, "path": item.entry.path, "kind": item.entry.kind,
-                     "sha256": item.intake.sha256, "size": item.intake.size,
-                     "link_target": item.entry.link_target},
-        "extraction": document.extracted.to_json(),
-        "manifest": item.record.to_json() if item.record else None,
-        "policy": {**run_info["policy"], **({"overrides_from": _override_rule(document, policy)}
-                                             if item.policy is not policy.policy else {})},
-        "checks": marks,
-        "decision": decision.decision,
-        "reasons": [reason_json(f) for f in decision.reasons],
-        "warnings": [reason_json(f) for f in decision.warnings],
-        "measures": _public_measures(item.measures),
-        "gate": {"version": __version__},
-    }
-    pol = policy.policy
-    if pol.sources is not None:
-        match = source_check.match(document, pol.sources)
-        record["source"] = {"url": match.url, "trust": match.trust,
-                            "allowed_by": None if match.allowed_by is None else
-                            f"sources.allow[{match.allowed_by}] "
-                            f"({source_check.rule_text(pol.sources.allow[match.allowed_by])})"}
-    chosen = freshness_check.choose(document, ctx)
-    if chosen is not None and not isinstance(chosen, Finding):
-        record["date"] = {"value": chosen[1].iso(), "source": chosen[0].source}
-    return record
-
-
-def _override_rule(document: Document, policy: LoadedPolicy) -> str:
-    index = source_check.match(document, policy.policy.sources).allowed_by
-    return f"sources.allow[{index}]"
+# -- decision and commit -----------------------------------------------------------------
 
 
 def _public_measures(measures: dict[str, Any]) -> dict[str, Any]:
@@ -595,121 +616,286 @@ def _public_measures(measures: dict[str, Any]) -> dict[str, Any]:
     return out
 
 
-def _report_entry(item: Item, document: Document, decision: Any, marks: dict[str, str],
-                  record: dict[str, Any], location: str, change: str) -> dict[str, Any]:
+def _record(blob: dict[str, Any], decision: Any, marks: dict[str, str],
+            run_info: dict[str, Any]) -> dict[str, Any]:
+    """Every input the decision used, for the entry's provenance.json / reasons.json."""
+    record: dict[str, Any] = {
+        "document": {"id": blob["id"], "path": blob["path"], "kind": blob["kind"],
+                     "sha256": blob["sha256"], "size": blob["size"],
+                     "link_target": blob["link_target"]},
+        "extraction": blob["extraction"],
+        "manifest": blob["manifest"],
+        "policy": {**run_info["policy"], **({"overrides_from": f"sources.allow[{blob['rule']}]"}
+                                             if blob["rule"] is not None else {})},
+        "checks": marks,
+        "decision": decision.decision,
+        "reasons": [reason_json(f) for f in decision.reasons],
+        "warnings": [reason_json(f) for f in decision.warnings],
+        "measures": blob["measures"],
+        "gate": {"version": __version__},
+    }
+    for key in ("source", "date"):
+        if key in blob:
+            record[key] = blob[key]
+    return record
+
+
+def _report_entry(blob: dict[str, Any], decision: Any, marks: dict[str, str],
+                  location: str, change: str) -> dict[str, Any]:
+    extraction = blob["extraction"]
     entry: dict[str, Any] = {
-        "path": item.entry.path,
-        "id": item.doc_id,
+        "path": blob["path"],
+        "id": blob["id"],
         "decision": decision.decision,
         "reasons": [reason_json(f) for f in decision.reasons],
         "warnings": [reason_json(f) for f in decision.warnings],
         "checks": marks,
-        "sha256": item.intake.sha256,
-        "size": item.intake.size,
-        "type": document.extracted.type,
-        "text_chars": document.extracted.text_chars,
+        "sha256": blob["sha256"],
+        "size": blob["size"],
+        "type": extraction.get("type"),
+        "text_chars": extraction.get("text_chars", 0),
         "location": location,
         "change": change,
     }
     for key in ("source", "date"):
-        if key in record:
-            entry[key] = record[key]
-    if document.extracted.title:
-        entry["title"] = document.extracted.title
-    language = item.measures.get("language")
+        if key in blob:
+            entry[key] = blob[key]
+    if extraction.get("title"):
+        entry["title"] = extraction["title"]
+    language = blob["measures"].get("language")
     if language and language.get("languages"):
         entry["language"] = {"code": language["languages"][0][0],
                              "probability": language["languages"][0][1]}
-    injection = item.measures.get("injection")
+    injection = blob["measures"].get("injection")
     if isinstance(injection, dict) and "score" in injection:
         entry["injection_score"] = injection["score"]
     return entry
+
+
+def _html_view(entry: dict[str, Any], keep_reasons: bool) -> dict[str, Any]:
+    """The small part of a report entry the HTML page draws."""
+    view = {k: entry[k] for k in ("path", "id", "decision", "type", "size", "text_chars",
+                                  "location", "change", "title", "language",
+                                  "injection_score", "source") if k in entry}
+    view["warnings"] = [{"check": w["check"], "code": w["code"], "message": w["message"]}
+                        for w in entry["warnings"]]
+    view["reasons"] = [{"check": r["check"], "code": r["code"], "message": r["message"],
+                        "details": _small(r["details"]) if keep_reasons else {}}
+                       for r in entry["reasons"]]
+    return view
+
+
+def _small(details: dict[str, Any]) -> dict[str, Any]:
+    out = {}
+    for key, value in list(details.items())[:12]:
+        if isinstance(value, (str, int, float, bool)) or value is None:
+            out[key] = value if not isinstance(value, str) else value[:300]
+    return out
 
 
 def _placement_fingerprint(folder: str, record: dict[str, Any], text_key: str | None) -> str:
     return _fingerprint(folder, record, text_key)
 
 
+class _ReportWriter:
+    """Writes report.json as it goes, with the layout json.dumps(indent=2, sort_keys=True)
+    gives, so a run never holds the whole report in memory."""
+
+    def __init__(self, path: Path):
+        self.path = path
+        path.parent.mkdir(parents=True, exist_ok=True)
+        self.fh = open(path, "w", encoding="utf-8")  # noqa: SIM115 - closed in finish()
+        self.count = 0
+
+    @staticmethod
+    def _dumps(value: Any, indent: int) -> str:
+        text = json.dumps(value, indent=2, sort_keys=True, ensure_ascii=False)
+        try:
+            text.encode("utf-8")
+        except UnicodeEncodeError:  # undecodable file names: ASCII escapes
+            text = json.dumps(value, indent=2, sort_keys=True)
+        return text.replace("\n", "\n" + " " * indent)
+
+    def start(self, cautions: list[str]) -> None:
+        self.fh.write('{\n  "cautions": ' + self._dumps(cautions, 2) + ',\n  "documents": [')
+
+    def document(self, entry: dict[str, Any]) -> None:
+        self.fh.write(("," if self.count else "") + "\n    " + self._dumps(entry, 4))
+        self.count += 1
+
+    def finish(self, rest: dict[str, Any]) -> None:
+        self.fh.write("\n  ]," if self.count else "],")
+        keys = sorted(rest)
+        for number, key in enumerate(keys):
+            comma = "," if number < len(keys) - 1 else ""
+            self.fh.write(f"\n  {json.dumps(key)}: " + self._dumps(rest[key], 2) + comma)
+        self.fh.write("\n}\n")
+        self.fh.flush()
+        os.fsync(self.fh.fileno())
+        self.fh.close()
+
+
+def _pending(out: Path, run_id: str, suffix: str) -> Path:
+    return out / "state" / "pending" / f"report-{run_id}.{suffix}"
+
+
 def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, seq: int,
-            run_info: dict[str, Any], items: list[Item], documents: list[Document],
-            findings: list[list[Finding]], outcomes: list[dict[str, str]],
-            corpus_rows: list[dict], removed_rows: list[dict],
-            superseded: dict[str, tuple[dict, Finding]], manifest: manifest_mod.Manifest,
-            policy: LoadedPolicy, mode: str, reporter: Reporter, index: Any = None) -> None:
-    reporter.stage("committing", None)
-    pol = policy.policy
-    ctx = RunContext(as_of=dates.parse_as_of(run_info["as_of"]))
+            run_info: dict[str, Any], slims: list[Slim], corpus_rows: list[dict],
+            removed_rows: list[dict], superseded: dict[str, tuple[dict, Finding]],
+            manifest: manifest_mod.Manifest, policy: LoadedPolicy, mode: str,
+            reporter: Reporter, index: Any = None) -> None:
+    """Decide every document and record it all in one transaction, streaming the
+    per-document records from the run_docs table in inbox order."""
+    from gate.htmlreport import render
+    from gate.report import CAUTIONS, Tally
+    reporter.stage("deciding", len(slims))
     stored = {row["doc_id"]: row for row in corpus_rows}
     known = state.entries()
-    report_docs: list[dict[str, Any]] = []
-    decisions_rows = []
-    corpus_upserts = []
-    corpus_deletes = []
-    placements = []
-    entries_rows = []
-    audit_entries: list[dict[str, Any]] = []
-    changes: list[dict[str, Any]] = []
+    writer = _ReportWriter(_pending(out, run_id, "json"))
+    writer.start(list(CAUTIONS))
+    tally = Tally()
+    html_docs: list[dict[str, Any]] = []
+    held_shown = 0
     seen_ids: dict[str, str] = {}
-    for item, document, found, marks in zip(items, documents, findings, outcomes):
-        if item.doc_id in seen_ids:  # 80-bit ids: a collision is astronomically unlikely
-            raise OutputError(f"document id collision between {seen_ids[item.doc_id]!r} and "
-                              f"{item.entry.path!r}; please report this")
-        seen_ids[item.doc_id] = item.entry.path
-        decision = decide(found, item.policy)
-        record = _provenance(item, document, decision, marks, policy, ctx, run_info)
-        folder = "accepted" if decision.decision == "accepted" else "quarantine"
-        placed = known.get(item.doc_id)
-        status, review = "open", None
-        if placed is not None and placed[0] == folder == "quarantine" and \
-                placed[1] == item.intake.sha256 and placed[3] == "rejected":
-            # a reviewer rejected these bytes: keep the verdict while they are unchanged
-            status, review = "rejected", placed[4]
-            record["review"] = json.loads(review)
-        before = stored.get(item.doc_id)
-        if folder == "accepted":
-            change = "add" if before is None else (
-                "update" if before["sha256"] != item.intake.sha256 else "unchanged")
-        else:
-            change = "remove" if before is not None else "none"
-        text_key = item.cache_key if document.has_text else None
-        fingerprint = _placement_fingerprint(folder, record, text_key)
-        if placed is None or placed[0] != folder or placed[2] != fingerprint:
-            payload = {"path": item.entry.path, "sha256": item.intake.sha256
-                       if item.intake.problem is None else None,
-                       "text_key": text_key,
-                       "record": {**record, "run": run_info}}
-            placements.append((run_id, item.doc_id, folder, json.dumps(payload)))
-        date = _date_of(document, ctx)
-        trust = _trust_of(document, pol)
-        entries_rows.append((item.doc_id, folder, item.entry.path, item.intake.sha256,
-                             fingerprint, run_id, item.cache_key, trust,
-                             date.isoformat() if date else None, status, review))
-        audit_entries.append({"action": "decision", "run": run_id, "id": item.doc_id,
-                              "path": item.entry.path, "sha256": item.intake.sha256,
-                              "decision": decision.decision,
-                              "codes": sorted({f.code for f in decision.reasons}),
-                              "warnings": sorted({f.code for f in decision.warnings})})
-        location = f"{folder}/{item.doc_id}"
-        report_docs.append(_report_entry(item, document, decision, marks, record, location,
-                                         change))
-        decisions_rows.append((run_id, item.entry.path, item.doc_id, decision.decision,
-                               json.dumps(report_docs[-1], sort_keys=True)))
-        if folder == "accepted":
-            dup = item.measures.get("duplicate") or {}
-            corpus_upserts.append((
-                item.doc_id, item.entry.path, item.intake.sha256, dup.get("text_sha256"),
-                dup.get("minhash"), trust, date.isoformat() if date else None,
-                before["first_seen"] if before else seq, run_id, folder, item.cache_key))
-            if change in ("add", "update"):
-                changes.append({"action": change, "run": run_id, "id": item.doc_id,
-                                "path": item.entry.path,
-                                "sha256": item.intake.sha256,
-                                "text": f"accepted/{item.doc_id}/text.txt"})
-        elif before is not None:
-            corpus_deletes.append(item.doc_id)
-            changes.append({"action": "remove", "run": run_id, "id": item.doc_id,
-                            "path": item.entry.path, "sha256": before["sha256"],
-                            "why": "quarantined in this run"})
+    change_no = 0
+    os.sync()  # the staged blobs must be durable before the decision refers to them
+    conn = state.conn
+    conn.execute("BEGIN IMMEDIATE")
+    try:
+        for chunk_start in range(0, len(slims), 500):
+            chunk = slims[chunk_start:chunk_start + 500]
+            rows = dict(conn.execute(
+                "SELECT idx, blob FROM run_docs WHERE run_id = ? AND idx BETWEEN ? AND ?",
+                (run_id, chunk[0].index, chunk[-1].index)).fetchall())
+            decisions_rows, corpus_upserts, corpus_deletes = [], [], []
+            placements, entries_rows, audit_entries, changes = [], [], [], []
+            for slim in chunk:
+                blob = json.loads(rows[slim.index])
+                if slim.doc_id in seen_ids:  # 80-bit ids: a collision is astronomically rare
+                    raise OutputError(f"document id collision between "
+                                      f"{seen_ids[slim.doc_id]!r} and {slim.path!r}; please "
+                                      "report this")
+                seen_ids[slim.doc_id] = slim.path
+                found = [Finding.from_json(f) for f in blob["findings"]] + slim.extra
+                marks = {**blob["checks"], "duplicate": slim.dup_mark}
+                decision = decide(found, policy.for_rule(slim.rule))
+                record = _record(blob, decision, marks, run_info)
+                folder = "accepted" if decision.decision == "accepted" else "quarantine"
+                placed = known.get(slim.doc_id)
+                status, review = "open", None
+                if placed is not None and placed[0] == folder == "quarantine" and \
+                        placed[1] == slim.sha256 and placed[3] == "rejected":
+                    # a reviewer rejected these bytes: the verdict stands while unchanged
+                    status, review = "rejected", placed[4]
+                    record["review"] = json.loads(review)
+                before = stored.get(slim.doc_id)
+                if folder == "accepted":
+                    change = "add" if before is None else (
+                        "update" if before["sha256"] != slim.sha256 else "unchanged")
+                else:
+                    change = "remove" if before is not None else "none"
+                text_key = slim.cache_key if slim.has_text else None
+                fingerprint = _placement_fingerprint(folder, record, text_key)
+                if placed is None or placed[0] != folder or placed[2] != fingerprint:
+                    payload = {"path": slim.path,
+                               "sha256": slim.sha256 if blob["problem"] is None else None,
+                               "text_key": text_key, "record": {**record, "run": run_info}}
+                    placements.append((run_id, slim.doc_id, folder, json.dumps(payload)))
+                date = slim.date.isoformat() if slim.date else None
+                entries_rows.append((slim.doc_id, folder, slim.path, slim.sha256,
+                                     fingerprint, run_id, slim.cache_key, slim.trust, date,
+                                     status, review))
+                audit_entries.append({"action": "decision", "run": run_id, "id": slim.doc_id,
+                                      "path": slim.path, "sha256": slim.sha256,
+                                      "decision": decision.decision,
+                                      "codes": sorted({f.code for f in decision.reasons}),
+                                      "warnings": sorted({f.code for f in decision.warnings})})
+                entry = _report_entry(blob, decision, marks, f"{folder}/{slim.doc_id}", change)
+                writer.document(entry)
+                tally.add(entry)
+                keep = decision.decision == "accepted" or held_shown < 5000
+                held_shown += decision.decision != "accepted"
+                html_docs.append(_html_view(entry, keep))
+                decisions_rows.append((run_id, slim.path, slim.doc_id, decision.decision,
+                                       json.dumps(entry, sort_keys=True)))
+                if folder == "accepted":
+                    dup = slim.dup or {}
+                    corpus_upserts.append((
+                        slim.doc_id, slim.path, slim.sha256, dup.get("text_sha256"),
+                        dup.get("minhash"), slim.trust, date,
+                        before["first_seen"] if before else seq, run_id, folder,
+                        slim.cache_key or "",
+                        (blob.get("source") or {}).get("url") or blob["manifest_source"]))
+                    if change in ("add", "update"):
+                        changes.append({"action": change, "run": run_id, "id": slim.doc_id,
+                                        "path": slim.path, "sha256": slim.sha256,
+                                        "text": f"accepted/{slim.doc_id}/text.txt"})
+                elif before is not None:
+                    corpus_deletes.append(slim.doc_id)
+                    changes.append({"action": "remove", "run": run_id, "id": slim.doc_id,
+                                    "path": slim.path, "sha256": before["sha256"],
+                                    "why": "quarantined in this run"})
+            _write_rows(conn, run_id, decisions_rows, corpus_upserts, corpus_deletes,
+                        placements, entries_rows, changes, change_no, chunk_start == 0)
+            change_no += len(changes)
+            audit.append(conn, audit_entries)
+            for slim in chunk:
+                reporter.advance(slim.path)
+        removed_report, tail_rows = _removals(run_id, run_info, removed_rows, superseded)
+        placements, entries_rows, audit_entries, changes, corpus_deletes = tail_rows
+        _write_rows(conn, run_id, [], [], corpus_deletes, placements, entries_rows, changes,
+                    change_no, not slims)
+        conn.executemany("DELETE FROM entries WHERE doc_id = ?",
+                         [(row["doc_id"],) for row in removed_rows])
+        unmatched = sorted(set(manifest.records) - set(seen_ids.values()))
+        summary = tally.summary(removed_report)
+        audit_entries.append({"action": "run", "run": run_id, "as_of": run_info["as_of"],
+                              "mode": mode, "policy": run_info["policy"],
+                              "summary": summary})
+        run_info = {**run_info, "audit_head": audit.append(conn, audit_entries)}
+        if index is not None:
+            run_info["index"] = {"url": index.url, "name": index.name}
+        rest = {"gate": {"version": __version__}, "manifest_unmatched": unmatched,
+                "removed": removed_report, "run": run_info, "summary": summary}
+        writer.finish(rest)
+        html = render({**rest, "documents": html_docs, "cautions": list(CAUTIONS)})
+        html_path = _pending(out, run_id, "html")
+        html_path.write_text(html, encoding="utf-8")
+        conn.execute("UPDATE runs SET state = 'decided', summary = ? WHERE run_id = ?",
+                     (json.dumps(summary, sort_keys=True), run_id))
+    except BaseException:
+        conn.execute("ROLLBACK")
+        raise
+    conn.execute("COMMIT")
+    _finish(state, placer, blobs, out, run_id, reporter, index)
+
+
+def _write_rows(conn: Any, run_id: str, decisions_rows: list, corpus_upserts: list,
+                corpus_deletes: list, placements: list, entries_rows: list, changes: list,
+                first_change: int, first: bool) -> None:
+    if first:  # a resumed run starts its rows afresh
+        conn.execute("DELETE FROM placements WHERE run_id = ?", (run_id,))
+        conn.execute("DELETE FROM changes WHERE run_id = ?", (run_id,))
+    conn.executemany("INSERT OR REPLACE INTO decisions (run_id, path, doc_id, decision, "
+                     "record) VALUES (?, ?, ?, ?, ?)", decisions_rows)
+    conn.executemany("DELETE FROM corpus WHERE doc_id = ?", [(k,) for k in corpus_deletes])
+    conn.executemany("INSERT OR REPLACE INTO corpus (doc_id, path, sha256, text_sha256, "
+                     "minhash, trust, date, first_seen, run_id, placed, cache_key, "
+                     "source_url) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", corpus_upserts)
+    conn.executemany("INSERT OR REPLACE INTO placements (run_id, doc_id, target, payload) "
+                     "VALUES (?, ?, ?, ?)", placements)
+    conn.executemany("INSERT OR REPLACE INTO entries (doc_id, folder, path, sha256, "
+                     "fingerprint, run_id, cache_key, trust, date, status, review) "
+                     "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", entries_rows)
+    conn.executemany("INSERT INTO changes (run_id, seq, line) VALUES (?, ?, ?)",
+                     [(run_id, first_change + i, dumps_line(c)) for i, c in enumerate(changes)])
+
+
+def _removals(run_id: str, run_info: dict[str, Any], removed_rows: list[dict],
+              superseded: dict[str, tuple[dict, Finding]]):
+    """Rows for documents leaving the corpus: missing from a full run's inbox, or
+    superseded by a newer version."""
+    placements, entries_rows, audit_entries, changes, corpus_deletes = [], [], [], [], []
     removed_report: list[dict[str, Any]] = []
     for row in removed_rows:
         corpus_deletes.append(row["doc_id"])
@@ -741,39 +927,7 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
                         "sha256": row["sha256"], "why": finding.message})
         removed_report.append({"id": key, "path": row["path"], "change": "superseded",
                                "why": finding.message, "location": f"quarantine/{key}"})
-    unmatched = sorted(set(manifest.records) - {i.entry.path for i in items})
-    report = build_report(run_info, report_docs, removed_report, unmatched)
-    summary = report["summary"]
-    os.sync()  # the staged blobs must be durable before the decision refers to them
-    with state.transaction() as conn:
-        conn.executemany("INSERT OR REPLACE INTO decisions (run_id, path, doc_id, decision, "
-                         "record) VALUES (?, ?, ?, ?, ?)", decisions_rows)
-        conn.executemany("DELETE FROM corpus WHERE doc_id = ?", [(k,) for k in corpus_deletes])
-        conn.executemany("INSERT OR REPLACE INTO corpus (doc_id, path, sha256, text_sha256, "
-                         "minhash, trust, date, first_seen, run_id, placed, cache_key) "
-                         "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", corpus_upserts)
-        conn.execute("DELETE FROM placements WHERE run_id = ?", (run_id,))
-        conn.executemany("INSERT INTO placements (run_id, doc_id, target, payload) "
-                         "VALUES (?, ?, ?, ?)", placements)
-        conn.executemany("DELETE FROM entries WHERE doc_id = ?",
-                         [(row["doc_id"],) for row in removed_rows])
-        conn.executemany("INSERT OR REPLACE INTO entries (doc_id, folder, path, sha256, "
-                         "fingerprint, run_id, cache_key, trust, date, status, review) "
-                         "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", entries_rows)
-        audit_entries.append({"action": "run", "run": run_id, "as_of": run_info["as_of"],
-                              "mode": mode, "policy": run_info["policy"],
-                              "summary": summary})
-        report["run"]["audit_head"] = audit.append(conn, audit_entries)
-        if index is not None:
-            report["run"]["index"] = {"url": index.url, "name": index.name}
-        conn.execute("DELETE FROM changes WHERE run_id = ?", (run_id,))
-        conn.executemany("INSERT INTO changes (run_id, seq, line) VALUES (?, ?, ?)",
-                         [(run_id, i, dumps_line(c)) for i, c in enumerate(changes)])
-        conn.execute("INSERT OR REPLACE INTO meta (key, value) VALUES (?, ?)",
-                     (f"report:{run_id}", json.dumps(report, sort_keys=True)))
-        conn.execute("UPDATE runs SET state = 'decided', summary = ? WHERE run_id = ?",
-                     (json.dumps(summary, sort_keys=True), run_id))
-    _finish(state, placer, blobs, out, run_id, reporter, index)
+    return removed_report, (placements, entries_rows, audit_entries, changes, corpus_deletes)
 
 
 def _finish(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str,
@@ -790,13 +944,10 @@ def _finish(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str,
     if index is not None:
         reporter.stage("indexing", None)
         index.sync(state.corpus())
-    row = state.conn.execute("SELECT value FROM meta WHERE key = ?",
-                             (f"report:{run_id}",)).fetchone()
-    if row is not None:  # review actions change the folders but write no run report
-        report = json.loads(row[0])
-        write_atomic(out / "report.json", dumps_report(report))
-        from gate.htmlreport import render
-        write_atomic(out / "report.html", render(report).encode("utf-8"))
+    for suffix in ("json", "html"):  # review actions change the folders but write no report
+        pending = _pending(out, run_id, suffix)
+        if pending.exists():
+            os.replace(pending, out / f"report.{suffix}")
     write_atomic(out / "changes.jsonl",
                  "".join(line + "\n" for line in change_lines(state)).encode("utf-8"))
     placer.empty_trash()
@@ -804,8 +955,7 @@ def _finish(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str,
     with state.transaction() as conn:
         conn.execute("UPDATE runs SET state = 'complete' WHERE run_id = ?", (run_id,))
         conn.execute("DELETE FROM placements WHERE run_id = ? AND done = 1", (run_id,))
-        conn.execute("DELETE FROM meta WHERE key LIKE 'report:%' AND key != ?",
-                     (f"report:{run_id}",))
+        conn.execute("DELETE FROM run_docs WHERE run_id = ?", (run_id,))
 
 
 def change_lines(state: State) -> list[str]:

@@ -29,6 +29,41 @@ def reason_json(finding: Any) -> dict[str, Any]:
             "details": finding.details}
 
 
+class Tally:
+    """The summary, counted one document at a time (the same figures as summary())."""
+
+    def __init__(self) -> None:
+        self.documents = 0
+        self.decisions: Counter[str] = Counter()
+        self.by_code: Counter[str] = Counter()
+        self.by_check: Counter[str] = Counter()
+        self.warn_codes: Counter[str] = Counter()
+        self.changes: Counter[str] = Counter()
+
+    def add(self, doc: dict[str, Any]) -> None:
+        self.documents += 1
+        self.decisions[doc["decision"]] += 1
+        self.by_code.update({r["code"] for r in doc["reasons"]})
+        self.by_check.update({r["check"] for r in doc["reasons"]})
+        self.warn_codes.update({w["code"] for w in doc["warnings"]})
+        if doc["change"] not in ("unchanged", "none"):
+            self.changes[doc["change"]] += 1
+
+    def summary(self, removed: list[dict[str, Any]]) -> dict[str, Any]:
+        changes = Counter(self.changes)
+        changes.update(r["change"] for r in removed)
+        return {
+            "documents": self.documents,
+            "accepted": self.decisions.get("accepted", 0),
+            "quarantined": self.decisions.get("quarantined", 0),
+            "quarantined_by_code": dict(sorted(self.by_code.items())),
+            "quarantined_by_check": {c: self.by_check[c] for c in CHECK_IDS
+                                     if self.by_check[c]},
+            "warnings_by_code": dict(sorted(self.warn_codes.items())),
+            "changes": dict(sorted(changes.items())),
+        }
+
+
 def summary(documents: list[dict[str, Any]], removed: list[dict[str, Any]]) -> dict[str, Any]:
     decisions = Counter(d["decision"] for d in documents)
     by_code: Counter[str] = Counter()

@@ -279,7 +279,9 @@ def _act_locked(out: Path, state: State, action: str, refs: list[str], note: str
                 measures = (cached[1].get("measures") or {}).get("duplicate") or {}
             corpus_rows.append((doc_id, row["path"], row["sha256"], measures.get("text_sha256"),
                                 measures.get("minhash"), row["trust"], row["date"], seq,
-                                review_id, "accepted", row["cache_key"] or ""))
+                                review_id, "accepted", row["cache_key"] or "",
+                                (record.get("source") or {}).get("url") or
+                                (record.get("manifest") or {}).get("source_url")))
             entry_updates.append(("accepted", _placement_fingerprint("accepted", new_record,
                                                                      text_key),
                                   review_id, "released", json.dumps(review), doc_id))
@@ -308,8 +310,8 @@ def _act_locked(out: Path, state: State, action: str, refs: list[str], note: str
         conn.executemany("INSERT INTO placements (run_id, doc_id, target, payload) "
                          "VALUES (?, ?, ?, ?)", placements)
         conn.executemany("INSERT OR REPLACE INTO corpus (doc_id, path, sha256, text_sha256, "
-                         "minhash, trust, date, first_seen, run_id, placed, cache_key) "
-                         "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", corpus_rows)
+                         "minhash, trust, date, first_seen, run_id, placed, cache_key, "
+                         "source_url) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", corpus_rows)
         conn.executemany("UPDATE entries SET folder = ?, fingerprint = ?, run_id = ?, "
                          "status = ?, review = ? WHERE doc_id = ?", entry_updates)
         conn.executemany("DELETE FROM entries WHERE doc_id = ?", [(d,) for d in entry_deletes])

@@ -58,6 +58,7 @@ CREATE TABLE decisions (
 CREATE TABLE corpus (
     doc_id TEXT PRIMARY KEY,
     path TEXT NOT NULL,
+    source_url TEXT,
     sha256 TEXT NOT NULL,
     text_sha256 TEXT,
     minhash BLOB,
@@ -103,6 +104,12 @@ CREATE TABLE audit (
     entry TEXT NOT NULL,
     prev TEXT NOT NULL,
     hash TEXT NOT NULL
+);
+CREATE TABLE run_docs (
+    run_id TEXT NOT NULL,
+    idx INTEGER NOT NULL,
+    blob TEXT NOT NULL,
+    PRIMARY KEY (run_id, idx)
 );
 CREATE TABLE changes (
     run_id TEXT NOT NULL,
@@ -243,12 +250,16 @@ class State:
 
     # -- corpus ------------------------------------------------------------------------
 
-    def corpus(self) -> list[dict[str, Any]]:
-        cols = ("doc_id", "path", "sha256", "text_sha256", "minhash", "trust", "date",
-                "first_seen", "run_id", "placed", "cache_key")
+    def corpus(self, sketches: bool = True) -> list[dict[str, Any]]:
+        """The accepted corpus; ``sketches=False`` leaves the MinHash sketches out (a
+        kilobyte each) when the caller does not compare with stored documents."""
+        cols = ("doc_id", "path", "source_url", "sha256", "text_sha256",
+                "minhash" if sketches else "NULL", "trust", "date", "first_seen", "run_id",
+                "placed", "cache_key")
         rows = self.conn.execute(f"SELECT {', '.join(cols)} FROM corpus ORDER BY first_seen, "
                                  "path").fetchall()
-        return [dict(zip(cols, row)) for row in rows]
+        names = [c if c != "NULL" else "minhash" for c in cols]
+        return [dict(zip(names, row)) for row in rows]
 
     def first_seen(self) -> dict[str, int]:
         return dict(self.conn.execute("SELECT doc_id, first_seen FROM corpus").fetchall())

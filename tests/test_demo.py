@@ -301,8 +301,10 @@ def test_public_research_warns_where_demo_quarantines(tmp_path):
     docs = _outcomes("public-research.yaml", tmp_path)
 
     def outcome(path):
-        return docs[path]["decision"], _codes(docs[path]["reasons"]), \
-            _codes(docs[path]["warnings"])
+        # quality only warns under this policy, and the demo's short notes trip its word
+        # count; those warnings are left out here (tests/test_quality.py covers them)
+        warnings = [w for w in docs[path]["warnings"] if w["check"] != "quality"]
+        return docs[path]["decision"], _codes(docs[path]["reasons"]), _codes(warnings)
 
     assert outcome("freshness/undated-memo.txt") == ("accepted", [], ["freshness.undated"])
     assert outcome("freshness/timetable-2027.html") == ("accepted", [], ["freshness.future"])

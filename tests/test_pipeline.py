@@ -356,3 +356,58 @@ language:
     assert got["own.txt"] == ("quarantined", ["language.not-allowed"])
     prov = json.loads(next((out / "accepted").glob("*/provenance.json")).read_text())
     assert prov["policy"]["overrides_from"] == "sources.allow[1]"
+
+
+def test_state_from_a_newer_gate_is_refused(tmp_path):
+    import sqlite3
+    inbox = make_inbox(tmp_path, n=2)
+    go(tmp_path, inbox, tmp_path / "out")
+    db = tmp_path / "out" / "state" / "gate.sqlite"
+    with sqlite3.connect(db) as conn:
+        conn.execute("UPDATE meta SET value = '99' WHERE key = 'schema_version'")
+    with pytest.raises(StateError, match="written by a newer gate"):
+        go(tmp_path, inbox, tmp_path / "out")
+
+
+def test_damaged_state_is_refused_not_overwritten(tmp_path):
+    inbox = make_inbox(tmp_path, n=2)
+    go(tmp_path, inbox, tmp_path / "out")
+    db = tmp_path / "out" / "state" / "gate.sqlite"
+    for suffix in ("-wal", "-shm"):
+        db.with_name(db.name + suffix).unlink(missing_ok=True)
+    data = bytearray(db.read_bytes())
+    data[100:8192] = b"\xAA" * (8192 - 100)  # clobber the schema pages
+    db.write_bytes(bytes(data))
+    with pytest.raises(StateError):
+        go(tmp_path, inbox, tmp_path / "out")
+    assert db.read_bytes()[100:110] == b"\xAA" * 10
+
+
+def test_the_gate_never_opens_a_network_connection(tmp_path, monkeypatch):
+    """Documents full of URLs, links, canonical addresses and images: nothing is fetched.
+    The socket patch is inherited by the forked workers."""
+    import socket
+    attempts = []
+
+    def refuse(self, address, *args, **kwargs):
+        attempts.append(address)
+        raise OSError("network access attempted during a gate run")
+
+    monkeypatch.setattr(socket.socket, "connect", refuse)
+    monkeypatch.setattr(socket.socket, "connect_ex", refuse)
+    monkeypatch.setattr(socket, "create_connection", lambda *a, **k: refuse(None, a))
+    inbox = tmp_path / "inbox"
+    inbox.mkdir()
+    (inbox / "links.html").write_text(
+        "<html><head><link rel=canonical href='https://docs.example.org/x'>"
+        "<meta property='og:url' content='https://docs.example.org/x'>"
+        "<link rel=stylesheet href='https://cdn.example.net/s.css'></head><body>"
+        "<img src='https://img.example.net/a.png'><p>See https://docs.example.org/y and "
+        "<a href='http://example.com/z'>this page</a>. " + prose(5) + "</p>"
+        "<iframe src='https://embed.example.net/'></iframe></body></html>")
+    (inbox / "url.txt").write_text("https://docs.example.org/only-a-url\n")
+    (inbox / "manifest.jsonl").write_text(json.dumps(
+        {"path": "links.html", "source_url": "https://docs.example.org/links.html"}) + "\n")
+    go(tmp_path, inbox, tmp_path / "out", workers=2)
+    assert attempts == []
+    assert len(report(tmp_path / "out")["documents"]) == 2

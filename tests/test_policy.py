@@ -224,3 +224,9 @@ sources:
         load_policy(path)
     assert info.value.problems[0].startswith(
         "line 9: sources.allow[0].overrides.language.min_confidence: Input should be less")
+
+
+def test_yaml_tags_that_build_objects_are_refused():
+    # safe loading: a python/object tag must never construct anything
+    got = problems("version: 1\nname: !!python/object/apply:os.system ['true']\n")
+    assert got[0].startswith("line 2: YAML syntax")
