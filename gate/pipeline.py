@@ -676,7 +676,7 @@ def _html_view(entry: dict[str, Any], keep_reasons: bool) -> dict[str, Any]:
     """The small part of a report entry the HTML page draws."""
     view = {k: entry[k] for k in ("path", "id", "decision", "type", "size", "text_chars",
                                   "location", "change", "title", "language",
-                                  "injection_score", "source") if k in entry}
+                                  "injection_score", "source", "checks") if k in entry}
     view["warnings"] = [{"check": w["check"], "code": w["code"], "message": w["message"]}
                         for w in entry["warnings"]]
     view["reasons"] = [{"check": r["check"], "code": r["code"], "message": r["message"],

@@ -269,7 +269,6 @@ def evaluate(items: Sequence[Item], settings: DuplicatesSettings,
     outcome = Outcome()
     bands, rows = band_params(settings.threshold)
     lsh = MinHashLSH(num_perm=NUM_PERM, params=(bands, rows))
-    sketches: dict[str, LeanMinHash] = {}
     by_bytes: dict[str, Item] = {}
     by_text: dict[str, Item] = {}
     kept: dict[str, Item] = {}
@@ -283,10 +282,12 @@ def evaluate(items: Sequence[Item], settings: DuplicatesSettings,
             return by_text[item.text_sha256], "same text", 1.0
         if item.minhash is None:
             return None
-        mine = sketches.get(item.key) or lean(item.minhash)
+        mine = lean(item.minhash)
         best: tuple[Item, str, float] | None = None
         for key in sorted(lsh.query(mine)):
-            similarity = float(mine.jaccard(sketches[key]))
+            # sketches are rebuilt from their bytes for the few candidates, rather than
+            # kept as objects for every kept document (memory grows with the corpus)
+            similarity = float(mine.jaccard(lean(kept[key].minhash)))
             if similarity >= settings.threshold and (best is None or similarity > best[2]):
                 best = (kept[key], "near", similarity)
         return best
@@ -299,8 +300,7 @@ def evaluate(items: Sequence[Item], settings: DuplicatesSettings,
             if item.text_sha256:
                 by_text.setdefault(item.text_sha256, item)
             if item.minhash is not None:
-                sketches[item.key] = lean(item.minhash)
-                lsh.insert(item.key, sketches[item.key], check_duplication=False)
+                lsh.insert(item.key, lean(item.minhash), check_duplication=False)
             continue
         keeper, how, similarity = hit
         finding = _finding(item, keeper, how, similarity, settings, text_of)
