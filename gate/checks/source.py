@@ -98,6 +98,10 @@ class _Rule(Strict):
 
 
 class _AllowRule(_Rule):
+    trust: int = Field(1, ge=1, le=100, description="Higher wins when near-duplicates "
+                                                    "conflict.", examples=[3])
+    max_age_days: int | None = Field(None, ge=0, description="Overrides freshness."
+                                     "max_age_days for documents this rule admits.")
     overrides: dict[str, Any] | None = Field(
         None, description="Policy sections (integrity, freshness, language, injection, "
         "quality, format) that apply differently to the documents this rule admits; merged "
@@ -109,10 +113,6 @@ class DomainAllow(_AllowRule):
                         examples=["docs.example.org"])
     subdomains: bool = Field(False, description="Also admit any depth of names below it.")
     schemes: tuple[str, ...] = Field(("http", "https"), description="URL schemes admitted.")
-    trust: int = Field(1, ge=1, le=100, description="Higher wins when near-duplicates "
-                                                    "conflict.", examples=[3])
-    max_age_days: int | None = Field(None, ge=0, description="Overrides freshness."
-                                     "max_age_days for documents this rule admits.")
 
     @field_validator("domain")
     @classmethod
@@ -131,10 +131,6 @@ class PrefixAllow(_AllowRule):
     url_prefix: str = Field(description="URL prefix, matched on path-segment boundaries "
                                         "after RFC 3986 normalisation.",
                             examples=["https://wiki.example.org/public/"])
-    trust: int = Field(1, ge=1, le=100, description="Higher wins when near-duplicates "
-                                                    "conflict.")
-    max_age_days: int | None = Field(None, ge=0, description="Overrides freshness."
-                                     "max_age_days for documents this rule admits.")
 
     @field_validator("url_prefix")
     @classmethod
@@ -145,10 +141,6 @@ class PrefixAllow(_AllowRule):
 class PathAllow(_AllowRule):
     path: str = Field(description="Inbox-relative path prefix, for documents with no "
                                   "source_url.", examples=["local/"])
-    trust: int = Field(1, ge=1, le=100, description="Higher wins when near-duplicates "
-                                                    "conflict.")
-    max_age_days: int | None = Field(None, ge=0, description="Overrides freshness."
-                                     "max_age_days for documents this rule admits.")
 
     @field_validator("path")
     @classmethod
