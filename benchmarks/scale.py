@@ -30,10 +30,13 @@ from benchmarks.corpus import BENCH_POLICY, make_corpus  # noqa: E402
 from benchmarks.procmem import Sampler  # noqa: E402
 
 
-def gate_run(inbox: Path, out: Path, policy: Path, workers: int) -> dict:
+def gate_run(inbox: Path, out: Path, policy: Path, workers: int,
+             index: str | None = None) -> dict:
     shutil.rmtree(out, ignore_errors=True)
     cmd = [sys.executable, "-m", "gate", "run", str(inbox), "--policy", str(policy), "--out",
            str(out), "--as-of", "2026-12-01T00:00:00Z", "--workers", str(workers), "-q"]
+    if index:  # a fresh index name per run, so runs do not see each other's documents
+        cmd += ["--index", index, "--index-name", f"bench-{out.name}-{time.time_ns()}"]
     started = time.perf_counter()
     proc = subprocess.Popen(cmd, stdout=subprocess.PIPE, stderr=subprocess.PIPE,
                             env={**os.environ, "GATE_TIMINGS": "1"})
@@ -71,16 +74,19 @@ def main() -> None:
     parser.add_argument("--baseline", type=int, default=2000,
                         help="corpus size for the sequential baseline (0: skip)")
     parser.add_argument("--work", type=Path, default=ROOT / "bench-out")
+    parser.add_argument("--index", help="run with the near-duplicate index in Redis (URL)")
     args = parser.parse_args()
     args.work.mkdir(parents=True, exist_ok=True)
     policy = args.work / "bench-policy.yaml"
     policy.write_text(BENCH_POLICY)
-    print(f"machine: {os.cpu_count()} cores, python {sys.version.split()[0]}", flush=True)
+    print(f"machine: {os.cpu_count()} cores, python {sys.version.split()[0]}"
+          + (f"; near-duplicate index in Redis at {args.index}" if args.index else ""),
+          flush=True)
     results: dict[tuple[int, int], dict] = {}
     for n in args.docs:
         inbox = make_corpus(args.work / f"corpus-{n}", n)
         for workers in args.workers:
-            r = gate_run(inbox, args.work / f"scale-{n}-{workers}", policy, workers)
+            r = gate_run(inbox, args.work / f"scale-{n}-{workers}", policy, workers, args.index)
             results[(n, workers)] = r
             print(f"{n:>6} docs, {workers} worker(s): {r['seconds']:7.1f} s, "
                   f"{r['docs'] / r['seconds']:6.1f} docs/s, peak memory "

@@ -151,21 +151,23 @@ class SharedIndex:
 
     # -- keeping it in line with the folder's corpus -------------------------------------
 
-    def sync(self, corpus_rows: list[dict[str, Any]]) -> tuple[int, int]:
-        """Make the index hold exactly this folder's accepted corpus; (added, removed)."""
+    def sync(self, state: Any) -> tuple[int, int]:
+        """Make the index hold exactly this folder's accepted corpus; (added, removed).
+
+        Only the documents that changed are read in full, in batches, so syncing a large
+        corpus does not load every sketch at once."""
         owner_key = self.prefix + "owner:" + self.owner
-        current = {m.decode() for m in self.redis.smembers(owner_key)}
-        desired = {self._member(row["doc_id"]): row for row in corpus_rows}
-        metas = self.redis.hmget(self.prefix + "meta", sorted(current)) if current else []
-        stale = set(current) - set(desired)
-        for member, raw in zip(sorted(current), metas):
-            if member in desired and raw is not None:
-                if json.loads(raw).get("sha256") != desired[member]["sha256"]:
-                    stale.add(member)
-        for member, raw in zip(sorted(current), metas):
-            if member not in stale:
-                continue
-            meta = json.loads(raw) if raw else {}
+        current = sorted(m.decode() for m in self.redis.smembers(owner_key))
+        desired = {self._member(doc_id): sha for doc_id, sha in state.conn.execute(
+            "SELECT doc_id, sha256 FROM corpus")}
+        stale: list[tuple[str, dict[str, Any]]] = []
+        for start in range(0, len(current), 1000):
+            members = current[start:start + 1000]
+            for member, raw in zip(members, self.redis.hmget(self.prefix + "meta", members)):
+                meta = json.loads(raw) if raw else {}
+                if desired.get(member) != meta.get("sha256"):
+                    stale.append((member, meta))
+        for member, meta in stale:
             if member in self.lsh:
                 self.lsh.remove(member)
             pipe = self.redis.pipeline()
@@ -176,24 +178,28 @@ class SharedIndex:
             if meta.get("text_sha256"):
                 pipe.srem(self.prefix + "text:" + meta["text_sha256"], member)
             pipe.execute()
+        present = set(current) - {member for member, _meta in stale}
+        missing = sorted(m for m in desired if m not in present)
         added = 0
         with self.lsh.insertion_session() as session:
-            for member, row in sorted(desired.items()):
-                if member in current and member not in stale:
-                    continue
-                meta = {"path": row["path"], "sha256": row["sha256"],
-                        "text_sha256": row["text_sha256"],
-                        "minhash": row["minhash"].hex() if row["minhash"] else None,
-                        "trust": row["trust"], "date": row["date"],
-                        "first_seen": row["first_seen"]}
-                pipe = self.redis.pipeline()
-                pipe.hset(self.prefix + "meta", member, json.dumps(meta, sort_keys=True))
-                pipe.sadd(owner_key, member)
-                pipe.sadd(self.prefix + "sha:" + row["sha256"], member)
-                if row["text_sha256"]:
-                    pipe.sadd(self.prefix + "text:" + row["text_sha256"], member)
-                pipe.execute()
-                if row["minhash"]:
-                    session.insert(member, dup.lean(row["minhash"]), check_duplication=False)
-                added += 1
+            for start in range(0, len(missing), 500):
+                ids = [m.partition(":")[2] for m in missing[start:start + 500]]
+                for row in state.corpus_rows(ids):
+                    member = self._member(row["doc_id"])
+                    meta = {"path": row["path"], "sha256": row["sha256"],
+                            "text_sha256": row["text_sha256"],
+                            "minhash": row["minhash"].hex() if row["minhash"] else None,
+                            "trust": row["trust"], "date": row["date"],
+                            "first_seen": row["first_seen"]}
+                    pipe = self.redis.pipeline()
+                    pipe.hset(self.prefix + "meta", member, json.dumps(meta, sort_keys=True))
+                    pipe.sadd(owner_key, member)
+                    pipe.sadd(self.prefix + "sha:" + row["sha256"], member)
+                    if row["text_sha256"]:
+                        pipe.sadd(self.prefix + "text:" + row["text_sha256"], member)
+                    pipe.execute()
+                    if row["minhash"]:
+                        session.insert(member, dup.lean(row["minhash"]),
+                                       check_duplication=False)
+                    added += 1
         return added, len(stale)

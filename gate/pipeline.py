@@ -933,17 +933,17 @@ def _removals(run_id: str, run_info: dict[str, Any], removed_rows: list[dict],
 def _finish(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str,
             reporter: Reporter, index: Any = None) -> None:
     """Apply the run's outstanding placements, then write the report and change set."""
-    pending = [p for p in state.pending_placements() if p[0] == run_id]
-    reporter.stage("placing", len(pending))
-    for start in range(0, len(pending), PLACE_BATCH):
-        batch = pending[start:start + PLACE_BATCH]
-        placer.apply_batch([(doc, target, payload) for _run, doc, target, payload in batch])
-        state.mark_placed([(run_id, doc) for _run, doc, _target, _payload in batch])
-        for _run, _doc, _target, payload in batch:
+    reporter.stage("placing", state.pending_count(run_id))
+    after = ""
+    while batch := state.pending_batch(run_id, after, PLACE_BATCH):
+        placer.apply_batch(batch)
+        state.mark_placed([(run_id, doc) for doc, _target, _payload in batch])
+        for _doc, _target, payload in batch:
             reporter.advance(payload.get("path"))
+        after = batch[-1][0]
     if index is not None:
         reporter.stage("indexing", None)
-        index.sync(state.corpus())
+        index.sync(state)
     for suffix in ("json", "html"):  # review actions change the folders but write no report
         pending = _pending(out, run_id, suffix)
         if pending.exists():

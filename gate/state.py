@@ -264,11 +264,30 @@ class State:
     def first_seen(self) -> dict[str, int]:
         return dict(self.conn.execute("SELECT doc_id, first_seen FROM corpus").fetchall())
 
-    def pending_placements(self) -> list[tuple[str, str, str, dict]]:
+    def pending_count(self, run_id: str) -> int:
+        return self.conn.execute("SELECT COUNT(*) FROM placements WHERE run_id = ? AND "
+                                 "done = 0", (run_id,)).fetchone()[0]
+
+    def pending_batch(self, run_id: str, after: str, limit: int
+                      ) -> list[tuple[str, str, dict]]:
+        """The next ``limit`` placements of a run not yet done, after doc id ``after``
+        (in batches, so a large run never holds every payload in memory)."""
         rows = self.conn.execute(
-            "SELECT run_id, doc_id, target, payload FROM placements WHERE done = 0 "
-            "ORDER BY run_id, doc_id").fetchall()
-        return [(r, d, t, json.loads(p)) for r, d, t, p in rows]
+            "SELECT doc_id, target, payload FROM placements WHERE run_id = ? AND done = 0 "
+            "AND doc_id > ? ORDER BY doc_id LIMIT ?", (run_id, after, limit)).fetchall()
+        return [(d, t, json.loads(p)) for d, t, p in rows]
+
+    def corpus_rows(self, doc_ids: list[str]) -> list[dict[str, Any]]:
+        """Full corpus rows (with sketches) for some documents."""
+        out = []
+        for start in range(0, len(doc_ids), 500):
+            chunk = doc_ids[start:start + 500]
+            marks = ", ".join("?" * len(chunk))
+            cols = ("doc_id", "path", "source_url", "sha256", "text_sha256", "minhash",
+                    "trust", "date", "first_seen", "run_id", "placed", "cache_key")
+            out += [dict(zip(cols, row)) for row in self.conn.execute(
+                f"SELECT {', '.join(cols)} FROM corpus WHERE doc_id IN ({marks})", chunk)]
+        return out
 
     def mark_placed(self, items: Iterable[tuple[str, str]]) -> None:
         with self.transaction() as conn:
