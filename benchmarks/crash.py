@@ -8,7 +8,8 @@ After every kill it checks that no half-written entry is visible in accepted/ or
 quarantine/; after the final, completing run it checks that every inbox document is in the
 report exactly once, in exactly one folder, with the same decision as an uninterrupted run.
 It prints kills survived, documents accounted for, hostile files handled, the peak memory
-of the whole process tree (parent and workers, sampled every 20 ms) and wall times.
+of the whole process tree (RSS summed over parent and workers, an upper bound, sampled
+every 50 ms) and wall times.
 """
 
 from __future__ import annotations
