@@ -105,6 +105,10 @@ class Placer:
     def entry(self, folder: str, doc_id: str) -> Path:
         return self.out / folder / doc_id
 
+    def has_original(self, folder: str, doc_id: str) -> bool:
+        """Whether the entry placed in ``folder`` holds a copy of its original."""
+        return folder in FOLDERS and (self.entry(folder, doc_id) / "original").exists()
+
     def _original_source(self, doc_id: str, sha256: str | None) -> Path | None:
         if sha256 is None:
             return None

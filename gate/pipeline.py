@@ -288,7 +288,7 @@ def _run_body(opts, inbox, out, manifest, state, reporter, policy, placer, blobs
     timings: dict[str, float] = {}
     releases = state.releases()
     slims = _extract_and_check(inbox, manifest, params, limits.max_bytes, opts, state, blobs,
-                               reporter, timings, policy, ctx, run_id, releases)
+                               placer, reporter, timings, policy, ctx, run_id, releases)
     reporter.stage("comparing", None)
     corpus_rows = state.corpus(sketches=mode == "incremental" and index is None)
     removed_rows, superseded = _corpus_checks(slims, corpus_rows, policy.policy, seq, mode,
@@ -331,8 +331,8 @@ class Slim:
 
 def _extract_and_check(inbox: Path, manifest: manifest_mod.Manifest, params: Params,
                        max_bytes: int, opts: RunOptions, state: State, blobs: Blobs,
-                       reporter: Reporter, timings: dict[str, float], loaded: LoadedPolicy,
-                       ctx: RunContext, run_id: str,
+                       placer: Placer, reporter: Reporter, timings: dict[str, float],
+                       loaded: LoadedPolicy, ctx: RunContext, run_id: str,
                        releases: dict[tuple[str, str], dict[str, str]]) -> list[Slim]:
     """Read, extract, measure and check every document, streaming: each one's full record
     goes to the run_docs table as soon as it is checked, and only its Slim stays here."""
@@ -376,7 +376,10 @@ def _extract_and_check(inbox: Path, manifest: manifest_mod.Manifest, params: Par
                 continue
             item.cache_key = f"{intake.sha256}:{fingerprint}"
             placed = known.get(item.doc_id)
-            if placed is None or placed[1] != intake.sha256:
+            # the placed entry's original is reused when it holds these bytes; an entry
+            # without one (a file once over limits.max_bytes, now within) needs them staged
+            if placed is None or placed[1] != intake.sha256 or \
+                    not placer.has_original(placed[0], item.doc_id):
                 blobs.put(intake.sha256, intake.data)
             cached = state.cache_meta(item.cache_key)
             if cached is not None:

@@ -411,3 +411,28 @@ def test_the_gate_never_opens_a_network_connection(tmp_path, monkeypatch):
     go(tmp_path, inbox, tmp_path / "out", workers=2)
     assert attempts == []
     assert len(report(tmp_path / "out")["documents"]) == 2
+
+
+def test_a_file_once_over_max_bytes_is_placed_with_its_original_when_the_limit_rises(tmp_path):
+    # Regression: a file over limits.max_bytes is quarantined without a copy of its bytes.
+    # A later run under a policy with a higher limit reads the same bytes; it must stage
+    # them rather than count on the entry's (absent) original, or the run cannot commit.
+    inbox = tmp_path / "inbox"
+    (inbox / "local").mkdir(parents=True)
+    body = prose(77, words=400)  # invented fixture text, about 3 KB
+    (inbox / "local" / "big.txt").write_text(body)
+    out = tmp_path / "out"
+    small = POLICY + "limits:\n  max_bytes: 1024\n"
+    first = run(RunOptions(inbox=inbox, policy=loaded(tmp_path, small), out=out, as_of=AS_OF,
+                           workers=1))
+    assert first.summary["quarantined"] == 1
+    entry = out / report(out)["documents"][0]["location"]
+    assert "format.too-large" in [r["code"] for r in report(out)["documents"][0]["reasons"]]
+    assert not (entry / "original").exists()
+    second = run(RunOptions(inbox=inbox, policy=loaded(tmp_path), out=out, as_of=AS_OF,
+                            workers=1))
+    assert second.summary["documents"] == 1
+    doc = report(out)["documents"][0]
+    assert "format.too-large" not in [r["code"] for r in doc["reasons"]]
+    assert (out / doc["location"] / "original").read_bytes() == body.encode()
+    assert_placed_once(inbox, out)
