@@ -234,7 +234,8 @@ def explain_command(
             sys.stdout.write(json.dumps(result.to_json(), indent=2, ensure_ascii=True) + "\n")
             return
         ex = result.document.extracted
-        _print(f"{rel}: {ex.type or 'unreadable'}, {result.document.size} bytes, "
+        kind = ex.type or (ex.problem or "unsupported").replace("-", " ")
+        _print(f"{rel}: {kind}, {result.document.size} bytes, "
                f"{ex.text_chars} characters of text")
         _print(f"decision under {loaded.name!r}: {result.decision}")
         for check in result.checks:
