@@ -13,44 +13,11 @@ import threading
 import time
 
 
-def _descendants(root_pid: int) -> list[int]:
-    children: dict[int, list[int]] = {}
-    for entry in os.listdir("/proc"):
-        if not entry.isdigit():
-            continue
-        try:
-            with open(f"/proc/{entry}/stat", encoding="ascii", errors="replace") as fh:
-                fields = fh.read().rsplit(")", 1)[1].split()
-        except OSError:
-            continue
-        children.setdefault(int(fields[1]), []).append(int(entry))
-    out, stack = [], [root_pid]
-    while stack:
-        pid = stack.pop()
-        out.append(pid)
-        stack.extend(children.get(pid, []))
-    return out
-
-
-def tree_pss(root_pid: int) -> int:
-    """Proportional set size of a process and its descendants, bytes."""
-    total = 0
-    for pid in _descendants(root_pid):
-        try:
-            with open(f"/proc/{pid}/smaps_rollup", encoding="ascii") as fh:
-                for line in fh:
-                    if line.startswith("Pss:"):
-                        total += int(line.split()[1]) * 1024
-                        break
-        except OSError:
-            continue
-    return total
-
-
-def tree_rss(root_pid: int) -> int:
-    """Resident memory of a process and all its descendants, bytes."""
+def _scan() -> tuple[dict[int, list[int]], dict[int, int]]:
+    """One pass over /proc: parent pid -> child pids, and pid -> RSS in bytes."""
     children: dict[int, list[int]] = {}
     rss: dict[int, int] = {}
+    page = os.sysconf("SC_PAGE_SIZE")
     for entry in os.listdir("/proc"):
         if not entry.isdigit():
             continue
@@ -61,13 +28,35 @@ def tree_rss(root_pid: int) -> int:
             continue
         pid, ppid = int(entry), int(fields[1])
         children.setdefault(ppid, []).append(pid)
-        rss[pid] = int(fields[21]) * os.sysconf("SC_PAGE_SIZE")
-    total, stack = 0, [root_pid]
+        rss[pid] = int(fields[21]) * page
+    return children, rss
+
+
+def _tree(root_pid: int, children: dict[int, list[int]]) -> list[int]:
+    out, stack = [], [root_pid]
     while stack:
         pid = stack.pop()
-        total += rss.get(pid, 0)
+        out.append(pid)
         stack.extend(children.get(pid, []))
-    return total
+    return out
+
+
+def _pss(pid: int) -> int:
+    try:
+        with open(f"/proc/{pid}/smaps_rollup", encoding="ascii") as fh:
+            for line in fh:
+                if line.startswith("Pss:"):
+                    return int(line.split()[1]) * 1024
+    except OSError:
+        pass
+    return 0
+
+
+def tree_memory(root_pid: int) -> tuple[int, int]:
+    """(RSS sum, PSS sum) of a process and all its descendants, bytes."""
+    children, rss = _scan()
+    pids = _tree(root_pid, children)
+    return sum(rss.get(pid, 0) for pid in pids), sum(_pss(pid) for pid in pids)
 
 
 class Sampler(threading.Thread):
@@ -80,8 +69,8 @@ class Sampler(threading.Thread):
 
     def run(self) -> None:
         while self.running:
-            self.peak = max(self.peak, tree_rss(self.pid))
-            self.peak_pss = max(self.peak_pss, tree_pss(self.pid))
+            rss, pss = tree_memory(self.pid)
+            self.peak, self.peak_pss = max(self.peak, rss), max(self.peak_pss, pss)
             time.sleep(0.05)
 
     def stop(self) -> int:
