@@ -470,7 +470,9 @@ def _evaluate(item: Item, loaded: LoadedPolicy, ctx: RunContext,
     _apply_releases(item.intake.sha256, found, releases)
     base = loaded.policy
     match = source_check.match(document, base.sources) if base.sources is not None else None
-    date = _date_of(document, ctx)
+    chosen = freshness_check.choose(document, ctx)
+    dated = chosen is not None and not isinstance(chosen, Finding)
+    date = chosen[1].latest if dated else None
     rule = match.allowed_by if policy is not base and match is not None else None
     blob: dict[str, Any] = {
         "path": item.entry.path, "id": item.doc_id, "kind": item.entry.kind,
@@ -488,8 +490,7 @@ def _evaluate(item: Item, loaded: LoadedPolicy, ctx: RunContext,
                           "allowed_by": None if match.allowed_by is None else
                           f"sources.allow[{match.allowed_by}] "
                           f"({source_check.rule_text(base.sources.allow[match.allowed_by])})"}
-    chosen = freshness_check.choose(document, ctx)
-    if chosen is not None and not isinstance(chosen, Finding):
+    if dated:
         blob["date"] = {"value": chosen[1].iso(), "source": chosen[0].source}
     dup = item.measures.get("duplicate")
     slim = Slim(index=item.index, doc_id=item.doc_id, path=item.entry.path,
@@ -516,19 +517,6 @@ def _apply_releases(sha256: str | None, found: list[Finding],
             message=f"{finding.message} (released by {release['by']} on "
                     f"{release['at'][:10]}: {release['note']})",
             details={**finding.details, "released": release}, action="warn")
-
-
-def _date_of(document: Document, ctx: RunContext) -> datetime | None:
-    chosen = freshness_check.choose(document, ctx)
-    if chosen is None or isinstance(chosen, Finding):
-        return None
-    return chosen[1].latest
-
-
-def _trust_of(document: Document, policy: Any) -> int:
-    if policy.sources is None:
-        return source_check.UNMATCHED_TRUST
-    return source_check.match(document, policy.sources).trust
 
 
 # -- corpus checks -----------------------------------------------------------------------

@@ -30,7 +30,7 @@ def reason_json(finding: Any) -> dict[str, Any]:
 
 
 class Tally:
-    """The summary, counted one document at a time (the same figures as summary())."""
+    """The summary of a run, counted one document at a time."""
 
     def __init__(self) -> None:
         self.documents = 0
@@ -65,26 +65,11 @@ class Tally:
 
 
 def summary(documents: list[dict[str, Any]], removed: list[dict[str, Any]]) -> dict[str, Any]:
-    decisions = Counter(d["decision"] for d in documents)
-    by_code: Counter[str] = Counter()
-    by_check: Counter[str] = Counter()
-    warn_codes: Counter[str] = Counter()
+    """The summary of a whole list of report entries (a run counts with Tally as it goes)."""
+    tally = Tally()
     for doc in documents:
-        codes = {r["code"] for r in doc["reasons"]}
-        by_code.update(codes)
-        by_check.update({r["check"] for r in doc["reasons"]})
-        warn_codes.update({w["code"] for w in doc["warnings"]})
-    changes = Counter(d["change"] for d in documents if d["change"] not in ("unchanged", "none"))
-    changes.update(r["change"] for r in removed)
-    return {
-        "documents": len(documents),
-        "accepted": decisions.get("accepted", 0),
-        "quarantined": decisions.get("quarantined", 0),
-        "quarantined_by_code": dict(sorted(by_code.items())),
-        "quarantined_by_check": {c: by_check[c] for c in CHECK_IDS if by_check[c]},
-        "warnings_by_code": dict(sorted(warn_codes.items())),
-        "changes": dict(sorted(changes.items())),
-    }
+        tally.add(doc)
+    return tally.summary(removed)
 
 
 def build(run: dict[str, Any], documents: list[dict[str, Any]],
@@ -98,16 +83,6 @@ def build(run: dict[str, Any], documents: list[dict[str, Any]],
         "manifest_unmatched": manifest_unmatched,
         "cautions": list(CAUTIONS),
     }
-
-
-def dumps(report: Any) -> bytes:
-    """Pretty, sorted JSON in UTF-8. File names that are not valid UTF-8 (held as lone
-    surrogates) force ASCII escapes, so the output is always valid JSON and UTF-8."""
-    text = json.dumps(report, indent=2, sort_keys=True, ensure_ascii=False) + "\n"
-    try:
-        return text.encode("utf-8")
-    except UnicodeEncodeError:
-        return (json.dumps(report, indent=2, sort_keys=True) + "\n").encode("ascii")
 
 
 def dumps_line(obj: Any) -> str:

@@ -150,6 +150,11 @@ def loads(text: str) -> Any:
     return decode(json.loads(text))
 
 
+# the columns of a corpus row, in the order State.corpus and State.corpus_rows read them
+CORPUS_COLS = ("doc_id", "path", "source_url", "sha256", "text_sha256", "minhash", "trust",
+               "date", "first_seen", "run_id", "placed", "cache_key")
+
+
 class State:
     """A connection to the state database. Use :func:`open_state`."""
 
@@ -253,13 +258,10 @@ class State:
     def corpus(self, sketches: bool = True) -> list[dict[str, Any]]:
         """The accepted corpus; ``sketches=False`` leaves the MinHash sketches out (a
         kilobyte each) when the caller does not compare with stored documents."""
-        cols = ("doc_id", "path", "source_url", "sha256", "text_sha256",
-                "minhash" if sketches else "NULL", "trust", "date", "first_seen", "run_id",
-                "placed", "cache_key")
-        rows = self.conn.execute(f"SELECT {', '.join(cols)} FROM corpus ORDER BY first_seen, "
+        select = ", ".join(c if sketches or c != "minhash" else "NULL" for c in CORPUS_COLS)
+        rows = self.conn.execute(f"SELECT {select} FROM corpus ORDER BY first_seen, "
                                  "path").fetchall()
-        names = [c if c != "NULL" else "minhash" for c in cols]
-        return [dict(zip(names, row)) for row in rows]
+        return [dict(zip(CORPUS_COLS, row)) for row in rows]
 
     def first_seen(self) -> dict[str, int]:
         return dict(self.conn.execute("SELECT doc_id, first_seen FROM corpus").fetchall())
@@ -283,10 +285,9 @@ class State:
         for start in range(0, len(doc_ids), 500):
             chunk = doc_ids[start:start + 500]
             marks = ", ".join("?" * len(chunk))
-            cols = ("doc_id", "path", "source_url", "sha256", "text_sha256", "minhash",
-                    "trust", "date", "first_seen", "run_id", "placed", "cache_key")
-            out += [dict(zip(cols, row)) for row in self.conn.execute(
-                f"SELECT {', '.join(cols)} FROM corpus WHERE doc_id IN ({marks})", chunk)]
+            out += [dict(zip(CORPUS_COLS, row)) for row in self.conn.execute(
+                f"SELECT {', '.join(CORPUS_COLS)} FROM corpus WHERE doc_id IN ({marks})",
+                chunk)]
         return out
 
     def mark_placed(self, items: Iterable[tuple[str, str]]) -> None:
