@@ -42,7 +42,7 @@ from gate.checks import source as source_check
 from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.extract.model import DateClaim
 from gate.findings import Finding, define
-from gate.policy.base import Section
+from gate.settings import Section
 
 STALE = define("freshness.stale", "older than the allowed age",
                "the document is dated {date} ({source}), {age_days} days before the as-of "

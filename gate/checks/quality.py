@@ -39,7 +39,7 @@ from pydantic import Field
 from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.extract.model import Extraction
 from gate.findings import Finding, define
-from gate.policy.base import Section
+from gate.settings import Section
 
 MAX_SCANNED_WORDS = 120_000  # beyond max_words the document fails anyway
 

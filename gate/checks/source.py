@@ -43,7 +43,7 @@ from gate import urls
 from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.findings import Finding, define
 from gate.manifest import normalize_path
-from gate.policy.base import Section, Strict
+from gate.settings import Section, Strict
 
 DENIED = define("source.denied", "the source is on the deny list",
                 "{what} is denied by sources.deny[{rule}] ({rule_text})")
@@ -103,9 +103,9 @@ class _AllowRule(_Rule):
     max_age_days: int | None = Field(None, ge=0, description="Overrides freshness."
                                      "max_age_days for documents this rule admits.")
     overrides: dict[str, Any] | None = Field(
-        None, description="Policy sections (integrity, freshness, language, injection, "
-        "quality, format) that apply differently to the documents this rule admits; merged "
-        "onto the policy.", examples=[{"language": {"allowed": ["en", "fr"]}}])
+        None, description="Policy sections of the per-document checks (every one but "
+        "sources) that apply differently to the documents this rule admits; merged onto "
+        "the policy.", examples=[{"language": {"allowed": ["en", "fr"]}}])
 
 
 class DomainAllow(_AllowRule):
@@ -300,5 +300,5 @@ def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding]:
     return []
 
 
-CHECK = DocumentCheck(id="source", section="sources", evaluate=evaluate,
+CHECK = DocumentCheck(id="source", section="sources", evaluate=evaluate, per_source=False,
                       settings=SourcesSettings, doc=__doc__ or "")
