@@ -23,6 +23,7 @@ from gate import checks
 from gate.checks.base import Document, RunContext
 from gate.corpus import run_corpus_checks
 from gate.discovery import Entry
+from gate.documents import params_of
 from gate.errors import InboxError
 from gate.evaluation import evaluate_document, extraction_of
 from gate.extract.model import Extracted
@@ -31,7 +32,7 @@ from gate.intake import read_entry
 from gate.manifest import ManifestRecord
 from gate.policy import LoadedPolicy
 from gate.record import doc_record, slim
-from gate.work import Params, process, warm_up
+from gate.work import process, warm_up
 
 _BULKY = {"minhash"}
 
@@ -74,8 +75,7 @@ def explain(file: Path, loaded: LoadedPolicy, *, record: ManifestRecord | None,
     rel = inbox_path or file.name
     entry = _entry(file)
     intake = read_entry(file.parent, entry, limits.max_bytes)
-    params = Params(max_pages=limits.max_pages, max_nesting=limits.max_nesting,
-                    timeout_s=limits.timeout_s, memory_mb=limits.memory_mb)
+    params = params_of(loaded)
     measures: dict[str, Any] = {}
     errors: dict[str, str] = {}
     if intake.problem is not None:

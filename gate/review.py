@@ -259,11 +259,11 @@ def _act_locked(out: Path, state: State, action: str, refs: list[str], note: str
             cached = state.cache_meta(row["cache_key"]) if row["cache_key"] else None
             if cached:
                 measures = (cached[1].get("measures") or {}).get("duplicate") or {}
-            rows.corpus_upserts.append((doc_id, row["path"], row["sha256"], measures.get("text_sha256"),
-                                measures.get("minhash"), row["trust"], row["date"], seq,
-                                review_id, "accepted", row["cache_key"] or "",
-                                (record.get("source") or {}).get("url") or
-                                (record.get("manifest") or {}).get("source_url")))
+            rows.corpus_upserts.append((
+                doc_id, row["path"], row["sha256"], measures.get("text_sha256"),
+                measures.get("minhash"), row["trust"], row["date"], seq, review_id, "accepted",
+                row["cache_key"] or "", (record.get("source") or {}).get("url") or
+                (record.get("manifest") or {}).get("source_url")))
             rows.entry_updates.append(("accepted", placement_fingerprint("accepted", new_record,
                                                                      text_key),
                                   review_id, "released", json.dumps(review), doc_id))

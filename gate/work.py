@@ -69,6 +69,6 @@ def warm_up() -> None:
         langdetect.detect_langs("warm up the language profiles before forking")
     except Exception:  # noqa: BLE001 - warming up is an optimisation only
         pass
-    import gate.extract.html  # noqa: F401
-    import gate.extract.pdf  # noqa: F401
+    import gate.extract.html
+    import gate.extract.pdf
     import gate.extract.text  # noqa: F401

@@ -18,7 +18,8 @@ def test_policy_check_valid(tmp_path):
     path.write_text("version: 1\nname: ok\nsources:\n  allow:\n    - domain: a.example.org\n")
     result = gate("policy", "check", path)
     assert result.returncode == 0
-    assert result.stdout == f"{path}: valid policy 'ok' (sections: sources; checks on: format, source)\n"
+    assert result.stdout == \
+        f"{path}: valid policy 'ok' (sections: sources; checks on: format, source)\n"
 
 
 def test_policy_check_reports_line_and_key(tmp_path):

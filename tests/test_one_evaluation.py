@@ -92,3 +92,43 @@ def test_an_allow_rules_overrides_apply_in_explain_as_in_run(tmp_path):
     assert doc["decision"] == found.decision == "accepted"
     assert doc["checks"]["language"] == "pass"
     assert {c["check"]: c["outcome"] for c in found.checks}["language"] == "pass"
+
+
+def test_each_expensive_question_is_answered_once_per_document(monkeypatch, tmp_path):
+    """The source match and the document's date are asked for by the evaluation, the
+    source check and the freshness check; each is computed once."""
+    from gate import dates, urls
+    from gate.checks.base import Document, RunContext
+    from gate.evaluation import evaluate_document
+    from gate.extract.model import Extracted
+    from gate.manifest import ManifestRecord
+
+    path = tmp_path / "once.yaml"
+    path.write_text("version: 1\nname: once\nfreshness:\n  max_age_days: 30\n"
+                    "sources:\n  allow:\n    - domain: docs.example.org\n"
+                    "      max_age_days: 90\n"
+                    "      overrides:\n        freshness:\n          undated: warn\n")
+    loaded = load_policy(path)
+    calls = {"parse": 0, "dates": 0}
+    real_parse, real_dates = urls.parse, dates.parse_any
+
+    def parse(*args, **kwargs):
+        calls["parse"] += 1
+        return real_parse(*args, **kwargs)
+
+    def parse_any(*args, **kwargs):
+        calls["dates"] += 1
+        return real_dates(*args, **kwargs)
+
+    monkeypatch.setattr(urls, "parse", parse)
+    monkeypatch.setattr(dates, "parse_any", parse_any)
+    # invented document and source
+    record = ManifestRecord(path="a.txt", line=1, source_url="https://docs.example.org/a",
+                            published_at="2026-11-20")
+    document = Document(path="a.txt", kind="file", size=10, sha256="0" * 64, manifest=record,
+                        extracted=Extracted(type="text", text_chars=10))
+    evaluation = evaluate_document(document, loaded, RunContext(as_of=AS_OF))
+    assert evaluation.rule == 0 and evaluation.policy is not loaded.policy
+    assert evaluation.marks["source"] == "pass" and evaluation.marks["freshness"] == "pass"
+    assert evaluation.date is not None
+    assert calls == {"parse": 1, "dates": 1}

@@ -15,6 +15,7 @@ Neither function prints, touches files or reads the environment.
 
 from __future__ import annotations
 
+import functools
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass, field
 from datetime import datetime
@@ -40,10 +41,26 @@ class Document:
     extracted: Extracted
     measures: Mapping[str, Any] = field(default_factory=dict)
     link_target: str | None = None
+    memo: dict[tuple, Any] = field(default_factory=dict, compare=False, repr=False)
 
     @property
     def has_text(self) -> bool:
         return self.extracted.ok and self.extracted.text_chars > 0
+
+
+def once_per_document(fn: Callable[[Document, Any], Any]) -> Callable[[Document, Any], Any]:
+    """``fn(document, arg)`` computed once per document and ``arg`` object: a question
+    asked in several places (which source rule admits the document, which date it carries)
+    gets one answer, paid for once."""
+
+    @functools.wraps(fn)
+    def once(document: Document, arg: Any) -> Any:
+        key = (fn.__qualname__, id(arg))
+        if key not in document.memo:
+            document.memo[key] = (arg, fn(document, arg))  # holding arg keeps its id unique
+        return document.memo[key][1]
+
+    return once
 
 
 @dataclass(frozen=True)

@@ -9,7 +9,8 @@ How similarity is measured (in the worker): the text is normalised (NFKC, case-f
 punctuation to spaces), split into words, and turned into the set of word 5-grams (the
 shingles of Broder 1997, with w = 5 as in published corpus pipelines, for example FineWeb
 and RefinedWeb). A MinHash sketch of 256 permutations (datasketch, ``affine32`` scheme,
-seed 1; each shingle hashed to 32 bits from the CRC-32 of its words) estimates the Jaccard similarity of two shingle sets with a standard error of
+seed 1; each shingle hashed to 32 bits from the CRC-32 of its words) estimates the Jaccard
+similarity of two shingle sets with a standard error of
 ``sqrt(J(1-J)/256)``, 0.025 at J = 0.8. Exact copies (same bytes, or same normalised text,
 whatever the format) are caught first by hash. Documents with fewer than ``min_shingles``
 shingles are compared only exactly, because sketches of tiny sets collide.

@@ -40,7 +40,7 @@ from typing import Annotated, Any, Union
 from pydantic import Discriminator, Field, Tag, field_validator
 
 from gate import urls
-from gate.checks.base import Document, DocumentCheck, RunContext
+from gate.checks.base import Document, DocumentCheck, RunContext, once_per_document
 from gate.findings import Finding, define
 from gate.manifest import normalize_path
 from gate.settings import Section, Strict
@@ -191,11 +191,11 @@ def _rule_kind(value: Any) -> str | None:
 
 _RULE_ERROR = dict(custom_error_type="rule_kind",
                    custom_error_message="a rule needs exactly one of domain, url_prefix, path")
-AllowRule = Annotated[Union[Annotated[DomainAllow, Tag("domain")],
+AllowRule = Annotated[Union[Annotated[DomainAllow, Tag("domain")],  # noqa: UP007
                             Annotated[PrefixAllow, Tag("url_prefix")],
                             Annotated[PathAllow, Tag("path")]],
                       Discriminator(_rule_kind, **_RULE_ERROR)]
-DenyRule = Annotated[Union[Annotated[DomainDeny, Tag("domain")],
+DenyRule = Annotated[Union[Annotated[DomainDeny, Tag("domain")],  # noqa: UP007
                            Annotated[PrefixDeny, Tag("url_prefix")],
                            Annotated[PathDeny, Tag("path")]],
                      Discriminator(_rule_kind, **_RULE_ERROR)]
@@ -243,6 +243,7 @@ class SourceMatch:
     max_age_days: int | None = None
 
 
+@once_per_document
 def match(document: Document, settings: SourcesSettings) -> SourceMatch:
     """Match one document against the source rules (pure)."""
     raw = document.manifest.source_url if document.manifest else None

@@ -19,10 +19,10 @@ import sys
 
 os.environ.setdefault("OPENBLAS_NUM_THREADS", "1")  # numpy is used single-threaded here
 
-import typer  # noqa: E402
+import typer
 
-from gate.cli import ops, run  # noqa: E402
-from gate.cli.common import EXIT_INTERRUPTED, err_console  # noqa: E402
+from gate.cli import ops, run
+from gate.cli.common import EXIT_INTERRUPTED, err_console
 
 app = typer.Typer(add_completion=False, pretty_exceptions_enable=False, no_args_is_help=True,
                   help="gate: check documents against a policy before they reach a "

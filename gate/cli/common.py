@@ -51,7 +51,7 @@ def guard(fn):
     except KeyboardInterrupt:
         fail("interrupted. Nothing is lost: re-run the same command to complete the run.",
               EXIT_INTERRUPTED)
-    except Exception as err:  # noqa: BLE001 - the last line of defence against tracebacks
+    except Exception as err:
         if os.environ.get("GATE_DEBUG"):
             raise
         fail(f"gate hit an internal error ({type(err).__name__}: {err}). This is a bug; "

@@ -20,7 +20,7 @@ audit_app = typer.Typer(add_completion=False, no_args_is_help=True,
 
 OutDir = Annotated[Path, typer.Argument(help="The output folder of gate run (--out).")]
 Note = Annotated[str, typer.Option("--note", help="Why (required; kept in the audit log).")]
-By = Annotated[Optional[str], typer.Option(  # noqa: UP007
+By = Annotated[Optional[str], typer.Option(  # noqa: UP045
     "--by", help="Reviewer name for the audit log (default: the login name).")]
 Refs = Annotated[list[str], typer.Argument(help="Entry ids or inbox paths.")]
 
@@ -28,12 +28,12 @@ Refs = Annotated[list[str], typer.Argument(help="Entry ids or inbox paths.")]
 @review_app.command("list")
 def review_list(
     out: OutDir,
-    check: Annotated[Optional[str], typer.Option(help="Only entries held by this check.")] = None,  # noqa: UP007,E501
-    code: Annotated[Optional[str], typer.Option(help="Only this finding code (or a code prefix such as 'source').")] = None,  # noqa: UP007,E501
-    source: Annotated[Optional[str], typer.Option(help="Only sources containing this text (host or URL).")] = None,  # noqa: UP007,E501
-    run: Annotated[Optional[str], typer.Option(help="Only entries placed by this run id.")] = None,  # noqa: UP007,E501
-    since: Annotated[Optional[str], typer.Option(help="Only entries decided on or after this date (YYYY-MM-DD).")] = None,  # noqa: UP007,E501
-    until: Annotated[Optional[str], typer.Option(help="Only entries decided on or before this date.")] = None,  # noqa: UP007,E501
+    check: Annotated[Optional[str], typer.Option(help="Only entries held by this check.")] = None,  # noqa: UP045
+    code: Annotated[Optional[str], typer.Option(help="Only this finding code (or a code prefix such as 'source').")] = None,  # noqa: UP045,E501
+    source: Annotated[Optional[str], typer.Option(help="Only sources containing this text (host or URL).")] = None,  # noqa: UP045,E501
+    run: Annotated[Optional[str], typer.Option(help="Only entries placed by this run id.")] = None,  # noqa: UP045
+    since: Annotated[Optional[str], typer.Option(help="Only entries decided on or after this date (YYYY-MM-DD).")] = None,  # noqa: UP045,E501
+    until: Annotated[Optional[str], typer.Option(help="Only entries decided on or before this date.")] = None,  # noqa: UP045,E501
     status: Annotated[str, typer.Option(help="open, rejected or all.")] = "open",
     as_json: Annotated[bool, typer.Option("--json", help="JSON for scripts.")] = False,
 ) -> None:
@@ -81,7 +81,7 @@ def review_show(out: OutDir,
             say(f"source:  {source['url']} (trust {source.get('trust')})")
         if record.get("date"):
             say(f"date:    {record['date']['value']} ({record['date']['source']})")
-        say(f"checks:  " + ", ".join(f"{k} {v}" for k, v in sorted(record.get("checks",
+        say("checks:  " + ", ".join(f"{k} {v}" for k, v in sorted(record.get("checks",
                                                                                 {}).items())))
         for title, key in (("reasons", "reasons"), ("warnings", "warnings")):
             items = record.get(key) or []
@@ -141,7 +141,7 @@ def review_purge(out: OutDir, refs: Refs, note: Note, by: By = None) -> None:
 
 
 @audit_app.command("verify")
-def audit_verify(out: OutDir, head: Annotated[Optional[str], typer.Option(  # noqa: UP007
+def audit_verify(out: OutDir, head: Annotated[Optional[str], typer.Option(  # noqa: UP045
         "--head", help="A head hash recorded earlier (report.json run.audit_head) that "
                        "must still be in the log.")] = None) -> None:
     """Recompute the hash chain; exit 1 if any entry was changed or removed."""
@@ -164,7 +164,7 @@ def audit_verify(out: OutDir, head: Annotated[Optional[str], typer.Option(  # no
 
 @audit_app.command("show")
 def audit_show(out: OutDir,
-               ref: Annotated[Optional[str], typer.Option("--id", help="Only this entry id or path.")] = None,  # noqa: UP007,E501
+               ref: Annotated[Optional[str], typer.Option("--id", help="Only this entry id or path.")] = None,  # noqa: UP045,E501
                limit: Annotated[int, typer.Option(help="Newest entries to show.")] = 50,
                as_json: Annotated[bool, typer.Option("--json")] = False) -> None:
     """Show the newest audit entries (newest first)."""
@@ -191,13 +191,13 @@ def audit_show(out: OutDir,
 def explain_command(
     file: Annotated[Path, typer.Argument(help="The document to explain.")],
     policy: Annotated[Path, typer.Option("--policy", help="Policy file.")],
-    source_url: Annotated[Optional[str], typer.Option(help="Its source URL (as the manifest would say).")] = None,  # noqa: UP007,E501
-    sha256: Annotated[Optional[str], typer.Option(help="Its recorded SHA-256.")] = None,  # noqa: UP007,E501
-    published_at: Annotated[Optional[str], typer.Option(help="Its publication date.")] = None,  # noqa: UP007,E501
-    retrieved_at: Annotated[Optional[str], typer.Option(help="When it was gathered.")] = None,  # noqa: UP007,E501
-    inbox_path: Annotated[Optional[str], typer.Option(help="The inbox-relative path to use for path rules (default: the file name).")] = None,  # noqa: UP007,E501
-    as_of: Annotated[Optional[str], typer.Option("--as-of", help="Clock for freshness (default now).")] = None,  # noqa: UP007,E501
-    against: Annotated[Optional[Path], typer.Option(help="An output folder whose accepted corpus to compare with for duplicates.")] = None,  # noqa: UP007,E501
+    source_url: Annotated[Optional[str], typer.Option(help="Its source URL (as the manifest would say).")] = None,  # noqa: UP045,E501
+    sha256: Annotated[Optional[str], typer.Option(help="Its recorded SHA-256.")] = None,  # noqa: UP045
+    published_at: Annotated[Optional[str], typer.Option(help="Its publication date.")] = None,  # noqa: UP045
+    retrieved_at: Annotated[Optional[str], typer.Option(help="When it was gathered.")] = None,  # noqa: UP045
+    inbox_path: Annotated[Optional[str], typer.Option(help="The inbox-relative path to use for path rules (default: the file name).")] = None,  # noqa: UP045,E501
+    as_of: Annotated[Optional[str], typer.Option("--as-of", help="Clock for freshness (default now).")] = None,  # noqa: UP045,E501
+    against: Annotated[Optional[Path], typer.Option(help="An output folder whose accepted corpus to compare with for duplicates.")] = None,  # noqa: UP045,E501
     as_json: Annotated[bool, typer.Option("--json")] = False,
 ) -> None:
     """Explain one document under a policy: each check's outcome, findings and values."""

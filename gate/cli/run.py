@@ -51,31 +51,31 @@ def run_command(
     policy: Annotated[Path, typer.Option("--policy", help="Policy file (YAML).")],
     out: Annotated[Path, typer.Option("--out", help="Output folder: accepted/, quarantine/, "
                                                     "report.json, changes.jsonl, state/.")],
-    manifest: Annotated[Optional[Path], typer.Option(  # noqa: UP007
+    manifest: Annotated[Optional[Path], typer.Option(  # noqa: UP045
         "--manifest", help="Manifest (JSON lines); default INBOX/manifest.jsonl.")] = None,
-    as_of: Annotated[Optional[str], typer.Option(  # noqa: UP007
+    as_of: Annotated[Optional[str], typer.Option(  # noqa: UP045
         "--as-of", help="Clock for freshness, ISO 8601 (default: now, UTC).")] = None,
-    workers: Annotated[Optional[int], typer.Option(  # noqa: UP007
+    workers: Annotated[Optional[int], typer.Option(  # noqa: UP045
         "--workers", min=1, max=256, help="Worker processes (default: the number of "
                                           "cores).")] = None,
     incremental: Annotated[bool, typer.Option(
         "--incremental", help="The inbox holds only new or changed documents: do not "
                               "remove earlier documents that are missing from it.")] = False,
     quiet: Annotated[bool, typer.Option("--quiet", "-q", help="No progress bar.")] = False,
-    cluster: Annotated[Optional[str], typer.Option(  # noqa: UP007
+    cluster: Annotated[Optional[str], typer.Option(  # noqa: UP045
         "--cluster", help="Run extraction on a Dask cluster: the scheduler address, e.g. "
                           "tcp://10.0.0.5:8786 (decisions stay in this process).")] = None,
-    index: Annotated[Optional[str], typer.Option(  # noqa: UP007
+    index: Annotated[Optional[str], typer.Option(  # noqa: UP045
         "--index", help="Keep the near-duplicate index in Redis (redis://HOST:PORT/DB), "
                         "shared with other output folders using the same --index-name.")
     ] = None,
     index_name: Annotated[str, typer.Option(
         "--index-name", help="Name of the shared index in Redis.")] = "default",
-    max_quarantine_rate: Annotated[Optional[float], typer.Option(  # noqa: UP007
+    max_quarantine_rate: Annotated[Optional[float], typer.Option(  # noqa: UP045
         "--max-quarantine-rate", min=0.0, max=1.0,
         help="Exit 3 when more than this share of documents is quarantined (the run still "
              "completes), so a re-index job can stop on a poisoned batch.")] = None,
-    max_code_rate: Annotated[Optional[list[str]], typer.Option(  # noqa: UP007
+    max_code_rate: Annotated[Optional[list[str]], typer.Option(  # noqa: UP045
         "--max-code-rate", help="CODE=RATE: exit 3 when more than RATE of documents are "
                                 "quarantined for CODE (a code, or a check id such as "
                                 "injection). Repeatable.")] = None,
@@ -200,7 +200,7 @@ def policy_schema() -> None:
 def report_html(
     directory: Annotated[Path, typer.Argument(help="Output folder of a completed run "
                                                    "(the one holding report.json).")],
-    output: Annotated[Optional[Path], typer.Option(  # noqa: UP007
+    output: Annotated[Optional[Path], typer.Option(  # noqa: UP045
         "--output", "-o", help="HTML file to write (default: DIR/report.html).")] = None,
 ) -> None:
     """Write DIR/report.json as one self-contained HTML page (no scripts, loads nothing)."""

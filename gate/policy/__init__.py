@@ -270,7 +270,10 @@ def _validate(data: dict, where: dict, top: str) -> tuple[Any, dict[int, Any]]:
             continue
         effective = _merge(data, overrides)
         try:
-            by_rule[index] = Policy.model_validate(effective)
+            # the sources section cannot be overridden: share it, so a document's source
+            # match is computed once whichever variant asks (checks.base.once_per_document)
+            by_rule[index] = Policy.model_validate(effective).model_copy(
+                update={"sources": policy.sources})
         except ValidationError as exc:
             problems += _problems(exc, where, top, prefix)
     if problems:
