@@ -356,6 +356,10 @@ class State:
                                  "path").fetchall()
         return [dict(zip(CORPUS_COLS, row)) for row in rows]
 
+    def corpus_digests(self) -> list[tuple[str, str]]:
+        """(doc id, sha256) of every accepted document."""
+        return self.conn.execute("SELECT doc_id, sha256 FROM corpus").fetchall()
+
     def pending_count(self, run_id: str) -> int:
         return self.conn.execute("SELECT COUNT(*) FROM placements WHERE run_id = ? AND "
                                  "done = 0", (run_id,)).fetchone()[0]

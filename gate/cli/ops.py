@@ -232,6 +232,7 @@ def explain_command(
         say(f"{rel}: {kind}, {result.document.size} bytes, "
                f"{ex.text_chars} characters of text")
         say(f"decision under {loaded.name!r}: {result.decision}")
+        say("checks (outcome, measured values; findings below each):")
         for check in result.checks:
             say(f"  {check['check']:<10} {check['outcome']:<5} {_measured(check)}")
             for finding in check["findings"]:

@@ -266,7 +266,7 @@ def _validate(data: dict, where: dict, top: str) -> tuple[Any, dict[int, Any]]:
             file, line = where.get(prefix + (bad[0],), (top, 0))
             place = f"line {line}: " if file == top else f"{file} line {line}: "
             problems.append(f"{place}{_dotted(prefix + (bad[0],))}: {bad[0]!r} cannot be "
-                            f"overridden per source (only {', '.join(overridable)})")
+                            f"overridden per source (only the sections {', '.join(overridable)})")
             continue
         effective = _merge(data, overrides)
         try:
