@@ -26,4 +26,10 @@ def markdown_table() -> str:
 
 def text_table() -> str:
     width = max(len(r[0]) for r in rows())
-    return "".join(f"{code:<{width}}  {mode:<6}  {title}\n" for code, _c, mode, title in rows())
+    head = ("Finding codes (docs/codes.md holds the same table).\n"
+            "QUARANTINES: 'always' codes mean the document could not be evaluated and always "
+            "hold it; 'policy' codes follow their section's action (quarantine by default, "
+            "or warn).\n\n"
+            f"{'CODE':<{width}}  {'QUARANTINES':<11}  MEANING\n")
+    return head + "".join(f"{code:<{width}}  {mode:<11}  {title}\n"
+                          for code, _c, mode, title in rows())

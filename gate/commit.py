@@ -22,6 +22,7 @@ from gate import __version__, report
 from gate.corpus import CorpusResult
 from gate.errors import OutputError
 from gate.findings import Finding
+from gate.folderpage import render_folder
 from gate.manifest import Manifest
 from gate.placement import Blobs, Placer, write_atomic
 from gate.policy import LoadedPolicy
@@ -30,7 +31,6 @@ from gate.state import Rows, State
 
 CHUNK = 500  # documents decided per read of the run_docs table
 PLACE_BATCH = 256  # placements per pair of syncs
-HTML_REASONS = 5000  # held documents whose reasons' details the HTML page keeps
 
 
 class Reporter(Protocol):
@@ -102,17 +102,16 @@ class Run:
 def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
            manifest: Manifest, loaded: LoadedPolicy, reporter: Reporter) -> None:
     """Decide every document and record it all in one transaction, then :func:`finish`."""
-    from gate.htmlreport import render
     state = output.state
     reporter.stage("deciding", len(slims))
     stored = {row["doc_id"]: row for row in corpus.stored}
     known = state.entries()
     writer = report.ReportWriter(report.pending(output.out, run.id, "json"))
-    writer.start(list(report.CAUTIONS))
+    cautions = report.cautions(manifest.source is not None)
+    writer.start(cautions)
     tally = report.Tally()
-    html_docs: list[dict[str, Any]] = []
     seen_ids: dict[str, str] = {}
-    change_no = held = 0
+    change_no = 0
     os.sync()  # the staged blobs must be durable before the decision refers to them
     with state.transaction():
         state.restart_rows(run.id)
@@ -131,9 +130,6 @@ def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
                                     rows)
                 writer.document(entry)
                 tally.add(entry)
-                accepted = entry["decision"] == "accepted"
-                html_docs.append(report.html_view(entry, accepted or held < HTML_REASONS))
-                held += not accepted
             state.write(run.id, rows, change_no)
             change_no += len(rows.changes)
             for slim in chunk:
@@ -150,8 +146,7 @@ def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
         rest = {"gate": {"version": __version__}, "manifest_unmatched": unmatched,
                 "removed": removed_report, "run": run_info, "summary": summary}
         writer.finish(rest)
-        html = render({**rest, "documents": html_docs, "cautions": list(report.CAUTIONS)})
-        report.pending(output.out, run.id, "html").write_text(html, encoding="utf-8")
+        state.put_report_rest(run.id, {**rest, "cautions": cautions})
         state.mark_decided(run.id, summary)
     finish(output, run.id, reporter)
 
@@ -269,10 +264,12 @@ def finish(output: Output, run_id: str, reporter: Reporter) -> None:
     if output.index is not None:
         reporter.stage("indexing", None)
         output.index.sync(state)
-    for suffix in ("json", "html"):  # review actions change the folders but write no report
-        waiting = report.pending(output.out, run_id, suffix)
-        if waiting.exists():
-            os.replace(waiting, output.out / f"report.{suffix}")
+    waiting = report.pending(output.out, run_id, "json")  # review actions write no report
+    if waiting.exists():
+        os.replace(waiting, output.out / "report.json")
+    page = render_folder(output.out, state)  # the reviewer's page, after every action
+    if page is not None:
+        write_atomic(output.out / "report.html", page.encode("utf-8"))
     write_atomic(output.out / "changes.jsonl",
                  "".join(line + "\n" for line in state.change_lines()).encode("utf-8"))
     placer.empty_trash()

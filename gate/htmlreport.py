@@ -22,6 +22,7 @@ from dataclasses import dataclass
 from typing import Any
 
 from gate import checks
+from gate.urgency import urgency
 from gate.visible import visible
 
 CSP = ("default-src 'none'; style-src 'unsafe-inline'; img-src data:; "
@@ -39,6 +40,12 @@ def text(value: Any) -> str:
         s = str(value)
     s = visible(s)
     return html.escape(s, quote=True)
+
+
+def lines(value: Any) -> str:
+    """Multi-line text (a diff, commands) for a ``<pre>``: each line as :func:`text`,
+    the line breaks kept."""
+    return "\n".join(text(line) for line in str(value or "").split("\n"))
 
 
 def _dict(value: Any) -> dict:
@@ -317,6 +324,27 @@ details dl{display:grid;grid-template-columns:max-content 1fr;gap:2px 10px;margi
 font-size:12px}
 details dt{color:var(--muted)}details dd{margin:0;overflow-wrap:anywhere}
 .more{color:var(--muted);font-style:italic;padding:8px 10px}
+header.band .line{margin:0;color:#dbe6ee}
+header.band details{margin-top:8px}header.band summary{color:#a9c1d1}
+.queue td{padding:9px 10px}
+.badge{display:inline-block;font-size:11.5px;font-weight:650;padding:1px 8px;
+border-radius:10px;border:1px solid var(--line);text-transform:uppercase;letter-spacing:.04em}
+.badge.open{background:#f6e3dc;color:#7c3420;border-color:#ebc7ba}
+.badge.rejected{background:#e8e6f3;color:#3d3670;border-color:#cbc6e6}
+.badge.released{background:#dcefe8;color:#1f5a48;border-color:#b5dccd}
+.badge.purged{background:#e9eaec;color:#454c55;border-color:#cfd3d8}
+.badge.unknown{background:#f1f1f1;color:#5d6875}
+.rank{color:var(--muted);font-size:12px;margin-top:3px}
+blockquote.snippet{margin:4px 0 2px;padding:4px 8px;border-left:3px solid var(--held);
+background:#fbf3f0;font-family:ui-monospace,"DejaVu Sans Mono",monospace;font-size:12px;
+overflow-wrap:anywhere;white-space:pre-wrap}
+.decoded{font-size:12.5px;margin:2px 0}
+pre.diff,pre.cmd{margin:4px 0;padding:6px 8px;background:#f5f6f4;border:1px solid var(--line);
+border-radius:4px;font-size:11.5px;white-space:pre-wrap;overflow-wrap:anywhere;
+max-height:240px;overflow:auto}
+pre.cmd{background:#eef3f7;user-select:all}
+.reviewnote{font-size:12.5px;margin-top:4px}
+tr.flag td{background:#fbf0ec}
 footer{color:var(--muted);font-size:12px;border-top:1px solid var(--line);padding-top:10px}
 @media print{nav{display:none}th{position:static}.card,.tablewrap{break-inside:avoid}}
 """
@@ -328,13 +356,35 @@ def _esc_json(value: Any) -> str:
     return text(json.dumps(value, ensure_ascii=False, sort_keys=True))
 
 
-def _details(details: Any) -> str:
+SHOWN_APART = ("snippet", "decoded")  # drawn beside the message, not among the details
+
+
+def _details(details: Any, message: Any = "") -> str:
+    """A finding's machine-readable details, folded. Values the message already says
+    (the pieces it was rendered from, such as "; the versions disagree ...") and empty
+    ones are left out, so the fold holds only what the message does not."""
     details = _dict(details)
-    if not details:
+    said = message if isinstance(message, str) else ""
+    kept = {k: v for k, v in details.items()
+            if k not in SHOWN_APART and v not in ("", None, [], {})
+            and not (isinstance(v, str) and v.strip() in said)}
+    if not kept:
         return ""
     rows = "".join(f"<dt>{text(k)}</dt><dd>{_esc_json(v)}</dd>"
-                   for k, v in sorted(details.items(), key=lambda kv: str(kv[0])))
+                   for k, v in sorted(kept.items(), key=lambda kv: str(kv[0])))
     return f"<details><summary>details</summary><dl>{rows}</dl></details>"
+
+
+def _evidence(details: Any) -> str:
+    """A finding's snippet (invisible characters shown) and decoded hidden message."""
+    details = _dict(details)
+    out = []
+    if isinstance(details.get("snippet"), str) and details["snippet"]:
+        out.append(f'<blockquote class="snippet">{text(details["snippet"])}</blockquote>')
+    if isinstance(details.get("decoded"), str) and details["decoded"]:
+        out.append(f'<div class="decoded">decoded hidden message: '
+                   f'<span class="mono">{text(details["decoded"])}</span></div>')
+    return "".join(out)
 
 
 def _findings(items: list, cls: str = "") -> str:
@@ -342,7 +392,8 @@ def _findings(items: list, cls: str = "") -> str:
     for item in items:
         item = _dict(item)
         out.append(f'<li><span class="code{cls}">{text(item.get("code"))}</span>'
-                   f'{text(item.get("message"))}{_details(item.get("details"))}</li>')
+                   f'{text(item.get("message"))}{_evidence(item.get("details"))}'
+                   f'{_details(item.get("details"), item.get("message"))}</li>')
     return f'<ul class="reasons">{"".join(out)}</ul>' if out else ""
 
 
@@ -387,10 +438,198 @@ def _tile(n: int, label: str, cls: str = "") -> str:
     return (f'<div class="tile {cls}"><span class="n">{n}</span>'
             f'<span class="k">{text(label)}</span></div>')
 
+STATUS_WORDS = {"open": "open: to decide", "rejected": "rejected (stays held)",
+                "released": "released to accepted/", "purged": "purged (deleted)",
+                "unknown": "status not known"}
 
-def render(report: dict, *, max_rows: int = 5000) -> str:
+
+def queue_from_report(docs: list[dict]) -> list[dict]:
+    """The queue when only report.json is at hand (no state): every held document, with
+    no review status, ordered as the folder's page orders it."""
+    items = []
+    for doc in docs:
+        if doc.get("decision") != "quarantined":
+            continue
+        reasons = [_dict(r) for r in _list(doc.get("reasons"))]
+        rank, ranked_by = urgency(reasons)
+        items.append({"id": doc.get("id"), "path": doc.get("path"), "status": "unknown",
+                      "rank": rank, "ranked_by": ranked_by, "reasons": reasons,
+                      "diffs": [], "source": _dict(doc.get("source")).get("url"),
+                      "location": doc.get("location"), "commands": [], "review": None})
+    items.sort(key=lambda i: (i["rank"], str(i["path"])))
+    return items
+
+
+def _queue_row(item: dict) -> str:
+    status = str(item.get("status"))
+    review = _dict(item.get("review"))
+    who = ""
+    if review:
+        who = (f'<div class="reviewnote">{text(review.get("action"))} by '
+               f'{text(review.get("by"))} at {text(review.get("at"))}'
+               f'{" (" + text(review.get("id")) + ")" if review.get("id") else ""}: '
+               f'&ldquo;{text(review.get("note"))}&rdquo;</div>')
+    diffs = "".join(f'<div class="sub">diff against the kept document '
+                    f'<span class="mono">{text(_dict(d).get("keeper"))}</span> '
+                    f'(- kept, + this one):</div><pre class="diff">'
+                    f'{lines(_dict(d).get("diff"))}</pre>' for d in _list(item.get("diffs")))
+    cmds = _list(item.get("commands"))
+    cmd = f'<pre class="cmd">{lines(chr(10).join(str(c) for c in cmds))}</pre>' if cmds \
+        else ""
+    source = item.get("source")
+    return (f'<tr class="q-{text(status)}" data-status="{text(status)}">'
+            f'<td><div class="path">{text(item.get("path"))}</div>'
+            f'<div class="rank">{text(item.get("ranked_by"))}</div>'
+            + (f'<div class="sub">source: <span class="mono">{text(source)}</span></div>'
+               if source else "")
+            + f'<div class="sub mono">{text(item.get("location"))}</div></td>'
+            f'<td>{_findings(_list(item.get("reasons")))}{diffs}</td>'
+            f'<td><span class="badge {text(status)}">{text(status)}</span>'
+            f'<div class="sub">{text(STATUS_WORDS.get(status, status))}</div>{who}{cmd}</td>'
+            '</tr>')
+
+
+def queue_section(items: list[dict], run_id: str, max_rows: int) -> str:
+    """The review queue: open entries first (by urgency), then what was decided since
+    the run, each with its evidence, status and the commands to decide it."""
+    items = [_dict(i) for i in items]
+    open_items = [i for i in items if i.get("status") in ("open", "unknown")]
+    decided = [i for i in items if i.get("status") not in ("open", "unknown")]
+    known = not any(i.get("status") == "unknown" for i in items)
+    counts = Counter(str(i.get("status")) for i in decided)
+    summary = ", ".join(f"{n} {s}" for s, n in sorted(counts.items()))
+    head = (f'<section id="queue"><h2>Review queue: {len(open_items)} '
+            f'{"entry" if len(open_items) == 1 else "entries"} to decide</h2>')
+    if known:
+        head += ('<p class="legend">What is still held and unreviewed, most urgent first: '
+                 'documents gate could not evaluate, then planted instructions, tampering, '
+                 'provenance, format, quality, language, and last stale documents and '
+                 'duplicates. Copy a command, replace WHY with your reason, and run it; this '
+                 'page is rewritten after every review action. '
+                 + (f'Decided since {text(run_id)}: {text(summary)}.' if summary else '')
+                 + '</p>')
+    else:
+        head += ('<p class="legend">Drawn from report.json alone: review statuses are not '
+                 'known here. <span class="mono">gate report html DIR</span> on the output '
+                 'folder draws them from its state.</p>')
+    colgroup = ('<colgroup><col style="width:26%"><col><col style="width:30%"></colgroup>'
+                '<thead><tr><th>document</th><th>reasons and evidence</th>'
+                '<th>status and review commands</th></tr></thead>')
+    out = [head]
+    if open_items:
+        rows = "".join(_queue_row(i) for i in open_items[:max_rows])
+        out.append(f'<div class="tablewrap"><table class="queue">{colgroup}<tbody>{rows}'
+                   f'{_more(len(open_items) - max_rows, 3)}</tbody></table></div>')
+    else:
+        out.append('<p class="empty">nothing left to decide: no open quarantine entry</p>')
+    if decided:
+        rows = "".join(_queue_row(i) for i in decided[:max_rows])
+        out.append(f'<h3 id="decided" style="margin-top:14px">Decided since {text(run_id)} '
+                   f'({len(decided)})</h3><div class="tablewrap"><table class="queue">'
+                   f'{colgroup}<tbody>{rows}{_more(len(decided) - max_rows, 3)}</tbody>'
+                   '</table></div>')
+    out.append('</section>\n')
+    return "".join(out)
+
+
+def _rate(part: int, whole: int) -> float:
+    return part / whole if whole else 0.0
+
+
+def _pct(value: float) -> str:
+    return f"{value:.0%}"
+
+
+FLAGGED = ' class="flag"'
+NEW_BADGE = ' <span class="badge open">new</span>'
+FLAG_RISE = 0.20  # a rise of the quarantine rate this large marks a source or code
+
+
+def sources_section(summary: dict, previous: dict | None) -> str:
+    """A row per source (documents, quarantine rate, top codes) and the change since the
+    previous run of the same output folder, so a broken feed stands out."""
+    now = _dict(summary.get("by_source"))
+    before = _dict(_dict(_dict(previous).get("summary")).get("by_source")) if previous \
+        else {}
+    prev_id = _dict(previous).get("id") if previous else None
+    out = ['<section id="sources"><h2>Sources</h2>']
+    if not now:
+        out.append('<p class="empty">this report records no sources</p></section>\n')
+        return "".join(out)
+    head = ('<th>source</th><th class="num">documents</th><th class="num">quarantined</th>'
+            '<th class="num">rate</th>')
+    if prev_id:
+        head += (f'<th class="num">rate in {text(prev_id)}</th><th class="num">change</th>')
+    head += '<th>top reason codes</th>'
+    rows = []
+    for name in sorted(set(now) | set(before)):
+        cur, old = _dict(now.get(name)), _dict(before.get(name))
+        docs, held = _int(cur.get("documents")), _int(cur.get("quarantined"))
+        rate = _rate(held, docs)
+        codes = sorted(_dict(cur.get("codes")).items(), key=lambda kv: (-_int(kv[1]), kv[0]))
+        top = ", ".join(f"{k} ({_int(v)})" for k, v in codes[:3]) or "-"
+        cells = (f'<td class="mono">{text(name)}</td><td class="num">{docs}</td>'
+                 f'<td class="num">{held}</td><td class="num">{_pct(rate)}</td>')
+        flag = False
+        if prev_id:
+            if old:
+                old_rate = _rate(_int(old.get("quarantined")), _int(old.get("documents")))
+                change = rate - old_rate
+                flag = docs > 0 and change >= FLAG_RISE
+                shown = f"{change * 100:+.0f} points" if docs else "gone from the inbox"
+                cells += f'<td class="num">{_pct(old_rate)}</td><td class="num">{shown}</td>'
+            else:
+                flag = rate >= 0.5
+                cells += '<td class="num">-</td><td class="num">new source</td>'
+        rows.append(f'<tr{FLAGGED if flag else ""}>{cells}'
+                    f'<td class="mono">{text(top)}</td></tr>')
+    out.append(f'<div class="tablewrap"><table><thead><tr>{head}</tr></thead>'
+               f'<tbody>{"".join(rows)}</tbody></table></div>')
+    if prev_id:
+        out.append(f'<p class="legend">Highlighted: a source whose quarantine rate rose by '
+                   f'{FLAG_RISE:.0%} points or more since {text(prev_id)}, or a new source '
+                   'with half or more of its documents held.</p>')
+    else:
+        out.append('<p class="legend">The first run of this output folder: there is no '
+                   'earlier run to compare with.</p>')
+    out.append(_code_changes(summary, previous))
+    out.append('</section>\n')
+    return "".join(out)
+
+
+def _code_changes(summary: dict, previous: dict | None) -> str:
+    if not previous:
+        return ""
+    old_summary = _dict(_dict(previous).get("summary"))
+    prev_id = _dict(previous).get("id")
+    now, old = _dict(summary.get("quarantined_by_code")), _dict(
+        old_summary.get("quarantined_by_code"))
+    docs, old_docs = _int(summary.get("documents")), _int(old_summary.get("documents"))
+    rows = []
+    for code in sorted(set(now) | set(old)):
+        rate, old_rate = _rate(_int(now.get(code)), docs), _rate(_int(old.get(code)), old_docs)
+        new = code not in old
+        flag = new or rate - old_rate >= FLAG_RISE
+        rows.append(f'<tr{FLAGGED if flag else ""}><td class="mono">{text(code)}'
+                    f'{NEW_BADGE if new else ""}</td>'
+                    f'<td class="num">{_int(old.get(code))} ({_pct(old_rate)})</td>'
+                    f'<td class="num">{_int(now.get(code))} ({_pct(rate)})</td>'
+                    f'<td class="num">{(rate - old_rate) * 100:+.0f} points</td></tr>')
+    if not rows:
+        return ""
+    return (f'<h3 style="margin-top:14px">Reason codes since {text(prev_id)}</h3>'
+            f'<div class="tablewrap"><table><thead><tr><th>code</th><th class="num">'
+            f'{text(prev_id)}</th><th class="num">this run</th><th class="num">change</th>'
+            f'</tr></thead><tbody>{"".join(rows)}</tbody></table></div>')
+
+
+
+def render(report: dict, *, max_rows: int = 5000, view: dict | None = None) -> str:
     """The HTML page for one report (a ``report.json`` object). Tables list at most
-    ``max_rows`` documents each, with a note of how many were left out."""
+    ``max_rows`` documents each, with a note of how many were left out. ``view`` is what
+    the output folder's state adds (:mod:`gate.folderpage`): the review queue with its
+    statuses, the previous run and the folder; without it the queue is drawn from the
+    report's held documents, with no status."""
     report = _dict(report)
     run = _dict(report.get("run"))
     policy = _dict(run.get("policy"))
@@ -435,10 +674,15 @@ def render(report: dict, *, max_rows: int = 5000) -> str:
         '<meta name="viewport" content="width=device-width, initial-scale=1">\n'
         f'<title>gate report {text(run_id)}</title>\n<style>{STYLE}</style>\n</head>\n<body>\n']
 
-    # header
+    # header: one line, the run's particulars folded
+    view = _dict(view)
+    items = _list(view.get("queue")) if view else queue_from_report(held)
+    open_count = sum(_dict(i).get("status") in ("open", "unknown") for i in items)
     meta = [("As of", run.get("as_of")), ("Mode", run.get("mode")),
             ("Policy", policy.get("name")), ("Policy file", policy.get("path")),
             ("Policy sha256", policy.get("sha256")), ("Inbox", run.get("inbox"))]
+    if view.get("folder"):
+        meta.append(("Output folder", view.get("folder")))
     if manifest:
         records = manifest.get("records")
         meta.append(("Manifest", f"{manifest.get('path') or '-'}"
@@ -447,12 +691,20 @@ def render(report: dict, *, max_rows: int = 5000) -> str:
     meta.append(("gate version", version))
     rows = "".join(f'<dt>{text(k)}</dt><dd class="{"mono" if "sha256" in k else ""}">'
                    f'{text(v) if v not in (None, "") else "-"}</dd>' for k, v in meta)
-    out.append(f'<header class="band"><p class="kicker">gate &middot; run report</p>'
-               f'<h1>{text(run_id)}</h1><dl>{rows}</dl></header>\n')
-    out.append('<nav><a href="#counts">Counts</a><a href="#reasons">Reasons</a>'
+    line = (f"{n_docs} documents: {n_acc} accepted, {n_held} quarantined; {open_count} "
+            f"{'entry' if open_count == 1 else 'entries'} to decide. As of "
+            f"{run.get('as_of') or '-'}, policy {policy.get('name') or '-'}.")
+    out.append(f'<header class="band"><p class="kicker">gate &middot; review page</p>'
+               f'<h1>{text(run_id)}</h1><p class="line">{text(line)}</p>'
+               f'<details><summary>run particulars</summary><dl>{rows}</dl></details>'
+               '</header>\n')
+    out.append('<nav><a href="#queue">Review queue</a><a href="#sources">Sources</a>'
+               '<a href="#counts">Counts</a><a href="#reasons">Reasons</a>'
                '<a href="#scores">Scores</a><a href="#checks">Check outcomes</a>'
                '<a href="#quarantined">Quarantined</a><a href="#warnings">Warnings</a>'
                '<a href="#accepted">Accepted</a></nav>\n<main>\n')
+    out.append(queue_section(items, str(run_id), max_rows))
+    out.append(sources_section(summary, _dict(view.get("previous")) or None))
 
     # counts and cautions
     tiles = [_tile(n_docs, "documents"), _tile(n_acc, "accepted", "ok"),
@@ -570,20 +822,28 @@ def render(report: dict, *, max_rows: int = 5000) -> str:
         out.append('<p class="empty">no check outcomes recorded</p>')
     out.append('</section>\n')
 
-    # quarantined documents
-    out.append(f'<section id="quarantined"><h2>Quarantined documents ({len(held)})</h2>')
+    # quarantined documents, as the run decided them, with where each is now
+    now = {str(_dict(i).get("id")): _dict(i) for i in items}
+    out.append(f'<section id="quarantined"><h2>Quarantined by {text(run_id)} ({len(held)})'
+               '</h2>')
     if held:
         rows_html = []
         for doc in held[:max_rows]:
+            item = now.get(str(doc.get("id")), {})
+            status = str(item.get("status") or ("unknown" if not view else "gone"))
+            where = item.get("location") or doc.get("location") if view else \
+                doc.get("location")
             rows_html.append(
                 f'<tr><td><div class="path">{text(doc.get("path"))}</div>{_doc_sub(doc)}'
                 f'</td><td>{_findings(_list(doc.get("reasons")))}</td>'
-                f'<td class="mono">{text(doc.get("location"))}</td></tr>')
-        out.append('<div class="tablewrap"><table><colgroup><col style="width:34%">'
+                f'<td><span class="badge {text(status)}">{text(status)}</span>'
+                f'<div class="mono">{text(where)}</div></td></tr>')
+        out.append('<details class="card"><summary>All documents this run quarantined, '
+                   'with their status now</summary><table><colgroup><col style="width:34%">'
                    '<col><col style="width:17%"></colgroup><thead><tr><th>document</th>'
-                   '<th>reasons (code and message)</th><th>location</th></tr></thead>'
-                   f'<tbody>{"".join(rows_html)}{_more(len(held) - max_rows, 3)}</tbody>'
-                   '</table></div>')
+                   '<th>reasons (code and message)</th><th>status and location</th></tr>'
+                   f'</thead><tbody>{"".join(rows_html)}{_more(len(held) - max_rows, 3)}'
+                   '</tbody></table></details>')
     else:
         out.append('<p class="empty">no document was quarantined</p>')
     out.append('</section>\n')

@@ -93,6 +93,13 @@ def _prepare(opts: RunOptions) -> tuple[Path, Path, manifest_mod.Manifest]:
     if _inside(real_inbox, real_out):
         raise OutputError(f"the inbox {opts.inbox} is inside the output folder {opts.out}; "
                           "keep them apart.")
+    # read before anything is created, so a bad manifest leaves no empty state/ behind
+    if opts.manifest is not None:
+        manifest = manifest_mod.load(opts.manifest)
+    elif (inbox / "manifest.jsonl").is_file():
+        manifest = manifest_mod.load(inbox / "manifest.jsonl")
+    else:
+        manifest = manifest_mod.EMPTY
     try:
         (out / "state").mkdir(parents=True, exist_ok=True)
     except OSError as err:
@@ -100,12 +107,6 @@ def _prepare(opts: RunOptions) -> tuple[Path, Path, manifest_mod.Manifest]:
                           f"({err.strerror}).") from None
     if not os.access(out, os.W_OK):
         raise OutputError(f"the output folder {opts.out} is not writable.")
-    if opts.manifest is not None:
-        manifest = manifest_mod.load(opts.manifest)
-    elif (inbox / "manifest.jsonl").is_file():
-        manifest = manifest_mod.load(inbox / "manifest.jsonl")
-    else:
-        manifest = manifest_mod.EMPTY
     return inbox, out, manifest
 
 
@@ -192,7 +193,7 @@ def _run(opts: RunOptions, inbox: Path, manifest: manifest_mod.Manifest, output:
         reporter.note(f"resuming the interrupted run {run_id}")
     else:
         seq = state.next_seq()
-        run_id = f"run-{seq:04d}"
+        run_id = f"run-{state.count_runs(False) + 1:04d}"  # reviews are numbered apart
         state.begin_run(run_id, seq, fingerprint(base, as_of_text), as_of_text, mode,
                         {"base": base, "inbox": str(inbox)})
     ctx = RunContext(as_of=as_of)

@@ -12,6 +12,7 @@ from __future__ import annotations
 import json
 import os
 from collections import Counter
+from urllib.parse import urlsplit
 from pathlib import Path
 from typing import Any
 
@@ -28,13 +29,42 @@ CAUTIONS = (
 )
 
 
+NO_MANIFEST = (
+    "This run had no manifest (no --manifest and no INBOX/manifest.jsonl): no document has "
+    "a recorded source URL, checksum or publication date, so source rules can match only "
+    "by inbox path and integrity cannot be checked.")
+
+
+def cautions(has_manifest: bool) -> list[str]:
+    """The cautions report.json and the page carry for a run."""
+    return list(CAUTIONS) + ([] if has_manifest else [NO_MANIFEST])
+
+
 def reason_json(finding: Any) -> dict[str, Any]:
     return {"check": finding.check, "code": finding.code, "message": finding.message,
             "details": finding.details}
 
 
+NO_SOURCE = "(no source URL)"
+
+
+def source_key(doc: dict[str, Any]) -> str:
+    """The source a report entry is counted under: the host of its source URL, or
+    ``(no source URL)``; a URL whose host cannot be read counts as ``(malformed URL)``."""
+    source = doc.get("source")
+    url = source.get("url") if isinstance(source, dict) else None
+    if not isinstance(url, str) or not url:
+        return NO_SOURCE
+    try:
+        host = urlsplit(url).hostname
+    except ValueError:
+        host = None
+    return host or "(malformed URL)"
+
+
 class Tally:
-    """The summary of a run, counted one document at a time."""
+    """The summary of a run, counted one document at a time. Warnings are counted for
+    accepted documents only (a held document's warnings are not what held it)."""
 
     def __init__(self) -> None:
         self.documents = 0
@@ -43,13 +73,20 @@ class Tally:
         self.by_check: Counter[str] = Counter()
         self.warn_codes: Counter[str] = Counter()
         self.changes: Counter[str] = Counter()
+        self.sources: dict[str, dict[str, Any]] = {}
 
     def add(self, doc: dict[str, Any]) -> None:
         self.documents += 1
         self.decisions[doc["decision"]] += 1
         self.by_code.update({r["code"] for r in doc["reasons"]})
         self.by_check.update({r["check"] for r in doc["reasons"]})
-        self.warn_codes.update({w["code"] for w in doc["warnings"]})
+        if doc["decision"] == "accepted":
+            self.warn_codes.update({w["code"] for w in doc["warnings"]})
+        source = self.sources.setdefault(source_key(doc), {"documents": 0, "quarantined": 0,
+                                                            "codes": Counter()})
+        source["documents"] += 1
+        source["quarantined"] += doc["decision"] == "quarantined"
+        source["codes"].update({r["code"] for r in doc["reasons"]})
         if doc["change"] not in ("unchanged", "none"):
             self.changes[doc["change"]] += 1
 
@@ -66,6 +103,9 @@ class Tally:
                                      if self.by_check[c]},
             "warnings_by_code": dict(sorted(self.warn_codes.items())),
             "changes": dict(sorted(changes.items())),
+            "by_source": {name: {"documents": v["documents"], "quarantined": v["quarantined"],
+                                 "codes": dict(sorted(v["codes"].items()))}
+                          for name, v in sorted(self.sources.items())},
         }
 
 
@@ -134,7 +174,9 @@ def entry(record: DocRecord, decision: Decision, marks: dict[str, str], location
     if extraction.get("title"):
         out["title"] = extraction["title"]
     language = record.measures.get("language")
-    if language and language.get("languages"):
+    undetermined = any(f.check == "language" and f.code == "language.undetermined"
+                       for f in (*decision.reasons, *decision.warnings))
+    if language and language.get("languages") and not undetermined:
         out["language"] = {"code": language["languages"][0][0],
                            "probability": language["languages"][0][1]}
     injection = record.measures.get("injection")

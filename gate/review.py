@@ -16,19 +16,21 @@ rewritten. A review killed half-way is completed by the next gate command on the
 
 from __future__ import annotations
 
-import difflib
 import getpass
 import json
 import os
+import re
 from dataclasses import dataclass
-from datetime import UTC, datetime
+from datetime import UTC, date, datetime
 from pathlib import Path
 from typing import Any
 
 from gate.commit import Output, SilentReporter, finish, fingerprint, placement_fingerprint, \
     stored_index
 from gate.errors import GateError, UsageError
+from gate import checks
 from gate.findings import CODES
+from gate.folderpage import keeper_diffs
 from gate.lock import RunLock
 from gate.report import dumps_line
 from gate.state import Rows, State, open_state
@@ -95,17 +97,77 @@ def _entry(state: State, out: Path, doc_id: str) -> Entry:
                  record=record)
 
 
+STATUSES = ("open", "rejected", "all")
+_DAY = re.compile(r"^\d{4}-\d{2}-\d{2}\Z")
+
+
+def _choices(values: list[str] | tuple[str, ...]) -> str:
+    return ", ".join(values)
+
+
+@dataclass(frozen=True)
+class Filters:
+    """What ``review list`` and the bulk review actions select entries by."""
+
+    check: str | None = None
+    code: str | None = None
+    source: str | None = None
+    run: str | None = None
+    since: str | None = None
+    until: str | None = None
+    status: str = "open"
+
+    def given(self) -> bool:
+        """True when any filter narrows the selection (the status alone does not)."""
+        return any((self.check, self.code, self.source, self.run, self.since, self.until))
+
+    def validate(self, state: State) -> None:
+        """Unknown check ids, codes, statuses and run ids and malformed dates are errors
+        that list the valid values: a typo must not select nothing and succeed."""
+        ids = [c.id for c in checks.all_checks()]
+        if self.check is not None and self.check not in ids:
+            raise UsageError(f"--check {self.check!r} is not a check id; valid: "
+                             f"{_choices(ids)}.")
+        if self.code is not None and self.code not in CODES and self.code not in ids:
+            raise UsageError(f"--code {self.code!r} is neither a finding code nor a check "
+                             f"id; valid codes are listed by `gate codes`, check ids are: "
+                             f"{_choices(ids)}.")
+        if self.status not in STATUSES:
+            raise UsageError(f"--status {self.status!r} is not a status; valid: "
+                             f"{_choices(STATUSES)}.")
+        for name, value in (("--since", self.since), ("--until", self.until)):
+            if value is None:
+                continue
+            try:
+                ok = bool(_DAY.match(value)) and date.fromisoformat(value) is not None
+            except ValueError:
+                ok = False
+            if not ok:
+                raise UsageError(f"{name} {value!r} is not a date; give YYYY-MM-DD, for "
+                                 "example 2026-12-01.")
+        if self.since and self.until and self.since > self.until:
+            raise UsageError(f"--since {self.since} is after --until {self.until}.")
+        if self.run is not None:
+            known = state.run_ids()
+            if self.run not in known:
+                raise UsageError(f"--run {self.run!r} is not a run of this folder; valid: "
+                                 f"{_choices(known) or 'none yet'}.")
+
+
 def list_entries(out: Path, *, check: str | None = None, code: str | None = None,
                  source: str | None = None, run: str | None = None,
                  since: str | None = None, until: str | None = None,
                  status: str | None = "open") -> list[Entry]:
-    """Quarantine entries matching every given filter, in path order."""
+    """Quarantine entries matching every given filter, in path order (see
+    :class:`Filters`; invalid filter values are errors)."""
+    filters = Filters(check, code, source, run, since, until, status or "open")
     state = open_folder(out)
     try:
+        filters.validate(state)
         found = []
         for doc_id in state.quarantine_ids():
             entry = _entry(state, out, doc_id)
-            if status is not None and status != "all" and entry.status != status:
+            if status not in (None, "all") and entry.status != status:
                 continue
             if check and check not in entry.checks:
                 continue
@@ -150,31 +212,22 @@ def show(out: Path, ref: str) -> dict[str, Any]:
         text = text_path.read_text(encoding="utf-8", errors="replace") \
             if text_path.exists() else None
         start = visible(text[:1500], keep="\n\t") if text else None
-        shown: dict[str, Any] = {"id": doc_id, "folder": folder, "status": row["status"],
-                                 "path": row["path"], "record": record, "text_start": start}
-        diffs = []
-        for reason in record.get("reasons", []):
-            keeper = (reason.get("details") or {}).get("keeper_id")
-            if keeper and text is not None:
-                keeper_text = out / "accepted" / keeper / "text.txt"
-                if keeper_text.exists():
-                    theirs = keeper_text.read_text(encoding="utf-8", errors="replace")
-                    diffs.append({"keeper": reason["details"].get("keeper"),
-                                  "diff": _diff(theirs, text, reason["details"].get("keeper"),
-                                                row["path"])})
-        shown["keeper_diffs"] = diffs
+        shown: dict[str, Any] = {"id": doc_id, "folder": folder,
+                                 "status": status_of(row), "path": row["path"],
+                                 "record": record, "text_start": start}
+        shown["keeper_diffs"] = keeper_diffs(out, {"reasons": record.get("reasons", [])},
+                                             text, row["path"])
         return shown
     finally:
         state.close()
 
 
-def _diff(keeper: str, mine: str, keeper_name: str, my_name: str, limit: int = 200) -> str:
-    lines = list(difflib.unified_diff(keeper.splitlines(), mine.splitlines(),
-                                      fromfile=f"keeper: {keeper_name}",
-                                      tofile=f"this: {my_name}", lineterm="", n=1))
-    if len(lines) > limit:
-        lines = lines[:limit] + [f"... ({len(lines) - limit} more diff lines)"]
-    return visible("\n".join(lines), keep="\n\t")
+def status_of(row: dict[str, Any]) -> str:
+    """An entry's review status in the words every screen uses: open or rejected (held),
+    released or accepted (in accepted/)."""
+    if row["folder"] == "quarantine":
+        return row["status"]
+    return "released" if row["status"] == "released" else "accepted"
 
 
 def _who(by: str | None) -> str:
@@ -220,7 +273,7 @@ def _act_locked(out: Path, state: State, action: str, refs: list[str], note: str
     if pending and pending["state"] == "decided":
         finish(output, pending["run_id"], SilentReporter())
     seq = state.next_seq()
-    review_id = f"review-{seq:04d}"
+    review_id = f"review-{state.count_runs(True) + 1:04d}"
     ids: list[str] = []
     for ref in refs:
         doc_id = resolve(state, ref)
@@ -298,3 +351,119 @@ def _act_locked(out: Path, state: State, action: str, refs: list[str], note: str
         if output.index is not None:
             output.index.unlock()
     return ActionResult(review_id, action, tuple(ids), tuple(paths))
+
+
+# -- from a decision to a policy ------------------------------------------------------
+
+NO_LINE = {
+    "source.denied": "a deny rule holds it ({rule}); deny beats allow, so only removing or "
+                     "narrowing that deny rule admits it",
+    "source.bad-url": "its source URL is malformed: fix the manifest, no rule should admit it",
+    "source.userinfo": "its source URL hides its host behind user information: fix the "
+                       "manifest, no rule should admit it",
+    "integrity.mismatch": "its bytes differ from the manifest's sha256: fix the manifest or "
+                          "the file, no policy should admit changed bytes",
+    "integrity.malformed": "the manifest's sha256 is malformed: fix the manifest",
+    "injection": "no policy line admits planted instructions; if this is a false alarm, "
+                 "release this entry alone (the release is remembered for these bytes)",
+    "duplicate": "a duplicate is held because the kept document says the same; give this "
+                 "source a higher trust on its allow rule (trust: N) if its copy should win",
+    "quality": "quality limits apply to every document of a source; release this entry "
+               "alone, or loosen a quality_* limit only after reading docs/checks.md",
+    "freshness.bad-date": "the manifest's date cannot be read: fix the manifest",
+    "freshness.inconsistent": "the manifest's dates contradict each other: fix the manifest",
+}
+
+
+def _override(code: str, details: dict[str, Any]) -> tuple[str, dict[str, Any]] | None:
+    """The per-source override that would not have raised ``code``, or None."""
+    if code == "language.not-allowed" and details.get("language"):
+        allowed = details.get("allowed") or []
+        if isinstance(allowed, str):  # the details say "de, en"
+            allowed = [part.strip() for part in allowed.split(",") if part.strip()]
+        allowed = sorted({*allowed, details["language"]})
+        return "language", {"allowed": allowed}
+    if code == "language.low-confidence" and isinstance(details.get("probability"), float):
+        return "language", {"min_confidence": int(details["probability"] * 100) / 100}
+    if code == "language.undetermined":
+        return "language", {"undetermined": "warn"}
+    if code == "freshness.stale" and isinstance(details.get("age_days"), int):
+        return "freshness", {"max_age_days": details["age_days"]}
+    if code == "freshness.future":
+        return "freshness", {"reject_future": False}
+    if code == "freshness.undated":
+        return "freshness", {"undated": "warn"}
+    if code == "integrity.missing":
+        return "integrity", {"require_checksum": False}
+    return None
+
+
+@dataclass(frozen=True)
+class PolicyLines:
+    """What :func:`policy_lines` suggests for one entry."""
+
+    id: str
+    path: str
+    yaml: str  # empty when no line would have admitted it
+    on_rule: str | None  # the existing allow rule the overrides belong on, if any
+    notes: tuple[str, ...]  # codes no policy line should admit, and why
+
+
+def policy_lines(out: Path, ref: str) -> PolicyLines:
+    """The policy lines that would have admitted an entry (an allow rule for its host,
+    per-source overrides), to paste after a review. Nothing is applied: gate never edits
+    a policy."""
+    import posixpath
+    from urllib.parse import urlsplit
+
+    import yaml
+    state = open_folder(out)
+    try:
+        doc_id = resolve(state, ref)
+        row = state.entry(doc_id)
+        record = _record(out, doc_id, row["folder"])
+    finally:
+        state.close()
+    held = record.get("reasons") or []
+    if row["folder"] == "accepted":
+        held = record.get("warnings") or []
+    source = record.get("source") or {}
+    url = source.get("url") or (record.get("manifest") or {}).get("source_url")
+    try:
+        host = urlsplit(url).hostname if url else None
+    except ValueError:
+        host = None
+    overrides: dict[str, dict[str, Any]] = {}
+    new_rule: dict[str, Any] | None = None
+    notes = []
+    for reason in held:
+        code, details = reason["code"], reason.get("details") or {}
+        found = _override(code, details)
+        if found is not None:
+            overrides.setdefault(found[0], {}).update(found[1])
+        elif code == "source.unlisted" and host:
+            new_rule = {"domain": host}
+        elif code == "source.missing":
+            folder = posixpath.dirname(row["path"])
+            new_rule = {"path": f"{folder}/" if folder else row["path"]}
+        elif CODES.get(code) is not None and CODES[code].fail_closed:
+            notes.append(f"{code}: gate could not evaluate it; fix the input or raise the "
+                         "limit, no rule admits it")
+        else:
+            why = NO_LINE.get(code) or NO_LINE.get(code.split(".")[0]) or \
+                "no policy line is suggested for this code"
+            notes.append(f"{code}: " + why.format(rule=details.get("rule_text", "a deny rule")))
+    on_rule = source.get("allowed_by") if new_rule is None else None
+    if overrides and new_rule is None and on_rule is None:  # overrides live on a rule
+        folder = posixpath.dirname(row["path"])
+        new_rule = {"domain": host} if host else {"path": f"{folder}/" if folder else
+                                                  row["path"]}
+    text = ""
+    if new_rule is not None:
+        rule = {**new_rule, **({"overrides": overrides} if overrides else {})}
+        text = yaml.safe_dump({"sources": {"allow": [rule]}}, sort_keys=False,
+                              default_flow_style=None)
+    elif overrides:
+        text = yaml.safe_dump({"overrides": overrides}, sort_keys=False,
+                              default_flow_style=None)
+    return PolicyLines(doc_id, row["path"], text, on_rule, tuple(notes))

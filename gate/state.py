@@ -416,6 +416,59 @@ class State:
         return {(sha, code): {"note": note, "by": by, "at": at} for sha, code, note, by, at
                 in self.conn.execute("SELECT sha256, code, note, by, at FROM releases")}
 
+    # -- what the report page of the folder draws -------------------------------------
+
+    def runs_done(self, limit: int = 2) -> list[dict[str, Any]]:
+        """The newest runs (not review actions) whose decisions are recorded, newest
+        first: run id, seq, summary and what report.json says under ``run``."""
+        rows = self.conn.execute(
+            "SELECT run_id, seq, summary, info FROM runs WHERE mode != 'review' AND state IN "
+            "('decided', 'complete') ORDER BY seq DESC LIMIT ?", (limit,)).fetchall()
+        return [{"run_id": rid, "seq": seq, "summary": json.loads(summary or "{}"),
+                 "info": json.loads(info)} for rid, seq, summary, info in rows]
+
+    def put_report_rest(self, run_id: str, rest: dict[str, Any]) -> None:
+        """Inside the commit transaction: report.json's keys other than its documents."""
+        self.conn.execute("INSERT OR REPLACE INTO meta (key, value) VALUES (?, ?)",
+                          (f"report:{run_id}", json.dumps(rest, sort_keys=True)))
+
+    def report_rest(self, run_id: str) -> dict[str, Any] | None:
+        saved = self.meta(f"report:{run_id}")
+        return json.loads(saved) if saved else None
+
+    def decision_records(self, run_id: str) -> Iterator[dict[str, Any]]:
+        """The report entries of a run's documents, in path order, one at a time."""
+        for (record,) in self.conn.execute(
+                "SELECT record FROM decisions WHERE run_id = ? ORDER BY path", (run_id,)):
+            yield json.loads(record)
+
+    def reviewed_entries(self) -> list[dict[str, Any]]:
+        """Every entry with its folder, status and review (JSON), in path order."""
+        cols = ("doc_id", "folder", "path", "sha256", "run_id", "cache_key", "status",
+                "review")
+        return [dict(zip(cols, row)) for row in self.conn.execute(
+            f"SELECT {', '.join(cols)} FROM entries ORDER BY path, doc_id")]
+
+    def audit_since_run(self) -> list[dict[str, Any]]:
+        """The audit entries written after the newest run's, oldest first (the review
+        actions since that run)."""
+        out = []
+        for entry in audit.entries(self.conn):
+            if entry.get("action") == "run":
+                break
+            out.append(entry)
+        return out[::-1]
+
+    def run_ids(self) -> list[str]:
+        """Every run and review action id, oldest first."""
+        return [r[0] for r in self.conn.execute("SELECT run_id FROM runs ORDER BY seq")]
+
+    def count_runs(self, mode_review: bool) -> int:
+        """How many runs (or review actions) were begun, for their separate numbers."""
+        op = "=" if mode_review else "!="
+        return self.conn.execute(f"SELECT COUNT(*) FROM runs WHERE mode {op} 'review'"
+                                 ).fetchone()[0]
+
     def changes(self, run_id: str) -> list[str]:
         return [r[0] for r in self.conn.execute(
             "SELECT line FROM changes WHERE run_id = ? ORDER BY seq", (run_id,))]

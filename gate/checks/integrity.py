@@ -27,9 +27,9 @@ from gate.settings import Section
 MISMATCH = define("integrity.mismatch", "the bytes do not match the manifest's sha256",
                   "the file's SHA-256 is {actual} but the manifest says {expected}; the file "
                   "changed after it was recorded")
-MISSING = define("integrity.missing", "no sha256 in the manifest, but one is required",
-                 "integrity.require_checksum is on and the manifest gives no sha256 for "
-                 "this document")
+MISSING = define("integrity.missing", "no sha256 is recorded, but one is required",
+                 "integrity.require_checksum is on and no sha256 is recorded for this "
+                 "document")
 MALFORMED = define("integrity.malformed", "the manifest's sha256 is not 64 hex digits",
                    "the manifest's sha256 {value!r} is not a SHA-256 digest (64 hex digits)")
 UNHASHED = define("integrity.unhashable", "the document's bytes could not be read to hash",

@@ -22,11 +22,18 @@ os.environ.setdefault("OPENBLAS_NUM_THREADS", "1")  # numpy is used single-threa
 import typer
 
 from gate.cli import ops, run
-from gate.cli.common import EXIT_INTERRUPTED, err_console
+from gate.cli.common import EXIT_INTERRUPTED, err_console, readable
 
 app = typer.Typer(add_completion=False, pretty_exceptions_enable=False, no_args_is_help=True,
                   help="gate: check documents against a policy before they reach a "
                        "retrieval index.")
+
+
+@app.callback()
+def _options(version: bool = typer.Option(
+        False, "--version", is_eager=True, help="Print gate's version and exit.",
+        callback=run.version_option)) -> None:
+    """gate: check documents against a policy before they reach a retrieval index."""
 app.command("run")(run.run_command)
 app.add_typer(run.policy_app, name="policy")
 app.add_typer(run.report_app, name="report")
@@ -39,7 +46,7 @@ app.command("explain")(ops.explain_command)
 
 def main() -> None:
     try:
-        app()
+        readable(typer.main.get_command(app))(prog_name="gate")
     except KeyboardInterrupt:
         err_console.print("error: interrupted.", markup=False)
         sys.exit(EXIT_INTERRUPTED)

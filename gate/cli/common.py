@@ -35,6 +35,11 @@ def say(line: str) -> None:
     out_console.print(shown(line), markup=False)
 
 
+def plural(count: int, one: str, many: str | None = None) -> str:
+    """``1 entry``, ``2 entries``: a count with its noun."""
+    return f"{count} {one if count == 1 else (many or one + 's')}"
+
+
 def fail(message: str, code: int = EXIT_UNABLE) -> None:
     err_console.print(f"error: {shown(message)}", markup=False, soft_wrap=True)
     raise typer.Exit(code)
@@ -57,6 +62,55 @@ def guard(fn):
         fail(f"gate hit an internal error ({type(err).__name__}: {err}). This is a bug; "
               "please report it with the command you ran. Set GATE_DEBUG=1 to see the "
               "traceback.", EXIT_INTERNAL)
+
+
+METAVARS = {"--policy": "FILE", "--out": "DIR", "--manifest": "FILE", "--output": "FILE",
+            "--as-of": "ISO-DATETIME", "--cluster": "ADDRESS", "--index": "URL",
+            "--index-name": "NAME", "--max-quarantine-rate": "RATE",
+            "--max-code-rate": "CODE=RATE", "--source-url": "URL", "--sha256": "HEX",
+            "--published-at": "DATE", "--retrieved-at": "DATETIME", "--inbox-path": "PATH"}
+
+
+def readable(command):
+    """Help screens in plain words: a flag shows no type (not ``<bool>``), an argument
+    shows its metavar in capitals on the usage line (not ``{inbox}``), and an option
+    without a metavar shows one named after its type (not ``<list[str]>``)."""
+    from pathlib import Path
+
+    from typer.core import TyperArgument, TyperOption
+
+    class Argument(TyperArgument):
+        def _usage_display_name(self) -> str:
+            name = self.metavar or self.name.upper()
+            return name if self.required or name.startswith("[") else f"[{name}]"
+
+        def display_type_rich(self, ctx) -> str | None:
+            return None
+
+    names = {bool: "", int: "N", float: "NUMBER", Path: "PATH"}
+    for sub in getattr(command, "commands", {}).values():
+        readable(sub)
+    make_help = command.get_help_option
+
+    def help_option(ctx):
+        option = make_help(ctx)
+        if option is not None:
+            option.metavar = ""
+        return option
+
+    command.get_help_option = help_option
+    for param in command.params:
+        if isinstance(param, TyperArgument):
+            param.__class__ = Argument
+            if param.metavar is None:
+                param.metavar = param.name.upper() + ("..." if param.nargs != 1 else "")
+        elif isinstance(param, TyperOption) and param.metavar is None:
+            kind = param.type_descriptor.annotation
+            param.metavar = "" if param.is_flag else METAVARS.get(param.opts[0]) or \
+                names.get(kind, "TEXT")
+            if param.multiple:
+                param.metavar += " (repeatable)"
+    return command
 
 
 class BarReporter:

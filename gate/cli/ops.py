@@ -10,7 +10,7 @@ from typing import Annotated, Optional
 
 import typer
 
-from gate.cli.common import guard, say
+from gate.cli.common import guard, plural, say
 
 review_app = typer.Typer(add_completion=False, no_args_is_help=True,
                          help="Review quarantined documents: list, show, release, reject, "
@@ -18,26 +18,43 @@ review_app = typer.Typer(add_completion=False, no_args_is_help=True,
 audit_app = typer.Typer(add_completion=False, no_args_is_help=True,
                         help="The hash-chained log of every decision and review action.")
 
-OutDir = Annotated[Path, typer.Argument(help="The output folder of gate run (--out).")]
-Note = Annotated[str, typer.Option("--note", help="Why (required; kept in the audit log).")]
+OutDir = Annotated[Path, typer.Argument(metavar="DIR",
+                                         help="The output folder of gate run (--out).")]
+Note = Annotated[str, typer.Option("--note", metavar="TEXT",
+                                   help="Why (required; kept in the audit log).")]
 By = Annotated[Optional[str], typer.Option(  # noqa: UP045
-    "--by", help="Reviewer name for the audit log (default: the login name).")]
-Refs = Annotated[list[str], typer.Argument(help="Entry ids or inbox paths.")]
+    "--by", metavar="NAME", help="Reviewer name for the audit log (default: the login name).")]
+Refs = Annotated[Optional[list[str]], typer.Argument(  # noqa: UP045
+    metavar="[ENTRY]...", help="Entry ids or inbox paths; or select entries with the "
+                               "filters of `review list` instead.", show_default=False)]
+Json = Annotated[bool, typer.Option("--json", help="Print JSON (for scripts) instead of "
+                                                   "text.")]
+# the filters of `review list`, shared with the bulk review actions
+Check = Annotated[Optional[str], typer.Option(  # noqa: UP045
+    metavar="CHECK", help="Only entries held by this check (a check id, e.g. language).")]
+Code = Annotated[Optional[str], typer.Option(  # noqa: UP045
+    metavar="CODE", help="Only this finding code, or every code of a check id (e.g. "
+                         "source).")]
+Source = Annotated[Optional[str], typer.Option(  # noqa: UP045
+    metavar="TEXT", help="Only sources containing this text (host or URL).")]
+RunId = Annotated[Optional[str], typer.Option(  # noqa: UP045
+    metavar="RUN", help="Only entries placed by this run or review id (e.g. run-0001).")]
+Since = Annotated[Optional[str], typer.Option(  # noqa: UP045
+    metavar="YYYY-MM-DD", help="Only entries of runs as of this day or later.")]
+Until = Annotated[Optional[str], typer.Option(  # noqa: UP045
+    metavar="YYYY-MM-DD", help="Only entries of runs as of this day or earlier.")]
+Status = Annotated[str, typer.Option(metavar="STATUS",
+                                     help="open, rejected or all.")]
+Yes = Annotated[bool, typer.Option("--yes", help="Carry out an action selected by filters "
+                                                 "(without it, only the preview is "
+                                                 "printed).")]
 
 
 @review_app.command("list")
-def review_list(
-    out: OutDir,
-    check: Annotated[Optional[str], typer.Option(help="Only entries held by this check.")] = None,  # noqa: UP045
-    code: Annotated[Optional[str], typer.Option(help="Only this finding code (or a code prefix such as 'source').")] = None,  # noqa: UP045,E501
-    source: Annotated[Optional[str], typer.Option(help="Only sources containing this text (host or URL).")] = None,  # noqa: UP045,E501
-    run: Annotated[Optional[str], typer.Option(help="Only entries placed by this run id.")] = None,  # noqa: UP045
-    since: Annotated[Optional[str], typer.Option(help="Only entries decided on or after this date (YYYY-MM-DD).")] = None,  # noqa: UP045,E501
-    until: Annotated[Optional[str], typer.Option(help="Only entries decided on or before this date.")] = None,  # noqa: UP045,E501
-    status: Annotated[str, typer.Option(help="open, rejected or all.")] = "open",
-    as_json: Annotated[bool, typer.Option("--json", help="JSON for scripts.")] = False,
-) -> None:
-    """List quarantine entries (open ones by default)."""
+def review_list(out: OutDir, check: Check = None, code: Code = None, source: Source = None,
+                run: RunId = None, since: Since = None, until: Until = None,
+                status: Status = "open", as_json: Json = False) -> None:
+    """List quarantine entries (open ones by default); unknown filter values are errors."""
 
     def body():
         from gate.review import list_entries
@@ -50,19 +67,24 @@ def review_list(
         if not entries:
             say("no matching entries")
             return
-        for entry in entries:
-            say(f"{entry.id}  {entry.status:<8}  {entry.path}")
-            for reason in entry.record.get("reasons", []):
-                say(f"    {reason['code']}: {reason['message']}")
-        say(f"{len(entries)} entries")
+        _print_entries(entries)
+        say(plural(len(entries), "entry", "entries"))
 
     guard(body)
 
 
+def _print_entries(entries) -> None:
+    for entry in entries:
+        say(f"{entry.id}  {entry.status:<8}  {entry.path}")
+        for reason in entry.record.get("reasons", []):
+            say(f"    {reason['code']}: {reason['message']}")
+
+
 @review_app.command("show")
 def review_show(out: OutDir,
-                ref: Annotated[str, typer.Argument(help="Entry id or inbox path.")],
-                as_json: Annotated[bool, typer.Option("--json")] = False) -> None:
+                ref: Annotated[str, typer.Argument(metavar="ENTRY",
+                                                   help="Entry id or inbox path.")],
+                as_json: Json = False) -> None:
     """Show one entry: reasons, visible snippets, decoded payloads, the keeper diff."""
 
     def body():
@@ -109,45 +131,124 @@ def review_show(out: OutDir,
     guard(body)
 
 
-def _act(action: str, out: Path, refs: list[str], note: str, by: str | None) -> None:
+VERBS = {"release": "released", "reject": "rejected", "purge": "purged"}
+
+
+def _act(action: str, out: Path, refs: list[str] | None, note: str, by: str | None,
+         filters: dict, yes: bool) -> None:
     def body():
-        from gate.review import act
-        result = act(out, action, refs, note=note, by=by)
-        verb = {"release": "released", "reject": "rejected", "purge": "purged"}[action]
+        from gate.errors import UsageError
+        from gate.review import Filters, act, list_entries
+        verb = VERBS[action]
+        chosen = Filters(**filters)
+        if refs and chosen.given():
+            raise UsageError(f"name entries or select them with filters, not both: "
+                             f"`gate review {action} DIR ENTRY...` or `gate review {action} "
+                             "DIR --code CODE ...`.")
+        if not refs:
+            if not chosen.given():
+                raise UsageError(f"name the entries to {action}, or select them with the "
+                                 "filters of `review list` (--check, --code, --source, "
+                                 "--run, --since, --until, --status).")
+            entries = list_entries(out, **filters)
+            if not entries:
+                say(f"no matching entries: nothing {verb}")
+                return
+            if not yes:
+                _print_entries(entries)
+                say(f"{plural(len(entries), 'entry', 'entries')} would be {verb}; add --yes "
+                    f"to {action} them.")
+                return
+            targets = [e.id for e in entries]
+        else:
+            targets = list(refs)
+        if not note.strip():
+            raise UsageError(f"a note is required to {action} an entry: say why, with --note.")
+        result = act(out, action, targets, note=note, by=by)
         for doc_id, path in zip(result.ids, result.paths):
             say(f"{verb} {doc_id}  {path}")
-        say(f"{result.review_id}: {len(result.ids)} entries {verb}"
-               + (" (changes.jsonl updated)" if action == "release" else ""))
+        say(f"{result.review_id}: {plural(len(result.ids), 'entry', 'entries')} {verb}"
+            + (" (changes.jsonl updated)" if action == "release" else "")
+            + "; report.html rewritten")
 
     guard(body)
 
 
-@review_app.command("release")
-def review_release(out: OutDir, refs: Refs, note: Note, by: By = None) -> None:
-    """Move entries to accepted/; the same bytes are not held again for the same findings."""
-    _act("release", out, refs, note, by)
+def _review_action(action: str, doc: str):
+    def command(out: OutDir, note: Note, refs: Refs = None, by: By = None,
+                check: Check = None, code: Code = None, source: Source = None,
+                run: RunId = None, since: Since = None, until: Until = None,
+                status: Status = "open", yes: Yes = False) -> None:
+        filters = {"check": check, "code": code, "source": source, "run": run,
+                   "since": since, "until": until, "status": status}
+        _act(action, out, refs, note, by, filters, yes)
+    command.__doc__ = doc + (" Entries are named, or selected with the filters of `review "
+                             "list`: then the matching entries are previewed, and acted on "
+                             "only with --yes.")
+    command.__name__ = f"review_{action}"
+    return command
 
 
-@review_app.command("reject")
-def review_reject(out: OutDir, refs: Refs, note: Note, by: By = None) -> None:
-    """Keep entries in quarantine, marked as reviewed."""
-    _act("reject", out, refs, note, by)
+review_app.command("release")(_review_action(
+    "release", "Move entries to accepted/; the same bytes are not held again for the same "
+               "findings."))
+review_app.command("reject")(_review_action(
+    "reject", "Keep entries in quarantine, marked as reviewed."))
+review_app.command("purge")(_review_action(
+    "purge", "Delete entries (and their stored originals); the audit log keeps the record."))
 
 
-@review_app.command("purge")
-def review_purge(out: OutDir, refs: Refs, note: Note, by: By = None) -> None:
-    """Delete entries (and their stored originals); the audit log keeps the record."""
-    _act("purge", out, refs, note, by)
+@review_app.command("policy")
+def review_policy(out: OutDir,
+                  ref: Annotated[str, typer.Argument(metavar="ENTRY",
+                                                     help="Entry id or inbox path.")],
+                  as_json: Json = False) -> None:
+    """Print the policy lines that would have admitted an entry (an allow rule for its
+    host, per-source overrides), to paste into a policy after a review. Nothing is
+    applied."""
+
+    def body():
+        from gate.review import policy_lines
+        found = policy_lines(out, ref)
+        if as_json:
+            sys.stdout.write(json.dumps({"id": found.id, "path": found.path,
+                                         "yaml": found.yaml, "on_rule": found.on_rule,
+                                         "notes": list(found.notes)}, indent=2,
+                                        ensure_ascii=True) + "\n")
+            return
+        if found.yaml:
+            where = (f"add under the existing rule {found.on_rule}" if found.on_rule
+                     else "add to your policy")
+            say(f"# policy lines that would have admitted {found.path} ({found.id}); {where},")
+            say("# then run `gate policy check FILE`. gate applies nothing by itself.")
+            for line in found.yaml.splitlines():
+                say(line)
+        else:
+            say(f"# no policy line would have admitted {found.path} ({found.id}).")
+        for note in found.notes:
+            say(f"# {note}")
+
+    guard(body)
 
 
 @audit_app.command("verify")
 def audit_verify(out: OutDir, head: Annotated[Optional[str], typer.Option(  # noqa: UP045
-        "--head", help="A head hash recorded earlier (report.json run.audit_head) that "
-                       "must still be in the log.")] = None) -> None:
-    """Recompute the hash chain; exit 1 if any entry was changed or removed."""
+        "--head", metavar="HASH", help="A head hash recorded earlier (report.json "
+                                       "run.audit_head) that must still be in the log.")
+] = None) -> None:
+    """Recompute the hash chain; exit 1 if any entry was changed or removed.
+
+    Exit status: 0 intact; 1 the log was edited; 2 could not check (no state, bad --head).
+    """
 
     def body():
+        import re
+
+        from gate.errors import UsageError
         from gate.review import open_folder
+        if head is not None and not re.fullmatch(r"[0-9a-f]{64}", head):
+            raise UsageError(f"--head {head!r} is not a head hash: give the 64 lower-case "
+                             "hex digits of report.json's run.audit_head.")
         state = open_folder(out)
         try:
             verdict = state.verify_audit(head)
@@ -164,9 +265,9 @@ def audit_verify(out: OutDir, head: Annotated[Optional[str], typer.Option(  # no
 
 @audit_app.command("show")
 def audit_show(out: OutDir,
-               ref: Annotated[Optional[str], typer.Option("--id", help="Only this entry id or path.")] = None,  # noqa: UP045,E501
-               limit: Annotated[int, typer.Option(help="Newest entries to show.")] = 50,
-               as_json: Annotated[bool, typer.Option("--json")] = False) -> None:
+               ref: Annotated[Optional[str], typer.Option("--id", metavar="ENTRY", help="Only this entry id or path.")] = None,  # noqa: UP045,E501
+               limit: Annotated[int, typer.Option(metavar="N", min=1, help="Newest entries to show.")] = 50,  # noqa: E501
+               as_json: Json = False) -> None:
     """Show the newest audit entries (newest first)."""
 
     def body():
@@ -181,9 +282,7 @@ def audit_show(out: OutDir,
             sys.stdout.write(json.dumps(rows, indent=2, ensure_ascii=True) + "\n")
             return
         for row in rows:
-            what = row.get("path") or row.get("run")
-            extra = row.get("decision") or row.get("note") or ""
-            say(f"{row['seq']:>7}  {row['action']:<10}  {what}  {extra}")
+            say(audit_line(row))
 
     guard(body)
 
@@ -197,8 +296,8 @@ def explain_command(
     retrieved_at: Annotated[Optional[str], typer.Option(help="When it was gathered.")] = None,  # noqa: UP045
     inbox_path: Annotated[Optional[str], typer.Option(help="The inbox-relative path to use for path rules (default: the file name).")] = None,  # noqa: UP045,E501
     as_of: Annotated[Optional[str], typer.Option("--as-of", help="Clock for freshness (default now).")] = None,  # noqa: UP045,E501
-    against: Annotated[Optional[Path], typer.Option(help="An output folder whose accepted corpus to compare with for duplicates.")] = None,  # noqa: UP045,E501
-    as_json: Annotated[bool, typer.Option("--json")] = False,
+    against: Annotated[Optional[Path], typer.Option(metavar="DIR", help="An output folder whose accepted corpus to compare with for duplicates.")] = None,  # noqa: UP045,E501
+    as_json: Json = False,
 ) -> None:
     """Explain one document under a policy: each check's outcome, findings and values."""
 
@@ -256,3 +355,17 @@ def _measured(check: dict) -> str:
     if cid == "duplicate":
         return f"{m['shingles']} shingles; {check.get('note', '')}"
     return ""
+
+
+def audit_line(row: dict) -> str:
+    """One audit entry as text: what happened to what, by whom and when."""
+    what = row.get("path") or row.get("run")
+    if row.get("by"):  # a review action
+        who = f"by {row['by']} at {row.get('at')} ({row.get('review')}): {row.get('note')}"
+    elif row.get("action") == "run":
+        who = f"as of {row.get('as_of')}, policy {(row.get('policy') or {}).get('name')}"
+    else:
+        codes = ", ".join(row.get("codes") or [])
+        who = f"{row.get('decision') or row.get('why') or ''}" + \
+            (f" ({codes})" if codes else "") + (f" in {row['run']}" if row.get("run") else "")
+    return f"{row['seq']:>7}  {row['action']:<10}  {what}  {who.strip()}"

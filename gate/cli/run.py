@@ -14,6 +14,7 @@ from gate import __version__
 from gate.cli.common import (EXIT_CHECK_BUG, EXIT_LIMITS, BarReporter, err_console, guard,
                              out_console, shown)
 from gate.errors import UsageError
+from gate.report import CAUTIONS
 
 policy_app = typer.Typer(add_completion=False, no_args_is_help=True,
                          help="Validate policy files and print their schema.")
@@ -40,6 +41,8 @@ def _print_summary(result, report: dict) -> None:
     if s["changes"]:
         changes = ", ".join(f"{k} {v}" for k, v in s["changes"].items())
         out_console.print(f"changes for the index: {changes}", markup=False)
+    for caution in report.get("cautions", [])[len(CAUTIONS):]:  # this run's own cautions
+        err_console.print(f"caution: {caution}", markup=False, soft_wrap=True)
     rate = s["documents"] / result.seconds if result.seconds > 0 else 0.0
     out_console.print(f"report: {shown(str(result.report_path))}  ({result.seconds:.1f} s, "
                       f"{rate:.1f} documents/s)", markup=False)
@@ -203,14 +206,16 @@ def report_html(
     output: Annotated[Optional[Path], typer.Option(  # noqa: UP045
         "--output", "-o", help="HTML file to write (default: DIR/report.html).")] = None,
 ) -> None:
-    """Write DIR/report.json as one self-contained HTML page (no scripts, loads nothing)."""
+    """Write the page of DIR (its review queue, from its state) as one self-contained HTML
+    page (no scripts, loads nothing); from DIR/report.json alone when DIR has no state of
+    that run."""
 
     def body():
         import json
 
         from gate.placement import write_atomic
         from gate.errors import OutputError
-        from gate.htmlreport import render
+        from gate.folderpage import render_report
 
         source = directory / "report.json"
         target = output if output is not None else directory / "report.html"
@@ -233,7 +238,7 @@ def report_html(
             raise OutputError(f"--output {target} would overwrite the report it is drawn "
                               "from; choose another file.")
         try:
-            write_atomic(target, render(report).encode("utf-8"))
+            write_atomic(target, render_report(directory, report).encode("utf-8"))
         except OSError as err:
             raise OutputError(f"cannot write {target} ({err.strerror or err}); check that "
                               "its folder exists and is writable.") from None
@@ -254,5 +259,12 @@ def codes_command(markdown: Annotated[bool, typer.Option(
 
 
 def version_command() -> None:
-    """Print gate's version."""
+    """Print gate's version (the same as gate --version)."""
     out_console.print(f"gate {__version__}", markup=False)
+
+
+def version_option(value: bool) -> None:
+    """``gate --version``: print the version and stop."""
+    if value:
+        version_command()
+        raise typer.Exit()
