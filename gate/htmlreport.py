@@ -516,6 +516,15 @@ def queue_section(items: list[dict], run_id: str, max_rows: int) -> str:
                 '<thead><tr><th>document</th><th>reasons and evidence</th>'
                 '<th>status and review commands</th></tr></thead>')
     out = [head]
+    groups = Counter(str(i.get("ranked_by")) for i in open_items)
+    if groups:
+        order = sorted(groups, key=lambda g: min(_int(i.get("rank")) for i in open_items
+                                                 if i.get("ranked_by") == g))
+        out.append('<p class="legend">To decide, by urgency: '
+                   + " &middot; ".join(f"{text(g)} {groups[g]}" for g in order)
+                   + '. Entries sharing a check can be decided together: <span class="mono">'
+                   'gate review reject DIR --check CHECK --note "WHY"</span> previews them, '
+                   'and acts with <span class="mono">--yes</span>.</p>')
     if open_items:
         rows = "".join(_queue_row(i) for i in open_items[:max_rows])
         out.append(f'<div class="tablewrap"><table class="queue">{colgroup}<tbody>{rows}'
@@ -824,8 +833,7 @@ def render(report: dict, *, max_rows: int = 5000, view: dict | None = None) -> s
 
     # quarantined documents, as the run decided them, with where each is now
     now = {str(_dict(i).get("id")): _dict(i) for i in items}
-    out.append(f'<section id="quarantined"><h2>Quarantined by {text(run_id)} ({len(held)})'
-               '</h2>')
+    out.append(f'<section id="quarantined"><h2>Quarantined documents ({len(held)})</h2>')
     if held:
         rows_html = []
         for doc in held[:max_rows]:
@@ -838,8 +846,8 @@ def render(report: dict, *, max_rows: int = 5000, view: dict | None = None) -> s
                 f'</td><td>{_findings(_list(doc.get("reasons")))}</td>'
                 f'<td><span class="badge {text(status)}">{text(status)}</span>'
                 f'<div class="mono">{text(where)}</div></td></tr>')
-        out.append('<details class="card"><summary>All documents this run quarantined, '
-                   'with their status now</summary><table><colgroup><col style="width:34%">'
+        out.append(f'<details class="card"><summary>Every document {text(run_id)} '
+                   'quarantined, with its status now</summary><table><colgroup><col style="width:34%">'
                    '<col><col style="width:17%"></colgroup><thead><tr><th>document</th>'
                    '<th>reasons (code and message)</th><th>status and location</th></tr>'
                    f'</thead><tbody>{"".join(rows_html)}{_more(len(held) - max_rows, 3)}'

@@ -67,7 +67,8 @@ def test_release_reject_purge_and_audit(out):
     result = gate("review", "release", out, "freshness/undated-memo.txt", "--note",
                   "confirmed current", "--by", "alex")
     assert result.returncode == 0, result.stderr
-    assert result.stdout.splitlines()[-1].endswith("1 entries released (changes.jsonl updated)")
+    assert result.stdout.splitlines()[-1] == \
+        "review-0001: 1 entry released (changes.jsonl updated); report.html rewritten"
     assert gate("review", "reject", out, "source/fan-blog.html", "--note", "unofficial",
                 "--by", "alex").returncode == 0
     assert gate("review", "purge", out, "format/logo.html", "--note", "an image",

@@ -56,8 +56,9 @@ def test_list_filters(out):
     assert {e.path for e in review.list_entries(out, code="format")} == held_for_format
     assert all("paste.example.net" in e.source_url
                for e in review.list_entries(out, source="paste.example.net"))
-    assert review.list_entries(out, run="run-0001") and not review.list_entries(out,
-                                                                              run="run-0009")
+    assert review.list_entries(out, run="run-0001")
+    with pytest.raises(GateError, match="valid: run-0001"):  # not "no matching entries"
+        review.list_entries(out, run="run-0009")
     assert review.list_entries(out, since="2026-12-01") and \
         not review.list_entries(out, since="2026-12-02")
 
