@@ -848,7 +848,8 @@ def render(report: dict, *, max_rows: int = 5000, view: dict | None = None) -> s
                 f'<div class="mono">{text(where)}</div></td></tr>')
         out.append(f'<details class="card"><summary>Every document {text(run_id)} '
                    'quarantined, with its status now</summary><table><colgroup>'
-                   '<col style="width:34%"><col><col style="width:17%"></colgroup><thead><tr><th>document</th>'
+                   '<col style="width:34%"><col><col style="width:17%"></colgroup>'
+                   '<thead><tr><th>document</th>'
                    '<th>reasons (code and message)</th><th>status and location</th></tr>'
                    f'</thead><tbody>{"".join(rows_html)}{_more(len(held) - max_rows, 3)}'
                    '</tbody></table></details>')
