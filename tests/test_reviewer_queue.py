@@ -432,3 +432,33 @@ def test_a_run_without_a_manifest_gives_a_caution(tmp_path):
     report = json.loads((out / "report.json").read_text())
     assert any("no manifest" in c for c in report["cautions"])
     assert "This run had no manifest" in (out / "report.html").read_text()
+
+
+def test_readme_commands_exist_with_their_options():
+    """Every `gate ...` line of the README's shell blocks names a real command, and every
+    --option on it is one of that command's options."""
+    import typer
+
+    from gate.cli import app
+    root = typer.main.get_command(app)
+    readme = (ROOT / "README.md").read_text(encoding="utf-8")
+    blocks = re.findall(r"```sh\n(.*?)```", readme, re.S)
+    checked = 0
+    for line in "\n".join(blocks).splitlines():
+        line = line.split("#")[0].strip()
+        if not line.startswith("gate "):
+            continue
+        words = line.split()[1:]
+        command = root
+        while words and hasattr(command, "commands") and words[0] in command.commands:
+            command = command.commands[words.pop(0)]
+        assert not hasattr(command, "commands") or line in ("gate review ...",
+                                                            "gate --version"), line
+        options = {o for p in command.params for o in getattr(p, "opts", [])} | {"--help"}
+        if command is root:
+            options |= {"--version"}
+        for word in words:
+            if word.startswith("--"):
+                assert word.split("=")[0].strip("[]") in options, (line, word)
+        checked += 1
+    assert checked >= 15
