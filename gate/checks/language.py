@@ -40,7 +40,7 @@ from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.extract.model import Extraction
 from gate.findings import Finding, define
 from gate.langid import identify
-from gate.policy.base import Section
+from gate.settings import Section
 
 NOT_ALLOWED = define("language.not-allowed", "the text is in a language not allowed",
                      "the text is mostly {language} ({probability:.0%} of it); the policy "
