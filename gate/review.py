@@ -385,6 +385,8 @@ def _override(code: str, details: dict[str, Any]) -> tuple[str, dict[str, Any]] 
         return "language", {"allowed": allowed}
     if code == "language.low-confidence" and isinstance(details.get("probability"), float):
         return "language", {"min_confidence": int(details["probability"] * 100) / 100}
+    if code == "language.mixed" and isinstance(details.get("allowed_share"), float):
+        return "language", {"min_allowed_share": int(details["allowed_share"] * 100) / 100}
     if code == "language.undetermined":
         return "language", {"undetermined": "warn"}
     if code == "freshness.stale" and isinstance(details.get("age_days"), int):

@@ -139,7 +139,8 @@ def test_page_follows_every_review_action_and_equals_a_rerender(out, tmp_path):
         "freshness/undated-memo.txt") < decided.index("format/logo.html")
     assert Sections(decided).rows == ["rejected", "released", "purged"]
     assert "by alex at" in decided and "an image, not a document" in decided
-    assert "Review queue: 36 entries to decide" in page
+    held = json.loads((out / "report.json").read_text())["summary"]["quarantined"]
+    assert f"Review queue: {held - 3} entries to decide" in page
     assert_inert(page)
 
 
@@ -212,8 +213,9 @@ def test_browser_shows_the_queue_first_with_statuses(out, tmp_path):
     assert "&lt;script&gt;alert(1)&lt;/script&gt; checked" in dom  # the note, as text
     assert Sections(dom).ids[0] == "queue"
     statuses = Sections(dom).rows
-    assert statuses[:36] == ["open"] * 36
-    assert statuses[36:39] == ["rejected", "released", "purged"]
+    held = json.loads((out / "report.json").read_text())["summary"]["quarantined"]
+    assert statuses[:held - 3] == ["open"] * (held - 3)
+    assert statuses[held - 3:held] == ["rejected", "released", "purged"]
     shot = tmp_path / "page.png"
     run_chromium(binary, tmp_path / "profile", "--window-size=1300,1400",
                  f"--screenshot={shot}", page.as_uri())
@@ -267,7 +269,8 @@ def test_clearing_the_demo_queue_with_bulk_commands(out):
         result = gate("review", action, out, *selection, "--note", "demo triage", "--yes")
         assert result.returncode == 0, (selection, result.stderr)
     assert gate("review", "list", out).stdout == "no matching entries\n"
-    assert open_before == 39 and len(plan) == 9
+    report = json.loads((out / "report.json").read_text())
+    assert open_before == report["summary"]["quarantined"] and len(plan) == 9
     page = (out / "report.html").read_text(encoding="utf-8")
     assert "Review queue: 0 entries to decide" in page and "nothing left to decide" in page
 
@@ -292,6 +295,17 @@ def test_policy_lines_for_a_language_entry_paste_into_its_rule(out):
     policy = (out / "report.json").read_text()  # nothing was applied anywhere
     assert POLICY.read_text(encoding="utf-8") == (ROOT / "policies" / "demo.yaml").read_text()
     assert "fr" not in json.loads(policy)["run"]["policy"]["name"]
+
+
+def test_policy_lines_for_a_mixed_language_entry(out):
+    found = json.loads(gate("review", "policy", out, "language/depot-hours.txt",
+                            "--json").stdout)
+    overrides = yaml.safe_load(found["yaml"])["overrides"]
+    share = overrides["language"]["min_allowed_share"]
+    assert 0.5 < share < 0.9  # at or below the measured share, so it would have passed
+    parse(yaml.safe_dump({"version": 1, "name": "t", "language": {"allowed": ["en", "de"]},
+                          "sources": {"allow": [{"domain": "docs.example.org",
+                                                 "overrides": overrides}]}}))
 
 
 def test_policy_lines_for_an_unlisted_source_and_notes_for_the_rest(out):
