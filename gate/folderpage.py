@@ -27,8 +27,8 @@ from gate.visible import visible
 
 HTML_REASONS = 5000  # held documents whose reasons' details the page keeps
 DIFF_LIMIT = 60  # diff lines shown per near-duplicate on the page
-DIFF_ENTRIES = 300  # queue entries whose near-duplicate diff is computed
-TEXT_LIMIT = 50_000  # characters of each text compared for a diff
+DIFF_ENTRIES = 200  # queue entries whose near-duplicate diff is computed
+TEXT_LIMIT = 20_000  # characters of each text compared for a diff
 
 def keeper_diffs(out: Path, record: dict[str, Any], text: str | None, path: str,
                  limit: int = 200) -> list[dict[str, str]]:
