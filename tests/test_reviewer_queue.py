@@ -340,6 +340,19 @@ def test_review_filters_reject_unknown_values(demo, args, message):
     assert result.stderr.count("\n") == 1
 
 
+@pytest.mark.parametrize("args, message", [
+    (("--sha256", "abc"), "--sha256 'abc' is not a SHA-256 digest (64 hex digits)."),
+    (("--published-at", "last week"), "--published-at: 'last week' is not an ISO 8601 date"),
+    (("--retrieved-at", "2026-02-30"), "--retrieved-at: "),
+])
+def test_explain_rejects_malformed_values(tmp_path, args, message):
+    doc = tmp_path / "n.txt"
+    doc.write_text("A short invented notice.\n")
+    result = gate("explain", doc, "--policy", POLICY, *args)
+    assert result.returncode == 2 and result.stderr.startswith("error: " + message), \
+        result.stderr
+
+
 def test_audit_verify_rejects_a_malformed_head(demo):
     result = gate("audit", "verify", demo, "--head", "abc")
     assert result.returncode == 2 and "BROKEN" not in result.stdout

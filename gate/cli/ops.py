@@ -316,6 +316,17 @@ def explain_command(
                 when = dates.parse_as_of(as_of)
             except dates.DateProblem as err:
                 raise UsageError(str(err)) from None
+        import re
+        if sha256 is not None and not re.fullmatch(r"[0-9a-fA-F]{64}", sha256):
+            raise UsageError(f"--sha256 {sha256!r} is not a SHA-256 digest (64 hex digits).")
+        for name, value in (("--published-at", published_at),
+                            ("--retrieved-at", retrieved_at)):
+            if value is not None:
+                try:
+                    dates.parse_iso8601(value)
+                except dates.DateProblem as err:
+                    raise UsageError(f"{name}: {err}; give an ISO 8601 date such as "
+                                     "2026-11-01 or 2026-11-01T08:00:00Z.") from None
         rel = inbox_path or file.name
         record = None
         if any((source_url, sha256, published_at, retrieved_at)):
