@@ -700,7 +700,8 @@ def render(report: dict, *, max_rows: int = 5000, view: dict | None = None) -> s
     meta.append(("gate version", version))
     rows = "".join(f'<dt>{text(k)}</dt><dd class="{"mono" if "sha256" in k else ""}">'
                    f'{text(v) if v not in (None, "") else "-"}</dd>' for k, v in meta)
-    line = (f"{n_docs} documents: {n_acc} accepted, {n_held} quarantined; {open_count} "
+    noun = "document" if n_docs == 1 else "documents"
+    line = (f"{n_docs} {noun}: {n_acc} accepted, {n_held} quarantined; {open_count} "
             f"{'entry' if open_count == 1 else 'entries'} to decide. As of "
             f"{run.get('as_of') or '-'}, policy {policy.get('name') or '-'}.")
     out.append(f'<header class="band"><p class="kicker">gate &middot; review page</p>'

@@ -456,6 +456,7 @@ def test_a_run_without_a_manifest_gives_a_caution(tmp_path):
     result = gate("run", inbox, "--policy", POLICY, "--out", out, "--as-of", AS_OF, "-q")
     assert result.returncode == 0, result.stderr
     assert "caution: This run had no manifest" in result.stderr
+    assert result.stdout.startswith("run-0001: 1 document, ")  # not "1 documents"
     report = json.loads((out / "report.json").read_text())
     assert any("no manifest" in c for c in report["cautions"])
     assert "This run had no manifest" in (out / "report.html").read_text()

@@ -12,7 +12,7 @@ import typer
 
 from gate import __version__
 from gate.cli.common import (EXIT_CHECK_BUG, EXIT_LIMITS, BarReporter, err_console, guard,
-                             out_console, shown)
+                             out_console, plural, shown)
 from gate.errors import UsageError
 from gate.report import CAUTIONS
 
@@ -25,7 +25,7 @@ report_app = typer.Typer(add_completion=False, no_args_is_help=True,
 def _print_summary(result, report: dict) -> None:
     s = result.summary
     run = report.get("run", {})
-    out_console.print(f"{result.run_id}: {s['documents']} documents, {s['accepted']} "
+    out_console.print(f"{result.run_id}: {plural(s['documents'], 'document')}, {s['accepted']} "
                       f"accepted, {s['quarantined']} quarantined (as of {run.get('as_of')}"
                       f"{', resumed' if result.resumed else ''})", markup=False)
     if s["quarantined_by_code"]:
