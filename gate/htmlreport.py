@@ -506,7 +506,7 @@ def queue_section(items: list[dict], run_id: str, max_rows: int) -> str:
                  'provenance, format, quality, language, and last stale documents and '
                  'duplicates. Copy a command, replace WHY with your reason, and run it; this '
                  'page is rewritten after every review action. '
-                 + (f'Decided since {text(run_id)}: {text(summary)}.' if summary else '')
+                 + (f'Reviewed: {text(summary)}.' if summary else '')
                  + '</p>')
     else:
         head += ('<p class="legend">Drawn from report.json alone: review statuses are not '
@@ -533,8 +533,9 @@ def queue_section(items: list[dict], run_id: str, max_rows: int) -> str:
         out.append('<p class="empty">nothing left to decide: no open quarantine entry</p>')
     if decided:
         rows = "".join(_queue_row(i) for i in decided[:max_rows])
-        out.append(f'<h3 id="decided" style="margin-top:14px">Decided since {text(run_id)} '
-                   f'({len(decided)})</h3><div class="tablewrap"><table class="queue">'
+        out.append(f'<h3 id="decided" style="margin-top:14px">Reviewed ({len(decided)}): '
+                   f'rejected entries, and entries released or purged since {text(run_id)}'
+                   '</h3><div class="tablewrap"><table class="queue">'
                    f'{colgroup}<tbody>{rows}{_more(len(decided) - max_rows, 3)}</tbody>'
                    '</table></div>')
     out.append('</section>\n')
