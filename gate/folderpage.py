@@ -78,6 +78,8 @@ def _text(path: Path) -> str | None:
 def commands(folder: str, doc_id: str, status: str, releasable: bool) -> list[str]:
     """The review commands a reviewer can copy for one entry (a note must be written)."""
     base = f"gate review {{}} {shlex.quote(folder)} {doc_id}"
+    if status == "released":  # from the decision to a policy that would have admitted it
+        return [base.format("policy")]
     if status not in ("open", "rejected"):
         return []
     verbs = (["release"] if releasable else []) + (["reject"] if status == "open" else []) \

@@ -139,6 +139,9 @@ def test_page_follows_every_review_action_and_equals_a_rerender(out, tmp_path):
         "freshness/undated-memo.txt") < decided.index("format/logo.html")
     assert Sections(decided).rows == ["rejected", "released", "purged"]
     assert "by alex at" in decided and "an image, not a document" in decided
+    released = decided[decided.index("freshness/undated-memo.txt"):]
+    released = released[:released.index("</tr>")]
+    assert re.search(r'<pre class="cmd">gate review policy \S+ [0-9a-f]{20}</pre>', released)
     held = json.loads((out / "report.json").read_text())["summary"]["quarantined"]
     assert f"Review queue: {held - 3} entries to decide" in page
     assert_inert(page)
