@@ -96,9 +96,17 @@ def test_a_name_that_is_not_utf8_is_reported_escaped_placed_and_reviewable(tmp_p
 # -- 2. folders deeper than Python's recursion limit -------------------------------------
 
 
-def test_a_folder_1100_levels_deep_is_walked(tmp_path):
+@pytest.fixture
+def deep_inbox(tmp_path):
     inbox = tmp_path / "inbox"
     inbox.mkdir()
+    yield inbox
+    # shutil.rmtree (pytest's clean-up) recurses per level; rm does not
+    subprocess.run(["rm", "-rf", "--", str(inbox)], check=True)
+
+
+def test_a_folder_1100_levels_deep_is_walked(tmp_path, deep_inbox):
+    inbox = deep_inbox
     rel = deep_folder(inbox, 1100)
     (inbox / "top.txt").write_text(PROSE)
     result = run_inbox(tmp_path, inbox)
@@ -106,3 +114,105 @@ def test_a_folder_1100_levels_deep_is_walked(tmp_path):
     paths = {d["path"]: d["decision"] for d in report["documents"]}
     assert paths == {"top.txt": "accepted", rel.decode() + "/note.txt": "accepted"}
     assert result.summary["accepted"] == 2
+
+
+# -- 3. policy loading has limits --------------------------------------------------------
+
+
+def limited_gate(*args, memory_mb=1500, timeout=120):
+    """gate in a child whose address space is capped, so an unbounded read or expansion
+    ends in a failed test instead of taking the shared machine's memory."""
+    import resource
+
+    def cap():
+        limit = memory_mb << 20
+        resource.setrlimit(resource.RLIMIT_AS, (limit, limit))
+
+    return subprocess.run([sys.executable, "-m", "gate", *map(str, args)],
+                          capture_output=True, text=True, preexec_fn=cap, timeout=timeout)
+
+
+def assert_clean_error(result, *needles):
+    assert result.returncode == 2, (result.returncode, result.stderr[-2000:])
+    assert "Traceback" not in result.stderr and result.stderr.startswith("error: ")
+    for needle in needles:
+        assert needle in result.stderr, result.stderr
+
+
+def test_a_yaml_alias_bomb_is_refused_without_expanding_it(tmp_path):
+    # the "billion laughs" shape (common practice): nine levels of nine aliases each
+    lines = ["version: 1", "name: bomb", 'x0: &x0 ["lol", "lol", "lol", "lol", "lol", '
+             '"lol", "lol", "lol", "lol"]']
+    for level in range(1, 10):
+        lines.append(f"x{level}: &x{level} [" + ", ".join([f"*x{level - 1}"] * 9) + "]")
+    path = tmp_path / "bomb.yaml"
+    path.write_text("\n".join(lines) + "\n")
+    result = limited_gate("policy", "check", path)
+    assert_clean_error(result, "bomb.yaml", "expand to more than", "line ")
+
+
+def test_an_alias_inside_its_own_anchor_is_refused(tmp_path):
+    path = write_policy(tmp_path / "loop.yaml", "description: &d [1, *d]\n")
+    assert_clean_error(gate("policy", "check", path), "loop.yaml", "line 3", "a loop")
+
+
+def test_5000_nested_brackets_are_refused_with_the_line(tmp_path):
+    path = write_policy(tmp_path / "deep.yaml", "description: " + "[" * 5000 + "]" * 5000
+                        + "\n")
+    result = gate("policy", "check", path)
+    assert_clean_error(result, "deep.yaml", "line 3", "nesting deeper than 64 levels")
+
+
+def test_extends_dev_zero_is_refused_not_read(tmp_path):
+    path = write_policy(tmp_path / "zero.yaml", "extends: /dev/zero\n")
+    result = limited_gate("policy", "check", path)
+    assert_clean_error(result, "/dev/zero", "character device, not a regular file")
+
+
+def test_extends_a_fifo_does_not_hang(tmp_path):
+    os.mkfifo(tmp_path / "base.yaml")
+    path = write_policy(tmp_path / "child.yaml", "extends: base.yaml\n")
+    result = limited_gate("policy", "check", path, timeout=60)  # it used to wait for ever
+    assert_clean_error(result, "base.yaml", "FIFO (named pipe), not a regular file")
+
+
+def test_a_policy_that_is_a_link_or_too_large_is_refused(tmp_path):
+    real = write_policy(tmp_path / "real.yaml")
+    os.symlink(real, tmp_path / "link.yaml")
+    assert_clean_error(gate("policy", "check", tmp_path / "link.yaml"), "link.yaml",
+                       "symbolic link")
+    big = write_policy(tmp_path / "big.yaml", "description: '" + "x" * (5 << 20) + "'\n")
+    assert_clean_error(gate("policy", "check", big), "big.yaml", "larger than the 4,194,304")
+
+
+def test_a_long_chain_of_extends_is_refused(tmp_path):
+    for number in range(40):
+        write_policy(tmp_path / f"p{number}.yaml", f"extends: p{number + 1}.yaml\n")
+    write_policy(tmp_path / "p40.yaml")
+    result = gate("policy", "check", tmp_path / "p0.yaml")
+    assert_clean_error(result, "more than 16 policies extend one another")
+
+
+def test_overrides_are_validated_once_per_rule_not_the_whole_policy_each(tmp_path,
+                                                                         monkeypatch):
+    from gate.policy.model import Policy
+    rules = "".join(f"    - domain: site{n}.example.org\n      overrides:\n"
+                    f"        language: {{allowed: [en, de]}}\n"
+                    f"        freshness: {{max_age_days: {30 + n}}}\n" for n in range(1200))
+    path = write_policy(tmp_path / "many.yaml", "language:\n  allowed: [en]\nfreshness:\n"
+                        "  max_age_days: 365\nsources:\n  allow:\n" + rules)
+    calls = []
+    original = Policy.model_validate.__func__
+
+    def counting(cls, *args, **kwargs):
+        calls.append(1)
+        return original(cls, *args, **kwargs)
+
+    monkeypatch.setattr(Policy, "model_validate", classmethod(counting))
+    loaded = load_policy(path)
+    assert len(calls) == 1  # the whole policy once; 1,200 rules do not re-validate it
+    variant = loaded.for_rule(1199)
+    assert variant.freshness.max_age_days == 1229
+    assert variant.language.allowed == ("en", "de")
+    assert loaded.policy.freshness.max_age_days == 365
+    assert variant.sources is loaded.policy.sources  # shared, not copied per rule
