@@ -156,12 +156,7 @@ def _prepare(opts: RunOptions) -> tuple[Path, Path, manifest_mod.Manifest]:
                           f"({err.strerror}).") from None
     if not os.access(out, os.W_OK):
         raise OutputError(f"the output folder {opts.out} is not writable.")
-    if opts.manifest is not None:
-        manifest = manifest_mod.load(opts.manifest)
-    elif (inbox / "manifest.jsonl").is_file():
-        manifest = manifest_mod.load(inbox / "manifest.jsonl")
-    else:
-        manifest = manifest_mod.EMPTY
+    manifest = manifest_mod.for_inbox(inbox, opts.manifest)
     return inbox, out, manifest
 
 

@@ -216,3 +216,76 @@ def test_overrides_are_validated_once_per_rule_not_the_whole_policy_each(tmp_pat
     assert variant.language.allowed == ("en", "de")
     assert loaded.policy.freshness.max_age_days == 365
     assert variant.sources is loaded.policy.sources  # shared, not copied per rule
+
+
+# -- 4. manifest loading -----------------------------------------------------------------
+
+
+def small_inbox(tmp_path: Path) -> Path:
+    inbox = tmp_path / "inbox"
+    inbox.mkdir()
+    (inbox / "notes.txt").write_text(PROSE * 3)
+    return inbox
+
+
+def test_manifest_dev_zero_is_refused_not_read(tmp_path):
+    inbox = small_inbox(tmp_path)
+    policy = write_policy(tmp_path / "p.yaml")
+    result = limited_gate("run", inbox, "--policy", policy, "--out", tmp_path / "out",
+                          "--manifest", "/dev/zero", "--as-of", "2026-12-01")
+    assert_clean_error(result, "/dev/zero", "character device, not a regular file")
+
+
+def test_an_inbox_manifest_that_is_a_link_is_an_error_not_followed(tmp_path):
+    inbox = small_inbox(tmp_path)
+    outside = tmp_path / "elsewhere.jsonl"  # grants provenance it must not grant
+    outside.write_text(json.dumps({"path": "notes.txt",
+                                   "source_url": "https://docs.example.org/notes"}) + "\n")
+    os.symlink(outside, inbox / "manifest.jsonl")
+    policy = write_policy(tmp_path / "p.yaml", "sources:\n  allow:\n    - domain: "
+                          "docs.example.org\n  require_provenance: true\n")
+    result = gate("run", inbox, "--policy", policy, "--out", tmp_path / "out", "--as-of",
+                  "2026-12-01")
+    assert_clean_error(result, "manifest.jsonl", "the inbox's manifest.jsonl",
+                       "symbolic link")
+    assert not (tmp_path / "out" / "accepted").exists()
+
+
+def test_an_inbox_manifest_that_is_a_fifo_is_an_error_not_skipped(tmp_path):
+    inbox = small_inbox(tmp_path)
+    os.mkfifo(inbox / "manifest.jsonl")
+    policy = write_policy(tmp_path / "p.yaml")
+    result = gate("run", inbox, "--policy", policy, "--out", tmp_path / "out", "--as-of",
+                  "2026-12-01")
+    assert_clean_error(result, "manifest.jsonl", "FIFO (named pipe)")
+
+
+@pytest.mark.parametrize("separator", ["\u2028", "\u2029", "\u0085"])
+def test_line_separators_inside_json_strings_are_text(separator):
+    from gate import manifest
+    # raw (unescaped) in a string value: RFC 8259 allows any character from U+0020 up
+    # there, and JSON Lines (jsonlines.org) ends a line at \n only
+    line = '{"path": "a.txt", "x_note": "Quillby' + separator + 'depot"}\n{"path": "b.txt"}\n'
+    parsed = manifest.parse(line, "m.jsonl")
+    assert sorted(parsed.records) == ["a.txt", "b.txt"]
+    assert parsed.records["b.txt"].line == 2
+
+
+def test_manifest_line_and_x_value_caps(tmp_path):
+    from gate import manifest
+    from gate.errors import ManifestError
+    big = json.dumps({"path": "a.txt", "x_blob": "z" * (30 << 20)}) + "\n"
+    path = tmp_path / "m.jsonl"
+    path.write_text(big)
+    with pytest.raises(ManifestError, match=r"line 1 is longer than the 65,536 bytes"):
+        manifest.load(path)
+    with pytest.raises(ManifestError, match=r"line 1: 'x_blob' holds 5,002 bytes; an x_ "
+                                            r"value may hold at most 4,096"):
+        manifest.parse(json.dumps({"path": "a.txt", "x_blob": "z" * 5000}), "m.jsonl")
+    with pytest.raises(ManifestError, match="line 2: 'source_url' holds an unpaired "
+                                            "surrogate"):
+        manifest.parse('{"path": "a.txt"}\n{"path": "b.txt", "source_url": "\\udce9"}',
+                       "m.jsonl")
+    ok = manifest.parse(json.dumps({"path": "a.txt", "x_batch": {"crawler": "c-7"}}),
+                        "m.jsonl")
+    assert ok.records["a.txt"].extra == {"x_batch": {"crawler": "c-7"}}
