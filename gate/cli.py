@@ -22,7 +22,7 @@ from rich.console import Console  # noqa: E402
 from rich.progress import (BarColumn, MofNCompleteColumn, Progress, TextColumn,  # noqa: E402
                            TimeElapsedColumn)
 
-from gate import __version__  # noqa: E402
+from gate import __version__, redact  # noqa: E402
 from gate.errors import GateError, UsageError  # noqa: E402
 
 EXIT_UNABLE = 2
@@ -53,7 +53,7 @@ def shown(text: str) -> str:
 
 
 def _fail(message: str, code: int = EXIT_UNABLE) -> None:
-    err_console.print(f"error: {shown(message)}", markup=False, soft_wrap=True)
+    err_console.print(f"error: {shown(redact.text(message))}", markup=False, soft_wrap=True)
     raise typer.Exit(code)
 
 
@@ -111,7 +111,7 @@ class BarReporter:
             self.progress.refresh()
 
     def note(self, message: str) -> None:
-        err_console.print(shown(message), markup=False)
+        err_console.print(shown(redact.text(message)), markup=False)
 
     def close(self) -> None:
         if self.progress is not None:
@@ -195,6 +195,9 @@ def run_command(
             except dates.DateProblem as err:
                 raise UsageError(str(err)) from None
         limits = _code_limits(max_code_rate or [])
+        if index is not None:
+            from gate.index import connection_settings
+            connection_settings(index)  # a malformed --index is an error even unused
         loaded = load_policy(policy)
         options = RunOptions(inbox=inbox, policy=loaded, out=out, manifest=manifest,
                              as_of=when, workers=workers or os.cpu_count() or 1,

@@ -27,6 +27,7 @@ from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
+from gate import redact
 from gate.bounded import InputFileProblem, lines
 from gate.errors import ManifestError
 
@@ -55,7 +56,7 @@ class ManifestRecord:
         for name in FIELDS[1:]:
             value = getattr(self, name)
             if value is not None:
-                out[name] = value
+                out[name] = redact.url(value) if name == "source_url" else value
         if self.extra:
             out["extra"] = self.extra
         return out

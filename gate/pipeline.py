@@ -29,7 +29,7 @@ from datetime import UTC, datetime
 from pathlib import Path
 from typing import Any, Protocol
 
-from gate import __version__, audit, dates
+from gate import __version__, audit, dates, redact
 from gate import manifest as manifest_mod
 from gate.checks import CORPUS_CHECKS, DOCUMENT_CHECKS
 from gate.checks import duplicate as duplicate_check
@@ -478,7 +478,7 @@ def _evaluate(item: Item, loaded: LoadedPolicy, ctx: RunContext,
         "findings": [_finding_json(f) for f in found], "checks": marks,
         "measures": _public_measures(item.measures), "cache_key": item.cache_key,
         "has_text": document.has_text, "rule": rule,
-        "manifest_source": item.record.source_url if item.record else None,
+        "manifest_source": redact.url(item.record.source_url) if item.record else None,
     }
     if match is not None:
         blob["source"] = {"url": match.url, "trust": match.trust,
