@@ -334,3 +334,65 @@ def test_a_source_url_with_a_password_is_held_and_not_repeated(tmp_path):
     assert "SECRETPW" not in written and "https://***@docs.example.org/n" in report
     state = b"".join(p.read_bytes() for p in (out / "state").glob("gate.sqlite*"))
     assert b"SECRETPW" not in state
+
+
+# -- 6. every numeric policy value has a range the system can honour ----------------------
+
+
+def _models(annotation, seen):
+    import typing
+
+    from pydantic import BaseModel
+    if isinstance(annotation, type) and issubclass(annotation, BaseModel) and \
+            annotation not in seen:
+        seen.add(annotation)
+        yield annotation
+        for field in annotation.model_fields.values():
+            yield from _models(field.annotation, seen)
+    for arg in typing.get_args(annotation):
+        yield from _models(arg, seen)
+
+
+def test_every_numeric_policy_value_has_an_upper_bound():
+    import typing
+
+    import annotated_types
+
+    from gate.policy.model import Policy
+    unbounded = []
+    for model in _models(Policy, set()):
+        assert model.model_config.get("allow_inf_nan") is False, model.__name__
+        for name, field in model.model_fields.items():
+            args = typing.get_args(field.annotation) or (field.annotation,)
+            if not any(arg in (int, float) for arg in args):
+                continue
+            if typing.get_origin(field.annotation) is dict:  # n -> share tables
+                checked = {f for d in model.__pydantic_decorators__.field_validators.values()
+                           for f in d.info.fields}
+                assert name in checked, f"{model.__name__}.{name} has no validator"
+                continue
+            if not any(isinstance(m, (annotated_types.Le, annotated_types.Lt))
+                       for m in field.metadata):
+                unbounded.append(f"{model.__name__}.{name}")
+    assert unbounded == []
+
+
+@pytest.mark.parametrize("text, needle", [
+    ("limits:\n  memory_mb: 99999999999999999999999\n", "line 4: limits.memory_mb"),
+    ("limits:\n  max_bytes: 99999999999999\n", "line 4: limits.max_bytes"),
+    ("limits:\n  timeout_s: .inf\n", "line 4: limits.timeout_s"),
+    ("freshness:\n  max_age_days: 999999999999\n", "line 4: freshness.max_age_days"),
+    ("quality:\n  max_top_ngram_chars: {40: 0.5}\n", "n = 40 is not measured"),
+    ("quality:\n  min_mean_word_length: .nan\n", "quality.min_mean_word_length"),
+])
+def test_absurd_limits_are_refused_by_policy_check(tmp_path, text, needle):
+    result = gate("policy", "check", write_policy(tmp_path / "p.yaml", text))
+    assert_clean_error(result, needle)
+
+
+def test_the_largest_allowed_limits_work_in_a_run(tmp_path):
+    inbox = small_inbox(tmp_path)
+    result = run_inbox(tmp_path, inbox, "limits:\n  memory_mb: 1048576\n  max_bytes: "
+                       "1073741824\n  max_pages: 100000\n  timeout_s: 3600\n"
+                       "freshness:\n  max_age_days: 100000\n  undated: allow\n")
+    assert result.summary["accepted"] == 1, result.summary

@@ -91,11 +91,12 @@ _KIND_WORDS = {"symlink": "a symbolic link", "fifo": "a named pipe (FIFO)",
 class LimitsSettings(Strict):
     """Resource limits per document; they always apply."""
 
-    max_bytes: int = Field(20_000_000, ge=1, description="Largest file size on disk, bytes.")
-    max_pages: int = Field(500, ge=1, description="Most pages a PDF may have.")
+    max_bytes: int = Field(20_000_000, ge=1, le=1 << 30, description="Largest file size on "
+                           "disk, bytes (at most 1 GiB: the file is held in memory).")
+    max_pages: int = Field(500, ge=1, le=100_000, description="Most pages a PDF may have.")
     timeout_s: float = Field(30, gt=0, le=3600, description="Wall-clock time allowed to "
                              "extract and measure one document, seconds.")
-    memory_mb: int = Field(1024, ge=64, description="Memory one document may use while it is "
+    memory_mb: int = Field(1024, ge=64, le=1 << 20, description="Memory one document may use while it is "
                            "extracted, MiB (on top of the worker's baseline).")
     max_nesting: int = Field(250, ge=16, le=2000, description="Deepest HTML element "
                              "nesting read; deeper pages are held.")

@@ -61,7 +61,7 @@ class LanguageSettings(Section):
                                      examples=[["en", "de"]])
     min_confidence: float = Field(0.80, ge=0.0, le=1.0, description="Hold documents whose "
                                   "most likely language is less probable than this.")
-    min_chars: int = Field(200, ge=1, description="Below this many characters of text the "
+    min_chars: int = Field(200, ge=1, le=100_000_000, description="Below this many characters of text the "
                            "language is undetermined.")
     undetermined: Literal["quarantine", "warn", "allow"] | None = Field(
         None, description="What to do when the language cannot be determined; default: the "

@@ -34,7 +34,7 @@ import re
 from typing import Any
 
 import numpy as np
-from pydantic import Field
+from pydantic import Field, field_validator
 
 from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.extract.model import Extraction
@@ -77,16 +77,20 @@ _ELLIPSES = ("...", "…")
 _PARAGRAPH = re.compile(r"\n\s*\n")
 
 
+_TOP_N = range(2, 5)  # n of the most-frequent n-gram shares measured (Gopher Table A1)
+_DUP_N = range(5, 11)  # n of the repeated n-gram shares measured
+
+
 class QualitySettings(Section):
     """Gopher document-quality filters; defaults are the paper's values, null disables."""
 
-    min_words: int | None = Field(50, ge=0, description="Fewest words.")
-    max_words: int | None = Field(100_000, ge=1, description="Most words.")
-    min_mean_word_length: float | None = Field(3, ge=0, description="Shortest mean word "
+    min_words: int | None = Field(50, ge=0, le=100_000_000, description="Fewest words.")
+    max_words: int | None = Field(100_000, ge=1, le=100_000_000, description="Most words.")
+    min_mean_word_length: float | None = Field(3, ge=0, le=1000, description="Shortest mean word "
                                                "length, characters.")
-    max_mean_word_length: float | None = Field(10, ge=0, description="Longest mean word "
+    max_mean_word_length: float | None = Field(10, ge=0, le=1000, description="Longest mean word "
                                                "length, characters.")
-    max_symbol_ratio: float | None = Field(0.1, ge=0, description="Most '#' (or ellipses) "
+    max_symbol_ratio: float | None = Field(0.1, ge=0, le=1000, description="Most '#' (or ellipses) "
                                            "per word.")
     max_bullet_lines: float | None = Field(0.9, ge=0, le=1, description="Largest share of "
                                            "lines starting with a bullet.")
@@ -94,7 +98,7 @@ class QualitySettings(Section):
                                              "lines ending with an ellipsis.")
     min_alphabetic_words: float | None = Field(0.8, ge=0, le=1, description="Smallest share "
                                                "of words containing a letter.")
-    min_stop_words: int | None = Field(2, ge=0, description="Fewest distinct stop words "
+    min_stop_words: int | None = Field(2, ge=0, le=10_000, description="Fewest distinct stop words "
                                        "(for languages gate has a list for).")
     max_duplicate_lines: float | None = Field(0.30, ge=0, le=1, description="Largest share "
                                               "of lines that repeat an earlier line.")
@@ -112,6 +116,18 @@ class QualitySettings(Section):
         {5: 0.15, 6: 0.14, 7: 0.13, 8: 0.12, 9: 0.11, 10: 0.10},
         description="n -> largest character share covered by n-grams that occur more "
         "than once (Gopher Table A1).")
+
+    @field_validator("max_top_ngram_chars", "max_duplicate_ngram_chars")
+    @classmethod
+    def _ngram_limits(cls, value: dict[int, float], info: Any) -> dict[int, float]:
+        measured = _TOP_N if info.field_name == "max_top_ngram_chars" else _DUP_N
+        for n, share in value.items():
+            if n not in measured:
+                raise ValueError(f"n = {n} is not measured; use n from {measured[0]} to "
+                                 f"{measured[-1]}")
+            if not 0.0 <= share <= 1.0:
+                raise ValueError(f"the share for n = {n} must be between 0 and 1")
+        return value
 
 
 def _duplicates(parts: list[str]) -> tuple[float, float]:
@@ -135,8 +151,8 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
     Each n-gram is identified by a 64-bit polynomial hash of its word ids (a collision
     would need two different n-grams of one document to hash alike: negligible).
     """
-    top = {str(n): 0.0 for n in range(2, 5)}
-    dup = {str(n): 0.0 for n in range(5, 11)}
+    top = {str(n): 0.0 for n in _TOP_N}
+    dup = {str(n): 0.0 for n in _DUP_N}
     if len(words) < 2:
         return top, dup
     ids = {w: i for i, w in enumerate(dict.fromkeys(words), 1)}

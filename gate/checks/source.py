@@ -101,7 +101,7 @@ class _Rule(Strict):
 class _AllowRule(_Rule):
     trust: int = Field(1, ge=1, le=100, description="Higher wins when near-duplicates "
                                                     "conflict.", examples=[3])
-    max_age_days: int | None = Field(None, ge=0, description="Overrides freshness."
+    max_age_days: int | None = Field(None, ge=0, le=100_000, description="Overrides freshness."
                                      "max_age_days for documents this rule admits.")
     overrides: dict[str, Any] | None = Field(
         None, description="Policy sections (integrity, freshness, language, injection, "

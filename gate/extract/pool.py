@@ -45,8 +45,11 @@ def _address_space() -> int:
 def _serve(conn: Connection, fn: Callable[[Any], Any], memory_bytes: int | None) -> None:
     signal.signal(signal.SIGINT, signal.SIG_IGN)  # the parent decides about interrupts
     if memory_bytes:
+        _, hard = resource.getrlimit(resource.RLIMIT_AS)
         limit = _address_space() + memory_bytes
-        resource.setrlimit(resource.RLIMIT_AS, (limit, limit))
+        if hard != resource.RLIM_INFINITY:
+            limit = min(limit, hard)  # never more than the process may have anyway
+        resource.setrlimit(resource.RLIMIT_AS, (limit, hard))
     resource.setrlimit(resource.RLIMIT_CORE, (0, 0))
     while True:
         try:
