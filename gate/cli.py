@@ -3,8 +3,9 @@
 Every command turns the library's errors into one paragraph on stderr and an exit code:
 0 the command completed (whatever was quarantined), 2 it could not run (bad policy,
 missing inbox, unreadable manifest, busy or unusable output folder), 3 the run completed
-but exceeded a --max-quarantine-rate or --max-code-rate limit, 130 interrupted (re-run the
-same command to resume), 70 an internal error in gate itself.
+but exceeded a --max-quarantine-rate or --max-code-rate limit, 5 a full run would have
+removed too much of the accepted corpus and changed nothing (see gate.brake), 130
+interrupted (re-run the same command to resume), 70 an internal error in gate itself.
 """
 
 from __future__ import annotations
@@ -64,7 +65,7 @@ def _guard(fn):
     except typer.Exit:
         raise
     except GateError as err:
-        _fail(str(err))
+        _fail(str(err), err.exit_code)
     except KeyboardInterrupt:
         _fail("interrupted. Nothing is lost: re-run the same command to complete the run.",
               EXIT_INTERRUPTED)
@@ -174,6 +175,10 @@ def run_command(
         "--max-quarantine-rate", min=0.0, max=1.0,
         help="Exit 3 when more than this share of documents is quarantined (the run still "
              "completes), so a re-index job can stop on a poisoned batch.")] = None,
+    allow_removals: Annotated[Optional[int], typer.Option(  # noqa: UP007
+        "--allow-removals", min=0, help="Confirm that a full run removes exactly this many "
+        "accepted documents (needed when it would remove more than half of them, or the "
+        "inbox is empty; otherwise the run stops with exit 5 and changes nothing).")] = None,
     max_code_rate: Annotated[Optional[list[str]], typer.Option(  # noqa: UP007
         "--max-code-rate", help="CODE=RATE: exit 3 when more than RATE of documents are "
                                 "quarantined for CODE (a code, or a check id such as "
@@ -202,7 +207,7 @@ def run_command(
         options = RunOptions(inbox=inbox, policy=loaded, out=out, manifest=manifest,
                              as_of=when, workers=workers or os.cpu_count() or 1,
                              incremental=incremental, cluster=cluster, index=index,
-                             index_name=index_name)
+                             index_name=index_name, allow_removals=allow_removals)
         try:
             result = run_pipeline(options, reporter)
         finally:

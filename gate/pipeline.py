@@ -29,7 +29,7 @@ from datetime import UTC, datetime
 from pathlib import Path
 from typing import Any, Protocol
 
-from gate import __version__, audit, dates, redact
+from gate import __version__, audit, brake, dates, redact
 from gate import manifest as manifest_mod
 from gate.checks import CORPUS_CHECKS, DOCUMENT_CHECKS
 from gate.checks import duplicate as duplicate_check
@@ -89,6 +89,7 @@ class RunOptions:
     cluster: str | None = None  # a Dask scheduler address for the per-document stage
     index: str | None = None  # a redis:// URL for a shared near-duplicate index
     index_name: str | None = None
+    allow_removals: int | None = None  # confirms a full run's large removal (gate.brake)
 
 
 @dataclass
@@ -294,7 +295,8 @@ def _run_body(opts, inbox, out, manifest, state, reporter, policy, placer, blobs
                 "manifest": {"path": manifest.source, "sha256": manifest.sha256,
                              "records": len(manifest.records)}}
     _commit(state, placer, blobs, out, run_id, seq, run_info, slims, corpus_rows,
-            removed_rows, superseded, manifest, policy, mode, reporter, index)
+            removed_rows, superseded, manifest, policy, mode, reporter, index,
+            opts.allow_removals)
     summary = _load_summary(state, run_id)
     return RunResult(run_id, out / "report.json", summary, resumed=resume is not None,
                      timings=timings)
@@ -729,7 +731,7 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
             run_info: dict[str, Any], slims: list[Slim], corpus_rows: list[dict],
             removed_rows: list[dict], superseded: dict[str, tuple[dict, Finding]],
             manifest: manifest_mod.Manifest, policy: LoadedPolicy, mode: str,
-            reporter: Reporter, index: Any = None) -> None:
+            reporter: Reporter, index: Any = None, allow_removals: int | None = None) -> None:
     """Decide every document and record it all in one transaction, streaming the
     per-document records from the run_docs table in inbox order."""
     from gate.htmlreport import render
@@ -835,6 +837,9 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
                          [(row["doc_id"],) for row in removed_rows])
         unmatched = sorted(set(manifest.records) - set(seen_ids.values()))
         summary = tally.summary(removed_report)
+        brake.check(mode=mode, accepted_before=len(stored), inbox_documents=len(slims),
+                    removing=sum(summary["changes"].get(k, 0) for k in ("remove", "superseded")),
+                    allowed=allow_removals)  # raises before anything is committed
         audit_entries.append({"action": "run", "run": run_id, "as_of": run_info["as_of"],
                               "mode": mode, "policy": run_info["policy"],
                               "summary": summary})

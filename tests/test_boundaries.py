@@ -396,3 +396,107 @@ def test_the_largest_allowed_limits_work_in_a_run(tmp_path):
                        "1073741824\n  max_pages: 100000\n  timeout_s: 3600\n"
                        "freshness:\n  max_age_days: 100000\n  undated: allow\n")
     assert result.summary["accepted"] == 1, result.summary
+
+
+# -- 7. the removal brake ----------------------------------------------------------------
+
+
+def corpus_inbox(tmp_path: Path, count: int) -> Path:
+    inbox = tmp_path / "inbox"
+    inbox.mkdir(exist_ok=True)
+    for number in range(count):
+        (inbox / f"note-{number}.txt").write_text(f"Note {number}. {PROSE}")
+    return inbox
+
+
+def snapshot(out: Path) -> dict[str, bytes]:
+    return {str(p.relative_to(out)): p.read_bytes() for p in sorted(out.rglob("*"))
+            if p.is_file() and "state" not in p.parts}
+
+
+def test_an_empty_inbox_cannot_wipe_the_corpus(tmp_path):
+    inbox = corpus_inbox(tmp_path, 4)
+    policy = write_policy(tmp_path / "p.yaml")
+    out = tmp_path / "out"
+    first = gate("run", inbox, "--policy", policy, "--out", out, "--as-of", "2026-12-01")
+    assert first.returncode == 0, first.stderr
+    before = snapshot(out)
+    empty = tmp_path / "empty"
+    empty.mkdir()
+    braked = gate("run", empty, "--policy", policy, "--out", out, "--as-of", "2026-12-01")
+    assert braked.returncode == 5, braked.stderr
+    assert "would remove 4 of the 4 accepted documents: the inbox is empty" in braked.stderr
+    assert "--allow-removals 4" in braked.stderr and "Traceback" not in braked.stderr
+    assert snapshot(out) == before  # nothing committed, nothing placed
+    wrong = gate("run", empty, "--policy", policy, "--out", out, "--as-of", "2026-12-01",
+                 "--allow-removals", "3")
+    assert wrong.returncode == 5 and "the count is 4" in wrong.stderr
+    incremental = gate("run", empty, "--policy", policy, "--out", out, "--as-of",
+                       "2026-12-01", "--incremental")
+    assert incremental.returncode == 0, incremental.stderr  # never removes: not braked
+    assert len(list((out / "accepted").iterdir())) == 4
+    confirmed = gate("run", empty, "--policy", policy, "--out", out, "--as-of",
+                     "2026-12-01", "--allow-removals", "4")
+    assert confirmed.returncode == 0, confirmed.stderr
+    assert list((out / "accepted").iterdir()) == []
+    removed = [json.loads(line) for line in (out / "changes.jsonl").read_text().splitlines()]
+    assert sorted(c["action"] for c in removed) == ["remove"] * 4
+
+
+def test_a_full_run_may_remove_up_to_half_unconfirmed(tmp_path):
+    from gate.brake import RemovalBrake
+    inbox = corpus_inbox(tmp_path, 4)
+    run_inbox(tmp_path, inbox)
+    (inbox / "note-0.txt").unlink()
+    (inbox / "note-1.txt").unlink()  # 2 of 4: exactly half, allowed
+    assert run_inbox(tmp_path, inbox).summary["changes"] == {"remove": 2}
+    (inbox / "note-2.txt").unlink()  # 1 of the remaining 2 is half again: allowed
+    run_inbox(tmp_path, inbox)
+    corpus_inbox(tmp_path, 0)
+    for number in range(4, 8):
+        (inbox / f"note-{number}.txt").write_text(f"Note {number}. {PROSE}")
+    run_inbox(tmp_path, inbox)  # 5 accepted now
+    for number in range(4, 7):
+        (inbox / f"note-{number}.txt").unlink()  # 3 of 5: more than half
+    with pytest.raises(RemovalBrake, match="would remove 3 of the 5 accepted documents: "
+                                           "that is 60%"):
+        run_inbox(tmp_path, inbox)
+    done = run_inbox(tmp_path, inbox, allow_removals=3)
+    assert done.summary["changes"] == {"remove": 3}
+
+
+# -- 9. host names longer than DNS allows ------------------------------------------------
+
+
+def test_rfc1035_length_limits_for_hosts():
+    from gate import urls
+    # RFC 1035 section 2.3.4: labels of 63 octets or less, names of 255 octets or less
+    # on the wire, which is 253 characters in dotted text without the root
+    label63 = "a" * 63
+    longest = ".".join([label63] * 3 + ["b" * 53]) + ".example"  # 253 characters
+    assert len(longest) == 253
+    assert urls.parse(f"https://{longest}/").host == longest
+    assert urls.parse(f"https://{longest}./").host == longest  # the root dot is not counted
+    for host, needle in [("c" + longest, "254 characters"),
+                         ("a" * 64 + ".example.org", "label"),
+                         (("q" * 60 + ".") * 1600 + "docs.example.org", "at most 253")]:
+        with pytest.raises(urls.URLProblem, match=needle):
+            urls.parse(f"https://{host}/page")
+    # an internationalised name whose A-label form is too long (IDNA, RFC 5891)
+    with pytest.raises(urls.URLProblem):
+        urls.parse("https://" + "ü" * 40 + "." + ("ö" * 30 + ".") * 8 + "example.org/")
+
+
+def test_a_50kb_host_under_an_allowed_domain_is_a_source_finding(tmp_path):
+    # (a 96 KB one no longer gets this far: a manifest line holds at most 64 KiB)
+    inbox = small_inbox(tmp_path)
+    host = ("x" * 60 + ".") * 800 + "docs.example.org"  # about 48 KB, every label legal
+    (inbox / "manifest.jsonl").write_text(json.dumps(
+        {"path": "notes.txt", "source_url": f"https://{host}/n"}) + "\n")
+    run_inbox(tmp_path, inbox, "sources:\n  allow:\n    - domain: docs.example.org\n"
+              "      subdomains: true\n")
+    report = json.loads((tmp_path / "out" / "report.json").read_text(encoding="utf-8"))
+    doc = report["documents"][0]
+    assert doc["decision"] == "quarantined"
+    assert [r["code"] for r in doc["reasons"]] == ["source.bad-url"]
+    assert "at most 253 (RFC 1035)" in doc["reasons"][0]["message"]
