@@ -23,7 +23,7 @@ from rich.console import Console  # noqa: E402
 from rich.progress import (BarColumn, MofNCompleteColumn, Progress, TextColumn,  # noqa: E402
                            TimeElapsedColumn)
 
-from gate import __version__, redact  # noqa: E402
+from gate import __version__, cliargs, redact  # noqa: E402
 from gate.errors import GateError, UsageError  # noqa: E402
 
 EXIT_UNABLE = 2
@@ -239,7 +239,7 @@ def _code_limits(values: list[str]) -> dict[str, float]:
         if not sep or not code or not 0.0 <= number <= 1.0:
             raise UsageError(f"--max-code-rate {value!r} must be CODE=RATE with RATE between "
                              "0 and 1 (for example injection=0.01).")
-        limits[code] = number
+        limits[cliargs.check_or_code(code, "--max-code-rate")] = number
     return limits
 
 

@@ -29,6 +29,17 @@ def _print(line: str) -> None:
     out_console.print(shown(line), markup=False)
 
 
+def _filters(check, code, run, since, until, status) -> dict:
+    """review list's filters, each checked: a typo must not make the list look empty."""
+    from gate import cliargs
+    return {"check": check and cliargs.check_id(check, "--check"),
+            "code": code and cliargs.check_or_code(code, "--code"),
+            "run": run and cliargs.run_id(run, "--run"),
+            "since": since and cliargs.day_or_time(since, "--since"),
+            "until": until and cliargs.day_or_time(until, "--until"),
+            "status": cliargs.choice(status, "--status", ("open", "rejected", "all"))}
+
+
 @review_app.command("list")
 def review_list(
     out: OutDir,
@@ -45,8 +56,8 @@ def review_list(
 
     def body():
         from gate.review import list_entries
-        entries = list_entries(out, check=check, code=code, source=source, run=run,
-                               since=since, until=until, status=status)
+        entries = list_entries(out, **_filters(check, code, run, since, until, status),
+                               source=source)
         if as_json:
             sys.stdout.write(json.dumps([e.to_json() for e in entries], indent=2,
                                         ensure_ascii=True) + "\n")

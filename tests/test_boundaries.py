@@ -500,3 +500,37 @@ def test_a_50kb_host_under_an_allowed_domain_is_a_source_finding(tmp_path):
     assert doc["decision"] == "quarantined"
     assert [r["code"] for r in doc["reasons"]] == ["source.bad-url"]
     assert "at most 253 (RFC 1035)" in doc["reasons"][0]["message"]
+
+
+# -- 11. command-line values that name a check, code, status, run or date ----------------
+
+
+def test_max_code_rate_with_an_unknown_check_or_code_is_an_error(tmp_path):
+    inbox = small_inbox(tmp_path)
+    policy = write_policy(tmp_path / "p.yaml")
+    out = tmp_path / "out"
+    typo = gate("run", inbox, "--policy", policy, "--out", out, "--max-code-rate",
+                "injektion=0.1")
+    assert_clean_error(typo, "--max-code-rate 'injektion' is neither a check nor a finding "
+                       "code (did you mean 'injection'?)", "source, integrity")
+    assert not out.exists()  # refused before anything ran
+    wrong_code = gate("run", inbox, "--policy", policy, "--out", out, "--max-code-rate",
+                      "source.unlistd=0.1")
+    assert_clean_error(wrong_code, "(did you mean 'source.unlisted'?)", "source.denied")
+    good = gate("run", inbox, "--policy", policy, "--out", out, "--as-of", "2026-12-01",
+                "--max-code-rate", "injection=0.5", "--max-code-rate", "format.empty-file=0")
+    assert good.returncode == 0, good.stderr
+
+
+@pytest.mark.parametrize("args, needle", [
+    (["--check", "langauge"], "--check 'langauge' is not a check (did you mean 'language'?)"),
+    (["--code", "format.brokn"], "did you mean 'format.broken'?"),
+    (["--status", "opne"], "--status 'opne' is not one of open, rejected, all"),
+    (["--since", "2026-13-01"], "--since '2026-13-01' is not a date"),
+    (["--until", "yesterday"], "--until 'yesterday' is not a date"),
+    (["--run", "0003"], "--run '0003' is not a run id"),
+])
+def test_review_filters_are_validated(tmp_path, args, needle):
+    inbox = small_inbox(tmp_path)
+    run_inbox(tmp_path, inbox)
+    assert_clean_error(gate("review", "list", tmp_path / "out", *args), needle)
