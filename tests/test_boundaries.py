@@ -534,3 +534,66 @@ def test_review_filters_are_validated(tmp_path, args, needle):
     inbox = small_inbox(tmp_path)
     run_inbox(tmp_path, inbox)
     assert_clean_error(gate("review", "list", tmp_path / "out", *args), needle)
+
+
+# -- 8. time limits that do not depend on the load of the machine ------------------------
+
+
+def _sleep_then(task):
+    import time
+    time.sleep(task)
+    return task
+
+
+def _spin(task):
+    while True:
+        task += 1
+
+
+def test_the_worker_limit_is_cpu_time_with_a_wall_clock_backstop(monkeypatch):
+    from gate.extract import pool
+    monkeypatch.setattr(pool, "WALL_SLACK_S", 0.5)
+    with pool.WorkerPool(_spin, workers=1, timeout_s=0.3, memory_bytes=None) as workers:
+        [(tag, result)] = list(workers.run([("spin", 0)]))
+    assert result == pool.Failure("timeout", "used more than 0.3 s of CPU time")
+    # sleeping uses no CPU: only the backstop (4 x 0.3 + 0.5 s elapsed) ends it
+    with pool.WorkerPool(_sleep_then, workers=1, timeout_s=0.3,
+                         memory_bytes=None) as workers:
+        results = dict(workers.run([("short", 0.5), ("long", 30)]))
+    assert results["short"] == 0.5  # longer than 0.3 s elapsed, within the CPU allowance
+    assert results["long"].kind == "timeout" and "backstop" in results["long"].detail
+
+
+def _burners(count: int):
+    return [subprocess.Popen([sys.executable, "-c", "while True: pass"])
+            for _ in range(count)]
+
+
+def test_the_same_inbox_gets_the_same_decisions_on_an_idle_and_a_saturated_machine(
+        tmp_path):
+    inbox = tmp_path / "inbox"
+    inbox.mkdir()
+    # text whose measuring takes about 0.6 s of CPU (measured on the 2-core VM), and one
+    # that would take about 5 s; the limit is 2 s of CPU
+    (inbox / "fits.txt").write_text(" ".join(f"word{i}" for i in range(150_000)))
+    (inbox / "too-slow.txt").write_text(" ".join(f"word{i}" for i in range(1_200_000)))
+    (inbox / "small.txt").write_text(PROSE * 3)
+    policy = write_policy(tmp_path / "p.yaml", "limits:\n  timeout_s: 2\n")
+
+    def decisions(out: Path) -> dict[str, list[str]]:
+        run(RunOptions(inbox=inbox, policy=load_policy(policy), out=out, as_of=AS_OF,
+                       workers=1))
+        report = json.loads((out / "report.json").read_text(encoding="utf-8"))
+        return {d["path"]: [r["code"] for r in d["reasons"]] for d in report["documents"]}
+
+    idle = decisions(tmp_path / "idle")
+    burners = _burners(2 * (os.cpu_count() or 1) + 2)  # far more runnable work than cores
+    try:
+        busy = decisions(tmp_path / "busy")
+    finally:
+        for burner in burners:
+            burner.kill()
+            burner.wait()
+    assert idle == busy
+    assert idle["too-slow.txt"] == ["format.timeout"]
+    assert "format.timeout" not in idle["fits.txt"] and idle["small.txt"] == []

@@ -1,9 +1,19 @@
-"""Worker processes with a wall-clock deadline and a memory cap per task.
+"""Worker processes with a CPU-time limit, a wall-clock backstop and a memory cap per task.
 
 Parsers of untrusted bytes can loop forever or balloon (neither trafilatura nor pypdf can
 interrupt itself), so each task runs in a long-lived worker process forked from the parent
-after the heavy imports. The parent waits on the workers' pipes with a deadline; a worker
-that overruns is killed with SIGKILL and replaced, and its task comes back as a
+after the heavy imports.
+
+The limit that decides is **CPU time**, not elapsed time, so a decision does not depend on
+how busy the machine is: the same document uses the same CPU time on an idle and on a
+saturated machine, while its elapsed time can grow many times over. Before each task the
+worker arms a CPU-time timer (``ITIMER_PROF``, the process's user + system time) for
+``timeout_s``; when it fires, the task is abandoned with a ``timeout`` result. In case the
+worker is stuck where the timer cannot interrupt it (inside one long C call), ``RLIMIT_CPU``
+is set a little above the task's allowance, so the kernel ends the worker. The parent keeps
+a generous wall-clock backstop (:data:`WALL_FACTOR` times the CPU allowance plus
+:data:`WALL_SLACK_S`) for a worker that sleeps or hangs without using CPU; a worker that
+overruns it is killed with SIGKILL and replaced. Either way its task comes back as a
 :class:`Failure` instead of a result. Each worker caps its own address space
 (``RLIMIT_AS``) so a decompression bomb ends in a ``MemoryError`` inside the worker rather
 than in the machine's OOM killer. Workers are recycled after a number of tasks so slow leaks
@@ -27,6 +37,38 @@ from dataclasses import dataclass
 from multiprocessing.connection import Connection, wait
 from typing import Any
 
+WALL_FACTOR = 4  # the wall-clock backstop, in multiples of the CPU-time allowance
+WALL_SLACK_S = 5.0  # plus this, for start-up and a busy machine
+RLIMIT_GRACE_S = 2  # RLIMIT_CPU above the task's allowance, for the timer to act first
+
+
+class CpuTimeExceeded(BaseException):
+    """Raised in a worker by the CPU-time timer. A BaseException, so that a parser's
+    ``except Exception`` cannot swallow it."""
+
+
+def _on_cpu_timer(_signum: int, _frame: Any) -> None:
+    raise CpuTimeExceeded
+
+
+def _cpu_seconds() -> float:
+    usage = resource.getrusage(resource.RUSAGE_SELF)
+    return usage.ru_utime + usage.ru_stime
+
+
+def _arm(cpu_s: float) -> None:
+    """Allow the coming task ``cpu_s`` seconds of CPU time (see the module docstring)."""
+    signal.setitimer(signal.ITIMER_PROF, cpu_s)
+    hard = resource.getrlimit(resource.RLIMIT_CPU)[1]
+    soft = int(_cpu_seconds() + cpu_s) + RLIMIT_GRACE_S
+    if hard != resource.RLIM_INFINITY:
+        soft = min(soft, hard)
+    resource.setrlimit(resource.RLIMIT_CPU, (soft, hard))
+
+
+def _disarm() -> None:
+    signal.setitimer(signal.ITIMER_PROF, 0)
+
 
 @dataclass(frozen=True)
 class Failure:
@@ -42,8 +84,10 @@ def _address_space() -> int:
     return pages * os.sysconf("SC_PAGE_SIZE")
 
 
-def _serve(conn: Connection, fn: Callable[[Any], Any], memory_bytes: int | None) -> None:
+def _serve(conn: Connection, fn: Callable[[Any], Any], memory_bytes: int | None,
+           cpu_s: float) -> None:
     signal.signal(signal.SIGINT, signal.SIG_IGN)  # the parent decides about interrupts
+    signal.signal(signal.SIGPROF, _on_cpu_timer)
     if memory_bytes:
         _, hard = resource.getrlimit(resource.RLIMIT_AS)
         limit = _address_space() + memory_bytes
@@ -60,7 +104,13 @@ def _serve(conn: Connection, fn: Callable[[Any], Any], memory_bytes: int | None)
             break
         task_id, payload = message
         try:
-            result: Any = ("ok", fn(payload))
+            try:
+                _arm(cpu_s)
+                result: Any = ("ok", fn(payload))
+            finally:
+                _disarm()
+        except CpuTimeExceeded:
+            result = ("timeout", f"used more than {cpu_s:g} s of CPU time")
         except MemoryError:
             result = ("memory", "the task ran out of its memory allowance")
         except BaseException as err:  # noqa: BLE001 - reported to the parent, which fails closed
@@ -69,16 +119,17 @@ def _serve(conn: Connection, fn: Callable[[Any], Any], memory_bytes: int | None)
             conn.send((task_id, result))
         except MemoryError:
             conn.send((task_id, ("memory", "the result was too large to return")))
-        if result[0] == "memory":
+        if result[0] in ("memory", "timeout"):
             break  # the heap may be fragmented or half-built: start afresh
     conn.close()
     os._exit(0)
 
 
 class _Worker:
-    def __init__(self, ctx: Any, fn: Callable, memory_bytes: int | None):
+    def __init__(self, ctx: Any, fn: Callable, memory_bytes: int | None, cpu_s: float):
         self.conn, child = ctx.Pipe(duplex=True)
-        self.process = ctx.Process(target=_serve, args=(child, fn, memory_bytes), daemon=True)
+        self.process = ctx.Process(target=_serve, args=(child, fn, memory_bytes, cpu_s),
+                                   daemon=True)
         self.process.start()
         child.close()
         self.task: Any = None
@@ -107,7 +158,8 @@ class _Worker:
 
 
 class WorkerPool:
-    """Run ``fn(task)`` for each task in worker processes; see the module docstring."""
+    """Run ``fn(task)`` for each task in worker processes; see the module docstring.
+    ``timeout_s`` is the CPU time a task may use; the wall-clock backstop derives from it."""
 
     def __init__(self, fn: Callable[[Any], Any], *, workers: int, timeout_s: float,
                  memory_bytes: int | None, recycle_after: int = 250,
@@ -115,6 +167,7 @@ class WorkerPool:
         self.fn = fn
         self.size = max(1, workers)
         self.timeout_s = timeout_s
+        self.wall_s = WALL_FACTOR * timeout_s + WALL_SLACK_S
         self.memory_bytes = memory_bytes
         self.recycle_after = recycle_after
         # fork after the heavy imports is fastest; a multi-threaded host (a Dask worker)
@@ -137,7 +190,7 @@ class WorkerPool:
         self._workers = []
 
     def _spawn(self) -> _Worker:
-        worker = _Worker(self._ctx, self.fn, self.memory_bytes)
+        worker = _Worker(self._ctx, self.fn, self.memory_bytes, self.timeout_s)
         self._workers.append(worker)
         return worker
 
@@ -167,7 +220,7 @@ class WorkerPool:
                 worker = idle.popleft() if idle else self._spawn()
                 worker.task, worker.task_id = task, next_id
                 next_id += 1
-                worker.deadline = time.monotonic() + self.timeout_s
+                worker.deadline = time.monotonic() + self.wall_s
                 try:
                     worker.conn.send((worker.task_id, payload))
                 except (OSError, ValueError):
@@ -175,7 +228,7 @@ class WorkerPool:
                     self._retire(worker, kill=True)
                     worker = self._spawn()
                     worker.task, worker.task_id = task, next_id - 1
-                    worker.deadline = time.monotonic() + self.timeout_s
+                    worker.deadline = time.monotonic() + self.wall_s
                     worker.conn.send((worker.task_id, payload))
                 busy[worker.conn] = worker
             if not busy:
@@ -194,17 +247,21 @@ class WorkerPool:
                     worker.process.join(1)
                     code = worker.process.exitcode if code is None else code
                     self._retire(worker, kill=True)
-                    yield task, Failure("crashed", _death(code))
+                    if code == -signal.SIGXCPU:  # RLIMIT_CPU: the timer could not act
+                        yield task, Failure("timeout", f"used more than {self.timeout_s:g} s "
+                                                       "of CPU time")
+                    else:
+                        yield task, Failure("crashed", _death(code))
                     continue
                 worker.done += 1
                 if status == "ok":
                     result: Any = value
-                elif status == "memory":
-                    result = Failure("memory", value)
+                elif status in ("memory", "timeout"):
+                    result = Failure(status, value)
                 else:
                     result = Failure("error", value)
-                if status == "memory" or worker.done >= self.recycle_after:
-                    self._retire(worker, kill=status == "memory")
+                if status in ("memory", "timeout") or worker.done >= self.recycle_after:
+                    self._retire(worker, kill=status in ("memory", "timeout"))
                 else:
                     idle.append(worker)
                 yield task, result
@@ -215,7 +272,8 @@ class WorkerPool:
                     task = worker.task
                     worker.task = None
                     self._retire(worker, kill=True)
-                    yield task, Failure("timeout", f"no result within {self.timeout_s:g} s")
+                    yield task, Failure("timeout", f"no result within {self.wall_s:g} s of "
+                                                   "elapsed time (the wall-clock backstop)")
 
 
 def _death(code: int | None) -> str:
