@@ -12,8 +12,10 @@ worker arms a CPU-time timer (``ITIMER_PROF``, the process's user + system time)
 worker is stuck where the timer cannot interrupt it (inside one long C call), ``RLIMIT_CPU``
 is set a little above the task's allowance, so the kernel ends the worker. The parent keeps
 a generous wall-clock backstop (:data:`WALL_FACTOR` times the CPU allowance plus
-:data:`WALL_SLACK_S`) for a worker that sleeps or hangs without using CPU; a worker that
-overruns it is killed with SIGKILL and replaced. Either way its task comes back as a
+:data:`WALL_SLACK_S`) for a worker that sleeps or hangs without using CPU. When it passes,
+the parent reads the worker's CPU time (``/proc/PID/stat``): a worker still making progress
+within its CPU allowance (a starved one on a saturated machine) gets another period; one
+that used next to no CPU in the period is killed with SIGKILL and replaced. Either way its task comes back as a
 :class:`Failure` instead of a result. Each worker caps its own address space
 (``RLIMIT_AS``) so a decompression bomb ends in a ``MemoryError`` inside the worker rather
 than in the machine's OOM killer. Workers are recycled after a number of tasks so slow leaks
@@ -68,6 +70,22 @@ def _arm(cpu_s: float) -> None:
 
 def _disarm() -> None:
     signal.setitimer(signal.ITIMER_PROF, 0)
+
+
+_TICK = os.sysconf("SC_CLK_TCK")
+MIN_PROGRESS = 0.02  # share of a core a worker must have used in a backstop period
+
+
+def _process_cpu(pid: int | None) -> float | None:
+    """CPU seconds (user + system) a process has used, from /proc; None if unknown."""
+    if pid is None:
+        return None
+    try:
+        with open(f"/proc/{pid}/stat", encoding="ascii") as fh:
+            fields = fh.read().rsplit(")", 1)[1].split()
+        return (int(fields[11]) + int(fields[12])) / _TICK  # utime, stime (man 5 proc)
+    except (OSError, ValueError, IndexError):
+        return None
 
 
 @dataclass(frozen=True)
@@ -136,6 +154,24 @@ class _Worker:
         self.task_id = -1
         self.deadline = 0.0
         self.done = 0
+        self.cpu_start = 0.0  # the worker's CPU time when its task was sent
+        self.cpu_mark = 0.0  # ... at the last backstop check
+
+    def started(self, wall_s: float) -> None:
+        self.deadline = time.monotonic() + wall_s
+        self.cpu_start = self.cpu_mark = _process_cpu(self.process.pid) or 0.0
+
+    def progressing(self, cpu_s: float, wall_s: float) -> bool:
+        """At the backstop: is the task still using CPU within its allowance? If so the
+        deadline moves on by another period."""
+        cpu = _process_cpu(self.process.pid)
+        if cpu is None:
+            return False
+        progress, self.cpu_mark = cpu - self.cpu_mark, cpu
+        if cpu - self.cpu_start < cpu_s and progress >= MIN_PROGRESS * wall_s:
+            self.deadline = time.monotonic() + wall_s
+            return True
+        return False
 
     def kill(self) -> None:
         try:
@@ -220,7 +256,7 @@ class WorkerPool:
                 worker = idle.popleft() if idle else self._spawn()
                 worker.task, worker.task_id = task, next_id
                 next_id += 1
-                worker.deadline = time.monotonic() + self.wall_s
+                worker.started(self.wall_s)
                 try:
                     worker.conn.send((worker.task_id, payload))
                 except (OSError, ValueError):
@@ -228,7 +264,7 @@ class WorkerPool:
                     self._retire(worker, kill=True)
                     worker = self._spawn()
                     worker.task, worker.task_id = task, next_id - 1
-                    worker.deadline = time.monotonic() + self.wall_s
+                    worker.started(self.wall_s)
                     worker.conn.send((worker.task_id, payload))
                 busy[worker.conn] = worker
             if not busy:
@@ -267,7 +303,8 @@ class WorkerPool:
                 yield task, result
             now = time.monotonic()
             for conn, worker in list(busy.items()):
-                if worker.deadline <= now and conn not in ready:
+                if worker.deadline <= now and conn not in ready and \
+                        not worker.progressing(self.timeout_s, self.wall_s):
                     busy.pop(conn)
                     task = worker.task
                     worker.task = None
