@@ -38,11 +38,16 @@ def _fsync_dir(path: Path) -> None:
 
 
 def write_file(path: Path, data: bytes, *, sync: bool = True) -> None:
-    with open(path, "wb") as fh:
-        fh.write(data)
+    # os-level calls: a buffered file object costs twice the system time per small file
+    fd = os.open(path, os.O_WRONLY | os.O_CREAT | os.O_TRUNC | os.O_CLOEXEC, 0o666)
+    try:
+        view = memoryview(data)
+        while view:
+            view = view[os.write(fd, view):]
         if sync:
-            fh.flush()
-            os.fsync(fh.fileno())
+            os.fsync(fd)
+    finally:
+        os.close(fd)
 
 
 def write_atomic(path: Path, data: bytes) -> None:

@@ -69,8 +69,7 @@ def explain(file: Path, loaded: LoadedPolicy, *, record: ManifestRecord | None,
     entry = Entry(path=file.name, kind=kind, size=st.st_size if kind == "file" else None,
                   link_target=os.readlink(file) if kind == "symlink" else None)
     intake = read_entry(file.parent, entry, limits.max_bytes)
-    params = Params(max_pages=limits.max_pages, max_nesting=limits.max_nesting,
-                    timeout_s=limits.timeout_s, memory_mb=limits.memory_mb)
+    params = Params.for_policy(loaded)
     measures: dict[str, Any] = {}
     errors: dict[str, str] = {}
     if intake.problem is not None:

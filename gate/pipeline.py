@@ -279,8 +279,7 @@ def stored_index(state: State) -> Any:
 def _run_body(opts, inbox, out, manifest, state, reporter, policy, placer, blobs, ctx,
               run_id, seq, mode, as_of_text, resume, index) -> RunResult:
     limits = policy.policy.limits
-    params = Params(max_pages=limits.max_pages, max_nesting=limits.max_nesting,
-                    timeout_s=limits.timeout_s, memory_mb=limits.memory_mb)
+    params = Params.for_policy(policy)
     timings: dict[str, float] = {}
     releases = state.releases()
     slims = _extract_and_check(inbox, manifest, params, limits.max_bytes, opts, state, blobs,

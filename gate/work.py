@@ -26,6 +26,20 @@ class Params:
     max_nesting: int
     timeout_s: float
     memory_mb: int
+    # the smallest language.min_chars of the policy and its per-source variants: shorter
+    # texts are undetermined whatever their language, so detection is skipped for them
+    min_language_chars: int = 0
+
+    @classmethod
+    def for_policy(cls, loaded: Any) -> Params:
+        """The parameters a :class:`~gate.policy.LoadedPolicy` implies."""
+        limits = loaded.policy.limits
+        variants = [loaded.policy, *(loaded.by_rule or {}).values()]
+        sections = [v.language for v in variants]
+        floor = 0 if any(s is None for s in sections) else min(s.min_chars for s in sections)
+        return cls(max_pages=limits.max_pages, max_nesting=limits.max_nesting,
+                   timeout_s=limits.timeout_s, memory_mb=limits.memory_mb,
+                   min_language_chars=floor)
 
     def fingerprint(self) -> str:
         """Identifies gate's version, the measurements' versions and these limits."""
@@ -50,7 +64,8 @@ def process(task: tuple[str, bytes, Params]) -> dict[str, Any]:
                 continue
             started = time.perf_counter()
             try:
-                measures[check.id] = check.measure(extraction)
+                measures[check.id] = check.measure(extraction, params) \
+                    if getattr(check, "measure_params", False) else check.measure(extraction)
             except MemoryError:
                 raise
             except Exception as err:  # noqa: BLE001 - recorded; the parent fails closed

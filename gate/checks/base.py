@@ -70,9 +70,10 @@ class DocumentCheck:
     evaluate: Evaluate
     always_on: bool = False
     settings: type | None = None
-    measure: Callable[[Extraction], Any] | None = None
+    measure: Callable[..., Any] | None = None
     measure_version: int = 1
     doc: str = ""
+    measure_params: bool = False  # measure(extraction, params) gets the run's work.Params
 
 
 @dataclass(frozen=True)

@@ -96,9 +96,13 @@ def sample(text: str) -> str:
     return "\n".join(parts)
 
 
-def measure(extraction: Extraction) -> dict[str, Any]:
-    """Detect the language of a bounded sample (runs in the worker)."""
+def measure(extraction: Extraction, params: Any = None) -> dict[str, Any]:
+    """Detect the language of a bounded sample (runs in the worker). A text shorter than
+    every ``min_chars`` of the policy is undetermined whatever it says, so detection (a few
+    milliseconds even for a line) is skipped for it."""
     text = extraction.text
+    if params is not None and len(text) < params.min_language_chars:
+        return {"chars": len(text), "languages": []}
     piece = sample(text)
     try:
         found = langdetect.detect_langs(piece)
@@ -139,4 +143,5 @@ def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding] 
 
 CHECK = DocumentCheck(id="language", section="language", evaluate=evaluate,
                       settings=LanguageSettings, measure=measure, measure_version=2,
+                      measure_params=True,
                       doc=__doc__ or "")

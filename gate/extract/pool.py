@@ -102,6 +102,22 @@ def _address_space() -> int:
     return pages * os.sysconf("SC_PAGE_SIZE")
 
 
+def _one(fn: Callable[[Any], Any], payload: Any, cpu_s: float) -> tuple[str, Any]:
+    """Run one task under its CPU-time allowance; (status, value)."""
+    try:
+        try:
+            _arm(cpu_s)
+            return "ok", fn(payload)
+        finally:
+            _disarm()
+    except CpuTimeExceeded:
+        return "timeout", f"used more than {cpu_s:g} s of CPU time"
+    except MemoryError:
+        return "memory", "the task ran out of its memory allowance"
+    except BaseException as err:  # noqa: BLE001 - reported to the parent, which fails closed
+        return "error", f"{type(err).__name__}: {err}"
+
+
 def _serve(conn: Connection, fn: Callable[[Any], Any], memory_bytes: int | None,
            cpu_s: float) -> None:
     signal.signal(signal.SIGINT, signal.SIG_IGN)  # the parent decides about interrupts
@@ -120,24 +136,21 @@ def _serve(conn: Connection, fn: Callable[[Any], Any], memory_bytes: int | None,
             break
         if message is None:
             break
-        task_id, payload = message
+        results: list[tuple[int, tuple[str, Any]]] = []
+        fresh = False
+        for task_id, payload in message:
+            if fresh:  # after a time-out or MemoryError the rest run in a fresh worker
+                results.append((task_id, ("retry", None)))
+                continue
+            result = _one(fn, payload, cpu_s)
+            results.append((task_id, result))
+            fresh = result[0] in ("memory", "timeout")
         try:
-            try:
-                _arm(cpu_s)
-                result: Any = ("ok", fn(payload))
-            finally:
-                _disarm()
-        except CpuTimeExceeded:
-            result = ("timeout", f"used more than {cpu_s:g} s of CPU time")
+            conn.send(results)
         except MemoryError:
-            result = ("memory", "the task ran out of its memory allowance")
-        except BaseException as err:  # noqa: BLE001 - reported to the parent, which fails closed
-            result = ("error", f"{type(err).__name__}: {err}")
-        try:
-            conn.send((task_id, result))
-        except MemoryError:
-            conn.send((task_id, ("memory", "the result was too large to return")))
-        if result[0] in ("memory", "timeout"):
+            conn.send([(task_id, ("memory", "the result was too large to return"))
+                       for task_id, _result in results])
+        if fresh:
             break  # the heap may be fragmented or half-built: start afresh
     conn.close()
     os._exit(0)
@@ -151,7 +164,6 @@ class _Worker:
         self.process.start()
         child.close()
         self.task: Any = None
-        self.task_id = -1
         self.deadline = 0.0
         self.done = 0
         self.cpu_start = 0.0  # the worker's CPU time when its task was sent
@@ -199,8 +211,13 @@ class WorkerPool:
 
     def __init__(self, fn: Callable[[Any], Any], *, workers: int, timeout_s: float,
                  memory_bytes: int | None, recycle_after: int = 250,
-                 start_method: str = "fork"):
+                 start_method: str = "fork",
+                 batch_weight: Callable[[Any], int] | None = None,
+                 batch_bytes: int = 64 << 10, batch_max: int = 32):
         self.fn = fn
+        self.batch_weight = batch_weight  # payload -> bytes; None: one task a message
+        self.batch_bytes = batch_bytes
+        self.batch_max = batch_max
         self.size = max(1, workers)
         self.timeout_s = timeout_s
         self.wall_s = WALL_FACTOR * timeout_s + WALL_SLACK_S
@@ -240,32 +257,75 @@ class WorkerPool:
     def run(self, tasks: Iterable[tuple[Any, Any]]) -> Iterator[tuple[Any, Any]]:
         """Run ``fn(payload)`` for each ``(tag, payload)``; yield ``(tag, result)`` in
         completion order. Only the payload crosses to the worker; ``result`` may be a
-        :class:`Failure`."""
+        :class:`Failure`.
+
+        Small payloads (by ``batch_weight``) travel to a worker in batches of up to
+        ``batch_max`` tasks and ``batch_bytes`` bytes, to save a pipe round trip per tiny
+        document. Each task of a batch still gets its own CPU-time allowance. Should a
+        batch's worker die or hang, its tasks are run again one by one, so the task
+        responsible gets the failure and the others their normal result."""
         pending = iter(tasks)
+        queue: deque[tuple[Any, Any, bool]] = deque()  # (tag, payload, alone)
         idle: deque[_Worker] = deque()
         busy: dict[Connection, _Worker] = {}
-        exhausted = False
-        next_id = 0
+        state = {"exhausted": False, "next_id": 0}
+
+        def pull() -> tuple[Any, Any, bool] | None:
+            if queue:
+                return queue.popleft()
+            if state["exhausted"]:
+                return None
+            try:
+                tag, payload = next(pending)
+            except StopIteration:
+                state["exhausted"] = True
+                return None
+            return tag, payload, False
+
+        def small(item: tuple[Any, Any, bool]) -> int | None:
+            if item[2] or self.batch_weight is None:
+                return None
+            size = self.batch_weight(item[1])
+            return size if size <= self.batch_bytes else None
+
+        def next_batch() -> list[tuple[Any, Any, int]]:
+            first = pull()
+            if first is None:
+                return []
+            batch = [first]
+            total = small(first)
+            while total is not None and len(batch) < self.batch_max:
+                item = pull()
+                if item is None:
+                    break
+                size = small(item)
+                if size is None or total + size > self.batch_bytes:
+                    queue.appendleft(item)  # it goes alone or starts the next batch
+                    break
+                batch.append(item)
+                total += size
+            out = []
+            for tag, payload, _alone in batch:
+                out.append((tag, payload, state["next_id"]))
+                state["next_id"] += 1
+            return out
+
         while True:
-            while not exhausted and len(busy) < self.size:
-                try:
-                    task, payload = next(pending)
-                except StopIteration:
-                    exhausted = True
+            while len(busy) < self.size:
+                batch = next_batch()
+                if not batch:
                     break
                 worker = idle.popleft() if idle else self._spawn()
-                worker.task, worker.task_id = task, next_id
-                next_id += 1
-                worker.started(self.wall_s)
+                message = [(task_id, payload) for _tag, payload, task_id in batch]
                 try:
-                    worker.conn.send((worker.task_id, payload))
+                    worker.conn.send(message)
                 except (OSError, ValueError):
                     # the worker died between tasks; replace it and retry once
                     self._retire(worker, kill=True)
                     worker = self._spawn()
-                    worker.task, worker.task_id = task, next_id - 1
-                    worker.started(self.wall_s)
-                    worker.conn.send((worker.task_id, payload))
+                    worker.conn.send(message)
+                worker.task = batch
+                worker.started(self.wall_s)
                 busy[worker.conn] = worker
             if not busy:
                 return
@@ -274,43 +334,53 @@ class WorkerPool:
             ready = wait(list(busy), timeout=max(0.0, soonest - now))
             for conn in ready:
                 worker = busy.pop(conn)
-                task = worker.task
-                worker.task = None
+                batch, worker.task = worker.task, None
                 try:
-                    task_id, (status, value) = conn.recv()
+                    replies = dict(conn.recv())
                 except (EOFError, OSError, ConnectionError):
                     code = worker.process.exitcode
                     worker.process.join(1)
                     code = worker.process.exitcode if code is None else code
                     self._retire(worker, kill=True)
-                    if code == -signal.SIGXCPU:  # RLIMIT_CPU: the timer could not act
-                        yield task, Failure("timeout", f"used more than {self.timeout_s:g} s "
-                                                       "of CPU time")
+                    if len(batch) > 1:  # find the culprit: run them again one by one
+                        queue.extendleft((tag, payload, True)
+                                         for tag, payload, _id in reversed(batch))
+                    elif code == -signal.SIGXCPU:  # RLIMIT_CPU: the timer could not act
+                        yield batch[0][0], Failure("timeout", f"used more than "
+                                                              f"{self.timeout_s:g} s of CPU time")
                     else:
-                        yield task, Failure("crashed", _death(code))
+                        yield batch[0][0], Failure("crashed", _death(code))
                     continue
-                worker.done += 1
-                if status == "ok":
-                    result: Any = value
-                elif status in ("memory", "timeout"):
-                    result = Failure(status, value)
-                else:
-                    result = Failure("error", value)
-                if status in ("memory", "timeout") or worker.done >= self.recycle_after:
-                    self._retire(worker, kill=status in ("memory", "timeout"))
+                worker.done += len(batch)
+                statuses = {status for status, _value in replies.values()}
+                if statuses & {"memory", "timeout"} or worker.done >= self.recycle_after:
+                    self._retire(worker, kill=bool(statuses & {"memory", "timeout"}))
                 else:
                     idle.append(worker)
-                yield task, result
+                for tag, payload, task_id in batch:
+                    status, value = replies[task_id]
+                    if status == "retry":
+                        queue.append((tag, payload, True))
+                    elif status == "ok":
+                        yield tag, value
+                    elif status in ("memory", "timeout"):
+                        yield tag, Failure(status, value)
+                    else:
+                        yield tag, Failure("error", value)
             now = time.monotonic()
             for conn, worker in list(busy.items()):
                 if worker.deadline <= now and conn not in ready and \
-                        not worker.progressing(self.timeout_s, self.wall_s):
+                        not worker.progressing(self.timeout_s * len(worker.task), self.wall_s):
                     busy.pop(conn)
-                    task = worker.task
-                    worker.task = None
+                    batch, worker.task = worker.task, None
                     self._retire(worker, kill=True)
-                    yield task, Failure("timeout", f"no result within {self.wall_s:g} s of "
-                                                   "elapsed time (the wall-clock backstop)")
+                    if len(batch) > 1:
+                        queue.extendleft((tag, payload, True)
+                                         for tag, payload, _id in reversed(batch))
+                        continue
+                    yield batch[0][0], Failure("timeout", f"no result within {self.wall_s:g} "
+                                                          "s of elapsed time (the wall-clock "
+                                                          "backstop)")
 
 
 def _death(code: int | None) -> str:
