@@ -597,3 +597,70 @@ def test_the_same_inbox_gets_the_same_decisions_on_an_idle_and_a_saturated_machi
     assert idle == busy
     assert idle["too-slow.txt"] == ["format.timeout"]
     assert "format.timeout" not in idle["fits.txt"] and idle["small.txt"] == []
+
+
+# -- 10. per-file overhead (the rate itself is printed by benchmarks/small_files.py) -----
+
+
+def _by_payload(task):
+    if task == b"crash":
+        os._exit(3)
+    if task == b"spin":
+        _spin(0)
+    return len(task)
+
+
+def test_small_tasks_share_a_round_trip_and_a_failing_one_is_found(monkeypatch):
+    from multiprocessing.connection import Connection
+
+    from gate.extract import pool
+    sent = []
+    original = Connection.send
+    monkeypatch.setattr(Connection, "send", lambda self, obj: (sent.append(obj),
+                                                               original(self, obj))[1])
+    tasks = [(f"t{i}", b"x" * i) for i in range(1, 101)]
+    with pool.WorkerPool(_by_payload, workers=2, timeout_s=5, memory_bytes=None,
+                         batch_weight=len) as workers:
+        results = dict(workers.run(tasks))
+    assert results == {f"t{i}": i for i in range(1, 101)}
+    assert 4 <= len([m for m in sent if m]) <= 8  # 100 tasks in batches of up to 32
+    # a task that kills its worker, and one over its CPU allowance, inside batches: each
+    # gets its own failure, every other task its result
+    tasks = [("a", b"aa"), ("crash", b"crash"), ("b", b"bbb"), ("spin", b"spin"),
+             ("c", b"c")]
+    with pool.WorkerPool(_by_payload, workers=1, timeout_s=0.5, memory_bytes=None,
+                         batch_weight=len) as workers:
+        results = dict(workers.run(tasks))
+    assert results["a"] == 2 and results["b"] == 3 and results["c"] == 1
+    assert results["crash"] == pool.Failure("crashed", "the worker process exited with "
+                                                       "status 3")
+    assert results["spin"] == pool.Failure("timeout", "used more than 0.5 s of CPU time")
+
+
+def test_language_detection_is_skipped_only_where_it_cannot_change_a_decision():
+    from gate.checks import language
+    from gate.checks.base import Document, RunContext
+    from gate.extract import extract
+    from gate.work import Params
+
+    from .helpers import policy
+    loaded = policy("language:\n  allowed: [en]\n  min_chars: 200\n")
+
+    class Loaded:  # the parts of a LoadedPolicy that Params.for_policy reads
+        by_rule = {}
+
+    Loaded.policy = loaded
+    params = Params.for_policy(Loaded)
+    assert params.min_language_chars == 200
+    for text in (PROSE[:150], PROSE * 3):
+        extraction = extract(text.encode(), max_pages=10, max_nesting=250)
+        full, skipping = language.measure(extraction), language.measure(extraction, params)
+        outcome = []
+        for measured in (full, skipping):
+            document = Document(path="a.txt", kind="file", size=len(text), sha256="0" * 64,
+                                manifest=None, extracted=extraction.summary,
+                                measures={"language": measured}, link_target=None)
+            outcome.append([f.code for f in language.evaluate(document, loaded,
+                                                              RunContext(as_of=AS_OF))])
+        assert outcome[0] == outcome[1]
+        assert (skipping == full) == (len(text) >= 200)
