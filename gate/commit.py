@@ -63,6 +63,7 @@ class Blobs:
 
     def __init__(self, root: Path):
         self.root = root
+        self._made: set[Path] = set()
 
     def path(self, sha256: str) -> Path:
         return self.root / sha256[:2] / sha256
@@ -74,7 +75,9 @@ class Blobs:
         target = self.path(sha256)
         if target.exists():
             return
-        target.parent.mkdir(parents=True, exist_ok=True)
+        if target.parent not in self._made:  # one mkdir per folder, not per file
+            target.parent.mkdir(parents=True, exist_ok=True)
+            self._made.add(target.parent)
         tmp = target.with_name(f".{sha256}.tmp-{os.getpid()}")
         write_file(tmp, data, sync=False)  # made durable by one sync before deciding
         os.replace(tmp, target)
@@ -91,6 +94,7 @@ class Blobs:
 
     def clear(self) -> None:
         shutil.rmtree(self.root, ignore_errors=True)
+        self._made.clear()
 
 
 class Placer:

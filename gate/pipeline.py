@@ -52,8 +52,9 @@ from gate.report import dumps_line, reason_json
 from gate.state import State, open_state
 from gate.work import Params, warm_up
 
-CACHE_BATCH = 64
-PLACE_BATCH = 256
+CACHE_BATCH = 64  # documents checked before their rows are written, at the least
+CACHE_PAUSE_S = 0.5  # ... and seconds between two writes (each ends in an fsync)
+PLACE_BATCH = 1024
 
 
 class Reporter(Protocol):
@@ -341,7 +342,10 @@ def _extract_and_check(inbox: Path, manifest: manifest_mod.Manifest, params: Par
     doc_rows: list[tuple[str, int, str]] = []
     state.conn.execute("DELETE FROM run_docs WHERE run_id = ?", (run_id,))
 
+    flushed = [time.monotonic()]
+
     def flush() -> None:
+        flushed[0] = time.monotonic()
         if cache_rows:
             state.cache_put_many(cache_rows)
             cache_rows.clear()
@@ -355,7 +359,8 @@ def _extract_and_check(inbox: Path, manifest: manifest_mod.Manifest, params: Par
         slim, blob = _evaluate(item, loaded, ctx, releases)
         slims[item.index] = slim
         doc_rows.append((run_id, item.index, json.dumps(blob, sort_keys=True)))
-        if len(doc_rows) >= CACHE_BATCH:
+        if len(doc_rows) >= CACHE_BATCH and (time.monotonic() - flushed[0] >= CACHE_PAUSE_S
+                                             or len(doc_rows) >= 16 * CACHE_BATCH):
             flush()
         reporter.advance(item.entry.path)
 
