@@ -16,9 +16,9 @@ from gate.errors import UsageError
 
 
 def _known() -> tuple[list[str], list[str]]:
-    from gate.checks import ALL_CHECKS
+    from gate.checks import check_ids
     from gate.findings import CODES
-    return [check.id for check in ALL_CHECKS], sorted(CODES)
+    return list(check_ids()), sorted(CODES)
 
 
 def _suggest(value: str, candidates: list[str]) -> str:

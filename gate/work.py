@@ -14,7 +14,7 @@ from dataclasses import dataclass
 from typing import Any
 
 from gate import __version__
-from gate.checks import ALL_CHECKS
+from gate import checks
 from gate.extract import extract
 
 
@@ -26,25 +26,11 @@ class Params:
     max_nesting: int
     timeout_s: float
     memory_mb: int
-    # the smallest language.min_chars of the policy and its per-source variants: shorter
-    # texts are undetermined whatever their language, so detection is skipped for them
-    min_language_chars: int = 0
-
-    @classmethod
-    def for_policy(cls, loaded: Any) -> Params:
-        """The parameters a :class:`~gate.policy.LoadedPolicy` implies."""
-        limits = loaded.policy.limits
-        variants = [loaded.policy, *(loaded.by_rule or {}).values()]
-        sections = [v.language for v in variants]
-        floor = 0 if any(s is None for s in sections) else min(s.min_chars for s in sections)
-        return cls(max_pages=limits.max_pages, max_nesting=limits.max_nesting,
-                   timeout_s=limits.timeout_s, memory_mb=limits.memory_mb,
-                   min_language_chars=floor)
 
     def fingerprint(self) -> str:
         """Identifies gate's version, the measurements' versions and these limits."""
         material = {"gate": __version__, "params": self.__dict__,
-                    "measures": {c.id: c.measure_version for c in ALL_CHECKS
+                    "measures": {c.id: c.measure_version for c in checks.all_checks()
                                  if c.measure is not None}}
         blob = json.dumps(material, sort_keys=True).encode("utf-8")
         return hashlib.sha256(blob).hexdigest()[:16]
@@ -59,13 +45,12 @@ def process(task: tuple[str, bytes, Params]) -> dict[str, Any]:
     measures: dict[str, Any] = {}
     errors: dict[str, str] = {}
     if extraction.summary.ok:
-        for check in ALL_CHECKS:
+        for check in checks.all_checks():
             if check.measure is None:
                 continue
             started = time.perf_counter()
             try:
-                measures[check.id] = check.measure(extraction, params) \
-                    if getattr(check, "measure_params", False) else check.measure(extraction)
+                measures[check.id] = check.measure(extraction)
             except MemoryError:
                 raise
             except Exception as err:  # noqa: BLE001 - recorded; the parent fails closed
@@ -78,12 +63,9 @@ def process(task: tuple[str, bytes, Params]) -> dict[str, Any]:
 
 def warm_up() -> None:
     """Load what every worker needs before forking (language profiles, parsers)."""
-    import langdetect
+    from gate import langid
 
-    try:
-        langdetect.detect_langs("warm up the language profiles before forking")
-    except Exception:  # noqa: BLE001 - warming up is an optimisation only
-        pass
-    import gate.extract.html  # noqa: F401
-    import gate.extract.pdf  # noqa: F401
+    langid.profiles()  # about 20 MB of arrays, shared with the forked workers
+    import gate.extract.html
+    import gate.extract.pdf
     import gate.extract.text  # noqa: F401

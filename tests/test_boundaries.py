@@ -382,8 +382,8 @@ def test_every_numeric_policy_value_has_an_upper_bound():
     ("limits:\n  max_bytes: 99999999999999\n", "line 4: limits.max_bytes"),
     ("limits:\n  timeout_s: .inf\n", "line 4: limits.timeout_s"),
     ("freshness:\n  max_age_days: 999999999999\n", "line 4: freshness.max_age_days"),
-    ("quality:\n  max_top_ngram_chars: {40: 0.5}\n", "n = 40 is not measured"),
-    ("quality:\n  min_mean_word_length: .nan\n", "quality.min_mean_word_length"),
+    ("quality:\n  top_ngram_chars_at_most: {40: 0.5}\n", "n = 40 is not measured"),
+    ("quality:\n  word_length_at_least: .nan\n", "quality.word_length_at_least"),
 ])
 def test_absurd_limits_are_refused_by_policy_check(tmp_path, text, needle):
     result = gate("policy", "check", write_policy(tmp_path / "p.yaml", text))
@@ -635,32 +635,3 @@ def test_small_tasks_share_a_round_trip_and_a_failing_one_is_found(monkeypatch):
     assert results["crash"] == pool.Failure("crashed", "the worker process exited with "
                                                        "status 3")
     assert results["spin"] == pool.Failure("timeout", "used more than 0.5 s of CPU time")
-
-
-def test_language_detection_is_skipped_only_where_it_cannot_change_a_decision():
-    from gate.checks import language
-    from gate.checks.base import Document, RunContext
-    from gate.extract import extract
-    from gate.work import Params
-
-    from .helpers import policy
-    loaded = policy("language:\n  allowed: [en]\n  min_chars: 200\n")
-
-    class Loaded:  # the parts of a LoadedPolicy that Params.for_policy reads
-        by_rule = {}
-
-    Loaded.policy = loaded
-    params = Params.for_policy(Loaded)
-    assert params.min_language_chars == 200
-    for text in (PROSE[:150], PROSE * 3):
-        extraction = extract(text.encode(), max_pages=10, max_nesting=250)
-        full, skipping = language.measure(extraction), language.measure(extraction, params)
-        outcome = []
-        for measured in (full, skipping):
-            document = Document(path="a.txt", kind="file", size=len(text), sha256="0" * 64,
-                                manifest=None, extracted=extraction.summary,
-                                measures={"language": measured}, link_target=None)
-            outcome.append([f.code for f in language.evaluate(document, loaded,
-                                                              RunContext(as_of=AS_OF))])
-        assert outcome[0] == outcome[1]
-        assert (skipping == full) == (len(text) >= 200)

@@ -27,25 +27,17 @@ from typing import Any
 
 from pydantic import BaseModel, ValidationError
 
+from gate import checks
 from gate.bounded import InputFileProblem, read_regular
 from gate.errors import PolicyError
 from gate.policy import yamlload
+from gate.policy.model import Policy
 
 __all__ = ["LoadedPolicy", "Policy", "load_policy", "parse_policy", "schema"]
 
 _TAGS = {"domain", "url_prefix", "path"}
 
 
-def __getattr__(name: str) -> Any:
-    # The model is assembled from the check registry, and the checks import
-    # gate.policy.base: importing it lazily keeps that cycle from forming.
-    if name == "Policy":
-        from gate.policy.model import Policy
-        return Policy
-    raise AttributeError(name)
-
-
-OVERRIDABLE = ("integrity", "freshness", "language", "injection", "quality", "format")
 MAX_POLICY_BYTES = 4 << 20  # a policy file or a base: far above any real policy
 MAX_EXTENDS = 16  # bases in one chain of extends
 
@@ -93,7 +85,6 @@ def _dotted(loc: tuple) -> str:
 
 def _model_at(loc: tuple, raw_loc: tuple) -> type[BaseModel] | None:
     """The model class that owns the last key of ``loc`` (for unknown-key suggestions)."""
-    from gate.policy.model import Policy
     model: Any = Policy
     for index, part in enumerate(loc[:-1]):
         if isinstance(part, int):
@@ -263,7 +254,6 @@ def _read_layers(path: Path, chain: tuple[Path, ...] = ()) -> tuple[dict, dict, 
 
 
 def _validate(data: dict, where: dict, top: str) -> tuple[Any, dict[int, Any]]:
-    from gate.policy.model import Policy
     try:
         policy = Policy.model_validate(data)
     except ValidationError as exc:
@@ -276,12 +266,13 @@ def _validate(data: dict, where: dict, top: str) -> tuple[Any, dict[int, Any]]:
         if not overrides:
             continue
         prefix = ("sources", "allow", index, "overrides")
-        bad = [k for k in overrides if k not in OVERRIDABLE]
+        overridable = checks.per_source_sections()
+        bad = [k for k in overrides if k not in overridable]
         if bad:
             file, line = where.get(prefix + (bad[0],), (top, 0))
             place = f"line {line}: " if file == top else f"{file} line {line}: "
             problems.append(f"{place}{_dotted(prefix + (bad[0],))}: {bad[0]!r} cannot be "
-                            f"overridden per source (only {', '.join(OVERRIDABLE)})")
+                            f"overridden per source (only the sections {', '.join(overridable)})")
             continue
         variant, found = _override(policy, data, overrides, where, top, prefix)
         problems += found
@@ -338,7 +329,6 @@ def load_policy(path: str | Path) -> LoadedPolicy:
 
 def schema() -> dict[str, Any]:
     """The JSON Schema of policy files (for editors' completion and validation)."""
-    from gate.policy.model import Policy
     out = Policy.model_json_schema()
     out["$schema"] = "https://json-schema.org/draft/2020-12/schema"
     out["title"] = "gate policy"
