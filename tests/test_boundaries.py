@@ -93,6 +93,21 @@ def test_a_name_that_is_not_utf8_is_reported_escaped_placed_and_reviewable(tmp_p
     assert again.summary["documents"] == 3
 
 
+def test_a_folder_name_that_is_not_utf8_and_explain_show_the_escaped_form(tmp_path):
+    inbox = tmp_path / "inbox"
+    folder = os.fsencode(inbox) + b"/dir-\xff"
+    os.makedirs(folder)
+    with open(folder + b"/n\xe9.txt", "wb") as fh:
+        fh.write(PROSE.encode())
+    run_inbox(tmp_path, inbox)
+    report = json.loads((tmp_path / "out" / "report.json").read_text(encoding="utf-8"))
+    assert [d["path"] for d in report["documents"]] == ["dir-\\xff/n\\xe9.txt"]
+    policy = write_policy(tmp_path / "p.yaml")
+    explained = gate("explain", os.fsdecode(folder + b"/n\xe9.txt"), "--policy", policy)
+    assert explained.returncode == 0, explained.stderr
+    assert explained.stdout.startswith("n\\xe9.txt: text")
+
+
 # -- 2. folders deeper than Python's recursion limit -------------------------------------
 
 

@@ -218,6 +218,7 @@ def explain_command(
 
         from gate import dates
         from gate.errors import UsageError
+        from gate.discovery import display_name
         from gate.explain import explain
         from gate.manifest import ManifestRecord
         from gate.policy import load_policy
@@ -228,7 +229,7 @@ def explain_command(
                 when = dates.parse_as_of(as_of)
             except dates.DateProblem as err:
                 raise UsageError(str(err)) from None
-        rel = inbox_path or file.name
+        rel = inbox_path or display_name(file.name)
         record = None
         if any((source_url, sha256, published_at, retrieved_at)):
             record = ManifestRecord(path=rel, line=0, source_url=source_url, sha256=sha256,
