@@ -19,16 +19,14 @@ from __future__ import annotations
 import getpass
 import json
 import os
-import re
 from dataclasses import dataclass
-from datetime import UTC, date, datetime
+from datetime import UTC, datetime
 from pathlib import Path
 from typing import Any
 
 from gate.commit import Output, SilentReporter, finish, fingerprint, placement_fingerprint, \
     stored_index
 from gate.errors import GateError, UsageError
-from gate import checks
 from gate.findings import CODES
 from gate.folderpage import keeper_diffs
 from gate.lock import RunLock
@@ -98,13 +96,6 @@ def _entry(state: State, out: Path, doc_id: str) -> Entry:
 
 
 STATUSES = ("open", "rejected", "all")
-_DAY = re.compile(r"^\d{4}-\d{2}-\d{2}\Z")
-
-
-def _choices(values: list[str] | tuple[str, ...]) -> str:
-    return ", ".join(values)
-
-
 @dataclass(frozen=True)
 class Filters:
     """What ``review list`` and the bulk review actions select entries by."""
@@ -121,37 +112,24 @@ class Filters:
         """True when any filter narrows the selection (the status alone does not)."""
         return any((self.check, self.code, self.source, self.run, self.since, self.until))
 
-    def validate(self, state: State) -> None:
-        """Unknown check ids, codes, statuses and run ids and malformed dates are errors
-        that list the valid values: a typo must not select nothing and succeed."""
-        ids = [c.id for c in checks.all_checks()]
-        if self.check is not None and self.check not in ids:
-            raise UsageError(f"--check {self.check!r} is not a check id; valid: "
-                             f"{_choices(ids)}.")
-        if self.code is not None and self.code not in CODES and self.code not in ids:
-            raise UsageError(f"--code {self.code!r} is neither a finding code nor a check "
-                             f"id; valid codes are listed by `gate codes`, check ids are: "
-                             f"{_choices(ids)}.")
-        if self.status not in STATUSES:
-            raise UsageError(f"--status {self.status!r} is not a status; valid: "
-                             f"{_choices(STATUSES)}.")
-        for name, value in (("--since", self.since), ("--until", self.until)):
-            if value is None:
-                continue
-            try:
-                ok = bool(_DAY.match(value)) and date.fromisoformat(value) is not None
-            except ValueError:
-                ok = False
-            if not ok:
-                raise UsageError(f"{name} {value!r} is not a date; give YYYY-MM-DD, for "
-                                 "example 2026-12-01.")
-        if self.since and self.until and self.since > self.until:
-            raise UsageError(f"--since {self.since} is after --until {self.until}.")
-        if self.run is not None:
-            known = state.run_ids()
-            if self.run not in known:
-                raise UsageError(f"--run {self.run!r} is not a run of this folder; valid: "
-                                 f"{_choices(known) or 'none yet'}.")
+    def validate(self, state: State) -> Filters:
+        """The filters with each value checked (:mod:`gate.cliargs`: unknown check ids,
+        codes and statuses and malformed dates and run ids are errors that list the
+        valid values) and a run id that this folder does not know refused too: a typo
+        must not select nothing and succeed."""
+        from gate import cliargs
+        checked = Filters(
+            check=self.check and cliargs.check_id(self.check, "--check"),
+            code=self.code and cliargs.check_or_code(self.code, "--code"),
+            source=self.source,
+            run=self.run and cliargs.run_id(self.run, "--run"),
+            since=self.since and cliargs.day_or_time(self.since, "--since"),
+            until=self.until and cliargs.day_or_time(self.until, "--until"),
+            status=cliargs.choice(self.status, "--status", STATUSES))
+        if checked.run is not None and checked.run not in state.run_ids():
+            raise UsageError(f"--run {checked.run!r} is not a run of this folder; valid: "
+                             f"{', '.join(state.run_ids()) or 'none yet'}.")
+        return checked
 
 
 def list_entries(out: Path, *, check: str | None = None, code: str | None = None,
@@ -160,10 +138,11 @@ def list_entries(out: Path, *, check: str | None = None, code: str | None = None
                  status: str | None = "open") -> list[Entry]:
     """Quarantine entries matching every given filter, in path order (see
     :class:`Filters`; invalid filter values are errors)."""
-    filters = Filters(check, code, source, run, since, until, status or "open")
     state = open_folder(out)
     try:
-        filters.validate(state)
+        f = Filters(check, code, source, run, since, until, status or "open").validate(state)
+        check, code, run, since, until, status = f.check, f.code, f.run, f.since, f.until, \
+            f.status
         found = []
         for doc_id in state.quarantine_ids():
             entry = _entry(state, out, doc_id)

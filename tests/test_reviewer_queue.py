@@ -256,7 +256,7 @@ def test_bulk_review_refuses_to_guess(out):
     blank = gate("review", "purge", out, "--check", "format", "--yes", "--note", "  ")
     assert blank.returncode == 2 and "a note is required" in blank.stderr
     typo = gate("review", "purge", out, "--check", "formt", "--yes", "--note", "x")
-    assert typo.returncode == 2 and "valid: format, source" in typo.stderr
+    assert typo.returncode == 2 and "The checks are: format, source" in typo.stderr
 
 
 def test_clearing_the_demo_queue_with_bulk_commands(out):
@@ -329,12 +329,14 @@ def test_policy_lines_for_an_unlisted_source_and_notes_for_the_rest(out):
 # --- every option value validated -----------------------------------------------------------
 
 @pytest.mark.parametrize("args, message", [
-    (("--check", "langauge"), "--check 'langauge' is not a check id; valid: format, source, "),
-    (("--code", "language.typo"), "--code 'language.typo' is neither a finding code nor"),
-    (("--status", "closed"), "--status 'closed' is not a status; valid: open, rejected, all."),
-    (("--since", "yesterday"), "--since 'yesterday' is not a date; give YYYY-MM-DD"),
+    (("--check", "langauge"), "--check 'langauge' is not a check (did you mean 'language'?). "
+                              "The checks are: format, source, "),
+    (("--code", "language.typo"), "--code 'language.typo' is not a finding code"),
+    (("--status", "closed"), "--status 'closed' is not one of open, rejected, all"),
+    (("--since", "yesterday"), "--since 'yesterday' is not a date: give YYYY-MM-DD"),
     (("--until", "2026-13-01"), "--until '2026-13-01' is not a date"),
-    (("--run", "run-9"), "--run 'run-9' is not a run of this folder; valid: run-0001."),
+    (("--run", "run-9"), "--run 'run-9' is not a run id"),
+    (("--run", "run-0009"), "--run 'run-0009' is not a run of this folder; valid: run-0001."),
 ])
 def test_review_filters_reject_unknown_values(demo, args, message):
     result = gate("review", "list", demo, *args)

@@ -306,6 +306,7 @@ def explain_command(
 
         from gate import dates
         from gate.errors import UsageError
+        from gate.discovery import display_name
         from gate.explain import explain
         from gate.manifest import ManifestRecord
         from gate.policy import load_policy
@@ -327,7 +328,7 @@ def explain_command(
                 except dates.DateProblem as err:
                     raise UsageError(f"{name}: {err}; give an ISO 8601 date such as "
                                      "2026-11-01 or 2026-11-01T08:00:00Z.") from None
-        rel = inbox_path or file.name
+        rel = inbox_path or display_name(file.name)
         record = None
         if any((source_url, sha256, published_at, retrieved_at)):
             record = ManifestRecord(path=rel, line=0, source_url=source_url, sha256=sha256,
