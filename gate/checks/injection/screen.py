@@ -22,8 +22,8 @@ import re
 from dataclasses import dataclass
 from typing import Any
 
-from gate.checks.injection import encoded, exfil, html_hidden, pdf_hidden, score, unicode, \
-    wording
+from gate.checks.injection import actions, directive, encoded, exfil, html_hidden, \
+    pdf_hidden, score, unicode, wording
 from gate.checks.injection.normalize import View, fold, visible
 from gate.extract.model import Extraction
 
@@ -34,7 +34,7 @@ MAX_DEPTH = 2
 MAX_HITS = 60
 TOPIC_DAMPING = 0.5
 TOPIC_MIN = 2
-MEASURE_VERSION = 2  # bump when measure() returns something different
+MEASURE_VERSION = 3  # bump when measure() returns something different
 
 _MD_COMMENT = re.compile(r"<!--(.{0,20000}?)-->", re.S)
 
@@ -132,6 +132,7 @@ class Screen:
                 note = "; ".join(x for x in (note, "the document discusses the topic") if x)
             content.append(self._hit(source, m.signal, weight, m.start, m.end, text,
                                      lang=m.lang, note=note, obfuscation=m.obfuscation))
+        content.extend(self._sentences(source, text, visible_text, content))
         for u in exfil.scan(text, links):
             weight = u.weight * (TOPIC_DAMPING if visible_text and self.topic else 1.0)
             if u.start >= 0:
@@ -197,6 +198,35 @@ class Screen:
                 hit.pop("obfuscation", None)
                 self.hits.append(hit)
         return content
+
+    def _sentences(self, source: Source, text: str, visible_text: bool,
+                   phrase_hits: list[dict[str, Any]]) -> list[dict[str, Any]]:
+        """Sentence readings (:mod:`.directive`) and action patterns (:mod:`.actions`)."""
+        found: list[tuple[str, float, int, int, str, str | None, dict[str, Any] | None]] = []
+        for d in directive.scan(text):
+            found.append((d.signal, d.weight, d.start, d.end, d.why, d.lang or None, None))
+        for a in actions.scan(text):
+            found.append((a.signal, a.weight, a.start, a.end, a.why, None, a.detail or None))
+        if not found:
+            return []
+        folded = directive.lfold(text[:directive.MAX_CHARS])
+        spans = [(h["segment_span"][0], h["segment_span"][1], h["weight"]) for h in phrase_hits]
+        out = []
+        for signal, weight, start, end, why, lang, detail in found:
+            if any(s < end and start < e and w >= weight for s, e, w in spans):
+                continue  # a phrase rule already read these words as strongly
+            note = why
+            if visible_text:
+                factor, mention = wording.mention_factor(folded, start, end)
+                if mention:
+                    weight *= factor
+                    note = f"{note}; {mention}"
+                if self.topic:
+                    weight *= TOPIC_DAMPING * 0.8
+                    note = f"{note}; the document discusses the topic"
+            out.append(self._hit(source, signal, round(weight, 4), start, end, text, lang=lang,
+                                 note=note, detail=detail))
+        return out
 
     def _scan_unicode_only(self, source: Source, text: str, depth: int) -> list[dict[str, Any]]:
         """Invisible messages the extractor dropped: tag characters, zero-width runs."""

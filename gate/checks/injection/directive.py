@@ -1,0 +1,480 @@
+"""What a sentence does: does it instruct the model that reads the document?
+
+The phrase rules of :mod:`.wording` know how attacks have been worded. This module reads
+each sentence for what it *does*, in the 24 languages of :mod:`.lexicon`: a sentence that
+addresses an automated reader, or refers to the reader's answer, summary or conversation,
+in the directive mood (please, must, always, an imperative), is an instruction to the model
+whatever its words. Per sentence and per language it collects the categories present
+(``ai``, ``you``, ``ask``, ``out``, ``when`` ...; see :mod:`.lexicon`) and reads them:
+
+* ``model-address``: an AI reader is named and told or asked something;
+* ``answer-steering``: the reader's answer, summary or conversation is the object of a
+  directive ("when summarising this page, state ...", "in your answer mention ...");
+* ``override`` and ``prompt-leak``: told to drop or reveal its instructions, in languages
+  the phrase rules do not cover;
+* ``task-hijack``: a sentence that opens with a request for work (write, suggest, explain,
+  give me ...) whose content words appear nowhere else in the document: a request that
+  has nothing to do with the document it sits in.
+
+A sentence standing alone (a line or paragraph of its own) or at the very start or end of
+the text weighs more; one in quotation marks or given as an example weighs less (the
+caller damps documents about prompt injection itself).
+
+Sentences are found around *trigger* words (AI nouns, answer nouns, reader-activity
+phrases, instruction nouns), so ordinary text costs a set intersection. The text is split
+at sentence punctuation, table-cell bars and blank lines; a blank line does not end a
+sentence that has no closing punctuation and continues in lower case, so an instruction
+split over paragraphs is read whole, and for short texts every other line is read as well
+(an instruction interleaved with other lines). Work is bounded: the first
+:data:`MAX_CHARS` characters, :data:`MAX_UNITS` sentences.
+"""
+
+from __future__ import annotations
+
+import bisect
+import re
+from dataclasses import dataclass
+
+from gate.checks.injection import lexicon
+from gate.checks.injection.lexicon import SUBSTRING, fold_entry, lfold, words_of
+
+MAX_CHARS = 300_000
+MAX_UNITS = 400
+MAX_UNIT = 600
+MAX_POSITIONS = 40
+ALTERNATE_MIN_LINES = 3
+ALTERNATE_MAX_CHARS = 8_000
+TRIGGERS = ("ai", "out", "when", "drop", "instr")
+
+# -- the lexicon, compiled ----------------------------------------------------------------------
+
+_EXACT: dict[str, list[tuple[str, str]]] = {}
+_PREFIX: dict[str, list[tuple[str, str]]] = {}
+_PHRASE: dict[str, list[tuple[tuple[tuple[str, bool], ...], str, str]]] = {}
+_PHRASE_P: dict[str, list[tuple[tuple[tuple[str, bool], ...], str, str]]] = {}
+_PREFIX_LENS: set[int] = set()
+_TRIGGER_EXACT: set[str] = set()
+_TRIGGER_PREFIX: set[str] = set()
+_SUB_PARTS: dict[str, list[str]] = {}
+_SUB_KEYS: list[tuple[str, str]] = []
+
+
+def _entries(spec: str) -> list[str]:
+    return [e.strip() for e in spec.split(",") if e.strip()]
+
+
+for _lang, _cats in lexicon.L.items():
+    for _cat, _spec in _cats.items():
+        for _raw in _entries(_spec):
+            _entry = fold_entry(_raw)
+            if _lang in SUBSTRING:
+                body = _entry.rstrip("*")
+                part = "\x00*".join(re.escape(c) for c in body)
+                if body.isascii():
+                    part = r"(?<![a-z])" + part + r"(?![a-z])"
+                _SUB_PARTS.setdefault(f"{_lang}:{_cat}", []).append(part)
+                if not body.isascii():
+                    continue
+            words = [(w.rstrip("*"), w.endswith("*")) for w in _entry.split()]
+            if not words or not words[0][0]:
+                continue
+            key = (_lang, _cat)
+            if len(words) == 1:
+                word, star = words[0]
+                if star:
+                    _PREFIX.setdefault(word, []).append(key)
+                    _PREFIX_LENS.add(len(word))
+                    if _cat in TRIGGERS:
+                        _TRIGGER_PREFIX.add(word)
+                else:
+                    _EXACT.setdefault(word, []).append(key)
+                    if _cat in TRIGGERS:
+                        _TRIGGER_EXACT.add(word)
+                continue
+            first, star = words[0]
+            (_PHRASE_P if star else _PHRASE).setdefault(first, []).append(
+                (tuple(words[1:]), _lang, _cat))
+            if star:
+                _PREFIX_LENS.add(len(first))
+            word, star = max(words, key=lambda w: len(w[0]))
+            if _cat in TRIGGERS and len(word) >= 5:  # the phrase's longest word finds it
+                if star:
+                    _TRIGGER_PREFIX.add(word)
+                    _PREFIX_LENS.add(len(word))
+                else:
+                    _TRIGGER_EXACT.add(word)
+_SUB_GROUPS = []
+for _i, (_key, _parts) in enumerate(sorted(_SUB_PARTS.items())):
+    _SUB_KEYS.append((_key.split(":")[0], _key.split(":")[1]))
+    _SUB_GROUPS.append(f"(?P<s{_i}>" + "|".join(sorted(_parts, key=len, reverse=True)) + ")")
+_SUB_RE = re.compile("|".join(_SUB_GROUPS))
+_SUB_TRIGGER = re.compile("|".join(g for (lang, cat), g in zip(_SUB_KEYS, _SUB_GROUPS)
+                                   if cat in TRIGGERS))
+_SUB_SCRIPT = re.compile(r"[\u0600-\u06ff\u0900-\u097f\u3040-\u30ff\u3400-\u9fff"
+                         r"\uac00-\ud7a3\uf900-\ufaff]")
+_PREFIX_LENS_SORTED = sorted(_PREFIX_LENS)
+_TOKEN = re.compile(r"[\w\x00][\w\x00'.\-]*")
+
+
+def _keys_of(token: str) -> list[tuple[str, str]]:
+    """(language, category) pairs a single folded token belongs to."""
+    token = token.replace("\x00", "").rstrip(".'-")
+    found = list(_EXACT.get(token, ()))
+    for n in _PREFIX_LENS_SORTED:
+        if n > len(token):
+            break
+        found.extend(_PREFIX.get(token[:n], ()))
+    return found
+
+
+def features(unit: str) -> tuple[dict[str, set[str]], list[str]]:
+    """Per language, the categories present in a folded sentence; and its tokens."""
+    feats: dict[str, set[str]] = {}
+    tokens = [t.replace("\x00", "").rstrip(".'-") for t in _TOKEN.findall(unit)]
+    for i, token in enumerate(tokens):
+        for lang, cat in _keys_of(token):
+            feats.setdefault(lang, set()).add(cat)
+        phrases = list(_PHRASE.get(token, ()))
+        for n in _PREFIX_LENS_SORTED:
+            if n > len(token):
+                break
+            phrases.extend(_PHRASE_P.get(token[:n], ()))
+        for rest, lang, cat in phrases:
+            nxt = tokens[i + 1:i + 1 + len(rest)]
+            if len(nxt) == len(rest) and all(
+                    t.startswith(w) if star else t == w for t, (w, star) in zip(nxt, rest)):
+                feats.setdefault(lang, set()).add(cat)
+    if _SUB_SCRIPT.search(unit):
+        for m in _SUB_RE.finditer(unit):
+            lang, cat = _SUB_KEYS[int(m.lastgroup[1:])]
+            feats.setdefault(lang, set()).add(cat)
+    return feats, tokens
+
+
+# -- reading one sentence -------------------------------------------------------------------------
+
+@dataclass
+class Hit:
+    signal: str
+    weight: float
+    start: int
+    end: int
+    lang: str
+    why: str
+
+
+_SIGNS = {
+    "ai": "names an AI reader", "bot": "names an assistant or model",
+    "you": "speaks to the reader", "ask": "is in the directive mood",
+    "out": "concerns the reader's answer or conversation",
+    "when": "is triggered by the reader's own activity", "user": "mentions the user",
+    "instr": "mentions instructions", "prev": "points at earlier text",
+    "drop": "says to ignore or forget", "leak": "says to reveal",
+}
+
+
+def read_unit(feats: dict[str, set[str]]) -> tuple[str, float, str, set[str]] | None:
+    """The strongest reading of one sentence: (signal, weight, language, categories)."""
+    best: tuple[str, float, str, set[str]] | None = None
+    common = feats.get("*", set())
+    for lang, own in feats.items():
+        f = own | common
+        cand: list[tuple[str, float]] = []
+        if "drop" in f and "instr" in f and f & {"prev", "you", "ai", "bot"}:
+            cand.append(("override", 0.55))
+        if "leak" in f and "instr" in f and f & {"you", "ai"}:
+            cand.append(("prompt-leak", 0.5))
+        if "ai" in f and f & {"ask", "you", "when"}:
+            strong = f & {"out", "when", "user", "instr", "leak", "drop"}
+            cand.append(("model-address", 0.6 if strong and "ask" in f else
+                         0.5 if strong or ("ask" in f and "you" in f) else 0.4))
+        if "when" in f and "ask" in f:
+            w = 0.45 + (0.1 if "you" in f else 0) + (0.1 if "user" in f else 0)
+            cand.append(("answer-steering", min(w, 0.6)))
+        elif "out" in f and "ask" in f and "you" in f:
+            cand.append(("answer-steering", 0.25 + (0.1 if "user" in f else 0)))
+        if "bot" in f and "you" in f and "ask" in f and "when" in f:
+            cand.append(("model-address", 0.5))
+        for signal, weight in cand:
+            if best is None or weight > best[1]:
+                best = (signal, weight, lang, f)
+    return best
+
+
+def why_of(signal: str, cats: set[str]) -> str:
+    named = [_SIGNS[c] for c in ("ai", "bot", "when", "out", "user", "drop", "leak", "instr",
+                                  "you", "ask") if c in cats]
+    return "the sentence " + ", ".join(named[:4])
+
+
+# -- splitting ----------------------------------------------------------------------------------
+
+_BOUNDARY = re.compile(r"[.!?;]+[\"')\]*_]*(?=\s|$)|[。！？；]|[؟।]|\n[ \t]*(?:\n[ \t]*)+|\n|"
+                       r"\||\u2029|\t")
+
+
+def _is_break(text: str, folded: str, m: re.Match[str]) -> bool:
+    """Does this boundary end a sentence? (wrapped lines and split paragraphs do not)"""
+    sep = m.group()
+    if not sep.startswith("\n"):
+        return True
+    before = folded[max(0, m.start() - 1):m.start()]
+    nxt = m.end()
+    if nxt >= len(text):
+        return True
+    ch = text[nxt]
+    if before and before in ".!?:;。！？؟)]":
+        return True
+    if ch.isupper() or ch.isdigit() or ch in "-*+•#>|`[<{" or not ch.isalpha():
+        return True
+    return False  # the sentence goes on in lower case on the next line or paragraph
+
+
+def units_around(text: str, folded: str, positions: list[int]) -> list[tuple[int, int]]:
+    """The sentences (start, end) holding each position."""
+    out: dict[int, int] = {}
+    for pos in positions:
+        a = max(0, pos - MAX_UNIT)
+        start = a
+        for m in _BOUNDARY.finditer(folded, a, pos):
+            if m.end() <= pos and _is_break(text, folded, m):
+                start = m.end()
+        end = min(len(folded), pos + MAX_UNIT)
+        for m in _BOUNDARY.finditer(folded, pos, end):
+            if _is_break(text, folded, m):
+                end = m.end() if m.group()[0] in ".!?;:。！？؟।" else m.start()
+                break
+        while start < end and folded[start] in " \t\n\r>*-#":
+            start += 1
+        if start < end and start not in out:
+            out[start] = end
+    return sorted(out.items())
+
+
+def _standing(text: str, start: int, end: int) -> str | None:
+    """'first', 'last' or 'alone' when the sentence stands out by position."""
+    head = text[:start].strip()
+    tail = text[end:].strip()
+    if not head:
+        return "first"
+    if not tail:
+        return "last"
+    line_a = text.rfind("\n", 0, start) + 1
+    line_b = text.find("\n", end)
+    line_b = len(text) if line_b < 0 else line_b
+    if not text[line_a:start].strip(" \t>*-#_") and not text[end:line_b].strip():
+        above = text[max(0, line_a - 2):line_a]
+        below = text[line_b:line_b + 2]
+        if above.count("\n") >= 2 or below.count("\n") >= 2 or line_a == 0:
+            return "alone"
+    return None
+
+
+# -- task hijacking --------------------------------------------------------------------------
+
+_FILLER = ("please, now, also, instead, then, finally, first, and, ok, okay, so, next, lastly, "
+           "bitte, jetzt, auch, stattdessen, dann, maintenant, aussi, ensuite, puis, ahora, "
+           "tambien, luego, ora, anche, poi, agora, tambem, nu, ook, teraz, takze, nu, "
+           "теперь, также, тепер, також, ted, acum, most, τωρα, simdi, ayrica, sekarang, juga, "
+           "bay gio")
+_TASKS = sorted({fold_entry(e) for spec in (c.get("task", "") for c in lexicon.L.values())
+                 for e in _entries(spec)}, key=len, reverse=True)
+_TASK_LATIN = [t for t in _TASKS if not _SUB_SCRIPT.search(t)]
+_TASK_EXACT = {t for t in _TASK_LATIN if " " not in t and not t.endswith("*")}
+_TASK_PREFIX = {t.rstrip("*") for t in _TASK_LATIN if " " not in t and t.endswith("*")}
+_TASK_EXACT |= {t.split()[0] for t in _TASK_LATIN if " " in t}
+_PREFIX_LENS_SORTED = sorted(_PREFIX_LENS | {len(t) for t in _TASK_PREFIX})
+_TASK_SUB = [t for t in _TASKS if _SUB_SCRIPT.search(t)]
+
+
+_FILLERS = "|".join(re.escape(fold_entry(f)).replace(r"\ ", r"\s+") for f in _entries(_FILLER))
+_OPENING = r"[ \t>*#\-\d.)\"'_]*(?:(?:" + _FILLERS + r")[\s,]+){0,2}$"
+_AFTER_BOUNDARY = re.compile(r"[\n.!?:;|\t]" + _OPENING)
+_AT_START = re.compile(r"^" + _OPENING)
+_OBJECT = re.compile(
+    r"\s+(?:me|us|mir|moi|mi|mnie|mig|мне|мені|nekem|bana|μου|a|an|some|the|one|"
+    r"\d+|two|three|five|ten|several|ein|eine|einen|drei|funf|un|une|des|trois|cinq|uno|una|"
+    r"unos|tres|cinco|uma|um|een|drie|vijf|jeden|jedna|trzy|en|ett|tre|fem|один|одну|три|"
+    r"пять|tri|o|trei|egy|harom|ena|μια|ενα|τρια|bir|uc|bes|sebuah|tiga|lima|mot|ba)\b")
+
+
+def _opens_sentence(folded: str, pos: int) -> bool:
+    """Is ``pos`` the first word of a sentence (after list markers and fillers)?"""
+    if pos <= 40:
+        return bool(_AT_START.search(folded[:pos]) or _AFTER_BOUNDARY.search(folded[:pos]))
+    return bool(_AFTER_BOUNDARY.search(folded, pos - 40, pos))
+
+
+def _lead_positions(folded: str, task_words: set[str]) -> list[tuple[int, int]]:
+    out: list[tuple[int, int]] = []
+    for word in sorted(task_words):
+        n = 0
+        for m in re.finditer(r"(?<![\w\x00])" + re.escape(word) + r"(?![\w\x00])", folded):
+            n += 1
+            if n > MAX_POSITIONS:
+                break
+            if _OBJECT.match(folded, m.end()) and _opens_sentence(folded, m.start()):
+                out.append((m.start(), m.end()))
+    return sorted(out)[:MAX_POSITIONS]
+
+
+_LEAD_SUB = re.compile("|".join(re.escape(t) for t in _TASK_SUB)) if _TASK_SUB else None
+_STOP = frozenset(fold_entry(w) for w in (
+    "that, this, with, from, have, will, your, about, which, their, there, what, when, where, "
+    "would, could, should, into, they, them, then, than, some, more, most, also, only, just, "
+    "very, each, other, these, those, after, before, over, under, like, such, make, made, "
+    "write, give, tell, list, create, explain, suggest, recommend, short, long, best, good, "
+    "great, please, instead, every, please, words, word, sentences, paragraph, about, "
+    "for, und, oder, eine, einen, einer, nicht, mit, auf, fur, pour, avec, dans, sur, une, "
+    "des, les, para, con, una, unos, por, los, las, per, della, delle, degli, sono, voor, met, "
+    "een, dat, niet").split(", "))
+
+
+def _content(folded_unit: str) -> list[str]:
+    words = re.findall(r"[^\W\d_]{4,}", folded_unit)
+    return [w[:6] for w in words if w not in _STOP]
+
+
+def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
+                task_words: set[str]) -> list[Hit]:
+    """Sentences opening with a request for work that the document is not about."""
+    hits: list[Hit] = []
+    starts = _lead_positions(folded, task_words)
+    if _LEAD_SUB is not None and _SUB_SCRIPT.search(folded[:MAX_CHARS]):
+        starts.extend((m.start(), m.end()) for m in _LEAD_SUB.finditer(folded))
+    for vstart, vend in starts[:MAX_POSITIONS]:
+        for start, end in units_around(text, folded, [vstart]):
+            if start in unit_cache:
+                continue
+            unit_cache[start] = end
+            unit = folded[start:end]
+            if vstart - start > 40 or len(unit) > 400:
+                continue
+            words = _content(unit[vend - start:])
+            if _SUB_SCRIPT.search(unit):
+                chars = [unit[i:i + 2] for i in range(vend - start, len(unit) - 1)
+                         if _SUB_SCRIPT.match(unit[i])]
+                words = [c for c in chars if len(c) == 2]
+            if len(words) < 2:
+                continue
+            elsewhere = folded[:start] + " " + folded[end:]
+            shared = sum(1 for w in set(words) if w in elsewhere)
+            overlap = shared / len(set(words))
+            if overlap > 0.25 or len(elsewhere.split()) < 25:
+                continue
+            weight = 0.35
+            why = [f"opens with a request for work (\"{folded[vstart:vend]}\")",
+                   f"{shared} of its {len(set(words))} content words occur elsewhere "
+                   f"in the document"]
+            feats, _ = features(unit)
+            if any("me" in f for f in feats.values()):
+                weight += 0.1
+            place = _standing(text, start, end)
+            if place:
+                weight += 0.1
+                why.append(f"it stands {'alone' if place == 'alone' else 'at the ' + place}")
+            if any(f & {"ai", "when", "drop"} for f in feats.values()):
+                weight += 0.1
+            hits.append(Hit("task-hijack", round(min(weight, 0.6), 4), start, end, "",
+                            "; ".join(why)))
+    return hits
+
+
+# -- the scan -----------------------------------------------------------------------------------
+
+def _words(folded: str) -> tuple[set[str], set[str]]:
+    """The distinct words that trigger a sentence reading, and those that open a task."""
+    triggers: set[str] = set()
+    tasks: set[str] = set()
+    for t in words_of(folded):
+        if t in _TRIGGER_EXACT:
+            triggers.add(t)
+        elif any(t[:n] in _TRIGGER_PREFIX for n in _PREFIX_LENS_SORTED if n <= len(t)):
+            triggers.add(t)
+        if t in _TASK_EXACT or any(t[:n] in _TASK_PREFIX for n in _PREFIX_LENS_SORTED
+                                   if n <= len(t)):
+            tasks.add(t)
+    return triggers, tasks
+
+
+def _trigger_positions(folded: str, words: set[str]) -> list[int]:
+    positions: list[int] = []
+    for w in sorted(words):
+        for m in re.finditer(r"(?<![\w\x00])" + re.escape(w) + r"(?![\w\x00])", folded):
+            positions.append(m.start())
+            if len(positions) >= MAX_UNITS:
+                break
+    if _SUB_SCRIPT.search(folded):
+        for m in _SUB_TRIGGER.finditer(folded):
+            positions.append(m.start())
+            if len(positions) >= 2 * MAX_UNITS:
+                break
+    return sorted(set(positions))
+
+
+def scan(text: str) -> list[Hit]:
+    """Every sentence of ``text`` that reads as an instruction to the model reading it."""
+    text = text[:MAX_CHARS]
+    folded = lfold(text)
+    hits = _scan_folded(text, folded)
+    if ALTERNATE_MIN_LINES <= text.count("\n") and len(text) <= ALTERNATE_MAX_CHARS:
+        hits.extend(_alternate(text, hits))
+    return hits
+
+
+def _scan_folded(text: str, folded: str) -> list[Hit]:
+    hits: list[Hit] = []
+    seen: dict[int, int] = {}
+    triggers, tasks = _words(folded)
+    units = units_around(text, folded, _trigger_positions(folded, triggers))[:MAX_UNITS]
+    for start, end in units:
+        seen[start] = end
+        feats, _ = features(folded[start:end])
+        reading = read_unit(feats)
+        if reading is None:
+            continue
+        signal, weight, lang, cats = reading
+        why = why_of(signal, cats)
+        place = _standing(text, start, end)
+        if place:
+            weight = min(weight + 0.1, 0.7)
+            why += f"; it stands {'alone' if place == 'alone' else 'at the ' + place}"
+        hits.append(Hit(signal, round(weight, 4), start, end, lang, why))
+    hits.extend(hijack_hits(text, folded, seen, tasks))
+    return hits
+
+
+def _alternate(text: str, found: list[Hit]) -> list[Hit]:
+    """Every other line read together: an instruction interleaved with other text."""
+    lines = text.split("\n")
+    offsets = [0]
+    for line in lines[:-1]:
+        offsets.append(offsets[-1] + len(line) + 1)
+    out: list[Hit] = []
+    covered = [(h.start, h.end) for h in found]
+    for parity in (0, 1):
+        picked = [(offsets[i], line) for i, line in enumerate(lines)
+                  if i % 2 == parity and line.strip()]
+        if len(picked) < 3:
+            continue
+        joined = " ".join(line.strip() for _, line in picked)
+        where = []
+        pos = 0
+        for off, line in picked:
+            lead = len(line) - len(line.lstrip())
+            where.append((pos, off + lead))
+            pos += len(line.strip()) + 1
+        keys = [w[0] for w in where]
+        for hit in _scan_folded(joined, lfold(joined)):
+            a = where[bisect.bisect_right(keys, hit.start) - 1]
+            b = where[bisect.bisect_right(keys, max(hit.start, hit.end - 1)) - 1]
+            if a == b:
+                continue  # within one line: the plain scan reads it
+            ostart = a[1] + hit.start - a[0]
+            oend = b[1] + hit.end - b[0]
+            if any(s < oend and ostart < e for s, e in covered):
+                continue
+            hit.start, hit.end = ostart, oend
+            hit.why += "; read across every other line"
+            out.append(hit)
+    return out
