@@ -422,6 +422,32 @@ def scan(text: str) -> list[Hit]:
     return hits
 
 
+_QUOTED = re.compile(r"\"[^\"\n]{1,400}\"|(?<!\w)'[^'\n]{1,400}'(?!\w)|`[^`\n]{1,400}`")
+_EXAMPLE = re.compile(r"\b(?:such\s+as|for\s+example|for\s+instance|e\.\s?g\.|"
+                      r"(?:an?|the|typical|classic|common)\s+(?:example|attack|injection|"
+                      r"payload|phrase|trick|message)\s+(?:is|reads|says|looks\s+like|might\s+be)|"
+                      r"(?:says|reads|looks\s+like|might\s+say|could\s+say)\s*:|"
+                      r"zum\s+beispiel|z\.\s?b\.|beispielsweise|par\s+exemple|por\s+ejemplo|"
+                      r"per\s+esempio|por\s+exemplo|bijvoorbeeld|na\s+przyklad|till\s+exempel|"
+                      r"например|наприклад|napriklad|de\s+exemplu|peldaul|για\s+παραδειγμα|"
+                      r"ornegin|مثلا|مثلاً|उदाहरण|例えば|例如|예를\s+들어|vi\s+du|misalnya)")
+
+
+def _unquoted(unit: str) -> tuple[str, bool]:
+    """The sentence with quoted passages blanked, and whether it was all quotation.
+
+    A sentence that quotes an instruction to explain it ("attackers write \"ignore ...\"")
+    is read without the quotation; a sentence that is entirely a quotation is read whole
+    but weighs less.
+    """
+    if not any(q in unit for q in "\"'`"):
+        return unit, False
+    blanked = _QUOTED.sub(lambda m: " " * len(m.group()), unit)
+    if len(blanked.strip(" .,;:!?-")) < 0.15 * len(unit):
+        return unit, True
+    return blanked, False
+
+
 def _scan_folded(text: str, folded: str) -> list[Hit]:
     hits: list[Hit] = []
     seen: dict[int, int] = {}
@@ -429,12 +455,19 @@ def _scan_folded(text: str, folded: str) -> list[Hit]:
     units = units_around(text, folded, _trigger_positions(folded, triggers))[:MAX_UNITS]
     for start, end in units:
         seen[start] = end
-        feats, _ = features(folded[start:end])
+        unit, quoted = _unquoted(folded[start:end])
+        feats, _ = features(unit)
         reading = read_unit(feats)
         if reading is None:
             continue
         signal, weight, lang, cats = reading
         why = why_of(signal, cats)
+        if quoted:
+            weight *= 0.35
+            why += "; quoted"
+        elif _EXAMPLE.search(unit):
+            weight *= 0.5
+            why += "; given as an example"
         place = _standing(text, start, end)
         if place:
             weight = min(weight + 0.1, 0.7)

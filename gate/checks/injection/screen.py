@@ -210,11 +210,13 @@ class Screen:
         if not found:
             return []
         folded = directive.lfold(text[:directive.MAX_CHARS])
-        spans = [(h["segment_span"][0], h["segment_span"][1], h["weight"]) for h in phrase_hits]
+        spans = [(h["segment_span"][0], h["segment_span"][1], h["weight"], h["signal"])
+                 for h in phrase_hits]
         out = []
         for signal, weight, start, end, why, lang, detail in found:
-            if any(s < end and start < e and w >= weight for s, e, w in spans):
-                continue  # a phrase rule already read these words as strongly
+            if any(s < end and start < e and (w >= weight or sig == signal)
+                   for s, e, w, sig in spans):
+                continue  # a phrase rule already read these words (its span is tighter)
             note = why
             if visible_text:
                 factor, mention = wording.mention_factor(folded, start, end)
@@ -333,6 +335,8 @@ def _snippet(text: str, start: int, end: int) -> str:
     while a > 0 and start - a < 40 and text[a - 1] != "\n" and not (
             text[a - 1] == " " and a > 1 and text[a - 2] in ".!?"):
         a -= 1
+    while 0 < a < start and text[a - 1].isalnum() and text[a].isalnum() and start - a < 60:
+        a -= 1  # never start a snippet in the middle of a word
     b = end
     while b < len(text) and b - end < 120 and text[b] != "\n" and not (
             text[b] in ".!?" and (b + 1 == len(text) or text[b + 1].isspace())):
@@ -388,7 +392,8 @@ def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]
             sources.append(Source(run.text, f"page {run.page} of the PDF", run.technique, "pdf",
                                   run.page))
         for text, technique, where in pdf_hidden.outside_text(extraction.summary.metadata,
-                                                              extraction.extras):
+                                                              extraction.extras) + \
+                pdf_hidden.form_text(extraction.reader):
             sources.append(Source(text, where, technique, "pdf"))
         stats.update(pdf_pages_replayed=found.pages_replayed,
                      pdf_pages_skipped=found.pages_skipped,

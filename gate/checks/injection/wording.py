@@ -474,8 +474,16 @@ rule("fake-notice", "en", 0.15,
      LABEL_START + r"(?:system|developer|admin|administrator|operator)\W{0,2}(?:notice|message|"
      r"alert|update|announcement|note)" + LABEL_END,
      "syste|devel|admin|opera", ai_near=True)
+# A bracketed role marker, but not an option ("[--system]"), a LaTeX or template argument
+# ("\\set{system}", "{system}{local}") or an ordinary chat-log event ("[system] Agent
+# joined the chat").
+CHAT_EVENT = (r"(?!\s*(?:\w+\W+){0,3}?(?:joined|left|has\W+(?:joined|left|ended|closed)|"
+              r"connected|disconnected|reconnected|closed|opened|started|ended|transferred|"
+              r"is\W+typing|rated|assigned|archived|created|renamed|changed|set\W+the|"
+              r"added|removed|invited|muted|unmuted)\b)")
 rule("fake-notice", "en", 0.4,
-     r"[\[\(<{]\W{0,2}(?:system|sys|system_prompt|systemprompt|developer)\W{0,2}[\]\)>}]|"
+     r"(?<![}\]\w\\])[\[\(<{](?!-)[^\w\-]{0,2}(?:system|sys|system_prompt|systemprompt|"
+     r"developer)[^\w\-]{0,2}[\]\)>}](?![{\[])" + CHAT_EVENT + "|"
      r"<\W{0,2}/\W{0,2}(?:system|sys|system_prompt|developer)\W{0,2}>", "syste|sys|devel")
 rule("fake-notice", "en", 0.12,
      r"(?:^|\n)[ \t]*(?:system|sys)[ \t]*:", "syste|sys", ai_near=True)
@@ -654,10 +662,13 @@ TOPIC = re.compile(r"\b(?:prompt\W?injections?|jailbreak\w*|injection\W+attacks?
                    r"adversarial\W+prompts?|indirect\W+injections?|prompt\W+hacking|"
                    r"red\W?team\w*|prompt-?injektion\w*|injections?\W+de\W+prompts?|"
                    r"injections?\W+d'invites?|inyecci(?:o|on)(?:es)?\W+de\W+(?:prompts?|"
-                   r"instrucciones))\b")
+                   r"instrucciones)|security\W+awareness|attackers?\W+(?:hide|plant|embed|"
+                   r"insert|write|use|can|may|could)|(?:hidden|planted|injected|malicious|"
+                   r"embedded)\W+(?:instructions|prompts?|text|commands)|social\W+engineering)\b")
 
 
-_TOPIC_STEMS = (b"promp", b"jailb", b"injec", b"adver", b"indir", b"red", b"redte", b"inyec")
+_TOPIC_STEMS = (b"promp", b"jailb", b"injec", b"adver", b"indir", b"red", b"redte", b"inyec",
+                b"secur", b"attac", b"hidde", b"plant", b"malic", b"embed", b"socia")
 
 
 def topic_count(folded: str, limit: int = 20, tokens: set[bytes] | None = None) -> int:
