@@ -148,7 +148,7 @@ def report(results: list[dict], verbose: bool = False) -> dict:
 
 def main(argv: list[str] | None = None) -> int:
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
-    parser.add_argument("--split", default="all", choices=["dev", "holdout", "holdout2", "all"])
+    parser.add_argument("--split", default="all", choices=["dev", "holdout", "holdout2", "tune15", "all"])
     parser.add_argument("--repeat", type=int, default=3)
     parser.add_argument("--verbose", action="store_true")
     args = parser.parse_args(argv)

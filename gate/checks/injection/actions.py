@@ -162,7 +162,7 @@ INCLUDE = _c(
 
 SIDE_EFFECT = (r"(?:send|mail|email|e_mail|post|upload|delete|remove|drop|transfer|pay|purchase|"
                r"buy|order|forward|share|publish|exec|execute|shell|run|write|create_user|"
-               r"grant|invite|book|wire|withdraw|reset|update_password|change_password|"
+               r"grant|invite|wire|withdraw|reset|update_password|change_password|"
                r"download|fetch|browse|open_url|http)")
 _TOOL_NAME = r"[`'\"]?(?P<tool>[A-Za-z][A-Za-z0-9]*(?:[_.][A-Za-z0-9]+)+)"
 TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
@@ -187,6 +187,12 @@ TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
                 r"\s*:"), 0.4, "holds a function-call record as a model would emit it"),
 ]
 _SIDE = _c(SIDE_EFFECT)
+_AI_NEAR = _c(r"\b(?:ai|a\.i\.|llms?|assistants?|chatbots?|language\s+models?|automated|"
+              r"crawlers?|bots?)\b")
+# Words of a document about programming interfaces, where function calls are the subject.
+_PROGRAMMING = _c(r"\b(?:api|apis|endpoint|sdk|json|schema|parameters?|plug-?in|library|"
+                  r"repository|developers?|http|request|response|returns?|integer|string|"
+                  r"boolean|callback|method)\b")
 _URGENT = _c(r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*)|silently|"
                      r"immediately|right\s+away|do\s+not\s+(?:tell|inform|mention|ask)|"
                      r"before\s+(?:answering|responding|replying)|[\w.+-]+@[\w-]+\.[\w.]+|"
@@ -339,6 +345,7 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
         if len(hits) >= MAX_HITS:
             break
     if any(n in low for n in TOOL_NEEDLES):
+        programming = len(set(_PROGRAMMING.findall(low))) >= 2
         for pattern, weight, why in TOOL_PATTERNS:
             for i, m in enumerate(pattern.finditer(low)):
                 if i >= 10:
@@ -351,13 +358,20 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
                     w += 0.15
                 if _URGENT.search(around):
                     w += 0.1
+                reason = why + (" with side effects" if side else "")
+                if programming:
+                    w *= 0.5
+                    reason += "; the document is about programming interfaces"
                 hits.append(ActionHit("tool-call", round(min(w, 0.65), 4), m.start(), m.end(),
-                                      why + (" with side effects" if side else ""),
-                                      {"tool": tool} if tool else {}))
+                                      reason, {"tool": tool} if tool else {}))
     if any(n in low for n in AUTHORITY_NEEDLES):
         for pattern, weight, why in AUTHORITY:
             for i, m in enumerate(pattern.finditer(low)):
                 if i >= 10:
                     break
-                hits.append(ActionHit("authority-claim", weight, m.start(), m.end(), why, {}))
+                near_ai = _AI_NEAR.search(low, max(0, m.start() - 200), m.end() + 200)
+                hits.append(ActionHit("authority-claim", weight + (0.1 if near_ai else 0),
+                                      m.start(), m.end(),
+                                      why + ("; automated readers are named" if near_ai else ""),
+                                      {}))
     return hits

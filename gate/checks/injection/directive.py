@@ -59,6 +59,10 @@ _SUB_PARTS: dict[str, list[str]] = {}
 _SUB_KEYS: list[tuple[str, str]] = []
 
 
+_IN_YOUR = frozenset(("in", "dans", "en", "nella", "nelle", "na", "em", "w", "i", "в", "у",
+                      "ve", "v", "στην", "trong", "dalam", "di", "im", "bei", "nel", "no"))
+
+
 def _entries(spec: str) -> list[str]:
     return [e.strip() for e in spec.split(",") if e.strip()]
 
@@ -79,6 +83,8 @@ for _lang, _cats in lexicon.L.items():
             if not words or not words[0][0]:
                 continue
             key = (_lang, _cat)
+            if _cat == "when" and words[0][0] in _IN_YOUR and len(words) >= 2:
+                key = (_lang, "out")  # "in your answer": exam papers and forms say it too
             if len(words) == 1:
                 word, star = words[0]
                 if star:
@@ -93,7 +99,7 @@ for _lang, _cats in lexicon.L.items():
                 continue
             first, star = words[0]
             (_PHRASE_P if star else _PHRASE).setdefault(first, []).append(
-                (tuple(words[1:]), _lang, _cat))
+                (tuple(words[1:]), key[0], key[1]))
             if star:
                 _PREFIX_LENS.add(len(first))
             word, star = max(words, key=lambda w: len(w[0]))
@@ -127,13 +133,34 @@ def _keys_of(token: str) -> list[tuple[str, str]]:
     return found
 
 
+# English verbs read as imperatives only where a clause starts ("add" in "to add an event"
+# is no command); their forms double as infinitives, nouns and plurals.
+EN_VERBS = frozenset(fold_entry(e) for e in _entries(lexicon.L["en"]["ask"])
+                     if " " not in e and e not in ("please", "must", "should", "shall", "always",
+                                                   "never", "ensure"))
+CLAUSE_OPENERS = frozenset(("please", "then", "and", "also", "always", "never", "instead",
+                            "now", "just", "simply", "first", "kindly", "immediately",
+                            "silently", "so", "but", "next", "finally", "secretly", "quietly"))
+EN_OUT_VERBS = frozenset(("reply", "respond", "answer", "summarize", "summarise", "output"))
+
+
 def features(unit: str) -> tuple[dict[str, set[str]], list[str]]:
     """Per language, the categories present in a folded sentence; and its tokens."""
     feats: dict[str, set[str]] = {}
-    tokens = [t.replace("\x00", "").rstrip(".'-") for t in _TOKEN.findall(unit)]
+    found = list(_TOKEN.finditer(unit))
+    tokens = [m.group().replace("\x00", "").rstrip(".'-") for m in found]
     for i, token in enumerate(tokens):
+        opens = i == 0 or tokens[i - 1] in CLAUSE_OPENERS or \
+            unit[:found[i].start()].rstrip()[-1:] in (",", ";", ":", "(", "-", '"')
         for lang, cat in _keys_of(token):
+            if lang == "en" and cat == "ask" and token in EN_VERBS and not opens:
+                continue
             feats.setdefault(lang, set()).add(cat)
+        if opens and token in EN_OUT_VERBS:
+            feats.setdefault("en", set()).update(("ask", "out"))
+        if i < 4 and unit[found[i].end():found[i].end() + 30].lstrip()[:1] in (",", ":") and \
+                any(cat in ("ai", "bot") for _, cat in _keys_of(token)):
+            feats.setdefault("*", set()).add("vocative")
         phrases = list(_PHRASE.get(token, ()))
         for n in _PREFIX_LENS_SORTED:
             if n > len(token):
@@ -178,22 +205,33 @@ def read_unit(feats: dict[str, set[str]]) -> tuple[str, float, str, set[str]] | 
     best: tuple[str, float, str, set[str]] | None = None
     common = feats.get("*", set())
     for lang, own in feats.items():
+        if lang == "*":
+            continue
         f = own | common
         cand: list[tuple[str, float]] = []
-        if "drop" in f and "instr" in f and f & {"prev", "you", "ai", "bot"}:
-            cand.append(("override", 0.55))
-        if "leak" in f and "instr" in f and f & {"you", "ai"}:
-            cand.append(("prompt-leak", 0.5))
+        if lang != "en":  # English wording has its own phrase rules (wording.py)
+            if "drop" in f and "instr" in f and f & {"prev", "you", "ai", "bot"}:
+                cand.append(("override", 0.55))
+            if "leak" in f and "instr" in f and f & {"you", "ai"}:
+                cand.append(("prompt-leak", 0.5))
         if "ai" in f and f & {"ask", "you", "when"}:
-            strong = f & {"out", "when", "user", "instr", "leak", "drop"}
-            cand.append(("model-address", 0.6 if strong and "ask" in f else
-                         0.5 if strong or ("ask" in f and "you" in f) else 0.4))
+            if "here" in f and f & {"ask", "you"} or "vocative" in f and "ask" in f:
+                w = 0.6
+            elif ("you" in f or "when" in f) and "ask" in f:
+                w = 0.55
+            else:
+                w = 0.35
+            cand.append(("model-address", w + (0.05 if f & {"out", "user", "instr"} else 0)))
         if "when" in f and "ask" in f:
-            w = 0.45 + (0.1 if "you" in f else 0) + (0.1 if "user" in f else 0)
+            w = 0.45 + (0.1 if f & {"here", "you"} else 0) + (0.1 if "user" in f else 0)
             cand.append(("answer-steering", min(w, 0.6)))
+        elif "out" in f and "ask" in f and "user" in f:
+            cand.append(("answer-steering", 0.45))
         elif "out" in f and "ask" in f and "you" in f:
-            cand.append(("answer-steering", 0.25 + (0.1 if "user" in f else 0)))
-        if "bot" in f and "you" in f and "ask" in f and "when" in f:
+            cand.append(("answer-steering", 0.25))
+        if "bot" in f and "ask" in f and (("you" in f and "when" in f) or
+                                          "here" in f and f & {"out", "when"} or
+                                          "vocative" in f):
             cand.append(("model-address", 0.5))
         for signal, weight in cand:
             if best is None or weight > best[1]:
@@ -331,8 +369,9 @@ _STOP = frozenset(fold_entry(w) for w in (
 
 
 def _content(folded_unit: str) -> list[str]:
+    """Content words, cut to a crude stem ("baked" and "bake" share "bake")."""
     words = re.findall(r"[^\W\d_]{4,}", folded_unit)
-    return [w[:6] for w in words if w not in _STOP]
+    return [w[:4] if len(w) <= 6 else w[:5] for w in words if w not in _STOP]
 
 
 def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
@@ -362,7 +401,7 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
             overlap = shared / len(set(words))
             if overlap > 0.25 or len(elsewhere.split()) < 25:
                 continue
-            weight = 0.35
+            weight = 0.4 if shared == 0 and len(set(words)) >= 3 else 0.35
             why = [f"opens with a request for work (\"{folded[vstart:vend]}\")",
                    f"{shared} of its {len(set(words))} content words occur elsewhere "
                    f"in the document"]
@@ -468,7 +507,7 @@ def _scan_folded(text: str, folded: str) -> list[Hit]:
         elif _EXAMPLE.search(unit):
             weight *= 0.5
             why += "; given as an example"
-        place = _standing(text, start, end)
+        place = _standing(text, start, end) if weight >= 0.45 else None
         if place:
             weight = min(weight + 0.1, 0.7)
             why += f"; it stands {'alone' if place == 'alone' else 'at the ' + place}"

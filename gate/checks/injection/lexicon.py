@@ -18,6 +18,7 @@ instruction to the model that reads the document. The categories:
 ``leak``    reveal, show, repeat
 ``task``    verbs that open a bare request for work (write, suggest, explain ...)
 ``me``      first-person object of such a request (give *me*, tell *me*)
+``here``    the document pointing at itself ("this page", "this document", "reading this")
 
 Entries are comma-separated. Words inside an entry are separated by spaces (a phrase);
 a trailing ``*`` makes the last word a prefix. Entries are folded with :func:`lfold` like
@@ -65,7 +66,7 @@ L["en"] = dict(
          "when you answer*, when you respond*, when you summar*, when you reply*, "
          "when you are asked, when you process*, when you read*, while summari*, "
          "while answering, in your summar*, in every answer*, in every response*, "
-         "in all answers, in all responses, in any answer*, in each answer*, "
+         "in all answers, in all responses, in any answer*, in any response*, in each answer*, "
          "in each response*, from now on, before answering, before responding, "
          "before you answer*, before you respond*, at the end of your*, "
          "at the start of your*, at the beginning of your*, after reading this, "
@@ -593,9 +594,37 @@ L["id"] = dict(
          "buatkan, hitung*",
     me="aku, saya, ku",
 )
+HERE: dict[str, str] = {
+    "en": "this page, this document, this text, this article, this site, this website, this file, this email, this e-mail, this message, this post, this pdf, this note, reading this, these pages, this content",
+    "de": "diese seite, dieses dokument, diesen text, dieser text, diesen artikel, diese datei, diese e-mail, diese nachricht, diese notiz",
+    "fr": "cette page, ce document, ce texte, cet article, ce site, ce fichier, ce message, ce courriel, cette note",
+    "es": "esta pagina, este documento, este texto, este articulo, este sitio, este archivo, este mensaje, este correo, esta nota",
+    "it": "questa pagina, questo documento, questo testo, questo articolo, questo sito, questo file, questo messaggio, questa nota",
+    "pt": "esta pagina, este documento, este texto, este artigo, este site, este arquivo, esta mensagem, esta nota",
+    "nl": "deze pagina, dit document, deze tekst, dit artikel, deze site, dit bestand, dit bericht, deze notitie",
+    "pl": "ta strona, tej strony, ten dokument, tego dokumentu, ten tekst, tego tekstu, ten artykul, ta notatka",
+    "sv": "den har sidan, detta dokument, denna text, den har texten, denna artikel, detta meddelande",
+    "ru": "эту страницу, этой страницы, эта страница, этот документ, этого документа, этот текст, этого текста, эту статью, эта заметка, эту заметку",
+    "uk": "цю сторінку, ціеі сторінки, цеи документ, цього документа, цеи текст, цього тексту, цю статтю",
+    "cs": "tuto stranku, teto stranky, tento dokument, tohoto dokumentu, tento text, tohoto textu",
+    "ro": "aceasta pagina, acest document, acest text, acest articol, aceasta nota",
+    "hu": "ezt az oldalt, ez az oldal, ezt a dokumentumot, ezt a szoveget, ez a szoveg",
+    "el": "αυτη τη σελιδα, αυτης της σελιδας, αυτο το εγγραφο, αυτο το κειμενο",
+    "tr": "bu sayfa*, bu belge*, bu metin*, bu makale*, bu not*",
+    "vi": "trang nay, tai lieu nay, van ban nay, bai viet nay",
+    "id": "halaman ini, dokumen ini, teks ini, artikel ini, catatan ini",
+    "ar": "هذه الصفحة, هذا المستند, هذا النص, هذه المقالة",
+    "fa": "این صفحه, این سند, این متن, این مقاله",
+    "hi": "इस पेज, इस पृष्ठ, इस दस्तावेज़, इस लेख, इस पाठ",
+    "ja": "このページ, この文書, このテキスト, この記事, このドキュメント",
+    "zh": "本页, 此页, 这个页面, 本文, 此文档, 这篇文章, 本文件",
+    "ko": "이 페이지, 이 문서, 이 글, 이 텍스트",
+}
+for _lang, _spec in HERE.items():
+    L[_lang]["here"] = _spec
 LANGS = tuple(L)
 CATEGORIES = ("ai", "bot", "you", "ask", "out", "when", "user", "instr", "prev", "drop",
-              "leak", "task", "me")
+              "leak", "task", "me", "here")
 
 
 class _FoldTable(dict):

@@ -36,6 +36,8 @@ TOPIC_DAMPING = 0.5
 TOPIC_MIN = 2
 MEASURE_VERSION = 3  # bump when measure() returns something different
 
+ACTION_SIGNALS = frozenset({"harmful-code", "tool-call"})
+_CODE_CHARS = re.compile(r"[(){};=<>\[\]$]|\b(?:def|import|return|function|var|let)\b")
 _MD_COMMENT = re.compile(r"<!--(.{0,20000}?)-->", re.S)
 
 
@@ -210,24 +212,31 @@ class Screen:
         if not found:
             return []
         folded = directive.lfold(text[:directive.MAX_CHARS])
-        spans = [(h["segment_span"][0], h["segment_span"][1], h["weight"], h["signal"])
-                 for h in phrase_hits]
         out = []
+        by_span = [(h["segment_span"][0], h["segment_span"][1], h) for h in phrase_hits]
         for signal, weight, start, end, why, lang, detail in found:
-            if any(s < end and start < e and (w >= weight or sig == signal)
-                   for s, e, w, sig in spans):
-                continue  # a phrase rule already read these words (its span is tighter)
-            note = why
-            if visible_text:
+            if visible_text and signal in ACTION_SIGNALS:
+                pass  # code belongs in code blocks; the request to include it is the evidence
+            elif visible_text:
                 factor, mention = wording.mention_factor(folded, start, end)
+                if mention == "in a code block" and not _CODE_CHARS.search(folded, start, end):
+                    factor, mention = 1.0, ""  # prose hidden in a fence is still prose
                 if mention:
                     weight *= factor
-                    note = f"{note}; {mention}"
-                if self.topic:
-                    weight *= TOPIC_DAMPING * 0.8
-                    note = f"{note}; the document discusses the topic"
+                    why = f"{why}; {mention}"
+            if visible_text and self.topic:
+                weight *= TOPIC_DAMPING * 0.8
+                why = f"{why}; the document discusses the topic"
+            same = [h for s, e, h in by_span if s < end and start < e and
+                    (h["signal"] == signal or h["weight"] >= weight)]
+            if same:  # a phrase rule read these words already: its span is tighter
+                for h in same:
+                    if h["signal"] == signal and h["weight"] < weight:
+                        h["weight"] = round(weight, 4)
+                        h["note"] = "; ".join(x for x in (h["note"], why) if x)
+                continue
             out.append(self._hit(source, signal, round(weight, 4), start, end, text, lang=lang,
-                                 note=note, detail=detail))
+                                 note=why, detail=detail))
         return out
 
     def _scan_unicode_only(self, source: Source, text: str, depth: int) -> list[dict[str, Any]]:
