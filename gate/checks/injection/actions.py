@@ -26,7 +26,7 @@ from dataclasses import dataclass
 
 from gate.checks.injection.lexicon import lfold, words_of
 
-MAX_CHARS = 300_000
+MAX_CHARS = 150_000
 MAX_HITS = 20
 CONTEXT = 600
 FLAGS = re.S

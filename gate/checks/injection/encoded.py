@@ -37,11 +37,11 @@ _B64 = re.compile(r"(?<![A-Za-z0-9+/=_-])[A-Za-z0-9+/]{20,}={0,2}(?![A-Za-z0-9+/
 _HEX = re.compile(r"(?<![0-9A-Fa-f])(?:[0-9A-Fa-f]{2}){12,}(?![0-9A-Fa-f])|"
                   r"(?<![0-9A-Fa-f])(?:[0-9A-Fa-f]{2}[ :]){11,}[0-9A-Fa-f]{2}(?![0-9A-Fa-f])")
 MIN_ESCAPES = 6
-_PERCENT = re.compile(r"[A-Za-z0-9._~+\-]{0,16}(?:%[0-9A-Fa-f]{2}[A-Za-z0-9._~+\-]{0,16}){6,}")
+_PERCENT = re.compile(r"(?:%[0-9A-Fa-f]{2}[A-Za-z0-9._~+\-]{0,16}){6,}")
 _ESCAPES = re.compile(r"(?:\\x[0-9A-Fa-f]{2}){8,}|"
-                      r"[^\\\n]{0,4}(?:\\u[0-9A-Fa-f]{4}[^\\\n]{0,12}){6,}")
+                      r"(?:\\u[0-9A-Fa-f]{4}[^\\\n]{0,12}){6,}")
 _ENTITIES = re.compile(r"(?:&#(?:[xX][0-9A-Fa-f]{1,6}|\d{1,7});[^&<\n]{0,12}){6,}")
-_QP = re.compile(r"[^=\s]{0,16}(?:=[0-9A-F]{2}[^=\n]{0,12}|=\r?\n){6,}")
+_QP = re.compile(r"(?:=[0-9A-F]{2}[^=\n]{0,12}|=\r?\n){6,}")
 _UESC = re.compile(r"\\u([0-9A-Fa-f]{4})")
 _ARMOUR = re.compile(r"-----BEGIN [A-Z0-9 ]{3,40}-----.{0,200000}?-----END [A-Z0-9 ]{3,40}-----",
                      re.S)
@@ -195,8 +195,11 @@ def find(text: str, budget: list[int]) -> list[Payload]:
             if tried >= MAX_CANDIDATES:
                 break
             tried += 1
-            start = m.start() + m.group().find(marker[0]) if encoding == "escape sequences" \
-                else m.start()
+            start = m.start()
+            if encoding in ("percent-encoding", "quoted-printable"):
+                while start > 0 and m.start() - start < 16 and not text[start - 1].isspace() \
+                        and text[start - 1] not in "=?&/\"'(":
+                    start -= 1  # the plain letters before the first escape
             line_end = text.find("\n", m.end())
             end = min(m.end() + 300, len(text) if line_end < 0 else line_end)
             if m.group().startswith("\\x"):

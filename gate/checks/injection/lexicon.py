@@ -242,7 +242,7 @@ L["nl"] = dict(
     me="me, mij, ons",
 )
 L["pl"] = dict(
-    ai="si, sztuczna inteligencja, sztucznej inteligencji, model jezykowy, "
+    ai="sztuczna inteligencja, sztucznej inteligencji, model jezykowy, "
        "modelu jezykowego, modele jezykowe, llm*, chatbot*, czatbot*, asystent ai, "
        "asystencie ai, asystencie si, asystent si, system automatyczny, zautomatyzowan*",
     bot="asystent*, model, modelu, bot, agent*",
@@ -258,7 +258,7 @@ L["pl"] = dict(
     user="uzytkownik*",
     instr="instrukcj*, polecen*, wytyczn*, zasad*, regul*, prompt*",
     prev="poprzedni*, wczesniejsz*, powyzsz*, wszystkie, wszelkie, pierwotn*",
-    drop="zignoruj*, ignoruj*, zapomnij*, pomin*",
+    drop="zignoruj, zignorujcie, ignoruj, ignorujcie, zapomnij, zapomnijcie, pomin",
     leak="ujawnij*, pokaz*, powtorz*, wypisz*",
     task="napisz*, zaproponuj*, polec*, podaj*, wyjasnij*, przetlumacz*, wymien*, stworz*, "
          "wygeneruj*, oblicz*",
@@ -338,7 +338,7 @@ L["cs"] = dict(
     ai="ai, ui, umela inteligence, umele inteligence, umelou inteligenci, jazykov* model*, "
        "llm*, chatbot*, ai asistent*, automatizovan* system*",
     bot="asistent*, model*, bot*, agent*",
-    you="ty, tvuj, tva, tve, tvoje, tvym, tebe, ti, vy, vas, vam, vase",
+    you="ty, tvuj, tva, tve, tvoje, tvym, tebe, ti, vy, vas, vam, vase, jsi, jste",
     ask="prosim, musis, musite, mel bys, meli byste, vzdy, nikdy, ujisti se, nezapomen*, "
         "rekni, reknete, zmin*, uved*, zahrn*, doporuc*, odpovez*, odpovidej*, napis*, "
         "pridej*, vloz*, preloz*, zacni*, ukonci*, pouzij*, posli*, spust*, zavolej*, "
@@ -508,7 +508,7 @@ L["ja"] = dict(
     out="回答, 返答, 応答, 答え, 要約, 返信, 会話, 出力",
     when="要約する際, 要約するとき, 要約する時, 回答する際, 回答するとき, 答える際, 答えるとき, "
          "質問されたら, 聞かれたら, 尋ねられたら, ユーザーが, 回答の中で, 回答に, 返答に, "
-         "要約に, 今後, これから, 以降, 回答の前に, 回答の最後, 回答の冒頭",
+         "要約に, 回答の前に, 回答の最後, 回答の冒頭",
     user="ユーザー, ユーザ, 利用者",
     instr="指示, 命令, ルール, 規則, プロンプト",
     prev="以前の, 前の, これまでの, 上記の, すべての, 全ての",
