@@ -8,7 +8,7 @@ are, runs gate's extractor and the injection check on each, and prints the share
 the default threshold, overall and per group, with the strongest signal of each one held.
 Nothing is copied into the repository.
 
-    python benchmarks/debian_docs.py [--per-language 60] [--html 150] [--no-install] [-v]
+    python benchmarks/debian_docs.py [--per-language 100] [--html 150] [--no-install] [-v]
 """
 
 from __future__ import annotations
@@ -33,9 +33,7 @@ PACKAGES = ["man-db", "groff-base", "manpages", "manpages-de", "manpages-fr", "m
             "debian-reference-fr", "debian-reference-ja"]
 MAN_ROOT = Path("/usr/share/man")
 MAN_LANGUAGES = ["", "de", "fr", "es", "it", "pl", "pt", "pt_BR", "ru", "ja"]
-HTML_ROOTS = [Path("/usr/share/doc/python3.11/html"), Path("/usr/share/doc/debian-reference-en"),
-              Path("/usr/share/doc/debian-reference-de"), Path("/usr/share/doc/debian-reference-fr"),
-              Path("/usr/share/doc/debian-reference-ja")]
+HTML_ROOTS = [Path("/usr/share/doc/python3.11/html"), Path("/usr/share/debian-reference")]
 _OVERSTRIKE = re.compile(".\x08")
 
 
@@ -90,14 +88,15 @@ def html_pages(n: int) -> list[tuple[str, str, bytes]]:
     for root in HTML_ROOTS:
         if root.is_dir():
             files = [p for p in root.rglob("*.html") if p.is_file()]
-            for page in sample(files, n // 2 if "python" in str(root) else n // 8):
-                out.append((f"html/{root.name}", str(page), page.read_bytes()))
+            for page in sample(files, n * 2 // 3 if "python" in str(root) else n // 3):
+                out.append((f"html/{root.parent.name if root.name == 'html' else root.name}",
+                            str(page), page.read_bytes()))
     return out
 
 
 def main(argv: list[str] | None = None) -> int:
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
-    parser.add_argument("--per-language", type=int, default=60)
+    parser.add_argument("--per-language", type=int, default=100)
     parser.add_argument("--html", type=int, default=150)
     parser.add_argument("--threshold", type=float, default=0.5)
     parser.add_argument("--no-install", action="store_true")

@@ -565,7 +565,7 @@ def _alternate(text: str, found: list[Hit]) -> list[Hit]:
     for line in lines[:-1]:
         offsets.append(offsets[-1] + len(line) + 1)
     out: list[Hit] = []
-    covered = [(h.start, h.end) for h in found]
+    covered = [(h.start, h.end, h.weight) for h in found]
     for parity in (0, 1):
         picked = [(offsets[i], line) for i, line in enumerate(lines)
                   if i % 2 == parity and line.strip()]
@@ -586,8 +586,8 @@ def _alternate(text: str, found: list[Hit]) -> list[Hit]:
                 continue  # within one line: the plain scan reads it
             ostart = a[1] + hit.start - a[0]
             oend = b[1] + hit.end - b[0]
-            if any(s < oend and ostart < e for s, e in covered):
-                continue
+            if any(s < oend and ostart < e and w >= hit.weight for s, e, w in covered):
+                continue  # the plain reading already says as much
             hit.start, hit.end = ostart, oend
             hit.why += "; read across every other line"
             out.append(hit)
