@@ -145,6 +145,10 @@ AUTHORITY_NEEDLES = ("automated", "ai ", "a.i.", "llm", "machine", "autonomous",
                      "approved", "verified", "ersetzt", "remplace", "annule", "reemplaza",
                      "sustituye", "anula", "sostituisce", "annulla", "substitui")
 
+# Reading system details or secrets is what manuals show most often; alone it needs a
+# second capability (collect *and* send) to count.
+WEAK_CAPABILITY = "collects system details or secrets"
+
 INCLUDE = _c(
     r"\b(?:add|include|insert|paste|put|append|embed|copy|place|inject|use|incorporate)\b"
     r"[^.\n]{0,60}?\b(?:snippet|code|lines?|function|script|block|following|this)\b"
@@ -156,6 +160,10 @@ INCLUDE = _c(
     r"\b(?:run|execute|launch|paste)\s+(?:this|the\s+following|these)\s+(?:\w+\s+){0,2}?"
     r"(?:commands?|code|scripts?|snippet|lines?|one-liner)|"
     r"\b(?:always|also|must|should)\s+(?:\w+\s+){0,2}?(?:add|include|insert|import|call)\b|"
+    r"\b(?:run|execute|paste)\s+(?:it|this|them|these)\s+(?:on|in|as|from|before|after|"
+    r"now|first|every)\b|"
+    r"\btell\s+(?:the\s+)?(?:users?|readers?|people|customers?)\s+to\s+(?:run|execute|paste|"
+    r"install|copy|type|enter)\b|"
     r"\bf(?:u|ü)ge?\s[^.\n]{0,60}(?:code|snippet)|\bajoute[zr]?\s[^.\n]{0,60}(?:code|extrait)|"
     r"\b(?:a[nñ]ade|agrega|incluye)\s[^.\n]{0,60}c[oó]digo|\baggiungi\s[^.\n]{0,60}codice|"
     r"\badicione\s[^.\n]{0,60}c[oó]digo")
@@ -171,7 +179,7 @@ TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
                 r"api|endpoint|capability)"), 0.35, "asks for a named tool to be called"),
     (_c(r"\b(?:call|invoke|trigger|execute)\s+(?:the\s+)?" + _TOOL_NAME +
                 r"[`'\"]?\s*(?:\(|with\b)"), 0.3, "asks for a function to be called"),
-    (_c(r"\buse\s+(?:your|the)\s+(?:\w+\s+)?(?:browsing|browser|web|e-?mail|mail|file|"
+    (_c(r"\bus(?:e|ing)\s+(?:your|the)\s+(?:\w+\s+)?(?:browsing|browser|web|e-?mail|mail|file|"
                 r"files|code|shell|terminal|search|calendar|payment|messaging|http)\s+"
                 r"(?:tool|capabilit(?:y|ies)|access|plugin|function|integration)s?"), 0.45,
      "asks the reader to use one of its tools"),
@@ -217,9 +225,15 @@ AUTHORITY: list[tuple[re.Pattern[str], float, str]] = [
      "claims to supersede every other source"),
     (_c(r"\b(?:treat|regard|consider|use|accept|cite)\s+(?:this|the\s+following|"
                 r"these|it)\s+(?:\w+\s+){0,3}?as\s+(?:the\s+)?(?:only|sole|single|definitive|"
-                r"authoritative|official|canonical|correct|true|final)\s+(?:\w+\s+)?(?:source|"
-                r"answer|reference|truth|version|authority)"), 0.45,
+                r"authoritative|official|canonical|correct|true|final|ground)\s+(?:\w+\s+)?"
+                r"(?:source|answer|reference|truth|version|authority|facts?)"), 0.45,
      "claims to be the only authoritative source"),
+    (_c(r"\b(?:only|solely)\s+(?:this|the\s+present)\s+(?:page|document|source|article|"
+        r"notice|text|site)\s+(?:is|can\s+be|should\s+be)\s+(?:\w+\s+)?(?:accurate|correct|"
+        r"reliable|authoritative|valid|current|trusted|true)|\b(?:overrides?|supersedes?|"
+        r"invalidates?)\s+(?:all\s+|any\s+)?(?:conflicting|contradicting|contradictory|"
+        r"competing)\s+(?:\w+\s+)?(?:data|sources?|information|documents?|reports?|claims?)"),
+     0.45, "claims to be the only authoritative source"),
     (_c(r"\b(?:all|any|every)\s+other\s+(?:\w+\s+)?(?:sources?|documents?|pages?|"
                 r"information|references|answers?|data|reports?|websites?|sites)\s+(?:\w+\s+){0,3}?"
                 r"(?:are|is|should\s+be|must\s+be)\s+(?:\w+\s+){0,2}?(?:outdated|obsolete|wrong|"
@@ -331,7 +345,7 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
     for start, end, name in caps:
         near = [m for m in includes if m.start() <= start and start - m.end() <= CONTEXT]
         others = {n for s, e, n in caps if n != name and abs(s - start) <= 1500}
-        if near:
+        if near and (name != WEAK_CAPABILITY or others):
             m = near[-1]
             hits.append(ActionHit("harmful-code", 0.6, start, end,
                                   f"code that {name}, after a request to include or run it "

@@ -255,10 +255,14 @@ def read_unit(feats: dict[str, set[str]]) -> tuple[str, float, str, set[str]] | 
         if "when" in f and "ask" in f:
             w = 0.45 + (0.1 if f & {"here", "you"} else 0) + (0.1 if "user" in f else 0)
             cand.append(("answer-steering", min(w, 0.6)))
+        elif "out" in f and "ask" in f and "here" in f:
+            cand.append(("answer-steering", 0.5))  # "summaries of this page must ..."
         elif "out" in f and "ask" in f and "user" in f:
             cand.append(("answer-steering", 0.45))
         elif "out" in f and "ask" in f and "you" in f:
             cand.append(("answer-steering", 0.25))
+        if "bot" in f and "ask" in f and f & {"out", "user"}:
+            cand.append(("model-address", 0.4))
         if "bot" in f and "ask" in f and (("you" in f and "when" in f) or
                                           "here" in f and f & {"out", "when"} or
                                           "vocative" in f):
@@ -341,6 +345,11 @@ def _standing(text: str, start: int, end: int) -> str | None:
 # -- task hijacking --------------------------------------------------------------------------
 
 _FILLER = ("please, now, also, instead, then, finally, first, and, ok, okay, so, next, lastly, "
+           "can you, could you, would you, will you, i want you to, i need you to, "
+           "before continuing, before you continue, before summarizing, before answering, "
+           "kannst du, konntest du, peux-tu, pourrais-tu, pouvez-vous, puedes, podrias, "
+           "puoi, potresti, podes, pode, kun je, kan je, czy mozesz, kan du, можешь, "
+           "можете, можеш, muzes, poti, tudnal, μπορεις, yapabilir misin, bisakah kamu, "
            "bitte, jetzt, auch, stattdessen, dann, maintenant, aussi, ensuite, puis, ahora, "
            "tambien, luego, ora, anche, poi, agora, tambem, nu, ook, teraz, takze, nu, "
            "теперь, также, тепер, також, ted, acum, most, τωρα, simdi, ayrica, sekarang, juga, "

@@ -42,7 +42,7 @@ SUBSTRING = frozenset({"ja", "zh", "ko", "ar", "fa", "hi"})
 L: dict[str, dict[str, str]] = {}
 
 L["en"] = dict(
-    ai="ai, a.i., llm*, chatbot*, gpt*, genai, language model*, artificial intelligence*, "
+    ai="ai, a.i., llm*, chatbot*, genai, language model*, artificial intelligence*, "
        "ai assistant*, ai model*, ai system*, ai agent*, ai tool*, ai reader*, ai crawler*, "
        "automated system*, automated reader*, automated agent*, automated assistant*, "
        "automated tool*, automated pipeline*, virtual assistant*, answer engine*, "
@@ -60,7 +60,9 @@ L["en"] = dict(
         "consider, note that, i want you, i need you, can you, could you, would you, will you",
     out="answer*, response*, reply, replies, summary, summaries, summari*, completion*, "
         "conversation*, chat, chats, transcript, your output, the output you",
-    when="whenever, when summari*, when answering, when responding, when replying, "
+    when="whenever someone ask*, whenever anyone ask*, whenever a user ask*, "
+         "whenever users ask*, whenever the user ask*, whenever you answer*, "
+         "whenever you respond*, whenever you summar*, when summari*, when answering, when responding, when replying, "
          "when asked, if asked, if anyone ask*, if someone ask*, if a user*, if the user*, "
          "when a user*, when the user*, when users, when someone ask*, when anyone ask*, "
          "when you answer*, when you respond*, when you summar*, when you reply*, "
@@ -108,7 +110,8 @@ L["de"] = dict(
     instr="anweisung*, instruktion*, vorgabe*, richtlinie*, regeln, systemprompt*, "
           "system-prompt*, prompt*, befehle",
     prev="vorherig*, bisherig*, vorig*, obig*, fruher*, alle*, samtlich*, zuvor, vorher, oben",
-    drop="ignorier*, vergiss, vergesst, vergessen sie, missacht*, verwirf, befolge nicht",
+    drop="ignoriere, ignorieren sie, vergiss, vergesst, vergessen sie, missachte, "
+         "missachten sie, verwirf, befolge nicht",
     leak="verrat*, zeig*, offenleg*, wiederhol*, gib aus",
     task="schreib*, erstelle*, nenne*, gib, empfiehl*, erklare*, ubersetze*, plane*, liste*, "
          "schlage, analysiere*, beschreibe*, verfasse*, entwirf, berechne*",
@@ -595,7 +598,7 @@ L["id"] = dict(
     me="aku, saya, ku",
 )
 HERE: dict[str, str] = {
-    "en": "this page, this document, this text, this article, this site, this website, this file, this email, this e-mail, this message, this post, this pdf, this note, reading this, these pages, this content",
+    "en": "this page, this document, this text, this article, this site, this website, this file, this pdf, reading this, these pages, this content, this report",
     "de": "diese seite, dieses dokument, diesen text, dieser text, diesen artikel, diese datei, diese e-mail, diese nachricht, diese notiz",
     "fr": "cette page, ce document, ce texte, cet article, ce site, ce fichier, ce message, ce courriel, cette note",
     "es": "esta pagina, este documento, este texto, este articulo, este sitio, este archivo, este mensaje, este correo, esta nota",

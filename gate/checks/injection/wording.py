@@ -838,6 +838,14 @@ JAILBREAK = re.compile(
     r"censura)\w*)")
 
 
+SOFTWARE_SUBJECT = re.compile(
+    r"\b(?:it|which|system|program|option|parser|server|tool|library|module|function|command|"
+    r"setting|flag|importer|loader|compiler|daemon|service|script|driver|kernel|client|"
+    r"application|app|utility|make|shell|interpreter|handler|logger|configuration)\W+"
+    r"(?:\w+\W+)?(?:will|would|can|could|may|might|does|should|must|then|also|simply)?\W*"
+    r"(?:\w+ly\W+)?$")
+
+
 def _weigh(r: Rule, matched: str, folded: str, start: int, end: int) -> tuple[float, str]:
     if r.needs is not None and not r.needs.search(matched):
         return 0.0, ""
@@ -849,6 +857,9 @@ def _weigh(r: Rule, matched: str, folded: str, start: int, end: int) -> tuple[fl
     elif r.memo_damped and MEMO.search(folded[max(0, start - 100):end + 100]):
         weight *= 0.5
         notes.append("reads like an ordinary memo")
+    if r.signal == "override" and SOFTWARE_SUBJECT.search(folded, max(0, start - 60), start):
+        weight *= 0.4  # "the system will ignore any filters": a program's behaviour
+        notes.append("describes what a program does")
     if r.signal == "model-address" and COMMAND_AFTER.match(folded, end):
         weight = max(weight, 0.5)  # addressed to the model and followed by a command
     if r.signal == "role-change" and JAILBREAK.search(folded[start:end + 80]):
