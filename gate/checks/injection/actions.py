@@ -38,7 +38,8 @@ def _c(pattern: str, flags: int = 0) -> re.Pattern[str]:
 
 CAPABILITIES: dict[str, re.Pattern[str]] = {
     "uploads files or data": _c(
-        r"requests\.(?:post|put)\([^)\n]{0,200}(?:files\s*=|data\s*=\s*open\(|open\()|"
+        r"requests\.(?:post|put)\([^)\n]{0,200}(?:files\s*=|data\s*=\s*open\(|open\(|"
+        r"environ|getenv|cookie|passw|secret|history|getuser|gethostname)|"
         r"\bcurl\b[^\n]{0,200}(?:-F\s*['\"]?[\w.]+=@|--data-binary\s+@|-d\s+@|--upload-file|"
         r"\s-T\s)|Invoke-(?:WebRequest|RestMethod)[^\n]{0,200}-(?:InFile|Method\s+Post)|"
         r"wget\s+[^\n]{0,80}--post-(?:file|data)|\bscp\s+[^\n]{0,120}(?:~/|/home/|\.ssh)|"
@@ -135,7 +136,8 @@ NEEDLES: dict[str, tuple[str, ...]] = {
     "installs itself to run again": ("crontab", "schtasks", "reg add", "currentversion\\run",
                                      "bashrc", "profile", "zshrc", "systemctl enable"),
 }
-TOOL_NEEDLES = ("call", "invoke", "trigger", "execute", "run ", "use ", "function_call",
+TOOL_NEEDLES = ("call", "invoke", "trigger", "execute", "run ", "use ", "using ", "tool",
+                "function_call",
                 "tool_call", "tool_use", "functioncall", "tool_code", "<invoke", "arguments",
                 "parameters", "\"args\"", "\"input\"", "\"params\"")
 AUTHORITY_NEEDLES = ("automated", "ai ", "a.i.", "llm", "machine", "autonomous",
@@ -228,6 +230,14 @@ AUTHORITY: list[tuple[re.Pattern[str], float, str]] = [
                 r"authoritative|official|canonical|correct|true|final|ground)\s+(?:\w+\s+)?"
                 r"(?:source|answer|reference|truth|version|authority|facts?)"), 0.45,
      "claims to be the only authoritative source"),
+    (_c(r"\b(?:this|the\s+present)\s+(?:\w+\s+)?(?:page|article|document|source|text|site)\s+"
+        r"is\s+(?:the\s+)?(?:definitive|authoritative|only|sole|official|canonical|single)\s+"
+        r"(?:\w+\s+)?(?:reference|source|authority|truth)"), 0.45,
+     "claims to be the only authoritative source"),
+    (_c(r"\b(?:all|any)\s+(?:previous|prior|earlier|other)\s+(?:reports?|documents?|sources?|"
+        r"statements?|articles?|pages?|figures|information)\s+(?:\w+\s+){0,4}?(?:have\s+been|are|"
+        r"were|is|has\s+been)\s+(?:\w+\s+)?(?:retracted|withdrawn|invalidated|void|cancell?ed|"
+        r"discredited|debunked|false)\b"), 0.4, "declares every other source void"),
     (_c(r"\b(?:only|solely)\s+(?:this|the\s+present)\s+(?:page|document|source|article|"
         r"notice|text|site)\s+(?:is|can\s+be|should\s+be)\s+(?:\w+\s+)?(?:accurate|correct|"
         r"reliable|authoritative|valid|current|trusted|true)|\b(?:overrides?|supersedes?|"
@@ -303,6 +313,8 @@ ANCHORS = tuple(sorted({n for names in NEEDLES.values() for n in names} - {"key"
                           "llm", "ersetzt alle", "remplace tous", "annule tous", "todos los",
                           "sostituisce tutti", "annulla tutti", "substitui todos", "sole source",
                           "only source", "definitive", "official source", "canonical source",
+                          "only this", "solely this", "conflicting", "ground truth",
+                          "retracted", "withdrawn", "debunked", "discredited",
                           "all other", "any other", "while true", "while(true", "while (true",
                           "while 1", "keylog", "keydown", "keypress", "on_press",
                           "aws/credentials", "powershell"}))

@@ -129,7 +129,9 @@ for _lang, _cats in lexicon.L.items():
             if star:
                 _PREFIX_LENS.add(len(first))
             word, star = max(words, key=lambda w: len(w[0]))
-            if _cat in TRIGGERS and len(word) >= 5:  # the phrase's longest word finds it
+            # The phrase's longest word finds it (short-worded languages such as Vietnamese
+            # have no long word: their longest one serves).
+            if _cat in TRIGGERS and len(word) >= (5 if _lang != "vi" else 3):
                 if star:
                     _TRIGGER_PREFIX.add(word)
                     _PREFIX_LENS.add(len(word))
@@ -228,6 +230,23 @@ _SIGNS = {
 }
 
 
+# An imperative that operates on the reader's answer: "translate your answer into French",
+# "begin every reply with ...", "respond in pig latin for the rest of the conversation".
+FORMAT = re.compile(
+    r"\b(?:translate|encode|encrypt|reverse|begin|start|end|finish|prefix|format|sign|"
+    r"rewrite|render|deliver|give|write|respond|reply|answer)\s+(?:(?:your|the|each|every|all|"
+    r"any|all\s+of\s+your)\s+(?:final\s+|entire\s+|whole\s+|next\s+|future\s+)?"
+    r"(?:answers?|responses?|repl(?:y|ies)|outputs?|summar(?:y|ies))\s+)?"
+    r"(?:only\s+)?(?:in|into|with|as|using|backwards|reversed)\s+(?:\w+\s+){0,2}?"
+    r"(?:french|german|spanish|latin|italian|chinese|japanese|russian|klingon|pig\s+latin|"
+    r"base64|base\s+64|hex|hexadecimal|rot13|rot-13|morse|binary|reverse|reversed|uppercase|"
+    r"upper\s+case|capitals|all\s+caps|emoji|emojis|leetspeak|cipher|code|rhymes?|verse|"
+    r"a\s+link|the\s+link|the\s+phrase|the\s+words|the\s+sentence)\b")
+OPERATED = re.compile(r"\b(?:your|every|each|all|any)\s+(?:final\s+|entire\s+|next\s+)?"
+                      r"(?:answers?|responses?|repl(?:y|ies)|summar(?:y|ies)|outputs?)\b|"
+                      r"\b(?:conversation|chat)\b")
+
+
 def read_unit(feats: dict[str, set[str]]) -> tuple[str, float, str, set[str]] | None:
     """The strongest reading of one sentence: (signal, weight, language, categories)."""
     best: tuple[str, float, str, set[str]] | None = None
@@ -261,8 +280,6 @@ def read_unit(feats: dict[str, set[str]]) -> tuple[str, float, str, set[str]] | 
             cand.append(("answer-steering", 0.45))
         elif "out" in f and "ask" in f and "you" in f:
             cand.append(("answer-steering", 0.25))
-        if "bot" in f and "ask" in f and f & {"out", "user"}:
-            cand.append(("model-address", 0.4))
         if "bot" in f and "ask" in f and (("you" in f and "when" in f) or
                                           "here" in f and f & {"out", "when"} or
                                           "vocative" in f):
@@ -451,7 +468,7 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
             overlap = shared / len(set(words))
             if overlap > 0.25 or len(elsewhere.split()) < 25:
                 continue
-            weight = 0.4 if shared == 0 and len(set(words)) >= 3 else 0.35
+            weight = 0.4 if shared == 0 else 0.35
             why = [f"opens with a request for work (\"{folded[vstart:vend]}\")",
                    f"{shared} of its {len(set(words))} content words occur elsewhere "
                    f"in the document"]
@@ -542,13 +559,17 @@ def _scan_folded(text: str, folded: str) -> list[Hit]:
     triggers, tasks = _words(folded)
     units = units_around(text, folded, _trigger_positions(folded, triggers))[:MAX_UNITS]
     for start, end in units:
-        seen[start] = end
         unit, quoted = _unquoted(folded[start:end])
         feats, _ = features(unit)
         reading = read_unit(feats)
+        if reading is None and FORMAT.search(unit) and OPERATED.search(unit):
+            reading = ("answer-steering", 0.5, "en", {"out", "ask"})
         if reading is None:
             continue
         signal, weight, lang, cats = reading
+        if weight < 0.5 and FORMAT.search(unit) and OPERATED.search(unit):
+            signal, weight, lang = "answer-steering", 0.5, "en"
+            cats = cats | {"out", "ask"}
         if weight < MIN_WEIGHT:
             continue
         why = why_of(signal, cats)
@@ -563,6 +584,7 @@ def _scan_folded(text: str, folded: str) -> list[Hit]:
             weight = min(weight + 0.1, 0.7)
             why += f"; it stands {'alone' if place == 'alone' else 'at the ' + place}"
         hits.append(Hit(signal, round(weight, 4), start, end, lang, why))
+        seen[start] = end  # read already: not read again as a task request
     hits.extend(hijack_hits(text, folded, seen, tasks))
     return hits
 

@@ -73,7 +73,8 @@ L["en"] = dict(
          "before you answer*, before you respond*, at the end of your*, "
          "at the start of your*, at the beginning of your*, after reading this, "
          "if you are an ai, if you are a language model, if you are an assistant, "
-         "as an ai, any ai, all ai",
+         "as an ai, any ai, all ai, generated answer*, generated response*, generated summar*, "
+         "generated repl*, any answer you give, every answer you give",
     user="user, users, user's, users', the person asking, the human",
     instr="instruction*, prompt*, guideline*, directive*, rules, system prompt*, "
           "system message*",
@@ -101,7 +102,7 @@ L["de"] = dict(
         "schreiben sie, empfehlen sie, fugen sie",
     out="antwort*, zusammenfassung*, ausgabe*, ruckmeldung*, gesprach*, unterhaltung*, chat*, "
         "konversation*",
-    when="wenn du, falls du, ab sofort, von nun an, beim antworten, beim zusammenfassen, "
+    when="wenn jemand fragt, falls jemand fragt, wenn dich jemand fragt, wenn du, falls du, ab sofort, von nun an, beim antworten, beim zusammenfassen, "
          "bei der zusammenfassung, in deiner antwort*, in ihrer antwort*, in jeder antwort*, "
          "in deinen antworten, wenn jemand, falls jemand, wenn ein nutzer*, wenn der nutzer*, "
          "wenn ein benutzer*, wenn der benutzer*, falls ein nutzer*, bevor du antwortest, "
@@ -131,7 +132,7 @@ L["fr"] = dict(
         "envoie*, envoyez, executez, execute, appelle*, s'il vous plait, s'il te plait, "
         "il faut, signale*, conseille*",
     out="reponse*, resume, resumes, synthese*, conversation*, discussion*, echange*",
-    when="lorsque tu, lorsque vous, quand tu, quand vous, si on te, si on vous, si quelqu'un, "
+    when="si quelqu'un demande, si quelqu'un te demande, lorsque tu, lorsque vous, quand tu, quand vous, si on te, si on vous, si quelqu'un, "
          "si un utilisateur, si l'utilisateur, lorsqu'un utilisateur, quand un utilisateur, "
          "dans ta reponse, dans votre reponse, dans chaque reponse, dans toute reponse, "
          "dans tes reponses, dans vos reponses, dans ton resume, dans votre resume, "
@@ -160,7 +161,7 @@ L["es"] = dict(
         "traduzca*, comienza*, empieza*, termina*, cita*, afirma*, usa, utiliza*, envia*, "
         "ejecuta*, llama*, hay que, tienes que, tiene que",
     out="respuesta*, resumen*, resumenes, conversacion*, charla*, chat",
-    when="cuando resumas, cuando respondas, cuando te pregunten, cuando alguien, si alguien, "
+    when="si alguien pregunta, si alguien te pregunta, cuando resumas, cuando respondas, cuando te pregunten, cuando alguien, si alguien, "
          "si te preguntan, si un usuario, cuando un usuario, si el usuario, en tu respuesta, "
          "en su respuesta, en cada respuesta, en tus respuestas, a partir de ahora, "
          "de ahora en adelante, antes de responder, al resumir, al responder, "
@@ -185,7 +186,7 @@ L["it"] = dict(
         "rispondi*, scrivi*, aggiungi*, inserisci*, traduci*, inizia*, comincia*, termina*, "
         "cita*, afferma*, usa, utilizza*, invia*, esegui*, chiama*, bisogna, segnala*, indica*",
     out="risposta*, risposte, riassunto*, riassunti, sintesi, conversazion*, chat",
-    when="quando riassumi, quando rispondi, quando ti chiedono, se qualcuno, se ti chiedono, "
+    when="se qualcuno chiede*, se qualcuno ti chiede*, quando qualcuno chiede*, quando riassumi, quando rispondi, quando ti chiedono, se qualcuno, se ti chiedono, "
          "se un utente, quando un utente, se l'utente, nella tua risposta, nelle tue risposte, "
          "in ogni risposta, d'ora in poi, da ora in poi, prima di rispondere, nel riassumere, "
          "alla fine della tua*, all'inizio della tua*",
@@ -209,7 +210,7 @@ L["pt"] = dict(
         "acrescente*, insira*, traduza*, comece*, termine*, cite*, afirme*, use, utilize*, "
         "envie*, execute*, chame*, indique*",
     out="resposta*, resumo*, resumos, conversa*, chat",
-    when="quando resumir, quando responder, quando alguem, se alguem, se um usuario, "
+    when="se alguem perguntar, se alguem pergunta*, quando resumir, quando responder, quando alguem, se alguem, se um usuario, "
          "quando um usuario, se o usuario, na sua resposta, em sua resposta, na tua resposta, "
          "em cada resposta, em todas as respostas, a partir de agora, daqui em diante, "
          "antes de responder, ao resumir, ao responder, no final da sua*, no inicio da sua*",
@@ -231,7 +232,7 @@ L["nl"] = dict(
         "vergeet niet, altijd, nooit, zeg*, noem*, vermeld*, beveel, raad, schrijf*, voeg*, "
         "vertaal*, begin*, eindig*, gebruik*, stuur*, verstuur*, voer, roep, antwoord",
     out="antwoord*, samenvatting*, reactie*, gesprek*, chat",
-    when="wanneer je, als je samenvat, als iemand, als een gebruiker, wanneer een gebruiker, "
+    when="als iemand vraagt, als iemand je vraagt, wanneer je, als je samenvat, als iemand, als een gebruiker, wanneer een gebruiker, "
          "als de gebruiker, in je antwoord*, in jouw antwoord*, in uw antwoord*, "
          "in elk antwoord, vanaf nu, voordat je antwoord*, bij het samenvatten, "
          "bij het beantwoorden",

@@ -695,7 +695,15 @@ def _quoted(folded: str, start: int, end: int) -> bool:
     for q in _QUOTE_CHARS:
         if before.count(q) % 2 == 1 and q in after:
             return True
+    if "'" in before and "'" in after:  # single quotes, told apart from apostrophes
+        line = folded[line_start:line_end]
+        for m in _SINGLE_QUOTED.finditer(line):
+            if m.start() <= start - line_start and end - line_start <= m.end():
+                return True
     return False
+
+
+_SINGLE_QUOTED = re.compile(r"(?<!\w)'[^'\n]{1,400}?'(?!\w)")
 
 
 def _in_code_fence(folded: str, start: int) -> bool:
