@@ -847,9 +847,9 @@ JAILBREAK = re.compile(
 
 
 SOFTWARE_SUBJECT = re.compile(
-    r"\b(?:it|which|system|program|option|parser|server|tool|library|module|function|command|"
-    r"setting|flag|importer|loader|compiler|daemon|service|script|driver|kernel|client|"
-    r"application|app|utility|make|shell|interpreter|handler|logger|configuration)\W+"
+    r"\b(?:system|program|option|parser|server|library|module|function|command|"
+    r"setting|flag|importer|loader|compiler|daemon|service|script|driver|kernel|"
+    r"application|utility|interpreter|handler|logger)\W+"
     r"(?:\w+\W+)?(?:will|would|can|could|may|might|does|should|must|then|also|simply)?\W*"
     r"(?:\w+ly\W+)?$")
 
