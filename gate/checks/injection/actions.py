@@ -287,11 +287,13 @@ def _capabilities(low: str) -> list[tuple[int, int, str]]:
     return found
 
 
-def scan(text: str) -> list[ActionHit]:
-    """Every harmful-code, tool-call and authority-claim hit in ``text``."""
-    full = lfold(text[:MAX_CHARS])
+def scan(text: str, folded: str | None = None,
+         words: set[str] | None = None) -> list[ActionHit]:
+    """Every harmful-code, tool-call and authority-claim hit in ``text`` (``folded`` and
+    ``words`` as for :func:`.directive.scan`)."""
+    full = lfold(text[:MAX_CHARS]) if folded is None else folded[:MAX_CHARS]
     hits: list[ActionHit] = []
-    for a, b in _windows(full):
+    for a, b in _windows(full, words):
         low = full[a:b]
         for hit in _scan_window(text[a:b], low):
             hit.start += a
@@ -327,10 +329,10 @@ def _stem(anchor: str) -> str:
 _ANCHOR_STEMS = [(_stem(a), a) for a in ANCHORS]
 
 
-def _windows(low: str) -> list[tuple[int, int]]:
+def _windows(low: str, words: set[str] | None = None) -> list[tuple[int, int]]:
     """Stretches of the text around the anchor words; the rest is not scanned."""
     spans: list[tuple[int, int]] = []
-    stems = {w[:5] for w in words_of(low)}
+    stems = {w[:5] for w in (words_of(low) if words is None else words)}
     for stem, needle in _ANCHOR_STEMS:
         if stem not in stems:
             continue

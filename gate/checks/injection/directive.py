@@ -392,16 +392,17 @@ _OBJECT = re.compile(
     r"пять|tri|o|trei|egy|harom|ena|μια|ενα|τρια|bir|uc|bes|sebuah|tiga|lima|mot|ba)\b")
 
 
-def _occurrences(folded: str, word: str, limit: int) -> list[int]:
-    """Where ``word`` occurs as a whole word (str.find: much faster than a regex here)."""
+def _occurrences(folded: str, word: str, limit: int, prefix: bool = False) -> list[int]:
+    """Where ``word`` occurs as a whole word, or starts one with ``prefix`` (str.find:
+    much faster than a regular expression here)."""
     out: list[int] = []
     at = folded.find(word)
     n = len(word)
     while at >= 0 and len(out) < limit:
         before = folded[at - 1] if at else " "
         after = folded[at + n] if at + n < len(folded) else " "
-        if not (before.isalnum() or before in "_\x00") and not (after.isalnum() or
-                                                                after in "_\x00"):
+        if not (before.isalnum() or before in "_\x00") and (prefix or not (
+                after.isalnum() or after in "_\x00")):
             out.append(at)
         at = folded.find(word, at + n)
     return out
@@ -488,25 +489,48 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
 
 # -- the scan -----------------------------------------------------------------------------------
 
-def _words(folded: str) -> tuple[set[str], set[str]]:
-    """The distinct words that trigger a sentence reading, and those that open a task."""
-    triggers: set[str] = set()
-    tasks: set[str] = set()
-    for t in words_of(folded):
-        if t in _TRIGGER_EXACT:
-            triggers.add(t)
-        elif any(t[:n] in _TRIGGER_PREFIX for n in _PREFIX_LENS_SORTED if n <= len(t)):
-            triggers.add(t)
-        if t in _TASK_EXACT or any(t[:n] in _TASK_PREFIX for n in _PREFIX_LENS_SORTED
-                                   if n <= len(t)):
-            tasks.add(t)
+def _by_length(stems: set[str]) -> dict[int, frozenset[str]]:
+    out: dict[int, set[str]] = {}
+    for stem in stems:
+        out.setdefault(len(stem), set()).add(stem)
+    return {n: frozenset(v) for n, v in out.items()}
+
+
+STEM = 5  # long prefixes are looked up by their first five characters
+_TRIGGER_PREFIX_BY_LEN = _by_length({p[:STEM] for p in _TRIGGER_PREFIX})
+_TASK_PREFIX_BY_LEN = _by_length({p[:STEM] for p in _TASK_PREFIX})
+
+
+def _words(folded: str, words: set[str] | None = None) -> tuple[set[str], set[str]]:
+    """What to look for: trigger words and prefixes, and the words that open a task.
+
+    Set operations over the distinct words, one per prefix length, rather than a loop
+    over the words: ordinary text costs a few set intersections.
+    """
+    if words is None:
+        words = words_of(folded)
+    triggers = words & _TRIGGER_EXACT
+    tasks = words & _TASK_EXACT
+    for n, stems in _TRIGGER_PREFIX_BY_LEN.items():
+        found = {w[:n] for w in words if len(w) >= n} & stems
+        triggers |= {_PREFIX_MARK + f for f in found}
+    for n, stems in _TASK_PREFIX_BY_LEN.items():
+        found = {w[:n] for w in words if len(w) >= n} & stems
+        if found:
+            tasks |= {w for w in words if w[:n] in found}
     return triggers, tasks
+
+
+_PREFIX_MARK = "\x01"  # marks a trigger that is a word prefix, not a whole word
 
 
 def _trigger_positions(folded: str, words: set[str]) -> list[int]:
     positions: list[int] = []
     for w in sorted(words):
-        positions.extend(_occurrences(folded, w, MAX_POSITIONS))
+        if w.startswith(_PREFIX_MARK):
+            positions.extend(_occurrences(folded, w[1:], MAX_POSITIONS, prefix=True))
+        else:
+            positions.extend(_occurrences(folded, w, MAX_POSITIONS))
         if len(positions) >= MAX_UNITS:
             break
     if _SUB_SCRIPT.search(folded):
@@ -517,11 +541,15 @@ def _trigger_positions(folded: str, words: set[str]) -> list[int]:
     return sorted(set(positions))
 
 
-def scan(text: str) -> list[Hit]:
-    """Every sentence of ``text`` that reads as an instruction to the model reading it."""
+def scan(text: str, folded: str | None = None, words: set[str] | None = None) -> list[Hit]:
+    """Every sentence of ``text`` that reads as an instruction to the model reading it.
+
+    ``folded`` and ``words`` (:func:`.lexicon.lfold` of the text and its
+    :func:`.lexicon.words_of`) may be passed when the caller has them already.
+    """
     text = text[:MAX_CHARS]
-    folded = lfold(text)
-    hits = _scan_folded(text, folded)
+    folded = lfold(text) if folded is None else folded[:MAX_CHARS]
+    hits = _scan_folded(text, folded, words)
     if ALTERNATE_MIN_LINES <= text.count("\n") and len(text) <= ALTERNATE_MAX_CHARS:
         hits.extend(_alternate(text, hits))
     return hits
@@ -553,10 +581,10 @@ def _unquoted(unit: str) -> tuple[str, bool]:
     return blanked, False
 
 
-def _scan_folded(text: str, folded: str) -> list[Hit]:
+def _scan_folded(text: str, folded: str, words: set[str] | None = None) -> list[Hit]:
     hits: list[Hit] = []
     seen: dict[int, int] = {}
-    triggers, tasks = _words(folded)
+    triggers, tasks = _words(folded, words)
     units = units_around(text, folded, _trigger_positions(folded, triggers))[:MAX_UNITS]
     for start, end in units:
         unit, quoted = _unquoted(folded[start:end])

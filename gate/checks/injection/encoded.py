@@ -86,12 +86,17 @@ def _long_runs(text: str, pattern: re.Pattern[str]):
             yield _Span(text, at + m.start(), at + m.end())
 
 
-_HEXISH = re.compile(r"[0-9A-Fa-f]{24}|(?:[0-9A-Fa-f]{2}[ :]){4}")
+_HEX_CLASSES = bytes(104 if chr(c) in "0123456789abcdefABCDEF" else 115 if c in b" :" else 120
+                     for c in range(256))  # hex digit -> "h", separator -> "s", other -> "x"
 
 
 def _maybe_hex(text: str) -> bool:
+    """A run of 24 hex digits, or four pairs with separators (bytes.translate: fast)."""
     digits = sum(map(text.count, "0123456789"))
-    return digits >= 12 and _HEXISH.search(text) is not None
+    if digits < 12:
+        return False
+    classes = text.encode("utf-8", "ignore").translate(_HEX_CLASSES)
+    return b"h" * 24 in classes or b"hhshhshhshhs" in classes
 
 
 @dataclass

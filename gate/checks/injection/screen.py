@@ -24,6 +24,7 @@ from typing import Any
 
 from gate.checks.injection import actions, directive, encoded, exfil, html_hidden, \
     pdf_hidden, score, unicode, wording
+from gate.checks.injection.lexicon import lfold, words_of
 from gate.checks.injection.normalize import View, fold, visible
 from gate.extract.model import Extraction
 
@@ -205,13 +206,14 @@ class Screen:
                    phrase_hits: list[dict[str, Any]]) -> list[dict[str, Any]]:
         """Sentence readings (:mod:`.directive`) and action patterns (:mod:`.actions`)."""
         found: list[tuple[str, float, int, int, str, str | None, dict[str, Any] | None]] = []
-        for d in directive.scan(text):
+        folded = lfold(text[:max(directive.MAX_CHARS, actions.MAX_CHARS)])
+        words = words_of(folded)
+        for d in directive.scan(text, folded, words):
             found.append((d.signal, d.weight, d.start, d.end, d.why, d.lang or None, None))
-        for a in actions.scan(text):
+        for a in actions.scan(text, folded, words):
             found.append((a.signal, a.weight, a.start, a.end, a.why, None, a.detail or None))
         if not found:
             return []
-        folded = directive.lfold(text[:directive.MAX_CHARS])
         out = []
         by_span = [(h["segment_span"][0], h["segment_span"][1], h) for h in phrase_hits]
         for signal, weight, start, end, why, lang, detail in found:
