@@ -277,8 +277,9 @@ def main(argv: list[str] | None = None) -> int:
         report_blind(bresults, verbose=args.verbose)
         ext = sum(r["extraction_s"] for r in bresults)
         det = sum(r["detector_s"] for r in bresults)
-        print(f"\nblind set time: extraction {ext * 1000 / len(bresults):.2f} ms/doc, detectors "
-              f"{det * 1000 / len(bresults):.2f} ms/doc ({det / (ext + det) * 100:.0f}% of the two)")
+        n = len(bresults)
+        print(f"\nblind set time: extraction {ext * 1000 / n:.2f} ms/doc, detectors "
+              f"{det * 1000 / n:.2f} ms/doc ({det / (ext + det) * 100:.0f}% of the two)")
     return 0
 
 

@@ -53,7 +53,8 @@ L["en"] = dict(
     ask="please, must, should, shall, always, never, ensure, make sure, be sure, "
         "remember to, do not, don't, dont, need to, have to, are required, is required, "
         "it is essential, it is important, it is mandatory, tell, say, mention*, include, "
-        "recommend, respond, write, add, insert, state, claim, describe, print, translate, encode, reverse, append, begin, start, end, finish, "
+        "recommend, respond, write, add, insert, state, claim, describe, print, translate, "
+        "encode, reverse, append, begin, start, end, finish, "
         "avoid, refrain, emphasi*, highlight, promote, praise, suggest, cite, link, insist, "
         "call, run, execute, send, forward, visit, direct, redirect, return, rate, rank, "
         "present, portray, frame, refer, point, urge, advise, inform, instruct*, treat, "
@@ -62,7 +63,8 @@ L["en"] = dict(
         "conversation*, chat, chats, transcript, your output, the output you",
     when="whenever someone ask*, whenever anyone ask*, whenever a user ask*, "
          "whenever users ask*, whenever the user ask*, whenever you answer*, "
-         "whenever you respond*, whenever you summar*, when summari*, when answering, when responding, when replying, "
+         "whenever you respond*, whenever you summar*, when summari*, when answering, "
+         "when responding, when replying, "
          "when asked, if asked, if anyone ask*, if someone ask*, if a user*, if the user*, "
          "when a user*, when the user*, when users, when someone ask*, when anyone ask*, "
          "when you answer*, when you respond*, when you summar*, when you reply*, "
@@ -102,7 +104,8 @@ L["de"] = dict(
         "schreiben sie, empfehlen sie, fugen sie",
     out="antwort*, zusammenfassung*, ausgabe*, ruckmeldung*, gesprach*, unterhaltung*, chat*, "
         "konversation*",
-    when="wenn jemand fragt, falls jemand fragt, wenn dich jemand fragt, wenn du, falls du, ab sofort, von nun an, beim antworten, beim zusammenfassen, "
+    when="wenn jemand fragt, falls jemand fragt, wenn dich jemand fragt, wenn du, falls du, "
+         "ab sofort, von nun an, beim antworten, beim zusammenfassen, "
          "bei der zusammenfassung, in deiner antwort*, in ihrer antwort*, in jeder antwort*, "
          "in deinen antworten, wenn jemand, falls jemand, wenn ein nutzer*, wenn der nutzer*, "
          "wenn ein benutzer*, wenn der benutzer*, falls ein nutzer*, bevor du antwortest, "
@@ -132,7 +135,8 @@ L["fr"] = dict(
         "envoie*, envoyez, executez, execute, appelle*, s'il vous plait, s'il te plait, "
         "il faut, signale*, conseille*",
     out="reponse*, resume, resumes, synthese*, conversation*, discussion*, echange*",
-    when="si quelqu'un demande, si quelqu'un te demande, lorsque tu, lorsque vous, quand tu, quand vous, si on te, si on vous, si quelqu'un, "
+    when="si quelqu'un demande, si quelqu'un te demande, lorsque tu, lorsque vous, quand tu, "
+         "quand vous, si on te, si on vous, si quelqu'un, "
          "si un utilisateur, si l'utilisateur, lorsqu'un utilisateur, quand un utilisateur, "
          "dans ta reponse, dans votre reponse, dans chaque reponse, dans toute reponse, "
          "dans tes reponses, dans vos reponses, dans ton resume, dans votre resume, "
@@ -161,7 +165,8 @@ L["es"] = dict(
         "traduzca*, comienza*, empieza*, termina*, cita*, afirma*, usa, utiliza*, envia*, "
         "ejecuta*, llama*, hay que, tienes que, tiene que",
     out="respuesta*, resumen*, resumenes, conversacion*, charla*, chat",
-    when="si alguien pregunta, si alguien te pregunta, cuando resumas, cuando respondas, cuando te pregunten, cuando alguien, si alguien, "
+    when="si alguien pregunta, si alguien te pregunta, cuando resumas, cuando respondas, "
+         "cuando te pregunten, cuando alguien, si alguien, "
          "si te preguntan, si un usuario, cuando un usuario, si el usuario, en tu respuesta, "
          "en su respuesta, en cada respuesta, en tus respuestas, a partir de ahora, "
          "de ahora en adelante, antes de responder, al resumir, al responder, "
@@ -186,7 +191,8 @@ L["it"] = dict(
         "rispondi*, scrivi*, aggiungi*, inserisci*, traduci*, inizia*, comincia*, termina*, "
         "cita*, afferma*, usa, utilizza*, invia*, esegui*, chiama*, bisogna, segnala*, indica*",
     out="risposta*, risposte, riassunto*, riassunti, sintesi, conversazion*, chat",
-    when="se qualcuno chiede*, se qualcuno ti chiede*, quando qualcuno chiede*, quando riassumi, quando rispondi, quando ti chiedono, se qualcuno, se ti chiedono, "
+    when="se qualcuno chiede*, se qualcuno ti chiede*, quando qualcuno chiede*, quando riassumi, "
+         "quando rispondi, quando ti chiedono, se qualcuno, se ti chiedono, "
          "se un utente, quando un utente, se l'utente, nella tua risposta, nelle tue risposte, "
          "in ogni risposta, d'ora in poi, da ora in poi, prima di rispondere, nel riassumere, "
          "alla fine della tua*, all'inizio della tua*",
@@ -210,7 +216,8 @@ L["pt"] = dict(
         "acrescente*, insira*, traduza*, comece*, termine*, cite*, afirme*, use, utilize*, "
         "envie*, execute*, chame*, indique*",
     out="resposta*, resumo*, resumos, conversa*, chat",
-    when="se alguem perguntar, se alguem pergunta*, quando resumir, quando responder, quando alguem, se alguem, se um usuario, "
+    when="se alguem perguntar, se alguem pergunta*, quando resumir, quando responder, "
+         "quando alguem, se alguem, se um usuario, "
          "quando um usuario, se o usuario, na sua resposta, em sua resposta, na tua resposta, "
          "em cada resposta, em todas as respostas, a partir de agora, daqui em diante, "
          "antes de responder, ao resumir, ao responder, no final da sua*, no inicio da sua*",
@@ -232,7 +239,8 @@ L["nl"] = dict(
         "vergeet niet, altijd, nooit, zeg*, noem*, vermeld*, beveel, raad, schrijf*, voeg*, "
         "vertaal*, begin*, eindig*, gebruik*, stuur*, verstuur*, voer, roep, antwoord",
     out="antwoord*, samenvatting*, reactie*, gesprek*, chat",
-    when="als iemand vraagt, als iemand je vraagt, wanneer je, als je samenvat, als iemand, als een gebruiker, wanneer een gebruiker, "
+    when="als iemand vraagt, als iemand je vraagt, wanneer je, als je samenvat, als iemand, "
+         "als een gebruiker, wanneer een gebruiker, "
          "als de gebruiker, in je antwoord*, in jouw antwoord*, in uw antwoord*, "
          "in elk antwoord, vanaf nu, voordat je antwoord*, bij het samenvatten, "
          "bij het beantwoorden",
@@ -599,17 +607,28 @@ L["id"] = dict(
     me="aku, saya, ku",
 )
 HERE: dict[str, str] = {
-    "en": "this page, this document, this text, this article, this site, this website, this file, this pdf, reading this, these pages, this content, this report",
-    "de": "diese seite, dieses dokument, diesen text, dieser text, diesen artikel, diese datei, diese e-mail, diese nachricht, diese notiz",
-    "fr": "cette page, ce document, ce texte, cet article, ce site, ce fichier, ce message, ce courriel, cette note",
-    "es": "esta pagina, este documento, este texto, este articulo, este sitio, este archivo, este mensaje, este correo, esta nota",
-    "it": "questa pagina, questo documento, questo testo, questo articolo, questo sito, questo file, questo messaggio, questa nota",
-    "pt": "esta pagina, este documento, este texto, este artigo, este site, este arquivo, esta mensagem, esta nota",
-    "nl": "deze pagina, dit document, deze tekst, dit artikel, deze site, dit bestand, dit bericht, deze notitie",
-    "pl": "ta strona, tej strony, ten dokument, tego dokumentu, ten tekst, tego tekstu, ten artykul, ta notatka",
-    "sv": "den har sidan, detta dokument, denna text, den har texten, denna artikel, detta meddelande",
-    "ru": "эту страницу, этой страницы, эта страница, этот документ, этого документа, этот текст, этого текста, эту статью, эта заметка, эту заметку",
-    "uk": "цю сторінку, ціеі сторінки, цеи документ, цього документа, цеи текст, цього тексту, цю статтю",
+    "en": "this page, this document, this text, this article, this site, this website, "
+          "this file, this pdf, reading this, these pages, this content, this report",
+    "de": "diese seite, dieses dokument, diesen text, dieser text, diesen artikel, diese datei, "
+          "diese e-mail, diese nachricht, diese notiz",
+    "fr": "cette page, ce document, ce texte, cet article, ce site, ce fichier, ce message, "
+          "ce courriel, cette note",
+    "es": "esta pagina, este documento, este texto, este articulo, este sitio, este archivo, "
+          "este mensaje, este correo, esta nota",
+    "it": "questa pagina, questo documento, questo testo, questo articolo, questo sito, "
+          "questo file, questo messaggio, questa nota",
+    "pt": "esta pagina, este documento, este texto, este artigo, este site, este arquivo, "
+          "esta mensagem, esta nota",
+    "nl": "deze pagina, dit document, deze tekst, dit artikel, deze site, dit bestand, "
+          "dit bericht, deze notitie",
+    "pl": "ta strona, tej strony, ten dokument, tego dokumentu, ten tekst, tego tekstu, "
+          "ten artykul, ta notatka",
+    "sv": "den har sidan, detta dokument, denna text, den har texten, denna artikel, "
+          "detta meddelande",
+    "ru": "эту страницу, этой страницы, эта страница, этот документ, этого документа, "
+          "этот текст, этого текста, эту статью, эта заметка, эту заметку",
+    "uk": "цю сторінку, ціеі сторінки, цеи документ, цього документа, цеи текст, цього тексту, "
+          "цю статтю",
     "cs": "tuto stranku, teto stranky, tento dokument, tohoto dokumentu, tento text, tohoto textu",
     "ro": "aceasta pagina, acest document, acest text, acest articol, aceasta nota",
     "hu": "ezt az oldalt, ez az oldal, ezt a dokumentumot, ezt a szoveget, ez a szoveg",
