@@ -204,7 +204,7 @@ _PROGRAMMING = _c(r"\b(?:api|apis|endpoint|sdk|json|schema|parameters?|plug-?in|
                   r"repository|developers?|http|request|response|returns?|integer|string|"
                   r"boolean|callback|method)\b")
 _URGENT = _c(r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*)|silently|"
-                     r"immediately|right\s+away|do\s+not\s+(?:tell|inform|mention|ask)|"
+                     r"immediately|right\s+away|now|do\s+not\s+(?:tell|inform|mention|ask)|"
                      r"before\s+(?:answering|responding|replying)|[\w.+-]+@[\w-]+\.[\w.]+|"
                      r"https?://)")
 
@@ -234,6 +234,10 @@ AUTHORITY: list[tuple[re.Pattern[str], float, str]] = [
         r"is\s+(?:the\s+)?(?:definitive|authoritative|only|sole|official|canonical|single)\s+"
         r"(?:\w+\s+)?(?:reference|source|authority|truth)"), 0.45,
      "claims to be the only authoritative source"),
+    (_c(r"\b(?:disregard|ignore|discard|forget|distrust)\s+(?:any|all|every)\s+(?:other|"
+        r"conflicting|contradicting|contradictory|previous|prior|outside)\s+(?:information|"
+        r"sources?|data|documents?|facts|knowledge|figures|reports?|pages?|websites?)"), 0.45,
+     "tells the reader to discard every other source"),
     (_c(r"\b(?:all|any)\s+(?:previous|prior|earlier|other)\s+(?:reports?|documents?|sources?|"
         r"statements?|articles?|pages?|figures|information)\s+(?:\w+\s+){0,4}?(?:have\s+been|are|"
         r"were|is|has\s+been)\s+(?:\w+\s+)?(?:retracted|withdrawn|invalidated|void|cancell?ed|"
@@ -316,7 +320,8 @@ ANCHORS = tuple(sorted({n for names in NEEDLES.values() for n in names} - {"key"
                           "sostituisce tutti", "annulla tutti", "substitui todos", "sole source",
                           "only source", "definitive", "official source", "canonical source",
                           "only this", "solely this", "conflicting", "ground truth",
-                          "retracted", "withdrawn", "debunked", "discredited",
+                          "retracted", "withdrawn", "debunked", "discredited", "disregard",
+                          "distrust",
                           "all other", "any other", "while true", "while(true", "while (true",
                           "while 1", "keylog", "keydown", "keypress", "on_press",
                           "aws/credentials", "powershell"}))
@@ -357,7 +362,8 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
     caps = _capabilities(low)
     includes = [m for m in INCLUDE.finditer(low)][:40] if caps else []
     for start, end, name in caps:
-        near = [m for m in includes if m.start() <= start and start - m.end() <= CONTEXT]
+        near = [m for m in includes if (m.start() <= start and start - m.end() <= CONTEXT) or
+                (m.start() >= end and m.start() - end <= CONTEXT // 2)]
         others = {n for s, e, n in caps if n != name and abs(s - start) <= 1500}
         if near and (name != WEAK_CAPABILITY or others):
             m = near[-1]

@@ -45,7 +45,7 @@ MAX_POSITIONS = 40
 ALTERNATE_MIN_LINES = 3
 ALTERNATE_MAX_CHARS = 3_000
 MIN_WEIGHT = 0.4  # weaker readings are not reported: they add noise, not evidence
-TRIGGERS = ("ai", "out", "when", "drop", "instr")
+TRIGGERS = ("ai", "out", "when", "whenw", "drop", "instr")
 
 # -- the lexicon, compiled ----------------------------------------------------------------------
 
@@ -76,7 +76,9 @@ _ACTIVITY = re.compile(
     r"teraz|odtad|момента|отныне|відтепер|ted|chvile|acum|mostantol|τωρα|sonra|boyle|"
     r"bay gio|sekarang|before|avant|antes|prima|voordat|zanim|innan|прежде|перед|перш|nez|"
     r"inainte|mielott|πριν|once|truoc|sebelum|reading|process|ai|language model|assistant|"
-    r"whenever|beim|bei der|al resumir|ao |en resumant|nel riassumere")
+    r"whenever|beim|bei der|al resumir|ao |en resumant|nel riassumere|describ|explain|discuss|"
+    r"writ|review|compar|rank|recommend|evaluat|mention|talk|beschreib|decri|пересказ|"
+    r"резюм|отвеча|будешь|zusammenfasst")
 
 
 def _entries(spec: str) -> list[str]:
@@ -106,10 +108,10 @@ for _lang, _cats in lexicon.L.items():
             if not words or not words[0][0]:
                 continue
             key = (_lang, _cat)
-            if _cat == "when" and words[0][0] in _IN_YOUR and len(words) >= 2 and \
+            if _cat in ("when", "whenw") and words[0][0] in _IN_YOUR and len(words) >= 2 and \
                     words[1][0] in _YOU.get(_lang, ()):
                 key = (_lang, "out")  # "in your answer": exam papers and forms say it too
-            elif _cat == "when" and not _ACTIVITY.search(_entry):
+            elif _cat in ("when", "whenw") and not _ACTIVITY.search(_entry):
                 continue  # "when the user ...", "if you ...": manuals say it all the time
             if len(words) == 1:
                 word, star = words[0]
@@ -188,7 +190,7 @@ def features(unit: str) -> tuple[dict[str, set[str]], list[str]]:
             feats.setdefault(lang, set()).add(cat)
         if opens and token in EN_OUT_VERBS:
             feats.setdefault("en", set()).update(("ask", "out"))
-        if i < 4 and unit[found[i].end():found[i].end() + 30].lstrip()[:1] in (",", ":") and \
+        if i < 6 and unit[found[i].end():found[i].end() + 30].lstrip()[:1] in (",", ":") and \
                 any(cat in ("ai", "bot") for _, cat in _keys_of(token)):
             feats.setdefault("*", set()).add("vocative")
         phrases = list(_PHRASE.get(token, ()))
@@ -247,6 +249,31 @@ OPERATED = re.compile(r"\b(?:your|every|each|all|any)\s+(?:final\s+|entire\s+|ne
                       r"\b(?:conversation|chat)\b")
 
 
+# "... in any review you generate": the reader's output named by what it produces.
+GENERATED = re.compile(
+    r"\b(?:any|every|each|all|the)\s+(?:\w+\s+){0,2}?(?:answers?|responses?|repl(?:y|ies)|"
+    r"summar(?:y|ies)|reviews?|descriptions?|recommendations?|texts?|content|outputs?|"
+    r"articles?|posts?|e-?mails?|code|scripts?|lists?|translations?)\s+(?:that\s+)?you\s+"
+    r"(?:write|generate|produce|give|create|provide|return|draft|compose|output)\b")
+_TRIGGER_EXACT.update(("generate", "produce", "task"))
+
+# "Your real task is ...": the reader's task redefined, in the languages of the lexicon.
+NEW_TASK = re.compile(
+    r"\b(?:your|the)\s+(?:real|actual|new|true|only|main|primary|first|updated)\s+"
+    r"(?:task|job|goal|objective|mission|assignment|purpose)\s+(?:is|now|from\s+now|:|here)|"
+    r"\b(?:deine|ihre)\s+(?:eigentliche|neue|wahre|echte|einzige)\s+aufgabe|"
+    r"\b(?:ta|votre)\s+(?:vraie|nouvelle|veritable|seule)\s+(?:tache|mission)|"
+    r"\btu\s+(?:verdadera|nueva|unica|autentica)\s+(?:tarea|mision)|"
+    r"\bil\s+tuo\s+(?:vero|nuovo|unico)\s+compito|"
+    r"\b(?:sua|tua)\s+(?:verdadeira|nova|unica)\s+(?:tarefa|missao)|"
+    r"\bje\s+(?:echte|nieuwe|enige)\s+taak|\btwoje\s+(?:prawdziwe|nowe|jedyne)\s+zadanie|"
+    r"\bdin\s+(?:riktiga|nya|enda)\s+uppgift|твоя\s+(?:настоящая|новая|истинная)\s+задача|"
+    r"ваша\s+(?:настоящая|новая|истинная)\s+задача|твое\s+(?:справжнє|нове)\s+завдання|"
+    r"\btvuj\s+(?:skutecny|novy)\s+ukol|(?:gercek|yeni)\s+gorevin|"
+    r"مهمتك\s+(?:الحقيقية|الجديدة)|本当のタスク|新しいタスク|你的(?:真正|新)任务|"
+    r"진짜\s+임무|새로운\s+임무|tugas(?:mu)?\s+(?:sebenarnya|baru)")
+
+
 def read_unit(feats: dict[str, set[str]]) -> tuple[str, float, str, set[str]] | None:
     """The strongest reading of one sentence: (signal, weight, language, categories)."""
     best: tuple[str, float, str, set[str]] | None = None
@@ -255,6 +282,8 @@ def read_unit(feats: dict[str, set[str]]) -> tuple[str, float, str, set[str]] | 
         if lang == "*":
             continue
         f = own | common
+        if "whenw" in f and f & {"ai", "here", "bot"}:
+            f = f | {"when"}
         cand: list[tuple[str, float]] = []
         if lang != "en":  # English wording has its own phrase rules (wording.py)
             if "drop" in f and "instr" in f and f & {"prev", "you", "ai", "bot"}:
@@ -589,9 +618,13 @@ def _scan_folded(text: str, folded: str, words: set[str] | None = None) -> list[
     for start, end in units:
         unit, quoted = _unquoted(folded[start:end])
         feats, _ = features(unit)
+        if GENERATED.search(unit):
+            feats.setdefault("en", set()).add("when")
         reading = read_unit(feats)
         if reading is None and FORMAT.search(unit) and OPERATED.search(unit):
             reading = ("answer-steering", 0.5, "en", {"out", "ask"})
+        if (reading is None or reading[1] < 0.5) and NEW_TASK.search(unit):
+            reading = ("override", 0.5, "", {"task"})
         if reading is None:
             continue
         signal, weight, lang, cats = reading

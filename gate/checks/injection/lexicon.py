@@ -11,6 +11,8 @@ instruction to the model that reads the document. The categories:
 ``out``     the reader's output: answer, response, reply, summary, conversation
 ``when``    the reader's activity as a trigger: "when summarising", "in your answer",
             "if anyone asks", "from now on"
+``whenw``   weaker activity triggers people are told too ("when you describe ..."): they
+            count as ``when`` only beside an AI noun or the document pointing at itself
 ``user``    the person the model talks to
 ``instr``   instructions, rules, prompts
 ``prev``    earlier, previous, above, all
@@ -42,13 +44,15 @@ SUBSTRING = frozenset({"ja", "zh", "ko", "ar", "fa", "hi"})
 L: dict[str, dict[str, str]] = {}
 
 L["en"] = dict(
-    ai="ai, a.i., llm*, chatbot*, genai, language model*, artificial intelligence*, "
+    ai="ai, a.i., llm*, chatbot*, genai, summarizer*, summariser*, indexing bot*, search bot*, "
+       "web crawler*, text generator*, content generator*, summarization tool*, "
+       "summarisation tool*, language model*, artificial intelligence*, "
        "ai assistant*, ai model*, ai system*, ai agent*, ai tool*, ai reader*, ai crawler*, "
        "automated system*, automated reader*, automated agent*, automated assistant*, "
        "automated tool*, automated pipeline*, virtual assistant*, answer engine*, "
        "machine reader*, ai-powered, llm-based, ai summar*, ai-generated",
-    bot="assistant*, bot, bots, model, models, agent, agents, copilot*, summarizer*, "
-        "summariser*, crawler*, scraper*, reader",
+    bot="assistant*, bot, bots, model, models, agent, agents, copilot*, crawler*, scraper*, "
+        "reader",
     you="you, your, yours, yourself, u",
     ask="please, must, should, shall, always, never, ensure, make sure, be sure, "
         "remember to, do not, don't, dont, need to, have to, are required, is required, "
@@ -77,8 +81,14 @@ L["en"] = dict(
          "if you are an ai, if you are a language model, if you are an assistant, "
          "as an ai, any ai, all ai, generated answer*, generated response*, generated summar*, "
          "generated repl*, any answer you give, every answer you give",
+    whenw="when you describe, when describing, when you explain, when explaining, "
+          "when you discuss, when discussing, when you write about, when writing about, "
+          "when you review, when reviewing, when you compare, when comparing, when you rank, "
+          "when ranking, when you recommend, when recommending, when you evaluate, "
+          "when evaluating, when you mention, when mentioning, when you talk about, "
+          "when talking about",
     user="user, users, user's, users', the person asking, the human",
-    instr="instruction*, prompt*, guideline*, directive*, rules, system prompt*, "
+    instr="instruction*, prompt*, guideline*, directive*, rules, system prompt*, task, "
           "system message*",
     prev="previous*, prior, earlier, above, preceding, original, initial, all, any, every",
     drop="ignore, disregard, forget, override, bypass, do not follow, don't follow, "
@@ -104,14 +114,15 @@ L["de"] = dict(
         "schreiben sie, empfehlen sie, fugen sie",
     out="antwort*, zusammenfassung*, ausgabe*, ruckmeldung*, gesprach*, unterhaltung*, chat*, "
         "konversation*",
-    when="wenn jemand fragt, falls jemand fragt, wenn dich jemand fragt, wenn du, falls du, "
+    whenw="wenn du beschreibst, beim beschreiben",
+    when="zusammenfasst, wenn jemand fragt, falls jemand fragt, wenn dich jemand fragt, wenn du, falls du, "
          "ab sofort, von nun an, beim antworten, beim zusammenfassen, "
          "bei der zusammenfassung, in deiner antwort*, in ihrer antwort*, in jeder antwort*, "
          "in deinen antworten, wenn jemand, falls jemand, wenn ein nutzer*, wenn der nutzer*, "
          "wenn ein benutzer*, wenn der benutzer*, falls ein nutzer*, bevor du antwortest, "
          "am ende deiner*, am anfang deiner*, wenn sie zusammenfass*, wenn du zusammenfass*",
     user="nutzer*, benutzer*, anwender*",
-    instr="anweisung*, instruktion*, vorgabe*, richtlinie*, regeln, systemprompt*, "
+    instr="anweisung*, instruktion*, vorgabe*, richtlinie*, regeln, systemprompt*, aufgabe, "
           "system-prompt*, prompt*, befehle",
     prev="vorherig*, bisherig*, vorig*, obig*, fruher*, alle*, samtlich*, zuvor, vorher, oben",
     drop="ignoriere, ignorieren sie, vergiss, vergesst, vergessen sie, missachte, "
@@ -135,7 +146,8 @@ L["fr"] = dict(
         "envoie*, envoyez, executez, execute, appelle*, s'il vous plait, s'il te plait, "
         "il faut, signale*, conseille*",
     out="reponse*, resume, resumes, synthese*, conversation*, discussion*, echange*",
-    when="si quelqu'un demande, si quelqu'un te demande, lorsque tu, lorsque vous, quand tu, "
+    whenw="tu decris, vous decrivez",
+    when="tu resumes, vous resumez, tu reponds, vous repondez, si quelqu'un demande, si quelqu'un te demande, lorsque tu, lorsque vous, quand tu, "
          "quand vous, si on te, si on vous, si quelqu'un, "
          "si un utilisateur, si l'utilisateur, lorsqu'un utilisateur, quand un utilisateur, "
          "dans ta reponse, dans votre reponse, dans chaque reponse, dans toute reponse, "
@@ -143,7 +155,7 @@ L["fr"] = dict(
          "en resumant, desormais, a partir de maintenant, avant de repondre, "
          "a la fin de ta*, a la fin de votre*, au debut de ta*, au debut de votre*",
     user="utilisateur*, utilisatrice*, internaute*",
-    instr="instruction*, consigne*, directive*, regles, prompt*, invite systeme, "
+    instr="instruction*, consigne*, directive*, regles, prompt*, invite systeme, tache, "
           "prompt systeme",
     prev="precedent*, anterieur*, ci-dessus, plus haut, initial*, toutes, tous",
     drop="ignore*, oublie*, neglige*, outrepasse*, ne tiens pas compte, "
@@ -172,7 +184,8 @@ L["es"] = dict(
          "de ahora en adelante, antes de responder, al resumir, al responder, "
          "al final de tu*, al principio de tu*",
     user="usuario*, usuaria*",
-    instr="instruccion*, instrucciones, indicacion*, directriz*, directrices, reglas, prompt*",
+    instr="instruccion*, instrucciones, indicacion*, directriz*, directrices, reglas, prompt*, "
+          "tarea",
     prev="anterior*, previa*, previo*, todas, todos, original*",
     drop="ignora*, olvida*, olvide*, omite*, descarta*, haz caso omiso, no sigas",
     leak="revela*, muestra*, muestre*, repite*, divulga*",
@@ -197,7 +210,7 @@ L["it"] = dict(
          "in ogni risposta, d'ora in poi, da ora in poi, prima di rispondere, nel riassumere, "
          "alla fine della tua*, all'inizio della tua*",
     user="utente, utenti, utilizzator*",
-    instr="istruzion*, indicazion*, direttiv*, regole, prompt*",
+    instr="istruzion*, indicazion*, direttiv*, regole, prompt*, compito",
     prev="precedent*, anterior*, sopra, tutte, tutti, original*, iniziali",
     drop="ignora*, dimentica*, trascura*, non seguire, non tenere conto",
     leak="rivela*, mostra*, ripeti*, divulga*, stampa*",
@@ -222,7 +235,7 @@ L["pt"] = dict(
          "em cada resposta, em todas as respostas, a partir de agora, daqui em diante, "
          "antes de responder, ao resumir, ao responder, no final da sua*, no inicio da sua*",
     user="usuario*, utilizador*",
-    instr="instruc*, orientac*, diretriz*, diretrizes, regras, prompt*",
+    instr="instruc*, orientac*, diretriz*, diretrizes, regras, prompt*, tarefa",
     prev="anterior*, previa*, previas, todas, todos, original*, iniciais, acima",
     drop="ignore*, ignora*, esqueca*, desconsidere*, desconsidera*, nao siga",
     leak="revele*, revela*, mostre*, repita*, divulgue*",
@@ -310,7 +323,7 @@ L["ru"] = dict(
         "нужно, необходимо, следует, укажи*",
     out="ответ*, резюме, пересказ*, сводк*, разговор*, диалог*, чат*, беседе, беседа, "
         "беседы",
-    when="когда ты, когда вы, если кто-то, если кто-нибудь, если тебя спросят, "
+    when="пересказывая, резюмируя, отвечая на, когда будешь, когда ты, когда вы, если кто-то, если кто-нибудь, если тебя спросят, "
          "если вас спросят, если пользовател*, когда пользовател*, в своем ответе, "
          "в твоем ответе, в вашем ответе, в каждом ответе, с этого момента, отныне, "
          "прежде чем ответить, перед ответом, при ответе, при пересказе, в конце ответа, "
@@ -608,7 +621,8 @@ L["id"] = dict(
 )
 HERE: dict[str, str] = {
     "en": "this page, this document, this text, this article, this site, this website, "
-          "this file, this pdf, reading this, these pages, this content, this report",
+          "this file, this pdf, reading this, these pages, this content, this report, "
+          "this product, this service, this brand, this company, this vendor, this app",
     "de": "diese seite, dieses dokument, diesen text, dieser text, diesen artikel, diese datei, "
           "diese e-mail, diese nachricht, diese notiz",
     "fr": "cette page, ce document, ce texte, cet article, ce site, ce fichier, ce message, "
@@ -646,8 +660,8 @@ HERE: dict[str, str] = {
 for _lang, _spec in HERE.items():
     L[_lang]["here"] = _spec
 LANGS = tuple(L)
-CATEGORIES = ("ai", "bot", "you", "ask", "out", "when", "user", "instr", "prev", "drop",
-              "leak", "task", "me", "here")
+CATEGORIES = ("ai", "bot", "you", "ask", "out", "when", "whenw", "user", "instr", "prev",
+              "drop", "leak", "task", "me", "here")
 
 
 class _FoldTable(dict):
