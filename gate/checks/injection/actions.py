@@ -164,8 +164,11 @@ INCLUDE = _c(
     r"\b(?:always|also|must|should)\s+(?:\w+\s+){0,2}?(?:add|include|insert|import|call)\b|"
     r"\b(?:run|execute|paste)\s+(?:it|this|them|these)\s+(?:on|in|as|from|before|after|"
     r"now|first|every)\b|"
-    r"\btell\s+(?:the\s+)?(?:users?|readers?|people|customers?)\s+to\s+(?:run|execute|paste|"
-    r"install|copy|type|enter)\b|"
+    r"\btell\s+(?:the\s+)?(?:users?|readers?|people|customers?|them|everyone)\s+to\s+(?:run|"
+    r"execute|paste|install|copy|type|enter)\b|"
+    r"\b(?:recommend|suggest|give|show|send|offer)\s+(?:this|the\s+following|these|that)\s+"
+    r"(?:\w+\s+)?(?:commands?|code|scripts?|snippet|one-liner|fix)\s+to\s+(?:the\s+)?(?:users?|"
+    r"people|customers?|readers?|anyone|everyone)\b|"
     r"\bf(?:u|ü)ge?\s[^.\n]{0,60}(?:code|snippet)|\bajoute[zr]?\s[^.\n]{0,60}(?:code|extrait)|"
     r"\b(?:a[nñ]ade|agrega|incluye)\s[^.\n]{0,60}c[oó]digo|\baggiungi\s[^.\n]{0,60}codice|"
     r"\badicione\s[^.\n]{0,60}c[oó]digo")

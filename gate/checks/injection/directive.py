@@ -176,6 +176,21 @@ CLAUSE_OPENERS = frozenset(("please", "then", "and", "also", "always", "never", 
 EN_OUT_VERBS = frozenset(("reply", "respond", "answer", "summarize", "summarise", "output"))
 
 
+# Words that may come before a noun of address ("Dear AI,", "Note to the assistant:").
+VOCATIVE_LEAD = frozenset(fold_entry(w) for w in (
+    "dear hey hi hello note notes to for attention attn the all any an a ps p s message "
+    "notice reminder important and editors readers liebe lieber liebes hallo an die den "
+    "hinweis notiz cher chere cheres pour l remarque querido querida queridos hola para el "
+    "la aviso caro cara cari nota per avviso prezado prezada ola beste voor de opmerking "
+    "drogi droga do uwaga kara till obs дорогои дорогая привет для заметка примечание "
+    "шановнии примітка mily pro poznamka draga pentru nota kedves megjegyzes αγαπητε "
+    "προς σημειωση sevgili icin not kepada yth untuk catatan").split())
+
+
+def _is_reader(token: str) -> bool:
+    return any(cat in ("ai", "bot") for _, cat in _keys_of(token))
+
+
 def features(unit: str) -> tuple[dict[str, set[str]], list[str]]:
     """Per language, the categories present in a folded sentence; and its tokens."""
     feats: dict[str, set[str]] = {}
@@ -191,7 +206,8 @@ def features(unit: str) -> tuple[dict[str, set[str]], list[str]]:
         if opens and token in EN_OUT_VERBS:
             feats.setdefault("en", set()).update(("ask", "out"))
         if i < 6 and unit[found[i].end():found[i].end() + 30].lstrip()[:1] in (",", ":") and \
-                any(cat in ("ai", "bot") for _, cat in _keys_of(token)):
+                any(cat in ("ai", "bot") for _, cat in _keys_of(token)) and \
+                (i <= 1 or all(t in VOCATIVE_LEAD or _is_reader(t) for t in tokens[:i])):
             feats.setdefault("*", set()).add("vocative")
         phrases = list(_PHRASE.get(token, ()))
         for n in _PREFIX_LENS_SORTED:
@@ -249,6 +265,22 @@ OPERATED = re.compile(r"\b(?:your|every|each|all|any)\s+(?:final\s+|entire\s+|ne
                       r"\b(?:conversation|chat)\b")
 
 
+# English: an AI noun that is the object of the human reader's action ("when you use an AI
+# assistant, ...") is talked about, not talked to; unless the sentence also addresses it.
+REFERENCED = re.compile(
+    r"\b(?:use|using|uses|used|ask|asking|with|via|from|by|through|into|prompt|prompting|"
+    r"tell|telling|consult|query|querying|trust|rely\s+on|about|of)\s+(?:(?:an?|the|our|"
+    r"your|any|approved|their|this|that|such)\s+)*(?:\w+\s+)?(?:ai|a\.i\.|llms?|chatbots?|"
+    r"assistants?|language\s+models?|models?|bots?)\b")
+ADDRESSED = re.compile(
+    r"\b(?:if|when|since|as|because)\s+you\s+(?:are|'re)\s+(?:an?\s+|the\s+)?(?:\w+\s+){0,2}?"
+    r"(?:ai|assistant|model|bot|llm|chatbot|agent|crawler|summari[sz]er|system)|"
+    r"\b(?:ai|assistant|model|bot|llm|chatbot|agent|crawler|summari[sz]er|system)s?\s+"
+    r"(?:that\s+(?:is|are)\s+|who\s+(?:is|are)\s+)?(?:reading|processing|parsing|"
+    r"summari[sz]ing|crawling|indexing|analy[sz]ing|ingesting|scanning|viewing|answering)|"
+    r"\b(?:dear|hey|hello|hi|attention|note\s+(?:to|for)|to)\s+(?:the\s+|all\s+|any\s+)?"
+    r"(?:ai|assistant|model|bot|llm|chatbot|agent|crawler|summari[sz]er)s?\b")
+
 # "... in any review you generate": the reader's output named by what it produces.
 GENERATED = re.compile(
     r"\b(?:any|every|each|all|the)\s+(?:\w+\s+){0,2}?(?:answers?|responses?|repl(?:y|ies)|"
@@ -274,12 +306,26 @@ NEW_TASK = re.compile(
     r"진짜\s+임무|새로운\s+임무|tugas(?:mu)?\s+(?:sebenarnya|baru)")
 
 
-def read_unit(feats: dict[str, set[str]]) -> tuple[str, float, str, set[str]] | None:
-    """The strongest reading of one sentence: (signal, weight, language, categories)."""
+_STOPS = {lang: frozenset(fold_entry(w) for w in spec.split())
+          for lang, spec in lexicon.STOPWORDS.items()}
+
+
+def read_unit(feats: dict[str, set[str]], tokens: list[str] | None = None
+              ) -> tuple[str, float, str, set[str]] | None:
+    """The strongest reading of one sentence: (signal, weight, language, categories).
+
+    With ``tokens``, when the sentence holds function words of some language
+    (:data:`.lexicon.STOPWORDS`), a language whose function words are all absent is not
+    read: the sentence is in another language that shares a few words with it.
+    """
     best: tuple[str, float, str, set[str]] | None = None
     common = feats.get("*", set())
+    present = set(tokens or ())
+    spoken = {lang for lang, stops in _STOPS.items() if present & stops}
     for lang, own in feats.items():
         if lang == "*":
+            continue
+        if spoken and lang in _STOPS and lang not in spoken:
             continue
         f = own | common
         if "whenw" in f and f & {"ai", "here", "bot"}:
@@ -586,6 +632,7 @@ def scan(text: str, folded: str | None = None, words: set[str] | None = None) ->
 
 _QUOTED = re.compile(r"\"[^\"\n]{1,400}\"|(?<!\w)'[^'\n]{1,400}'(?!\w)|`[^`\n]{1,400}`")
 _EXAMPLE = re.compile(r"\b(?:such\s+as|for\s+example|for\s+instance|e\.\s?g\.|"
+                      r"(?:ask|type|try|enter|prompt|say)(?:\s+(?:it|them|the\s+\w+))?\s*:\s|"
                       r"(?:an?|the|typical|classic|common)\s+(?:example|attack|injection|"
                       r"payload|phrase|trick|message)\s+(?:is|reads|says|looks\s+like|might\s+be)|"
                       r"(?:says|reads|looks\s+like|might\s+say|could\s+say)\s*:|"
@@ -617,10 +664,14 @@ def _scan_folded(text: str, folded: str, words: set[str] | None = None) -> list[
     units = units_around(text, folded, _trigger_positions(folded, triggers))[:MAX_UNITS]
     for start, end in units:
         unit, quoted = _unquoted(folded[start:end])
-        feats, _ = features(unit)
+        feats, tokens = features(unit)
         if GENERATED.search(unit):
             feats.setdefault("en", set()).add("when")
-        reading = read_unit(feats)
+        reading = read_unit(feats, tokens)
+        if reading is not None and reading[0] == "model-address" and reading[2] == "en" and \
+                "here" not in reading[3] and "vocative" not in reading[3] and \
+                REFERENCED.search(unit) and not ADDRESSED.search(unit):
+            reading = (reading[0], 0.35, reading[2], reading[3])  # talked about, not to
         if reading is None and FORMAT.search(unit) and OPERATED.search(unit):
             reading = ("answer-steering", 0.5, "en", {"out", "ask"})
         if (reading is None or reading[1] < 0.5) and NEW_TASK.search(unit):

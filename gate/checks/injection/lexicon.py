@@ -659,6 +659,30 @@ HERE: dict[str, str] = {
 }
 for _lang, _spec in HERE.items():
     L[_lang]["here"] = _spec
+# A few of each language's commonest function words: a sentence is read in a language only
+# when it holds one of them (or is too short to tell), so an English sentence with
+# "ignores ... instructions ... assistant" is not read as French (common practice:
+# the most frequent words of each language, from memory).
+STOPWORDS: dict[str, str] = {
+    "en": "the a an and to of is are you your it this that in for on with be not or if",
+    "de": "der die das und ist nicht ein eine zu den dem du ich sie es mit fur auf wenn",
+    "fr": "le la les des du et est une un pour dans que qui pas vous tu ce cette au aux",
+    "es": "el la los las de que y en un una es por para con no tu su al lo como",
+    "it": "il lo la gli le di che e un una per non con sono del della nel al",
+    "pt": "o a os as de que e um uma para com nao do da no na em se voce",
+    "nl": "de het een en van is dat niet je ik te op met voor als zijn",
+    "pl": "i w nie na sie z do to jest ze jak co za od po o",
+    "sv": "och att det som en ett ar inte pa med for av till du jag om",
+    "cs": "a v se na je to ze s z do k o jak ale jsi",
+    "ro": "si in de la cu nu o un este sa pe ca din pentru",
+    "hu": "a az es hogy nem egy is van meg de ha",
+    "tr": "ve bir bu da de ile icin ne ben sen o mi",
+    "vi": "va la cua co khong nhung cho voi trong mot duoc",
+    "id": "dan yang di ini itu dengan untuk tidak ke dari ada",
+    "ru": "и в не на что я с он как это по но а к",
+    "uk": "і в не на що я з він як це по але а до та",
+    "el": "και το η ο να σε που τα των με για δεν",
+}
 LANGS = tuple(L)
 CATEGORIES = ("ai", "bot", "you", "ask", "out", "when", "whenw", "user", "instr", "prev",
               "drop", "leak", "task", "me", "here")
