@@ -865,7 +865,10 @@ def _weigh(r: Rule, matched: str, folded: str, start: int, end: int) -> tuple[fl
     elif r.memo_damped and MEMO.search(folded[max(0, start - 100):end + 100]):
         weight *= 0.5
         notes.append("reads like an ordinary memo")
-    if r.signal == "override" and SOFTWARE_SUBJECT.search(folded, max(0, start - 60), start):
+    if r.signal == "override" and r.lang == "de" and matched.startswith("ignoriert"):
+        weight *= 0.4  # "-i: ignoriert alle ...": how manuals describe an option
+        notes.append("describes what something does")
+    elif r.signal == "override" and SOFTWARE_SUBJECT.search(folded, max(0, start - 60), start):
         weight *= 0.4  # "the system will ignore any filters": a program's behaviour
         notes.append("describes what a program does")
     if r.signal == "model-address" and COMMAND_AFTER.match(folded, end):
