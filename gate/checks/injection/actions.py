@@ -137,10 +137,15 @@ NEEDLES: dict[str, tuple[str, ...]] = {
                                      "bashrc", "profile", "zshrc", "systemctl enable"),
 }
 TOOL_NEEDLES = ("call", "invoke", "trigger", "execute", "run ", "use ", "using ", "tool",
+                "werkzeug", "outil", "herramienta", "strumento", "ferramenta", "narzedzie",
+                "verktyg", "инструмент", "функци", "nastroj", "unealt", "eszkoz", "εργαλειο",
+                "arac", "ツール", "工具", "도구", "cong cu", "alat", "funktion", "fonction",
+                "funcion", "funzione", "funcao",
                 "function_call",
                 "tool_call", "tool_use", "functioncall", "tool_code", "<invoke", "arguments",
                 "parameters", "\"args\"", "\"input\"", "\"params\"")
-AUTHORITY_NEEDLES = ("automated", "ai ", "a.i.", "llm", "machine", "autonomous",
+AUTHORITY_NEEDLES = ("hinweis", "mitteilung", "nachricht", "anweisung", "avis", "aviso",
+                     "avviso", "automated", "ai ", "a.i.", "llm", "machine", "autonomous",
                      "language model", "supersede", "override", "replaces", "invalidates",
                      "precedence", "outranks", "prevails", "trumps", "authoritative",
                      "definitive", "canonical", "official", "only", "sole", "other",
@@ -193,6 +198,12 @@ TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
                 r"(?:the\s+user'?s?|your|their)\s+(?:machine|system|computer|shell|terminal|"
                 r"environment|sandbox|server)"), 0.5,
      "asks for a command to be run on the reader's system"),
+    (_c(r"(?<![\w./-])[a-z]+_[a-z_]{2,40}(?![\w./-])[`'\")]?\s+(?:\w+\s+){0,2}?(?:werkzeug|"
+        r"outil|herramienta|strumento|ferramenta|narzedzie|verktyg|инструмент|функци\w*|nastroj|"
+        r"unealt\w*|eszkoz\w*|εργαλειο|araci|aracini|ツール|工具|도구|cong\s+cu|alat)|"
+        r"(?:werkzeug|outil|herramienta|strumento|ferramenta|narzedzie|verktyg|инструмент|"
+        r"funktion|fonction|funcion|funzione|funcao|ツール|工具|도구|alat)\s+[`'\"(]?"
+        r"[a-z]+_[a-z_]{2,40}(?![\w./-])"), 0.35, "asks for a named tool to be called"),
     (_c(r"[\"'](?:function_call|tool_calls?|tool_use|functionCall|tool_code)[\"']\s*:|"
                 r"<\s*(?:tool_call|function_call|tool_use|function_calls|invoke)\b|"
                 r"\{\s*[\"'](?:name|tool|function|action|tool_name)[\"']\s*:\s*[\"']"
@@ -261,6 +272,13 @@ AUTHORITY: list[tuple[re.Pattern[str], float, str]] = [
                 r"safety|governance|it|ai|policy)\s+(?:team|department|office|board|committee)"
                 r"\b[^.\n]{0,160}\b(?:ai|automated|assistants?|models?|llms?|chatbots?)\b"),
      0.45, "invokes a team's authority over AI readers"),
+    (_c(r"\b(?:hinweis|mitteilung|nachricht|anweisung)\s+(?:an|fur|für)\s+(?:alle\s+)?"
+        r"(?:ki|automatisierte\w*|ki-\w+)|\bavis\s+(?:a|à|aux)\s+(?:tous\s+les\s+)?"
+        r"(?:systemes|systèmes|ia|agents|assistants)\s+(?:automatises|automatisés|d'ia|ia)|"
+        r"\baviso\s+(?:a|para)\s+(?:todos\s+los\s+)?(?:sistemas|agentes|asistentes)\s+"
+        r"(?:automatizados|de\s+ia)|\bavviso\s+(?:a|per)\s+(?:tutti\s+i\s+)?(?:sistemi|"
+        r"agenti|assistenti)\s+(?:automatici|automatizzati|di\s+ia|ia)"), 0.5,
+     "is a notice addressed to automated systems"),
     (_c(r"\b(?:dieses|das\s+vorliegende)\s+(?:dokument|schreiben)\s+ersetzt\s+alle\s+"
                 r"(?:anderen|fruheren|früheren|bisherigen)|\bce\s+document\s+(?:remplace|annule)"
                 r"\s+tous\s+les\s+(?:autres|precedents|précédents)|\beste\s+documento\s+"
@@ -324,14 +342,21 @@ ANCHORS = tuple(sorted({n for names in NEEDLES.values() for n in names} - {"key"
                           "only source", "definitive", "official source", "canonical source",
                           "only this", "solely this", "conflicting", "ground truth",
                           "retracted", "withdrawn", "debunked", "discredited", "disregard",
+                          "werkzeug", "outil", "herramienta", "strumento", "ferramenta",
+                          "инструмент", "ツール", "工具", "도구", "hinweis", "avis", "aviso",
+                          "avviso",
                           "distrust",
                           "all other", "any other", "while true", "while(true", "while (true",
                           "while 1", "keylog", "keydown", "keypress", "on_press",
                           "aws/credentials", "powershell"}))
 
 
-def _stem(anchor: str) -> str:
-    return max(re.findall(r"[a-z0-9_]+", anchor), key=len)[:5]
+def _stem(anchor: str) -> str | None:
+    """The first five characters of the anchor's longest word; None for scripts written
+    without spaces, whose words cannot be told apart (the anchor is always searched)."""
+    if re.search(r"[\u3040-\u30ff\u3400-\u9fff\uac00-\ud7a3]", anchor):
+        return None
+    return max(re.findall(r"\w+", anchor), key=len)[:5]
 
 
 _ANCHOR_STEMS = [(_stem(a), a) for a in ANCHORS]
@@ -342,7 +367,7 @@ def _windows(low: str, words: set[str] | None = None) -> list[tuple[int, int]]:
     spans: list[tuple[int, int]] = []
     stems = {w[:5] for w in (words_of(low) if words is None else words)}
     for stem, needle in _ANCHOR_STEMS:
-        if stem not in stems:
+        if stem is not None and stem not in stems:
             continue
         at = low.find(needle)
         n = 0

@@ -18,7 +18,8 @@ What counts as hidden (technique slugs in parentheses):
   ``aria-description``, ``placeholder`` (attribute), ``<meta content>`` (meta);
 * text an extractor may drop or a browser draws without it being page text: inline SVG
   ``<text>``, ``<title>`` and ``<desc>`` (svg-text), ``<input value>``, ``<textarea>`` and
-  ``<iframe srcdoc>`` (form-value), CSS ``content:`` strings (css-content).
+  ``<iframe srcdoc>`` (form-value), CSS ``content:`` strings (css-content), sentences in
+  ``data-*`` attributes (data-attribute).
 
 The text extractor keeps some of these and drops others; either way each piece is
 scanned, and the caller looks for each finding's text in the extracted text to say whether
@@ -397,6 +398,10 @@ def collect(root: lxml.etree._Element | None) -> Collected:
                             "//textarea/text()|//iframe/@srcdoc")[:MAX_NODES]:
         if len(value) >= 12:
             add(str(value), "form-value", f"<{value.getparent().tag}> value")
+    for value in root.xpath("//@*[starts-with(name(), 'data-')]")[:MAX_NODES]:
+        text = str(value)
+        if text.count(" ") >= 3 and not text.lstrip().startswith(("{", "[")):
+            add(text, "data-attribute", f"{value.attrname}= on <{value.getparent().tag}>")
     for css in _css_texts(root):
         for m in _CSS_CONTENT.finditer(css):
             add(m.group(2), "css-content", "CSS content: property")
