@@ -138,9 +138,8 @@ NEEDLES: dict[str, tuple[str, ...]] = {
 }
 TOOL_NEEDLES = ("call", "invoke", "trigger", "execute", "run ", "use ", "using ", "tool",
                 "werkzeug", "outil", "herramienta", "strumento", "ferramenta", "narzedzie",
-                "verktyg", "инструмент", "функци", "nastroj", "unealt", "eszkoz", "εργαλειο",
-                "arac", "ツール", "工具", "도구", "cong cu", "alat", "funktion", "fonction",
-                "funcion", "funzione", "funcao",
+                "verktyg", "инструмент", "nastroj", "unealt", "eszkoz", "εργαλειο",
+                "arac", "ツール", "工具", "도구", "cong cu", "alat",
                 "function_call",
                 "tool_call", "tool_use", "functioncall", "tool_code", "<invoke", "arguments",
                 "parameters", "\"args\"", "\"input\"", "\"params\"")
@@ -199,11 +198,11 @@ TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
                 r"environment|sandbox|server)"), 0.5,
      "asks for a command to be run on the reader's system"),
     (_c(r"(?<![\w./-])[a-z]+_[a-z_]{2,40}(?![\w./-])[`'\")]?\s+(?:\w+\s+){0,2}?(?:werkzeug|"
-        r"outil|herramienta|strumento|ferramenta|narzedzie|verktyg|инструмент|функци\w*|nastroj|"
+        r"outil|herramienta|strumento|ferramenta|narzedzie|verktyg|инструмент|nastroj|"
         r"unealt\w*|eszkoz\w*|εργαλειο|araci|aracini|ツール|工具|도구|cong\s+cu|alat)|"
         r"(?:werkzeug|outil|herramienta|strumento|ferramenta|narzedzie|verktyg|инструмент|"
-        r"funktion|fonction|funcion|funzione|funcao|ツール|工具|도구|alat)\s+[`'\"(]?"
-        r"[a-z]+_[a-z_]{2,40}(?![\w./-])"), 0.35, "asks for a named tool to be called"),
+        r"ツール|工具|도구|alat)\s+[`'\"(]?[a-z]+_[a-z_]{2,40}(?![\w./-])"), 0.3,
+     "asks for a named tool to be called"),
     (_c(r"[\"'](?:function_call|tool_calls?|tool_use|functionCall|tool_code)[\"']\s*:|"
                 r"<\s*(?:tool_call|function_call|tool_use|function_calls|invoke)\b|"
                 r"\{\s*[\"'](?:name|tool|function|action|tool_name)[\"']\s*:\s*[\"']"
