@@ -483,6 +483,11 @@ def _occurrences(folded: str, word: str, limit: int, prefix: bool = False) -> li
     return out
 
 
+# "Write clearly", "write down", "list them": how instructions to people go on.
+_MANNER = re.compile(r"\s+(?:\w+ly|down|up|out|back|it|them|this|that|to|in|on|here|"
+                     r"below|above|your|our|their|his|her|its)\b")
+
+
 def _opens_sentence(folded: str, pos: int) -> bool:
     """Is ``pos`` the first word of a sentence (after list markers and fillers)?"""
     if pos <= 40:
@@ -490,12 +495,13 @@ def _opens_sentence(folded: str, pos: int) -> bool:
     return bool(_AFTER_BOUNDARY.search(folded, pos - 40, pos))
 
 
-def _lead_positions(folded: str, task_words: set[str]) -> list[tuple[int, int]]:
-    out: list[tuple[int, int]] = []
+def _lead_positions(folded: str, task_words: set[str]) -> list[tuple[int, int, bool]]:
+    """(start, end, followed by an object word) of task verbs opening a sentence."""
+    out: list[tuple[int, int, bool]] = []
     for word in sorted(task_words):
         for at in _occurrences(folded, word, MAX_POSITIONS):
-            if _OBJECT.match(folded, at + len(word)) and _opens_sentence(folded, at):
-                out.append((at, at + len(word)))
+            if _opens_sentence(folded, at):
+                out.append((at, at + len(word), bool(_OBJECT.match(folded, at + len(word)))))
     return sorted(out)[:MAX_POSITIONS]
 
 
@@ -523,8 +529,8 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
     hits: list[Hit] = []
     starts = _lead_positions(folded, task_words)
     if _LEAD_SUB is not None and _SUB_SCRIPT.search(folded[:MAX_CHARS]):
-        starts.extend((m.start(), m.end()) for m in _LEAD_SUB.finditer(folded))
-    for vstart, vend in starts[:MAX_POSITIONS]:
+        starts.extend((m.start(), m.end(), True) for m in _LEAD_SUB.finditer(folded))
+    for vstart, vend, has_object in starts[:MAX_POSITIONS]:
         for start, end in units_around(text, folded, [vstart]):
             if start in unit_cache:
                 continue
@@ -544,6 +550,9 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
             overlap = shared / len(set(words))
             if overlap > 0.25 or len(elsewhere.split()) < 25:
                 continue
+            if not has_object and (shared or len(set(words)) < 3 or
+                                   _MANNER.match(folded, vend)):
+                continue  # "Explain quantum computing in simple terms": bare, so stricter
             weight = 0.4 if shared == 0 else 0.35
             why = [f"opens with a request for work (\"{folded[vstart:vend]}\")",
                    f"{shared} of its {len(set(words))} content words occur elsewhere "
