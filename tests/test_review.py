@@ -12,6 +12,7 @@ from gate import audit, review
 from gate.errors import GateError
 from gate.pipeline import RunOptions, run
 from gate.policy import load_policy
+from gate.visible import visible
 
 ROOT = Path(__file__).resolve().parent.parent
 INBOX = ROOT / "sample_docs" / "inbox"
@@ -45,7 +46,8 @@ def test_list_filters(out):
     everything = review.list_entries(out)
     assert len(everything) == HELD  # the demo's quarantined documents
     assert {e.path for e in review.list_entries(out, check="language")} == {
-        "language/avis-aux-voyageurs.html", "language/mixed-bulletin.txt"}
+        "language/avis-aux-voyageurs.html", "language/mixed-bulletin.txt",
+        "language/depot-hours.txt"}
     assert [e.path for e in review.list_entries(out, code="integrity.mismatch")] == \
         ["integrity/edited-after-recording.txt"]
     report = json.loads((out / "report.json").read_text())
@@ -149,4 +151,4 @@ def test_report_records_the_audit_head(out):
 
 
 def test_visible_makes_invisible_characters_visible():
-    assert review.visible("a\u200bb\u202ec\U000e0041") == "a<U+200B>b<U+202E>c<U+E0041>"
+    assert visible("a\u200bb\u202ec\U000e0041") == "a<U+200B>b<U+202E>c<U+E0041>"

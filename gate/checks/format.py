@@ -33,7 +33,7 @@ from pydantic import Field
 from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.extract.sniff import expected_type
 from gate.findings import Finding, define
-from gate.policy.base import Section, Strict
+from gate.settings import Section, Strict
 
 NOT_REGULAR = define("format.not-regular", "not a regular file (link, FIFO, device...)",
                      "the entry is {what}; only regular files are documents, and links are "
