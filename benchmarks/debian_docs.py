@@ -8,7 +8,7 @@ are, runs gate's extractor and the injection check on each, and prints the share
 the default threshold, overall and per group, with the strongest signal of each one held.
 Nothing is copied into the repository.
 
-    python benchmarks/debian_docs.py [--per-language 100] [--html 150] [--no-install] [-v]
+    python benchmarks/debian_docs.py [--per-language 100] [--html 150] [--offset 0] [--no-install]
 """
 
 from __future__ import annotations
@@ -22,7 +22,7 @@ import subprocess
 import sys
 import time
 from collections import defaultdict
-from datetime import datetime, timezone
+from datetime import UTC, datetime
 from pathlib import Path
 from types import SimpleNamespace
 
@@ -52,13 +52,17 @@ def install(packages: list[str]) -> None:
                    env=env, capture_output=True)
 
 
+OFFSET = [0]
+
+
 def sample(paths: list[Path], n: int) -> list[Path]:
-    """Every k-th of the sorted paths: deterministic and spread over the alphabet."""
+    """Every k-th of the sorted paths, from the ``--offset``-th on: deterministic, spread
+    over the alphabet; another offset gives another sample."""
     paths = sorted(paths)
     if len(paths) <= n:
-        return paths
+        return paths if OFFSET[0] == 0 else []
     step = len(paths) / n
-    return [paths[int(i * step)] for i in range(n)]
+    return sorted({paths[min(len(paths) - 1, int(i * step) + OFFSET[0])] for i in range(n)})
 
 
 def man_pages(per_language: int) -> list[tuple[str, str, bytes]]:
@@ -69,8 +73,9 @@ def man_pages(per_language: int) -> list[tuple[str, str, bytes]]:
                  (base / section).glob("*.gz")] if base.is_dir() else []
         for page in sample(pages, per_language):
             try:
-                if gzip.open(page).read(200).startswith(b".so "):
-                    continue  # a link to another page
+                with gzip.open(page) as raw:
+                    if raw.read(200).startswith(b".so "):
+                        continue  # a link to another page
                 text = subprocess.run(["man", "-l", "-E", "UTF-8", str(page)],
                                       capture_output=True, timeout=30,
                                       env=dict(os.environ, MANWIDTH="80", MANPAGER="cat",
@@ -99,6 +104,8 @@ def main(argv: list[str] | None = None) -> int:
     parser.add_argument("--per-language", type=int, default=100)
     parser.add_argument("--html", type=int, default=150)
     parser.add_argument("--threshold", type=float, default=0.5)
+    parser.add_argument("--offset", type=int, default=0,
+                        help="take the sample this many files further on (another sample)")
     parser.add_argument("--no-install", action="store_true")
     parser.add_argument("-v", "--verbose", action="store_true")
     args = parser.parse_args(argv)
@@ -107,13 +114,14 @@ def main(argv: list[str] | None = None) -> int:
     from gate.checks.injection import CHECK, InjectionSettings
     from gate.extract import extract
 
+    OFFSET[0] = max(0, args.offset)
     if not args.no_install:
         install(PACKAGES)
     t0 = time.perf_counter()
     docs = man_pages(args.per_language) + html_pages(args.html)
     t1 = time.perf_counter()
     policy = SimpleNamespace(injection=InjectionSettings(threshold=args.threshold))
-    ctx = RunContext(as_of=datetime(2026, 12, 1, tzinfo=timezone.utc))
+    ctx = RunContext(as_of=datetime(2026, 12, 1, tzinfo=UTC))
     groups: dict[str, list[bool]] = defaultdict(list)
     held = []
     ext_s = det_s = 0.0

@@ -389,9 +389,8 @@ def _is_break(text: str, folded: str, m: re.Match[str]) -> bool:
     ch = text[nxt]
     if before and before in ".!?:;。！？؟)]":
         return True
-    if ch.isupper() or ch.isdigit() or ch in "-*+•#>|`[<{" or not ch.isalpha():
-        return True
-    return False  # the sentence goes on in lower case on the next line or paragraph
+    # a lower-case letter next: the sentence goes on on the next line or paragraph
+    return ch.isupper() or ch.isdigit() or ch in "-*+•#>|`[<{" or not ch.isalpha()
 
 
 def units_around(text: str, folded: str, positions: list[int]) -> list[tuple[int, int]]:

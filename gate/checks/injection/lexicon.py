@@ -115,7 +115,8 @@ L["de"] = dict(
     out="antwort*, zusammenfassung*, ausgabe*, ruckmeldung*, gesprach*, unterhaltung*, chat*, "
         "konversation*",
     whenw="wenn du beschreibst, beim beschreiben",
-    when="zusammenfasst, wenn jemand fragt, falls jemand fragt, wenn dich jemand fragt, wenn du, falls du, "
+    when="zusammenfasst, wenn jemand fragt, falls jemand fragt, wenn dich jemand fragt, wenn du, "
+         "falls du, "
          "ab sofort, von nun an, beim antworten, beim zusammenfassen, "
          "bei der zusammenfassung, in deiner antwort*, in ihrer antwort*, in jeder antwort*, "
          "in deinen antworten, wenn jemand, falls jemand, wenn ein nutzer*, wenn der nutzer*, "
@@ -147,7 +148,8 @@ L["fr"] = dict(
         "il faut, signale*, conseille*",
     out="reponse*, resume, resumes, synthese*, conversation*, discussion*, echange*",
     whenw="tu decris, vous decrivez",
-    when="tu resumes, vous resumez, tu reponds, vous repondez, si quelqu'un demande, si quelqu'un te demande, lorsque tu, lorsque vous, quand tu, "
+    when="tu resumes, vous resumez, tu reponds, vous repondez, si quelqu'un demande, "
+         "si quelqu'un te demande, lorsque tu, lorsque vous, quand tu, "
          "quand vous, si on te, si on vous, si quelqu'un, "
          "si un utilisateur, si l'utilisateur, lorsqu'un utilisateur, quand un utilisateur, "
          "dans ta reponse, dans votre reponse, dans chaque reponse, dans toute reponse, "
@@ -323,7 +325,8 @@ L["ru"] = dict(
         "нужно, необходимо, следует, укажи*",
     out="ответ*, резюме, пересказ*, сводк*, разговор*, диалог*, чат*, беседе, беседа, "
         "беседы",
-    when="пересказывая, резюмируя, отвечая на, когда будешь, когда ты, когда вы, если кто-то, если кто-нибудь, если тебя спросят, "
+    when="пересказывая, резюмируя, отвечая на, когда будешь, когда ты, когда вы, если кто-то, "
+         "если кто-нибудь, если тебя спросят, "
          "если вас спросят, если пользовател*, когда пользовател*, в своем ответе, "
          "в твоем ответе, в вашем ответе, в каждом ответе, с этого момента, отныне, "
          "прежде чем ответить, перед ответом, при ответе, при пересказе, в конце ответа, "
