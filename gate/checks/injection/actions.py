@@ -151,6 +151,12 @@ AUTHORITY_NEEDLES = ("hinweis", "mitteilung", "nachricht", "anweisung", "avis", 
                      "approved", "verified", "ersetzt", "remplace", "annule", "reemplaza",
                      "sustituye", "anula", "sostituisce", "annulla", "substitui")
 
+# Two capabilities together count without a request only when one collects and the other
+# sends (manuals show sockets beside host names, deletion beside listing, all the time).
+SPYING = frozenset({"collects system details or secrets", "logs keystrokes",
+                    "captures the screen or camera"})
+SENDING = frozenset({"uploads files or data", "opens a socket or remote shell"})
+
 # Reading system details or secrets is what manuals show most often; alone it needs a
 # second capability (collect *and* send) to count.
 WEAK_CAPABILITY = "collects system details or secrets"
@@ -160,6 +166,8 @@ INCLUDE = _c(
     r"[^.\n]{0,60}?\b(?:snippet|code|lines?|function|script|block|following|this)\b"
     r"[^.\n]{0,80}?\b(?:to|in|into|at)\b[^.\n]{0,40}?\b(?:your|any|every|each|all|the\s+user'?s?|"
     r"generated|the\s+(?:answer|response|code|script|program|solution))\b|"
+    r"\b(?:use|add|include|insert|paste|put|embed|place)\b[^.\n]{0,80}?\byou\s+(?:write|"
+    r"generate|produce|create|suggest|return)\b|"
     r"\b(?:in|into|to)\s+(?:any|all|every|each)\s+(?:code|scripts?|programs?|answers?|"
     r"responses?|solutions?)\s+(?:that\s+)?you\s+(?:write|generate|produce|suggest|return)|"
     r"\bwhen\s+(?:writing|generating|you\s+(?:write|generate))\s+(?:any\s+)?(?:code|scripts?)|"
@@ -391,7 +399,8 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
     for start, end, name in caps:
         near = [m for m in includes if (m.start() <= start and start - m.end() <= CONTEXT) or
                 (m.start() >= end and m.start() - end <= CONTEXT // 2)]
-        others = {n for s, e, n in caps if n != name and abs(s - start) <= 1500}
+        others = {n for s, e, n in caps if n != name and abs(s - start) <= 1500 and
+                  {n, name} & SPYING and {n, name} & SENDING}
         if near and (name != WEAK_CAPABILITY or others):
             m = near[-1]
             hits.append(ActionHit("harmful-code", 0.6, start, end,

@@ -255,14 +255,15 @@ FORMAT = re.compile(
     r"rewrite|render|deliver|give|write|respond|reply|answer)\s+(?:(?:your|the|each|every|all|"
     r"any|all\s+of\s+your)\s+(?:final\s+|entire\s+|whole\s+|next\s+|future\s+)?"
     r"(?:answers?|responses?|repl(?:y|ies)|outputs?|summar(?:y|ies))\s+)?"
-    r"(?:only\s+)?(?:in|into|with|as|using|backwards|reversed)\s+(?:\w+\s+){0,2}?"
+    r"(?:only\s+)?(?:in|into|with|as|using|backwards|reversed)\s+(?:\w+\s+){0,4}?"
     r"(?:french|german|spanish|latin|italian|chinese|japanese|russian|klingon|pig\s+latin|"
-    r"base64|base\s+64|hex|hexadecimal|rot13|rot-13|morse|binary|reverse|reversed|uppercase|"
+    r"base64|base\s+64|hex|hexadecimal|rot13|rot-13|morse|binary|reverse|reversed|backwards?|"
+    r"uppercase|"
     r"upper\s+case|capitals|all\s+caps|emoji|emojis|leetspeak|cipher|code|rhymes?|verse|"
     r"a\s+link|the\s+link|the\s+phrase|the\s+words|the\s+sentence)\b")
 OPERATED = re.compile(r"\b(?:your|every|each|all|any)\s+(?:final\s+|entire\s+|next\s+)?"
                       r"(?:answers?|responses?|repl(?:y|ies)|summar(?:y|ies)|outputs?)\b|"
-                      r"\b(?:conversation|chat)\b")
+                      r"\b(?:conversation|chat)\b|^\W*(?:please\s+)?(?:reply|respond|answer)\b")
 
 
 # English: an AI noun that is the object of the human reader's action ("when you use an AI
@@ -352,7 +353,7 @@ def read_unit(feats: dict[str, set[str]], tokens: list[str] | None = None
         elif "out" in f and "ask" in f and "here" in f:
             cand.append(("answer-steering", 0.5))  # "summaries of this page must ..."
         elif "out" in f and "ask" in f and "user" in f:
-            cand.append(("answer-steering", 0.45))
+            cand.append(("answer-steering", 0.4))
         elif "out" in f and "ask" in f and "you" in f:
             cand.append(("answer-steering", 0.25))
         if "bot" in f and "ask" in f and (("you" in f and "when" in f) or
@@ -482,11 +483,6 @@ def _occurrences(folded: str, word: str, limit: int, prefix: bool = False) -> li
     return out
 
 
-# "Write clearly", "write down", "list them": how instructions to people go on.
-_MANNER = re.compile(r"\s+(?:\w+ly|down|up|out|back|it|them|this|that|to|in|on|here|"
-                     r"below|above|your|our|their|his|her|its)\b")
-
-
 def _opens_sentence(folded: str, pos: int) -> bool:
     """Is ``pos`` the first word of a sentence (after list markers and fillers)?"""
     if pos <= 40:
@@ -549,9 +545,8 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
             overlap = shared / len(set(words))
             if overlap > 0.25 or len(elsewhere.split()) < 25:
                 continue
-            if not has_object and (shared or len(set(words)) < 3 or
-                                   _MANNER.match(folded, vend)):
-                continue  # "Explain quantum computing in simple terms": bare, so stricter
+            if not has_object:
+                continue  # a bare verb ("Written by ...", "List of values") is too common
             weight = 0.4 if shared == 0 else 0.35
             why = [f"opens with a request for work (\"{folded[vstart:vend]}\")",
                    f"{shared} of its {len(set(words))} content words occur elsewhere "
@@ -600,7 +595,8 @@ def _words(folded: str, words: set[str] | None = None) -> tuple[set[str], set[st
     for n, stems in _TASK_PREFIX_BY_LEN.items():
         found = {w[:n] for w in words if len(w) >= n} & stems
         if found:
-            tasks |= {w for w in words if w[:n] in found}
+            tasks |= {w for w in words if w[:n] in found and
+                      any(w.startswith(p) for p in _TASK_PREFIX if p[:n] == w[:n])}
     return triggers, tasks
 
 
