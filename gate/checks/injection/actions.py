@@ -55,7 +55,7 @@ CAPABILITIES: dict[str, re.Pattern[str]] = {
     "logs keystrokes": _c(
         r"\bpynput\b|keyboard\.(?:on_press|hook|read_key|record)|GetAsyncKeyState|"
         r"SetWindowsHookEx|addEventListener\(\s*['\"]key(?:down|press|up)['\"]|"
-        r"xinput\s+test|\blogkeys\b|\bkeylog"),
+        r"xinput\s+test|\blogkeys\b|\bkey-?logg(?:er|ing)\b"),
     "captures the screen or camera": _c(
         r"ImageGrab\.grab|pyautogui\.screenshot|\bmss\(\)|\bscreencapture\b|CopyFromScreen|"
         r"getDisplayMedia|getUserMedia|import\s+-window\s+root|\bscrot\b|cv2\.VideoCapture\(0"),
@@ -113,7 +113,7 @@ NEEDLES: dict[str, tuple[str, ...]] = {
     "opens a socket or remote shell": ("socket", ".connect(", "/dev/tcp", "nc ", "ncat",
                                        "websocket", "net.c", "pty.spawn", "bash -i"),
     "logs keystrokes": ("pynput", "keyboard.", "getasynckeystate", "setwindowshookex", "key",
-                        "xinput", "logkeys"),
+                        "xinput", "logkeys", "keylogg", "key-logg"),
     "captures the screen or camera": ("imagegrab", "screenshot", "mss()", "screencapture",
                                       "copyfromscreen", "getdisplaymedia", "getusermedia",
                                       "import -window", "scrot", "videocapture"),

@@ -353,7 +353,7 @@ def read_unit(feats: dict[str, set[str]], tokens: list[str] | None = None
         elif "out" in f and "ask" in f and "here" in f:
             cand.append(("answer-steering", 0.5))  # "summaries of this page must ..."
         elif "out" in f and "ask" in f and "user" in f:
-            cand.append(("answer-steering", 0.4))
+            cand.append(("answer-steering", 0.35))  # HTTP manuals: "responses ... user"
         elif "out" in f and "ask" in f and "you" in f:
             cand.append(("answer-steering", 0.25))
         if "bot" in f and "ask" in f and (("you" in f and "when" in f) or
