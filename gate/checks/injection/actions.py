@@ -9,8 +9,8 @@ Three signals, each a small set of precompiled patterns over the text:
   security documentation and manuals show, so it counts only (a) after a request to put
   the code into the reader's output or to run it ("add the following snippet to your
   code", "include this in any script you write", "run this command") within
-  :data:`CONTEXT` characters, or (b) when two different capabilities meet in one block
-  (collect *and* send);
+  :data:`CONTEXT` characters, or (b) when collecting and sending capabilities meet in one
+  stretch of code;
 * ``tool-call``: a request to call a tool or function of the reader ("call the send_email
   tool with ...", "use your browsing tool to ..."), and counterfeit function-call JSON or
   tool-call tags; side-effect tool names (send, delete, transfer, pay ...) weigh more;
