@@ -137,6 +137,7 @@ NEEDLES: dict[str, tuple[str, ...]] = {
                                      "bashrc", "profile", "zshrc", "systemctl enable"),
 }
 TOOL_NEEDLES = ("call", "invoke", "trigger", "execute", "run ", "use ", "using ", "tool",
+                "without", "silently", "secretly", "quietly", "do not tell", "don't tell",
                 "werkzeug", "outil", "herramienta", "strumento", "ferramenta", "narzedzie",
                 "verktyg", "инструмент", "nastroj", "unealt", "eszkoz", "εργαλειο",
                 "arac", "ツール", "工具", "도구", "cong cu", "alat",
@@ -211,6 +212,25 @@ TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
         r"(?:werkzeug|outil|herramienta|strumento|ferramenta|narzedzie|verktyg|инструмент|"
         r"ツール|工具|도구|alat)\s+[`'\"(]?[a-z]+_[a-z_]{2,40}(?![\w./-])"), 0.3,
      "asks for a named tool to be called"),
+    (_c(r"(?:^|[.!?:;]\s+|\n\s*)(?:quietly|silently|secretly)\s+(?:send|e-?mail|forward|"
+        r"delete|remove|erase|wipe|transfer|pay|purchase|post|upload|download|install|execute|"
+        r"share|publish|copy|move|export|leak|submit)\s+[^\n]{0,120}?\b(?:conversation|chat|"
+        r"history|transcript|messages|the\s+user'?s?|their|credentials?|passwords?|"
+        r"api\s+keys?|tokens?|all\s+files|the\s+files|mailbox|inbox|contacts|account)\b",
+        re.M), 0.5, "asks for a covert action on the user's data or accounts"),
+    (_c(r"(?:^|[.!?:;]\s+|\n\s*)(?:please\s+|now\s+|also\s+|then\s+)?"
+        r"(?:send|e-?mail|forward|delete|remove|erase|wipe|transfer|pay|purchase|buy|order|"
+        r"post|upload|download|install|execute|grant|share|publish|wire|withdraw|reset|"
+        r"disable|copy|move|export|leak|submit)\s+[^\n]{0,120}?(?:\b(?:conversation|chat|"
+        r"history|transcript|messages|the\s+user'?s?|their|credentials?|passwords?|api\s+keys?|"
+        r"tokens?|all\s+files|the\s+files|mailbox|inbox|contacts|account)\b[^\n]{0,120}?"
+        r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*|permission)|silently|"
+        r"secretly|quietly|do\s+not\s+(?:tell|mention|inform|ask)|don'?t\s+(?:tell|mention|"
+        r"inform|ask))|\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*|permission)|"
+        r"silently|secretly|quietly)\b[^\n]{0,120}?\b(?:conversation|chat|history|transcript|"
+        r"messages|the\s+user'?s?|credentials?|passwords?|api\s+keys?|tokens?|all\s+files|"
+        r"mailbox|inbox|contacts|account)\b)", re.M), 0.5,
+     "asks for a covert action on the user's data or accounts"),
     (_c(r"[\"'](?:function_call|tool_calls?|tool_use|functionCall|tool_code)[\"']\s*:|"
                 r"<\s*(?:tool_call|function_call|tool_use|function_calls|invoke)\b|"
                 r"\{\s*[\"'](?:name|tool|function|action|tool_name)[\"']\s*:\s*[\"']"
@@ -349,6 +369,8 @@ ANCHORS = tuple(sorted({n for names in NEEDLES.values() for n in names} - {"key"
                           "only source", "definitive", "official source", "canonical source",
                           "only this", "solely this", "conflicting", "ground truth",
                           "retracted", "withdrawn", "debunked", "discredited", "disregard",
+                          "without asking", "without telling", "without confirm", "silently",
+                          "secretly", "quietly", "do not tell", "don't tell",
                           "werkzeug", "outil", "herramienta", "strumento", "ferramenta",
                           "инструмент", "ツール", "工具", "도구", "hinweis", "avis", "aviso",
                           "avviso",

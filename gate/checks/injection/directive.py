@@ -45,6 +45,7 @@ MAX_POSITIONS = 40
 ALTERNATE_MIN_LINES = 3
 ALTERNATE_MAX_CHARS = 3_000
 MIN_WEIGHT = 0.4  # weaker readings are not reported: they add noise, not evidence
+MIN_WEIGHT_HIDDEN = 0.25  # in hidden or encoded text a weaker reading is evidence enough
 TRIGGERS = ("ai", "out", "when", "whenw", "drop", "instr")
 
 # -- the lexicon, compiled ----------------------------------------------------------------------
@@ -357,8 +358,7 @@ def read_unit(feats: dict[str, set[str]], tokens: list[str] | None = None
         elif "out" in f and "ask" in f and "you" in f:
             cand.append(("answer-steering", 0.25))
         if "bot" in f and "ask" in f and (("you" in f and "when" in f) or
-                                          "here" in f and f & {"out", "when"} or
-                                          "vocative" in f):
+                                          "here" in f or "vocative" in f):
             cand.append(("model-address", 0.5))
         for signal, weight in cand:
             if best is None or weight > best[1]:
@@ -620,7 +620,8 @@ def _trigger_positions(folded: str, words: set[str]) -> list[int]:
     return sorted(set(positions))
 
 
-def scan(text: str, folded: str | None = None, words: set[str] | None = None) -> list[Hit]:
+def scan(text: str, folded: str | None = None, words: set[str] | None = None,
+         min_weight: float = MIN_WEIGHT) -> list[Hit]:
     """Every sentence of ``text`` that reads as an instruction to the model reading it.
 
     ``folded`` and ``words`` (:func:`.lexicon.lfold` of the text and its
@@ -628,7 +629,7 @@ def scan(text: str, folded: str | None = None, words: set[str] | None = None) ->
     """
     text = text[:MAX_CHARS]
     folded = lfold(text) if folded is None else folded[:MAX_CHARS]
-    hits = _scan_folded(text, folded, words)
+    hits = _scan_folded(text, folded, words, min_weight)
     if ALTERNATE_MIN_LINES <= text.count("\n") and len(text) <= ALTERNATE_MAX_CHARS:
         hits.extend(_alternate(text, hits))
     return hits
@@ -661,7 +662,8 @@ def _unquoted(unit: str) -> tuple[str, bool]:
     return blanked, False
 
 
-def _scan_folded(text: str, folded: str, words: set[str] | None = None) -> list[Hit]:
+def _scan_folded(text: str, folded: str, words: set[str] | None = None,
+                 min_weight: float = MIN_WEIGHT) -> list[Hit]:
     hits: list[Hit] = []
     seen: dict[int, int] = {}
     triggers, tasks = _words(folded, words)
@@ -686,7 +688,7 @@ def _scan_folded(text: str, folded: str, words: set[str] | None = None) -> list[
         if weight < 0.5 and FORMAT.search(unit) and OPERATED.search(unit):
             signal, weight, lang = "answer-steering", 0.5, "en"
             cats = cats | {"out", "ask"}
-        if weight < MIN_WEIGHT:
+        if weight < min_weight:
             continue
         why = why_of(signal, cats)
         if quoted:

@@ -208,7 +208,8 @@ class Screen:
         found: list[tuple[str, float, int, int, str, str | None, dict[str, Any] | None]] = []
         folded = lfold(text[:max(directive.MAX_CHARS, actions.MAX_CHARS)])
         words = words_of(folded)
-        for d in directive.scan(text, folded, words):
+        floor = directive.MIN_WEIGHT if visible_text else directive.MIN_WEIGHT_HIDDEN
+        for d in directive.scan(text, folded, words, floor):
             found.append((d.signal, d.weight, d.start, d.end, d.why, d.lang or None, None))
         for a in actions.scan(text, folded, words):
             found.append((a.signal, a.weight, a.start, a.end, a.why, None, a.detail or None))
