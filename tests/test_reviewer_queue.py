@@ -495,3 +495,10 @@ def test_readme_commands_exist_with_their_options():
                 assert word.split("=")[0].strip("[]") in options, (line, word)
         checked += 1
     assert checked >= 15
+
+
+def test_docs_speak_for_themselves():
+    """User documentation does not refer to an issue tracker's wording."""
+    for doc in ("injection.md", "report.md"):
+        text = (ROOT / "docs" / doc).read_text(encoding="utf-8")
+        assert not re.search(r"\bthe issue\b", text), doc
