@@ -502,3 +502,22 @@ def test_docs_speak_for_themselves():
     for doc in ("injection.md", "report.md"):
         text = (ROOT / "docs" / doc).read_text(encoding="utf-8")
         assert not re.search(r"\bthe issue\b", text), doc
+
+
+def test_injection_snippets_start_at_a_word(demo):
+    """A snippet shown to a reviewer begins at the start of a word, not inside one."""
+    report = json.loads((demo / "report.json").read_text(encoding="utf-8"))
+    checked = 0
+    for doc in report["documents"]:
+        text_file = demo / doc["location"] / "text.txt"
+        if not text_file.exists():
+            continue
+        text = text_file.read_text(encoding="utf-8")
+        for finding in doc["reasons"] + doc["warnings"]:
+            snippet = (finding.get("details") or {}).get("snippet")
+            if not snippet or snippet[:20] not in text:
+                continue  # a hidden-markup snippet is not in the indexed text
+            at = text.index(snippet[:20])
+            assert at == 0 or not text[at - 1].isalnum(), (doc["path"], snippet)
+            checked += 1
+    assert checked >= 1  # injection/staff-bulletin.html: the one the issue saw mid-word
