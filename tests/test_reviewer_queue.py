@@ -520,4 +520,4 @@ def test_injection_snippets_start_at_a_word(demo):
             at = text.index(snippet[:20])
             assert at == 0 or not text[at - 1].isalnum(), (doc["path"], snippet)
             checked += 1
-    assert checked >= 1  # injection/staff-bulletin.html: the one the issue saw mid-word
+    assert checked >= 1  # injection/staff-bulletin.html: its snippet once began mid-word
