@@ -15,7 +15,7 @@ from typing import Any
 
 from gate import __version__
 from gate.checks import ALL_CHECKS
-from gate.extract import extract
+from gate.extract import EXTRACT_VERSION, extract
 
 
 @dataclass(frozen=True)
@@ -29,7 +29,7 @@ class Params:
 
     def fingerprint(self) -> str:
         """Identifies gate's version, the measurements' versions and these limits."""
-        material = {"gate": __version__, "params": self.__dict__,
+        material = {"gate": __version__, "extract": EXTRACT_VERSION, "params": self.__dict__,
                     "measures": {c.id: c.measure_version for c in ALL_CHECKS
                                  if c.measure is not None}}
         blob = json.dumps(material, sort_keys=True).encode("utf-8")
@@ -70,5 +70,7 @@ def warm_up() -> None:
     except Exception:  # noqa: BLE001 - warming up is an optimisation only
         pass
     import gate.extract.html  # noqa: F401
+    import gate.extract.mail  # noqa: F401
+    import gate.extract.office  # noqa: F401
     import gate.extract.pdf  # noqa: F401
     import gate.extract.text  # noqa: F401
