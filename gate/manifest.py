@@ -1,7 +1,8 @@
 """The manifest: one JSON object a line saying where each inbox document came from.
 
 ``{"path": ..., "source_url": ..., "sha256": ..., "retrieved_at": ..., "published_at": ...}``
-with every field but ``path`` optional. Structural problems (not JSON, not an object, a
+with every field but ``path`` optional. A line ``{"signature": "<armored SSH signature>"}``
+closes a signed batch of the lines above it (see :mod:`gate.signing`). Structural problems (not JSON, not an object, a
 missing or repeated path, an unknown key, a value of the wrong type) stop the run with the
 file and line, because a typo such as ``"sha265"`` would otherwise switch a check off for
 that document without anyone noticing. Keys starting with ``x_`` are the operator's own:
@@ -20,6 +21,7 @@ from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
+from gate import signing
 from gate.errors import ManifestError
 
 FIELDS = ("path", "source_url", "sha256", "retrieved_at", "published_at")
@@ -36,6 +38,7 @@ class ManifestRecord:
     retrieved_at: str | None = None
     published_at: str | None = None
     extra: dict[str, Any] = field(default_factory=dict, compare=False)
+    signature: dict[str, Any] | None = field(default=None, compare=False)  # gate.signing
 
     def to_json(self) -> dict[str, Any]:
         out: dict[str, Any] = {"line": self.line}
@@ -45,6 +48,8 @@ class ManifestRecord:
                 out[name] = value
         if self.extra:
             out["extra"] = self.extra
+        if self.signature is not None:
+            out["signature"] = self.signature
         return out
 
 
@@ -76,6 +81,7 @@ def normalize_path(value: str) -> str | None:
 def parse(text: str, source: str) -> Manifest:
     """Parse manifest text; ``source`` names the file in error messages."""
     records: dict[str, ManifestRecord] = {}
+    batches = signing.Batches(text)
     for number, raw in enumerate(text.splitlines(), 1):
         line = raw.lstrip("\ufeff") if number == 1 else raw
         if not line.strip():
@@ -89,6 +95,11 @@ def parse(text: str, source: str) -> Manifest:
         if not isinstance(obj, dict):
             raise ManifestError(f"{where}: expected a JSON object, found "
                                 f"{type(obj).__name__}.")
+        if "signature" in obj:  # closes a signed batch of the lines above (gate.signing)
+            problem = batches.seal(obj, number)
+            if problem:
+                raise ManifestError(f"{where}: {problem}.")
+            continue
         unknown = sorted(k for k in obj if k not in FIELDS and not k.startswith("x_"))
         if unknown:
             raise ManifestError(
@@ -114,7 +125,8 @@ def parse(text: str, source: str) -> Manifest:
             source_url=obj.get("source_url"), sha256=obj.get("sha256"),
             retrieved_at=obj.get("retrieved_at"), published_at=obj.get("published_at"),
             extra={k: v for k, v in obj.items() if k.startswith("x_")})
-    return Manifest(source=source, records=records,
+        batches.member(path)
+    return Manifest(source=source, records=batches.apply(records),
                     sha256=hashlib.sha256(text.encode("utf-8")).hexdigest())
 
 

@@ -8,7 +8,8 @@ here; add one row to docs/checks.md. See DEVELOPERS.md.
 from __future__ import annotations
 
 from gate.checks import format as format_check
-from gate.checks import duplicate, freshness, injection, integrity, language, quality, source
+from gate.checks import duplicate, freshness, injection, integrity, language, quality, \
+    signature, source
 from gate.checks.base import CorpusCheck, DocumentCheck
 from gate.findings import define_internal
 
@@ -16,6 +17,7 @@ DOCUMENT_CHECKS: tuple[DocumentCheck, ...] = (
     format_check.CHECK,
     source.CHECK,
     integrity.CHECK,
+    signature.CHECK,
     freshness.CHECK,
     language.CHECK,
     quality.CHECK,
@@ -26,9 +28,9 @@ CORPUS_CHECKS: tuple[CorpusCheck, ...] = (
     duplicate.CHECK,
 )
 
-# The check ids of the contract, in report order.
+# The check ids of the contract, in report order ("further keys may be added": signature).
 CHECK_IDS = ("source", "integrity", "freshness", "language", "format", "duplicate",
-             "injection", "quality")
+             "injection", "quality", "signature")
 
 ALL_CHECKS = DOCUMENT_CHECKS + CORPUS_CHECKS
 
