@@ -39,6 +39,9 @@ class ManifestRecord:
     published_at: str | None = None
     extra: dict[str, Any] = field(default_factory=dict, compare=False)
     signature: dict[str, Any] | None = field(default=None, compare=False)  # gate.signing
+    # digests checked when a container was read (gate.containers): the container file
+    # against this line's sha256, a WARC record's payload against WARC-Payload-Digest
+    digests: tuple[dict[str, Any], ...] = field(default=(), compare=False)
 
     def to_json(self) -> dict[str, Any]:
         out: dict[str, Any] = {"line": self.line}
@@ -50,6 +53,8 @@ class ManifestRecord:
             out["extra"] = self.extra
         if self.signature is not None:
             out["signature"] = self.signature
+        if self.digests:
+            out["digests"] = list(self.digests)
         return out
 
 

@@ -29,7 +29,7 @@ from datetime import UTC, datetime
 from pathlib import Path
 from typing import Any, Protocol
 
-from gate import __version__, audit, dates
+from gate import __version__, audit, containers, dates
 from gate import manifest as manifest_mod
 from gate.checks import CORPUS_CHECKS, DOCUMENT_CHECKS
 from gate.checks import duplicate as duplicate_check
@@ -336,7 +336,7 @@ def _extract_and_check(inbox: Path, manifest: manifest_mod.Manifest, params: Par
                        releases: dict[tuple[str, str], dict[str, str]]) -> list[Slim]:
     """Read, extract, measure and check every document, streaming: each one's full record
     goes to the run_docs table as soon as it is checked, and only its Slim stays here."""
-    entries = list(walk(inbox))
+    entries = list(containers.expand(inbox, walk(inbox), manifest))  # WARC, mbox: records
     reporter.stage("extracting", len(entries))
     fingerprint = params.fingerprint()
     known = state.entries()
@@ -365,9 +365,12 @@ def _extract_and_check(inbox: Path, manifest: manifest_mod.Manifest, params: Par
 
     def tasks():
         for index, entry in enumerate(entries):
-            item = Item(index=index, entry=entry, doc_id=doc_id(entry.path),
-                        intake=read_entry(inbox, entry, max_bytes),
-                        record=manifest.get(entry.path))
+            if isinstance(entry, containers.Member):
+                intake, record = containers.read(inbox, entry, max_bytes, manifest)
+            else:
+                intake, record = read_entry(inbox, entry, max_bytes), manifest.get(entry.path)
+            item = Item(index=index, entry=entry, doc_id=doc_id(entry.path), intake=intake,
+                        record=record)
             intake = item.intake
             if intake.problem is not None:
                 item.extracted = Extracted(type=None, problem=intake.problem,
@@ -838,7 +841,8 @@ def _commit(state: State, placer: Placer, blobs: Blobs, out: Path, run_id: str, 
                     change_no, not slims)
         conn.executemany("DELETE FROM entries WHERE doc_id = ?",
                          [(row["doc_id"],) for row in removed_rows])
-        unmatched = sorted(set(manifest.records) - set(seen_ids.values()))
+        unmatched = sorted(set(manifest.records) - set(seen_ids.values()) -
+                           {containers.container_of(p) for p in seen_ids.values()})
         summary = tally.summary(removed_report)
         audit_entries.append({"action": "run", "run": run_id, "as_of": run_info["as_of"],
                               "mode": mode, "policy": run_info["policy"],

@@ -148,7 +148,8 @@ def test_every_document_ends_in_exactly_one_place(tmp_path):
     assert before == after  # the inbox is never modified
     first = next(d for d in report(tmp_path / "out")["documents"] if d["decision"] == "accepted")
     entry = tmp_path / "out" / "accepted" / first["id"]
-    assert sorted(os.listdir(entry)) == ["original", "provenance.json", "text.txt"]
+    assert sorted(os.listdir(entry)) == ["original", "provenance.json", "provenance.prov.json",
+                                         "text.txt"]
     prov = json.loads((entry / "provenance.json").read_text())
     assert prov["policy"]["name"] == "pipeline-test" and prov["run"]["as_of"] == \
         "2026-12-01T00:00:00Z"
