@@ -12,7 +12,8 @@ integrity check. The document's bytes are the HTTP entity body with transfer and
 codings removed. A response that is not a 2xx is held as an error page, not a document.
 
 An mbox (RFC 4155) expands the same way into ``<mbox>#message-NNNNN``, each message one
-e-mail document that inherits the mbox's manifest line (source, dates, signature).
+e-mail document that inherits the mbox's manifest line (source URL, retrieval time,
+signature; not ``published_at``: each message's ``Date:`` header dates it).
 
 A manifest line for the container itself still counts: its ``sha256`` is checked against
 the container's bytes for every record, and its signature covers every record.
@@ -263,14 +264,16 @@ def _read_warc(inbox: Path, member: Member, max_bytes: int) -> tuple[Intake, dic
 def _mbox(full: str, entry: Entry) -> Iterator[Member]:
     """Messages start at a ``From `` line at the file's start or after an empty line."""
     starts: list[int] = []
-    offset, previous_blank = 0, True
+    offset, previous_blank, line_start = 0, True, True
     with _open(full) as fh:
-        for line in fh:
-            if previous_blank and line.startswith(b"From "):
+        while line := fh.readline(CHUNK):  # bounded: a huge line comes in pieces
+            if line_start and previous_blank and line.startswith(b"From "):
                 if starts:
                     yield _mbox_member(entry, len(starts), starts[-1], offset)
                 starts.append(offset)
-            previous_blank = line in (b"\n", b"\r\n")
+            if line_start:
+                previous_blank = line in (b"\n", b"\r\n")
+            line_start = line.endswith(b"\n")
             offset += len(line)
     if starts:
         yield _mbox_member(entry, len(starts), starts[-1], offset)
@@ -314,8 +317,10 @@ def read(inbox: Path, member: Member, max_bytes: int,
                                                  f"{member.container}: {_why(err)}")
     digests = tuple(d for d in (member.container_digest, facts.get("payload_digest")) if d)
     if member.format == "mbox":
+        # the mbox's line gives source and retrieval; each message has its own Date:
         base = container_record or ManifestRecord(path=member.path, line=0)
-        return intake, dataclasses.replace(base, path=member.path, sha256=None, digests=digests)
+        return intake, dataclasses.replace(base, path=member.path, sha256=None,
+                                           published_at=None, digests=digests)
     headers = dict((k.lower(), v) for k, v in member.headers)
     extra = {"x_container": {"archive": member.container, "record": member.number,
                              "offset": member.offset,

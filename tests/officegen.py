@@ -284,4 +284,6 @@ def eml(subject: str, plain: str | None, html: str | None = None, *,
         msg.set_content(html, subtype="html")
     if attachment is not None:
         msg.add_attachment(attachment[1], filename=attachment[0])
+    for n, part in enumerate(p for p in msg.walk() if p.is_multipart()):
+        part.set_boundary(f"==gate-test-boundary-{n}==")  # fixed, so the bytes are stable
     return msg.as_bytes(policy=SMTP)
