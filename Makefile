@@ -1,5 +1,6 @@
 # make demo  - set up .venv and run gate on the bundled sample_docs/inbox/
 # make test  - set up .venv with the test tools and run the test suite
+# make lint  - run the linter (ruff, configured in pyproject.toml)
 # make bench - run the benchmark scripts (they print figures)
 
 PYTHON ?= python3
@@ -7,7 +8,7 @@ VENV   ?= .venv
 BIN    := $(VENV)/bin
 STAMP  := $(VENV)/.installed
 
-.PHONY: demo test bench docs clean
+.PHONY: demo test lint bench docs clean
 
 $(STAMP): pyproject.toml constraints.txt
 	$(PYTHON) -m venv $(VENV)
@@ -22,6 +23,9 @@ demo: $(STAMP)
 
 test: $(STAMP)
 	$(BIN)/python -m pytest -q
+
+lint: $(STAMP)
+	$(BIN)/ruff check gate tests benchmarks
 
 bench: $(STAMP)
 	$(BIN)/python benchmarks/throughput.py

@@ -30,6 +30,13 @@ from langdetect.lang_detect_exception import LangDetectException  # noqa: E402
 
 from gate.checks import duplicate as dup  # noqa: E402
 from gate.checks import injection, quality  # noqa: E402
+
+
+def shingles(tokens: list[str], w: int = 5) -> set[str]:
+    """Broder's w-shingling as plain strings: the brute-force reference."""
+    if len(tokens) < w:
+        return {" ".join(tokens)} if tokens else set()
+    return {" ".join(tokens[i:i + w]) for i in range(len(tokens) - w + 1)}
 from gate.extract import extract  # noqa: E402
 
 DetectorFactory.seed = 0
@@ -55,7 +62,7 @@ def run(inbox: Path, limit: int | None = None) -> tuple[int, float]:
         quality.measure(extraction)
         injection.measure(extraction)
         sketch = MinHash(num_perm=dup.NUM_PERM)
-        for shingle in dup.shingles(dup.words(text)):
+        for shingle in shingles(dup.words(text)):
             sketch.update(shingle.encode("utf-8"))
         lsh.query(sketch)
         lsh.insert(str(number), sketch)

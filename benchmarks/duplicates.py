@@ -31,6 +31,13 @@ sys.path.insert(0, str(ROOT))
 from datasketch import MinHashLSH  # noqa: E402
 
 from gate.checks import duplicate as dup  # noqa: E402
+
+
+def shingles(tokens: list[str], w: int = 5) -> set[str]:
+    """Broder's w-shingling as plain strings: the brute-force reference."""
+    if len(tokens) < w:
+        return {" ".join(tokens)} if tokens else set()
+    return {" ".join(tokens[i:i + w]) for i in range(len(tokens) - w + 1)}
 from gate.policy import parse_policy  # noqa: E402
 
 SETTINGS = parse_policy("version: 1\nname: b\nduplicates:\n  threshold: 0.80\n", "b").duplicates
@@ -90,7 +97,7 @@ def part1(n: int) -> None:
     started = time.perf_counter()
     for index, (key, _family, text) in enumerate(docs):
         measured = dup.measure(type("E", (), {"text": text})())
-        shingle_sets[key] = dup.shingles(dup.words(text))
+        shingle_sets[key] = shingles(dup.words(text))
         items.append(dup.Item(key=key, path=key, sha256=key, text_sha256=measured["text_sha256"],
                               minhash=measured["minhash"], trust=1, date=None,
                               seen=(1, index)))

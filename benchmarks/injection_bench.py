@@ -17,7 +17,7 @@ import statistics
 import sys
 import time
 from collections import defaultdict
-from datetime import datetime, timezone
+from datetime import datetime, UTC
 from pathlib import Path
 from types import SimpleNamespace
 
@@ -58,7 +58,7 @@ def run(rows: list[dict], repeat: int = 1, threshold: float = 0.5) -> list[dict]
     from gate.extract import extract
 
     policy = SimpleNamespace(injection=InjectionSettings(threshold=threshold))
-    ctx = RunContext(as_of=datetime(2026, 12, 1, tzinfo=timezone.utc))
+    ctx = RunContext(as_of=datetime(2026, 12, 1, tzinfo=UTC))
     results = []
     for row in rows:
         t_ext, t_det = [], []

@@ -2,14 +2,12 @@
 
 from __future__ import annotations
 
-import gate.checks  # noqa: F401 - importing the registry defines every code
-from gate.checks import CHECK_IDS
+from gate import checks  # importing the registry defines every code
 from gate.findings import CODES
 
 
 def rows() -> list[tuple[str, str, str, str]]:
-    order = {check: index for index, check in enumerate(CHECK_IDS)}
-    items = sorted(CODES.values(), key=lambda c: (order.get(c.check, 99), c.code))
+    items = sorted(CODES.values(), key=lambda c: (checks.order_of(c.check), c.code))
     return [(c.code, c.check, "always" if c.fail_closed else "policy", c.title)
             for c in items]
 

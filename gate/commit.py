@@ -1,197 +1,282 @@
-"""Commit: materialise ``accepted/`` and ``quarantine/`` from the state database.
+"""Commit: decide every document, record it all in one transaction, then place.
 
-Every document has one entry folder named by its id, ``accepted/<id>/`` or
-``quarantine/<id>/``. An entry is assembled in ``state/tmp/``, its files are flushed to
-disk, and only then is the whole folder renamed into place, so a reader never sees a
-half-written entry. Replacing an entry renames the old one aside first; the entry for the
-same id in the other folder is removed after the new one is in place. Each placement is
-idempotent and marked done in the database only after it is durable, so a run killed at
-any moment is finished by applying the placements not yet marked.
-
-Originals come from the content-addressed staging area ``state/blobs/`` (the exact bytes
-that were hashed and checked, never re-read from the inbox) or, when unchanged, from the
-document's existing entry; they are hard-linked where possible and made read-only.
+:func:`commit` streams the documents' records back from the state in inbox order, adds the
+corpus checks' findings to each one's decision, and records in one SQLite transaction the
+decisions, the corpus, the change set, the audit entries and every placement still to do,
+while report.json is written beside it (``state/pending/``). :func:`finish` then applies
+the placements (:mod:`gate.placement`) and moves the report and changes.jsonl into place.
+Until the transaction commits nothing visible has changed; after it, :func:`finish` is what
+a later command re-runs to complete an interrupted run or review action.
 """
 
 from __future__ import annotations
 
+import hashlib
 import json
 import os
-import shutil
+from dataclasses import dataclass
 from pathlib import Path
-from typing import Any
+from typing import Any, Protocol
 
-from gate import provjson
-from gate.state import State
+from gate import __version__, containers, report
+from gate.corpus import CorpusResult
+from gate.errors import OutputError
+from gate.findings import Finding
+from gate.manifest import Manifest
+from gate.placement import Blobs, Placer, write_atomic
+from gate.policy import LoadedPolicy
+from gate.record import DocRecord, Slim
+from gate.state import Rows, State
 
-FOLDERS = ("accepted", "quarantine")
-
-
-def _fsync_dir(path: Path) -> None:
-    try:
-        fd = os.open(path, os.O_RDONLY | os.O_DIRECTORY)
-    except OSError:
-        return
-    try:
-        os.fsync(fd)
-    finally:
-        os.close(fd)
+CHUNK = 500  # documents decided per read of the run_docs table
+PLACE_BATCH = 256  # placements per pair of syncs
+HTML_REASONS = 5000  # held documents whose reasons' details the HTML page keeps
 
 
-def write_file(path: Path, data: bytes, *, sync: bool = True) -> None:
-    with open(path, "wb") as fh:
-        fh.write(data)
-        if sync:
-            fh.flush()
-            os.fsync(fh.fileno())
+class Reporter(Protocol):
+    """Receives progress; the CLI draws a bar, tests collect calls."""
+
+    def stage(self, name: str, total: int | None) -> None: ...
+
+    def advance(self, path: str | None = None) -> None: ...
+
+    def note(self, message: str) -> None: ...
 
 
-def write_atomic(path: Path, data: bytes) -> None:
-    """Write then rename, so ``path`` is always either the old or the new content."""
-    tmp = path.with_name(f".{path.name}.tmp-{os.getpid()}")
-    write_file(tmp, data)
-    os.replace(tmp, path)
-    _fsync_dir(path.parent)
+class SilentReporter:
+    def stage(self, name: str, total: int | None) -> None:
+        pass
+
+    def advance(self, path: str | None = None) -> None:
+        pass
+
+    def note(self, message: str) -> None:
+        pass
 
 
-class Blobs:
-    """Content-addressed copies of the bytes that were checked, kept until placement."""
-
-    def __init__(self, root: Path):
-        self.root = root
-
-    def path(self, sha256: str) -> Path:
-        return self.root / sha256[:2] / sha256
-
-    def has(self, sha256: str) -> bool:
-        return self.path(sha256).exists()
-
-    def put(self, sha256: str, data: bytes) -> None:
-        target = self.path(sha256)
-        if target.exists():
-            return
-        target.parent.mkdir(parents=True, exist_ok=True)
-        tmp = target.with_name(f".{sha256}.tmp-{os.getpid()}")
-        write_file(tmp, data, sync=False)  # made durable by one sync before deciding
-        os.replace(tmp, target)
-
-    def put_stream(self, sha256: str, source: Path) -> None:
-        target = self.path(sha256)
-        if target.exists():
-            return
-        target.parent.mkdir(parents=True, exist_ok=True)
-        tmp = target.with_name(f".{sha256}.tmp-{os.getpid()}")
-        with open(source, "rb") as src, open(tmp, "wb") as dst:
-            shutil.copyfileobj(src, dst, 1 << 20)
-        os.replace(tmp, target)
-
-    def clear(self) -> None:
-        shutil.rmtree(self.root, ignore_errors=True)
+def fingerprint(*parts: Any) -> str:
+    return hashlib.sha256(json.dumps(parts, sort_keys=True, default=str).encode()).hexdigest()
 
 
-class Placer:
-    """Applies placements: (document id, target folder, payload)."""
+def placement_fingerprint(folder: str, record: dict[str, Any], text_key: str | None) -> str:
+    """What an entry holds: an entry whose fingerprint is unchanged is not rewritten."""
+    return fingerprint(folder, record, text_key)
 
-    def __init__(self, out: Path, state: State, blobs: Blobs):
-        self.out = out
-        self.state = state
-        self.blobs = blobs
-        self.tmp = out / "state" / "tmp"
-        self.trash = out / "state" / "trash"
-        for folder in FOLDERS:
-            (out / folder).mkdir(parents=True, exist_ok=True)
-        self.tmp.mkdir(parents=True, exist_ok=True)
-        self.trash.mkdir(parents=True, exist_ok=True)
 
-    def entry(self, folder: str, doc_id: str) -> Path:
-        return self.out / folder / doc_id
+@dataclass
+class Output:
+    """An output folder being written: its state, staged originals, placer and the shared
+    near-duplicate index (when one is used)."""
 
-    def has_original(self, folder: str, doc_id: str) -> bool:
-        """Whether the entry placed in ``folder`` holds a copy of its original."""
-        return folder in FOLDERS and (self.entry(folder, doc_id) / "original").exists()
+    out: Path
+    state: State
+    index: Any = None
 
-    def _original_source(self, doc_id: str, sha256: str | None) -> Path | None:
-        if sha256 is None:
-            return None
-        if self.blobs.has(sha256):
-            return self.blobs.path(sha256)
-        for folder in FOLDERS:
-            candidate = self.entry(folder, doc_id) / "original"
-            if candidate.exists():
-                return candidate
+    def __post_init__(self) -> None:
+        self.blobs = Blobs(self.out / "state" / "blobs")
+        self.placer = Placer(self.out, self.state, self.blobs)
+
+
+def stored_index(state: State) -> Any:
+    """The shared index this folder last used (for review actions), or None."""
+    saved = state.meta("index")
+    if not saved:
         return None
+    from gate.index import SharedIndex
+    info = json.loads(saved)
+    return SharedIndex(info["url"], info["name"], state.meta("folder_id") or "folder",
+                       info["threshold"])
 
-    def _aside(self, path: Path) -> None:
-        if path.exists() or path.is_symlink():
-            target = self.trash / f"{path.parent.name}-{path.name}-{os.getpid()}"
-            if target.exists():
-                shutil.rmtree(target, ignore_errors=True)
-            os.replace(path, target)
 
-    def build(self, doc_id: str, target: str, payload: dict[str, Any]) -> Path | None:
-        """Assemble an entry in state/tmp (not yet visible). None for removals."""
-        if target == "absent":
-            return None
-        build = self.tmp / doc_id
-        shutil.rmtree(build, ignore_errors=True)
-        build.mkdir(parents=True)
-        source = self._original_source(doc_id, payload.get("sha256"))
-        if payload.get("sha256") and source is None and not payload.get("reused"):
-            raise FileNotFoundError(f"the staged copy of {payload['path']!r} is missing")
-        if source is not None:
-            dest = build / "original"
-            try:
-                os.link(source, dest)
-            except OSError:
-                shutil.copyfile(source, dest)
-            os.chmod(dest, 0o444)
-        text = self.state.cache_text(payload["text_key"]) if payload.get("text_key") else None
-        if text is not None:
-            write_file(build / "text.txt", text.encode("utf-8", "surrogatepass"), sync=False)
-        record_name = "provenance.json" if target == "accepted" else "reasons.json"
-        record = json.dumps(payload["record"], indent=2, sort_keys=True, ensure_ascii=False)
-        write_file(build / record_name, record.encode("utf-8", "surrogatepass") + b"\n",
-                   sync=False)
-        if target == "accepted":  # the same facts in W3C PROV-JSON (gate.provjson)
-            prov = json.dumps(provjson.from_record(payload["record"]), indent=2, sort_keys=True,
-                              ensure_ascii=False)
-            write_file(build / provjson.FILE_NAME, prov.encode("utf-8", "surrogatepass") + b"\n",
-                       sync=False)
-        return build
+@dataclass(frozen=True)
+class Run:
+    """The run being committed: its id, sequence number, mode and what report.json says
+    about it under ``run``."""
 
-    def install(self, doc_id: str, target: str, build: Path | None) -> None:
-        """Make an assembled entry visible (one rename) and remove the other folder's."""
-        if target == "absent":
-            for folder in FOLDERS:
-                self._aside(self.entry(folder, doc_id))
-            return
-        assert build is not None
-        other = "quarantine" if target == "accepted" else "accepted"
-        final = self.entry(target, doc_id)
-        self._aside(final)
-        os.replace(build, final)
-        self._aside(self.entry(other, doc_id))
+    id: str
+    seq: int
+    mode: str  # full | incremental
+    info: dict[str, Any]
 
-    def apply_batch(self, placements: list[tuple[str, str, dict[str, Any]]]) -> None:
-        """Apply placements durably with two syncs for the whole batch, not per file:
-        every entry is written in state/tmp, everything is flushed to disk, only then are
-        the entries renamed into place, and the renames are flushed before the caller
-        marks them done. A crash at any point leaves either the old entry or the complete
-        new one visible, and the placements not yet marked are simply applied again."""
-        built = [(doc_id, target, self.build(doc_id, target, payload))
-                 for doc_id, target, payload in placements]
-        os.sync()
-        for doc_id, target, path in built:
-            self.install(doc_id, target, path)
-        os.sync()
 
-    def apply(self, doc_id: str, target: str, payload: dict[str, Any]) -> None:
-        """Make the folders say what the payload says (idempotent)."""
-        self.apply_batch([(doc_id, target, payload)])
+def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
+           manifest: Manifest, loaded: LoadedPolicy, reporter: Reporter) -> None:
+    """Decide every document and record it all in one transaction, then :func:`finish`."""
+    from gate.htmlreport import render
+    state = output.state
+    reporter.stage("deciding", len(slims))
+    stored = {row["doc_id"]: row for row in corpus.stored}
+    known = state.entries()
+    writer = report.ReportWriter(report.pending(output.out, run.id, "json"))
+    writer.start(list(report.CAUTIONS))
+    tally = report.Tally()
+    html_docs: list[dict[str, Any]] = []
+    seen_ids: dict[str, str] = {}
+    change_no = held = 0
+    os.sync()  # the staged blobs must be durable before the decision refers to them
+    with state.transaction():
+        state.restart_rows(run.id)
+        for start in range(0, len(slims), CHUNK):
+            chunk = slims[start:start + CHUNK]
+            records = state.run_docs(run.id, chunk[0].index, chunk[-1].index)
+            rows = Rows()
+            for slim in chunk:
+                if slim.doc_id in seen_ids:  # 80-bit ids: a collision is astronomically rare
+                    raise OutputError(f"document id collision between "
+                                      f"{seen_ids[slim.doc_id]!r} and {slim.path!r}; please "
+                                      "report this")
+                seen_ids[slim.doc_id] = slim.path
+                entry = _decide_one(DocRecord.from_json(records[slim.index]), slim, run,
+                                    loaded, known.get(slim.doc_id), stored.get(slim.doc_id),
+                                    rows)
+                writer.document(entry)
+                tally.add(entry)
+                accepted = entry["decision"] == "accepted"
+                html_docs.append(report.html_view(entry, accepted or held < HTML_REASONS))
+                held += not accepted
+            state.write(run.id, rows, change_no)
+            change_no += len(rows.changes)
+            for slim in chunk:
+                reporter.advance(slim.path)
+        removed_report, rows = _removals(run, corpus)
+        unmatched = sorted(set(manifest.records) - set(seen_ids.values()) -
+                           {containers.container_of(p) for p in seen_ids.values()})
+        summary = tally.summary(removed_report)
+        rows.audit.append({"action": "run", "run": run.id, "as_of": run.info["as_of"],
+                           "mode": run.mode, "policy": run.info["policy"],
+                           "summary": summary})
+        run_info = {**run.info, "audit_head": state.write(run.id, rows, change_no)}
+        if output.index is not None:
+            run_info["index"] = {"url": output.index.url, "name": output.index.name}
+        rest = {"gate": {"version": __version__}, "manifest_unmatched": unmatched,
+                "removed": removed_report, "run": run_info, "summary": summary}
+        writer.finish(rest)
+        html = render({**rest, "documents": html_docs, "cautions": list(report.CAUTIONS)})
+        report.pending(output.out, run.id, "html").write_text(html, encoding="utf-8")
+        state.mark_decided(run.id, summary)
+    finish(output, run.id, reporter)
 
-    def empty_trash(self) -> None:
-        for item in self.trash.iterdir():
-            if item.is_dir() and not item.is_symlink():
-                shutil.rmtree(item, ignore_errors=True)
-            else:
-                item.unlink(missing_ok=True)
+
+def _decide_one(record: DocRecord, slim: Slim, run: Run, loaded: LoadedPolicy,
+                placed: tuple | None, before: dict[str, Any] | None, rows: Rows
+                ) -> dict[str, Any]:
+    """One document's final decision and the rows it adds; returns its report entry."""
+    decision = record.decision.extend(slim.extra, loaded.for_rule(slim.rule))
+    marks = {**record.checks, **slim.corpus_marks}
+    prov = report.provenance(record, decision, marks, run.info)
+    folder = "accepted" if decision.decision == "accepted" else "quarantine"
+    status, review = "open", None
+    if placed is not None and placed[0] == folder == "quarantine" and \
+            placed[1] == slim.sha256 and placed[3] == "rejected":
+        # a reviewer rejected these bytes: the verdict stands while unchanged
+        status, review = "rejected", placed[4]
+        prov["review"] = json.loads(review)
+    if folder == "accepted":
+        change = "add" if before is None else (
+            "update" if before["sha256"] != slim.sha256 else "unchanged")
+    else:
+        change = "remove" if before is not None else "none"
+    text_key = slim.cache_key if record.has_text else None
+    print_ = placement_fingerprint(folder, prov, text_key)
+    if placed is None or placed[0] != folder or placed[2] != print_:
+        payload = {"path": slim.path, "sha256": slim.sha256 if record.problem is None else None,
+                   "text_key": text_key, "record": {**prov, "run": run.info}}
+        rows.placements.append((run.id, slim.doc_id, folder, json.dumps(payload)))
+    date = slim.date.isoformat() if slim.date else None
+    rows.entries.append((slim.doc_id, folder, slim.path, slim.sha256, print_, run.id,
+                         slim.cache_key, slim.trust, date, status, review))
+    rows.audit.append({"action": "decision", "run": run.id, "id": slim.doc_id,
+                       "path": slim.path, "sha256": slim.sha256,
+                       "decision": decision.decision,
+                       "codes": sorted({f.code for f in decision.reasons}),
+                       "warnings": sorted({f.code for f in decision.warnings})})
+    entry = report.entry(record, decision, marks, f"{folder}/{slim.doc_id}", change)
+    rows.decisions.append((run.id, slim.path, slim.doc_id, decision.decision,
+                           json.dumps(entry, sort_keys=True)))
+    if folder == "accepted":
+        dup = slim.corpus_measures.get("duplicate") or {}
+        rows.corpus_upserts.append((
+            slim.doc_id, slim.path, slim.sha256, dup.get("text_sha256"), dup.get("minhash"),
+            slim.trust, date, before["first_seen"] if before else run.seq, run.id, folder,
+            slim.cache_key or "", record.source_url))
+        if change in ("add", "update"):
+            rows.changes.append(report.dumps_line(
+                {"action": change, "run": run.id, "id": slim.doc_id, "path": slim.path,
+                 "sha256": slim.sha256, "text": f"accepted/{slim.doc_id}/text.txt"}))
+    elif before is not None:
+        rows.corpus_deletes.append(slim.doc_id)
+        rows.changes.append(report.dumps_line(
+            {"action": "remove", "run": run.id, "id": slim.doc_id, "path": slim.path,
+             "sha256": before["sha256"], "why": "quarantined in this run"}))
+    return entry
+
+
+def _removals(run: Run, corpus: CorpusResult) -> tuple[list[dict[str, Any]], Rows]:
+    """Rows for documents leaving the corpus: missing from a full run's inbox, or
+    superseded by a newer version."""
+    rows = Rows()
+    removed_report: list[dict[str, Any]] = []
+    for row in corpus.removed:
+        why = "no longer in the inbox"
+        rows.corpus_deletes.append(row["doc_id"])
+        rows.entry_deletes.append(row["doc_id"])
+        rows.placements.append((run.id, row["doc_id"], "absent",
+                                json.dumps({"path": row["path"]})))
+        rows.changes.append(report.dumps_line(
+            {"action": "remove", "run": run.id, "id": row["doc_id"], "path": row["path"],
+             "sha256": row["sha256"], "why": why}))
+        rows.audit.append({"action": "removal", "run": run.id, "id": row["doc_id"],
+                           "path": row["path"], "sha256": row["sha256"], "why": why})
+        removed_report.append({"id": row["doc_id"], "path": row["path"], "change": "remove",
+                               "why": why})
+    for key, (row, finding) in sorted(corpus.superseded.items()):
+        _superseded(run, key, row, finding, rows, removed_report)
+    return removed_report, rows
+
+
+def _superseded(run: Run, key: str, row: dict[str, Any], finding: Finding, rows: Rows,
+                removed_report: list[dict[str, Any]]) -> None:
+    rows.corpus_deletes.append(key)
+    record = {"document": {"id": key, "path": row["path"], "sha256": row["sha256"]},
+              "decision": "quarantined", "reasons": [report.reason_json(finding)],
+              "policy": run.info["policy"], "gate": {"version": __version__}}
+    payload = {"path": row["path"], "sha256": row["sha256"], "text_key": row["cache_key"],
+               "reused": True, "record": {**record, "run": run.info}}
+    rows.placements.append((run.id, key, "quarantine", json.dumps(payload)))
+    rows.entries.append((key, "quarantine", row["path"], row["sha256"],
+                         placement_fingerprint("quarantine", record, row["cache_key"]),
+                         run.id, row["cache_key"], row["trust"], row["date"], "open", None))
+    rows.audit.append({"action": "superseded", "run": run.id, "id": key, "path": row["path"],
+                       "sha256": row["sha256"], "codes": [finding.code],
+                       "keeper": finding.details["keeper"]})
+    rows.changes.append(report.dumps_line(
+        {"action": "remove", "run": run.id, "id": key, "path": row["path"],
+         "sha256": row["sha256"], "why": finding.message}))
+    removed_report.append({"id": key, "path": row["path"], "change": "superseded",
+                           "why": finding.message, "location": f"quarantine/{key}"})
+
+
+def finish(output: Output, run_id: str, reporter: Reporter) -> None:
+    """Apply the run's outstanding placements, then write the report and change set."""
+    state, placer = output.state, output.placer
+    reporter.stage("placing", state.pending_count(run_id))
+    after = ""
+    while batch := state.pending_batch(run_id, after, PLACE_BATCH):
+        placer.apply_batch(batch)
+        state.mark_placed([(run_id, doc) for doc, _target, _payload in batch])
+        for _doc, _target, payload in batch:
+            reporter.advance(payload.get("path"))
+        after = batch[-1][0]
+    if output.index is not None:
+        reporter.stage("indexing", None)
+        output.index.sync(state)
+    for suffix in ("json", "html"):  # review actions change the folders but write no report
+        waiting = report.pending(output.out, run_id, suffix)
+        if waiting.exists():
+            os.replace(waiting, output.out / f"report.{suffix}")
+    write_atomic(output.out / "changes.jsonl",
+                 "".join(line + "\n" for line in state.change_lines()).encode("utf-8"))
+    placer.empty_trash()
+    output.blobs.clear()
+    state.complete_run(run_id)
+

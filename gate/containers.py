@@ -65,6 +65,24 @@ class Member(Entry):
     container_digest: dict[str, Any] | None = None  # the manifest's sha256 of the container
 
 
+def find(file: Path, record: ManifestRecord | None) -> tuple[Path, Member, Manifest] | None:
+    """For ``gate explain ARCHIVE#record-NNNNN``: the folder, the member and a manifest
+    holding ``record`` (the container's manifest line), or None when there is no such one."""
+    container = Path(container_of(str(file)))
+    if container == file or not container.is_file():
+        return None
+    name = container.name
+    records = {name: dataclasses.replace(record, path=name)} if record is not None else {}
+    manifest = Manifest(source=None, records=records, sha256=None)
+    st = container.stat()
+    entry = Entry(path=name, kind="file", size=st.st_size, mtime_ns=st.st_mtime_ns)
+    wanted = name + "#" + str(file).rsplit("#", 1)[1]
+    for member in expand(container.parent, iter([entry]), manifest):
+        if member.path == wanted and isinstance(member, Member):
+            return container.parent, member, manifest
+    return None
+
+
 def container_of(path: str) -> str:
     """The container's inbox path for a member's path (the path itself otherwise)."""
     head, sep, tail = path.rpartition("#")
@@ -236,7 +254,7 @@ def _read_warc(inbox: Path, member: Member, max_bytes: int) -> tuple[Intake, dic
     with _open(full) as fh, contextlib.redirect_stderr(io.StringIO()):
         fh.seek(member.offset)
         record = next(iter(ArchiveIterator(fh)))
-        sha1, sha256, size = hashlib.sha1(), hashlib.sha256(), 0  # noqa: S324 - WARC's digest
+        sha1, sha256, size = hashlib.sha1(), hashlib.sha256(), 0  # WARC's own digest
         while chunk := record.raw_stream.read(CHUNK):
             sha1.update(chunk)
             sha256.update(chunk)

@@ -12,10 +12,8 @@ from collections.abc import Iterable
 from dataclasses import dataclass
 from typing import Any
 
-from gate.checks import ALL_CHECKS
+from gate import checks
 from gate.findings import CODES, Finding
-
-_SECTION = {check.id: check.section for check in ALL_CHECKS}
 
 
 def action_of(finding: Finding, policy: Any) -> str:
@@ -25,7 +23,7 @@ def action_of(finding: Finding, policy: Any) -> str:
         return "quarantine"
     if finding.action is not None:
         return "quarantine" if finding.action == "quarantine" else "warn"
-    section = _SECTION.get(finding.check)
+    section = checks.section_of(finding.check)
     settings = getattr(policy, section, None) if section else None
     return getattr(settings, "action", "quarantine")
 
@@ -35,6 +33,14 @@ class Decision:
     decision: str  # accepted | quarantined
     reasons: tuple[Finding, ...]
     warnings: tuple[Finding, ...]
+
+    def extend(self, findings: Iterable[Finding], policy: Any) -> Decision:
+        """This decision with more findings (a corpus check's) taken into account, as if
+        they had been decided together; the findings already decided are not redone."""
+        more = decide(findings, policy)
+        reasons = self.reasons + more.reasons
+        return Decision("quarantined" if reasons else "accepted", reasons,
+                        self.warnings + more.warnings)
 
 
 def decide(findings: Iterable[Finding], policy: Any) -> Decision:

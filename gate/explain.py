@@ -1,34 +1,38 @@
 """Explain one document: every check's outcome, findings and measured values under a
 policy, without routing anything. For policy authors tuning thresholds.
 
-The document is extracted in an isolated worker with the policy's limits, exactly as in a
-run; then every document check is evaluated (checks whose section is off are reported as
-``off`` but their measured values are still shown, so an author can see what switching
-one on would do). With ``against``, the document is also compared with the corpus accepted
-in that output folder.
+The document goes through the same code as in a run: it is extracted in an isolated
+worker with the policy's limits, then evaluated by :func:`gate.evaluation.evaluate_document`
+(the effective policy with a matching allow rule's overrides, every document check, the
+per-document decision). Checks whose section is off are reported as ``off`` but their
+measured values are still shown, so an author can see what switching one on would do.
+With ``against``, the corpus checks also compare it with the corpus accepted in that
+output folder, as an incremental run into that folder would.
 """
 
 from __future__ import annotations
 
 import os
+import stat
 from dataclasses import dataclass
 from datetime import datetime
 from pathlib import Path
 from typing import Any
 
-from gate.checks import DOCUMENT_CHECKS
-from gate.checks import duplicate as duplicate_check
+from gate import checks, containers
 from gate.checks.base import Document, RunContext
-from gate.decide import decide, outcome
+from gate.corpus import run_corpus_checks
 from gate.discovery import Entry
+from gate.documents import params_of
 from gate.errors import InboxError
+from gate.evaluation import evaluate_document, extraction_of
 from gate.extract.model import Extracted
-from gate.extract.pool import Failure, WorkerPool
-from gate.findings import internal_error
+from gate.extract.pool import WorkerPool
 from gate.intake import read_entry
 from gate.manifest import ManifestRecord
 from gate.policy import LoadedPolicy
-from gate.work import Params, process, warm_up
+from gate.record import doc_record, slim
+from gate.work import process, warm_up
 
 _BULKY = {"minhash"}
 
@@ -52,25 +56,34 @@ def _public(value: Any) -> Any:
     return value
 
 
+def _entry(file: Path) -> Entry:
+    st = os.lstat(file)
+    kind = "file" if stat.S_ISREG(st.st_mode) else \
+        ("symlink" if stat.S_ISLNK(st.st_mode) else "other")
+    return Entry(path=file.name, kind=kind, size=st.st_size if kind == "file" else None,
+                 link_target=os.readlink(file) if kind == "symlink" else None)
+
+
 def explain(file: Path, loaded: LoadedPolicy, *, record: ManifestRecord | None,
             as_of: datetime, inbox_path: str | None = None,
             against: Path | None = None) -> Explanation:
     """Extract, measure and evaluate one file under ``loaded``."""
     file = Path(file)
-    if not file.exists() and not file.is_symlink():
-        raise InboxError(f"{file} does not exist.")
-    policy = loaded.policy
-    limits = policy.limits
+    limits = loaded.policy.limits
     rel = inbox_path or file.name
-    st = os.lstat(file)
-    import stat as stat_mod
-    kind = "file" if stat_mod.S_ISREG(st.st_mode) else \
-        ("symlink" if stat_mod.S_ISLNK(st.st_mode) else "other")
-    entry = Entry(path=file.name, kind=kind, size=st.st_size if kind == "file" else None,
-                  link_target=os.readlink(file) if kind == "symlink" else None)
-    intake = read_entry(file.parent, entry, limits.max_bytes)
-    params = Params(max_pages=limits.max_pages, max_nesting=limits.max_nesting,
-                    timeout_s=limits.timeout_s, memory_mb=limits.memory_mb)
+    # a record of a WARC archive or an mbox (ARCHIVE#record-NNNNN): ``record`` is then the
+    # container's manifest line, as in a run
+    found = None if file.exists() or file.is_symlink() else containers.find(file, record)
+    entry: Entry
+    if found is not None:
+        folder, entry, manifest = found
+        intake, record = containers.read(folder, entry, limits.max_bytes, manifest)
+    elif not file.exists() and not file.is_symlink():
+        raise InboxError(f"{file} does not exist.")
+    else:
+        entry = _entry(file)
+        intake = read_entry(file.parent, entry, limits.max_bytes)
+    params = params_of(loaded)
     measures: dict[str, Any] = {}
     errors: dict[str, str] = {}
     if intake.problem is not None:
@@ -80,75 +93,49 @@ def explain(file: Path, loaded: LoadedPolicy, *, record: ManifestRecord | None,
         with WorkerPool(process, workers=1, timeout_s=params.timeout_s,
                         memory_bytes=params.memory_mb * 1024 * 1024) as pool:
             [(_tag, result)] = list(pool.run([(rel, (rel, intake.data, params))]))
-        if isinstance(result, Failure):
-            kind_ = {"timeout": "timeout", "memory": "memory"}.get(result.kind, "crashed")
-            extracted = Extracted(type=None, problem=kind_, problem_detail=result.detail)
-        else:
-            extracted = Extracted.from_json(result["extracted"])
-            measures, errors = result["measures"], result["measure_errors"]
+        extracted, measures, errors = extraction_of(result, intake.data)
     if record is not None and record.path != rel:
         record = ManifestRecord(**{**record.__dict__, "path": rel})
-    document = Document(path=rel, kind=kind, size=intake.size, sha256=intake.sha256,
+    document = Document(path=rel, kind=entry.kind, size=intake.size, sha256=intake.sha256,
                         manifest=record, extracted=extracted, measures=measures,
                         link_target=entry.link_target)
-    ctx = RunContext(as_of=as_of)
-    checks: list[dict[str, Any]] = []
-    everything = []
-    for check in DOCUMENT_CHECKS:
-        enabled = check.always_on or getattr(policy, check.section, None) is not None
-        found = None
-        if enabled:
-            if check.id in errors:
-                found = [internal_error(check.id, RuntimeError(errors[check.id]))]
-            else:
-                try:
-                    found = check.evaluate(document, policy, ctx)
-                except Exception as err:  # noqa: BLE001 - shown, and fails closed
-                    found = [internal_error(check.id, err)]
-        everything += found or []
-        checks.append({"check": check.id, "outcome": outcome(found, policy, enabled),
-                       "findings": [f.to_json() for f in found or []],
-                       "measured": _public(measures.get(check.id))})
-    dup = _duplicates(document, measures, policy, against)
-    everything += [f for f in dup["findings_objects"]]
-    checks.append({"check": "duplicate", "outcome": dup["outcome"],
-                   "findings": [f.to_json() for f in dup["findings_objects"]],
-                   "measured": _public(measures.get("duplicate")), "note": dup["note"]})
-    decision = decide(everything, policy).decision
-    return Explanation(path=rel, document=document, decision=decision, checks=checks)
+    evaluation = evaluate_document(document, loaded, RunContext(as_of=as_of),
+                                   measure_errors=errors)
+    shown = [{"check": r.check.id, "outcome": r.outcome,
+              "findings": [f.to_json() for f in r.findings or []],
+              "measured": _public(measures.get(r.check.id))} for r in evaluation.results]
+    one = slim(doc_record(0, "(this document)", entry, intake, document, evaluation, None,
+                          loaded.policy), evaluation, document, errors)
+    stored = _stored(against) if against is not None else []
+    run_corpus_checks([one], stored, loaded.policy, seq=1 + max(
+        (row["first_seen"] for row in stored), default=0), incremental=True)
+    for check in checks.CORPUS_CHECKS:
+        mark = one.corpus_marks[check.id]
+        found = [f for f in one.extra if f.check == check.id]
+        if mark == "off":
+            note = f"{check.section} section is off"
+        elif mark == "n/a":
+            note = "no text to compare"
+        elif against is None:
+            note = "give --against DIR to compare with a stored corpus"
+        else:
+            note = f"compared with {len(stored)} accepted documents in {against}"
+        if against is None and mark not in ("off", "fail"):
+            mark, found = "n/a", []
+        shown.append({"check": check.id, "outcome": mark,
+                      "findings": [f.to_json() for f in found],
+                      "measured": _public(measures.get(check.id)), "note": note})
+    decision = evaluation.decision.extend(one.extra, evaluation.policy).decision
+    return Explanation(path=rel, document=document, decision=decision, checks=shown)
 
 
-def _duplicates(document: Document, measures: dict[str, Any], policy: Any,
-                against: Path | None) -> dict[str, Any]:
-    settings = policy.duplicates
-    if settings is None:
-        return {"outcome": "off", "findings_objects": [], "note": "duplicates section is off"}
-    measured = measures.get("duplicate")
-    if measured is None:
-        return {"outcome": "n/a", "findings_objects": [], "note": "no text to compare"}
-    if against is None:
-        return {"outcome": "n/a", "findings_objects": [],
-                "note": "give --against DIR to compare with a stored corpus"}
+def _stored(against: Path) -> list[dict[str, Any]]:
     from gate.state import open_state
     db = Path(against) / "state" / "gate.sqlite"
     if not db.exists():
         raise InboxError(f"--against {against}: no gate state there ({db} is missing).")
     state = open_state(db)
     try:
-        rows = state.corpus()
+        return state.corpus()
     finally:
         state.close()
-    items = [duplicate_check.Item(key=row["doc_id"], path=row["path"], sha256=row["sha256"],
-                                  text_sha256=row["text_sha256"], minhash=row["minhash"],
-                                  trust=row["trust"], date=None, seen=(0, i), in_batch=False,
-                                  accepted_before=True)
-             for i, row in enumerate(rows)]
-    small = measured["shingles"] < settings.min_shingles
-    items.append(duplicate_check.Item(
-        key="(this document)", path=document.path, sha256=document.sha256 or "",
-        text_sha256=measured["text_sha256"], minhash=None if small else measured["minhash"],
-        trust=-1, date=None, seen=(1, 0), candidate=False))
-    result = duplicate_check.evaluate(items, settings)
-    found = result.findings.get("(this document)", [])
-    return {"outcome": outcome(found, policy, True), "findings_objects": found,
-            "note": f"compared with {len(rows)} accepted documents in {against}"}

@@ -81,7 +81,10 @@ INTERNAL: dict[str, Code] = {}
 
 
 def define_internal(check: str) -> Code:
-    """Register ``<check>.internal-error``: the check itself crashed on a document."""
+    """Register ``<check>.internal-error``: the check itself crashed on a document (once
+    per check id, however often a check with that id is declared)."""
+    if check in INTERNAL:
+        return INTERNAL[check]
     spec = define(f"{check}.internal-error", "the check itself failed (a bug in gate)",
                   "the {check} check failed on this document ({error}); the document is "
                   "held because it could not be evaluated; please report this as a bug",

@@ -21,21 +21,13 @@ from collections import Counter
 from dataclasses import dataclass
 from typing import Any
 
+from gate import checks
+from gate.visible import visible
+
 CSP = ("default-src 'none'; style-src 'unsafe-inline'; img-src data:; "
        "base-uri 'none'; form-action 'none'")
 
-# Display order of the checks (the order they run in, docs/checks.md); checks not listed
-# here (a newer report) follow in alphabetical order.
-CHECK_ORDER = ("format", "source", "integrity", "freshness", "language", "quality",
-               "duplicate", "injection")
 OUTCOMES = ("pass", "warn", "fail", "n/a", "off")
-
-_VISIBLE = {c: f"\\x{c:02x}" for c in [*range(0x00, 0x20), 0x7F, *range(0x80, 0xA0)]}
-# bidi embeddings, overrides and isolates, and invisible marks: a name must read as it is
-_VISIBLE.update({c: f"\\u{c:04x}" for c in (0x200B, 0x200C, 0x200D, 0x200E, 0x200F,
-                                            *range(0x202A, 0x202F), *range(0x2066, 0x206A),
-                                            0xFEFF)})
-
 
 def text(value: Any) -> str:
     """Any value as HTML-safe text (element content or a quoted attribute value)."""
@@ -45,7 +37,7 @@ def text(value: Any) -> str:
         s = value
     else:
         s = str(value)
-    s = s.encode("utf-8", "backslashreplace").decode("utf-8").translate(_VISIBLE)
+    s = visible(s)
     return html.escape(s, quote=True)
 
 
@@ -387,8 +379,8 @@ def _more(count: int, cols: int) -> str:
 
 
 def _ordered_checks(names: set[str]) -> list[str]:
-    known = [c for c in CHECK_ORDER if c in names]
-    return known + sorted(n for n in names if n not in CHECK_ORDER)
+    """The registry's order; ids it does not know (a newer report's) follow, sorted."""
+    return sorted(names, key=lambda name: (checks.order_of(name), name))
 
 
 def _tile(n: int, label: str, cls: str = "") -> str:

@@ -158,8 +158,7 @@ class SharedIndex:
         corpus does not load every sketch at once."""
         owner_key = self.prefix + "owner:" + self.owner
         current = sorted(m.decode() for m in self.redis.smembers(owner_key))
-        desired = {self._member(doc_id): sha for doc_id, sha in state.conn.execute(
-            "SELECT doc_id, sha256 FROM corpus")}
+        desired = {self._member(doc_id): sha for doc_id, sha in state.corpus_digests()}
         stale: list[tuple[str, dict[str, Any]]] = []
         for start in range(0, len(current), 1000):
             members = current[start:start + 1000]

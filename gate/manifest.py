@@ -2,11 +2,12 @@
 
 ``{"path": ..., "source_url": ..., "sha256": ..., "retrieved_at": ..., "published_at": ...}``
 with every field but ``path`` optional. A line ``{"signature": "<armored SSH signature>"}``
-closes a signed batch of the lines above it (see :mod:`gate.signing`). Structural problems (not JSON, not an object, a
-missing or repeated path, an unknown key, a value of the wrong type) stop the run with the
-file and line, because a typo such as ``"sha265"`` would otherwise switch a check off for
-that document without anyone noticing. Keys starting with ``x_`` are the operator's own:
-they are kept, carried into the provenance record and otherwise ignored.
+closes a signed batch of the lines above it (see :mod:`gate.signing`). Structural problems
+(not JSON, not an object, a missing or repeated path, an unknown key, a value of the wrong
+type) stop the run with the file and line, because a typo such as ``"sha265"`` would
+otherwise switch a check off for that document without anyone noticing. Keys starting
+with ``x_`` are the operator's own: they are kept, carried into the provenance record and
+otherwise ignored.
 
 The *values* (is the URL well formed, is the digest hex, is the date a date) are judged by
 the checks, so one bad value holds one document, not the whole batch.

@@ -25,32 +25,18 @@ from datetime import UTC, datetime
 from pathlib import Path
 from typing import Any
 
-from gate import audit
-from gate.commit import Blobs, Placer
+from gate.commit import Output, SilentReporter, finish, fingerprint, placement_fingerprint, \
+    stored_index
 from gate.errors import GateError, UsageError
 from gate.findings import CODES
 from gate.lock import RunLock
 from gate.report import dumps_line
-from gate.state import State, loads, open_state
-
-INVISIBLE = {0x200B, 0x200C, 0x200D, 0x2060, 0xFEFF, 0x00AD, 0x180E, 0x061C, 0x200E, 0x200F,
-             *range(0x202A, 0x202F), *range(0x2066, 0x206A), *range(0xE0000, 0xE0080)}
+from gate.state import Rows, State, open_state
+from gate.visible import visible
 
 
 class ReviewError(GateError):
     """A review action that cannot be carried out (unknown entry, missing note...)."""
-
-
-def visible(text: str) -> str:
-    """Make invisible and control characters visible as ``<U+XXXX>``."""
-    out = []
-    for ch in text:
-        code = ord(ch)
-        if code in INVISIBLE or (code < 32 and ch not in "\n\t") or 0x7F <= code < 0xA0:
-            out.append(f"<U+{code:04X}>")
-        else:
-            out.append(ch)
-    return "".join(out)
 
 
 @dataclass(frozen=True)
@@ -77,7 +63,8 @@ class Entry:
                             for r in self.record.get("reasons", [])]}
 
 
-def _state(out: Path) -> State:
+def open_folder(out: Path) -> State:
+    """The state of an output folder written by ``gate run``."""
     path = out / "state" / "gate.sqlite"
     if not path.exists():
         raise ReviewError(f"{out} holds no gate state (no {path}); run `gate run ... --out "
@@ -113,12 +100,10 @@ def list_entries(out: Path, *, check: str | None = None, code: str | None = None
                  since: str | None = None, until: str | None = None,
                  status: str | None = "open") -> list[Entry]:
     """Quarantine entries matching every given filter, in path order."""
-    state = _state(out)
+    state = open_folder(out)
     try:
-        ids = [r[0] for r in state.conn.execute(
-            "SELECT doc_id FROM entries WHERE folder = 'quarantine' ORDER BY path")]
         found = []
-        for doc_id in ids:
+        for doc_id in state.quarantine_ids():
             entry = _entry(state, out, doc_id)
             if status is not None and status != "all" and entry.status != status:
                 continue
@@ -144,9 +129,9 @@ def resolve(state: State, ref: str) -> str:
     """An entry id from an id or an inbox path."""
     if state.entry(ref) is not None:
         return ref
-    rows = state.conn.execute("SELECT doc_id FROM entries WHERE path = ?", (ref,)).fetchall()
-    if len(rows) == 1:
-        return rows[0][0]
+    ids = state.ids_at_path(ref)
+    if len(ids) == 1:
+        return ids[0]
     raise ReviewError(f"no entry {ref!r}: give an entry id (the folder name under "
                       "quarantine/) or a document's inbox path.")
 
@@ -155,7 +140,7 @@ def show(out: Path, ref: str) -> dict[str, Any]:
     """Everything a reviewer needs about one entry: reasons with visible snippets,
     decoded payloads, the text's start and, for a near-duplicate, the diff against its
     keeper."""
-    state = _state(out)
+    state = open_folder(out)
     try:
         doc_id = resolve(state, ref)
         row = state.entry(doc_id)
@@ -164,9 +149,9 @@ def show(out: Path, ref: str) -> dict[str, Any]:
         text_path = out / folder / doc_id / "text.txt"
         text = text_path.read_text(encoding="utf-8", errors="replace") \
             if text_path.exists() else None
+        start = visible(text[:1500], keep="\n\t") if text else None
         shown: dict[str, Any] = {"id": doc_id, "folder": folder, "status": row["status"],
-                                 "path": row["path"], "record": record,
-                                 "text_start": visible(text[:1500]) if text else None}
+                                 "path": row["path"], "record": record, "text_start": start}
         diffs = []
         for reason in record.get("reasons", []):
             keeper = (reason.get("details") or {}).get("keeper_id")
@@ -189,7 +174,7 @@ def _diff(keeper: str, mine: str, keeper_name: str, my_name: str, limit: int = 2
                                       tofile=f"this: {my_name}", lineterm="", n=1))
     if len(lines) > limit:
         lines = lines[:limit] + [f"... ({len(lines) - limit} more diff lines)"]
-    return visible("\n".join(lines))
+    return visible("\n".join(lines), keep="\n\t")
 
 
 def _who(by: str | None) -> str:
@@ -221,7 +206,7 @@ def act(out: Path, action: str, refs: list[str], *, note: str, by: str | None = 
     reviewer = _who(by)
     at = (now or datetime.now(UTC)).replace(microsecond=0).isoformat().replace("+00:00", "Z")
     with RunLock(out / "state" / "lock"):
-        state = _state(out)
+        state = open_folder(out)
         try:
             return _act_locked(out, state, action, refs, note.strip(), reviewer, at)
         finally:
@@ -230,12 +215,10 @@ def act(out: Path, action: str, refs: list[str], *, note: str, by: str | None = 
 
 def _act_locked(out: Path, state: State, action: str, refs: list[str], note: str,
                 reviewer: str, at: str) -> ActionResult:
-    from gate.pipeline import _finish, _fingerprint, _placement_fingerprint, stored_index
-    blobs = Blobs(out / "state" / "blobs")
-    placer = Placer(out, state, blobs)
+    output = Output(out, state)
     pending = state.unfinished_run()
     if pending and pending["state"] == "decided":
-        _finish(state, placer, blobs, out, pending["run_id"], _Quiet())
+        finish(output, pending["run_id"], SilentReporter())
     seq = state.next_seq()
     review_id = f"review-{seq:04d}"
     ids: list[str] = []
@@ -243,8 +226,7 @@ def _act_locked(out: Path, state: State, action: str, refs: list[str], note: str
         doc_id = resolve(state, ref)
         if doc_id not in ids:
             ids.append(doc_id)
-    placements, audit_entries, changes = [], [], []
-    corpus_rows, entry_updates, entry_deletes, release_rows = [], [], [], []
+    rows = Rows()
     paths = []
     for doc_id in ids:
         row = state.entry(doc_id)
@@ -256,7 +238,7 @@ def _act_locked(out: Path, state: State, action: str, refs: list[str], note: str
         codes = sorted({r["code"] for r in reasons})
         review = {"action": action, "note": note, "by": reviewer, "at": at, "id": review_id}
         paths.append(row["path"])
-        audit_entries.append({"action": action, "id": doc_id, "path": row["path"],
+        rows.audit.append({"action": action, "id": doc_id, "path": row["path"],
                               "sha256": row["sha256"], "codes": codes, "note": note,
                               "by": reviewer, "at": at, "review": review_id})
         if action == "release":
@@ -272,75 +254,47 @@ def _act_locked(out: Path, state: State, action: str, refs: list[str], note: str
                 else None
             payload = {"path": row["path"], "sha256": row["sha256"], "text_key": text_key,
                        "record": new_record}
-            placements.append((review_id, doc_id, "accepted", json.dumps(payload)))
+            rows.placements.append((review_id, doc_id, "accepted", json.dumps(payload)))
             measures = {}
             cached = state.cache_meta(row["cache_key"]) if row["cache_key"] else None
             if cached:
                 measures = (cached[1].get("measures") or {}).get("duplicate") or {}
-            corpus_rows.append((doc_id, row["path"], row["sha256"], measures.get("text_sha256"),
-                                measures.get("minhash"), row["trust"], row["date"], seq,
-                                review_id, "accepted", row["cache_key"] or "",
-                                (record.get("source") or {}).get("url") or
-                                (record.get("manifest") or {}).get("source_url")))
-            entry_updates.append(("accepted", _placement_fingerprint("accepted", new_record,
+            rows.corpus_upserts.append((
+                doc_id, row["path"], row["sha256"], measures.get("text_sha256"),
+                measures.get("minhash"), row["trust"], row["date"], seq, review_id, "accepted",
+                row["cache_key"] or "", (record.get("source") or {}).get("url") or
+                (record.get("manifest") or {}).get("source_url")))
+            rows.entry_updates.append(("accepted", placement_fingerprint("accepted", new_record,
                                                                      text_key),
                                   review_id, "released", json.dumps(review), doc_id))
-            release_rows += [(row["sha256"], code, note, reviewer, at) for code in codes]
-            changes.append({"action": "add", "run": review_id, "id": doc_id,
-                            "path": row["path"], "sha256": row["sha256"],
-                            "text": f"accepted/{doc_id}/text.txt", "why": "released: " + note})
+            rows.releases += [(row["sha256"], code, note, reviewer, at) for code in codes]
+            rows.changes.append(dumps_line(
+                {"action": "add", "run": review_id, "id": doc_id, "path": row["path"],
+                 "sha256": row["sha256"], "text": f"accepted/{doc_id}/text.txt",
+                 "why": "released: " + note}))
         elif action == "reject":
             new_record = {**record, "review": review}
             text_key = row["cache_key"] if (out / "quarantine" / doc_id / "text.txt").exists() \
                 else None
             payload = {"path": row["path"], "sha256": row["sha256"], "text_key": text_key,
                        "record": new_record, "reused": True}
-            placements.append((review_id, doc_id, "quarantine", json.dumps(payload)))
-            entry_updates.append(("quarantine", _placement_fingerprint(
+            rows.placements.append((review_id, doc_id, "quarantine", json.dumps(payload)))
+            rows.entry_updates.append(("quarantine", placement_fingerprint(
                 "quarantine", new_record, text_key), review_id, "rejected", json.dumps(review),
                 doc_id))
         else:
-            placements.append((review_id, doc_id, "absent", json.dumps({"path": row["path"]})))
-            entry_deletes.append(doc_id)
-    with state.transaction() as conn:
-        conn.execute("INSERT INTO runs (run_id, seq, state, fingerprint, as_of, mode, info) "
-                     "VALUES (?, ?, 'decided', ?, ?, 'review', ?)",
-                     (review_id, seq, _fingerprint(review_id, ids), at,
-                      json.dumps({"action": action, "ids": ids, "by": reviewer})))
-        conn.executemany("INSERT INTO placements (run_id, doc_id, target, payload) "
-                         "VALUES (?, ?, ?, ?)", placements)
-        conn.executemany("INSERT OR REPLACE INTO corpus (doc_id, path, sha256, text_sha256, "
-                         "minhash, trust, date, first_seen, run_id, placed, cache_key, "
-                         "source_url) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", corpus_rows)
-        conn.executemany("UPDATE entries SET folder = ?, fingerprint = ?, run_id = ?, "
-                         "status = ?, review = ? WHERE doc_id = ?", entry_updates)
-        conn.executemany("DELETE FROM entries WHERE doc_id = ?", [(d,) for d in entry_deletes])
-        conn.executemany("INSERT OR REPLACE INTO releases (sha256, code, note, by, at) "
-                         "VALUES (?, ?, ?, ?, ?)", release_rows)
-        conn.executemany("INSERT INTO changes (run_id, seq, line) VALUES (?, ?, ?)",
-                         [(review_id, i, dumps_line(c)) for i, c in enumerate(changes)])
-        audit.append(conn, audit_entries)
-    index = stored_index(state)  # keep a shared near-duplicate index in line, if one is used
-    if index is not None:
-        index.lock()
+            rows.placements.append((review_id, doc_id, "absent", json.dumps({"path": row["path"]})))
+            rows.entry_deletes.append(doc_id)
+    with state.transaction():
+        state.begin_review(review_id, seq, fingerprint(review_id, ids), at,
+                           {"action": action, "ids": ids, "by": reviewer})
+        state.write(review_id, rows)
+    output.index = stored_index(state)  # keep a shared near-duplicate index in line
+    if output.index is not None:
+        output.index.lock()
     try:
-        _finish(state, placer, blobs, out, review_id, _Quiet(), index)
+        finish(output, review_id, SilentReporter())
     finally:
-        if index is not None:
-            index.unlock()
+        if output.index is not None:
+            output.index.unlock()
     return ActionResult(review_id, action, tuple(ids), tuple(paths))
-
-
-class _Quiet:
-    def stage(self, name: str, total: int | None) -> None:
-        pass
-
-    def advance(self, path: str | None = None) -> None:
-        pass
-
-    def note(self, message: str) -> None:
-        pass
-
-
-def decode_measures(value: str) -> Any:
-    return loads(value)

@@ -226,10 +226,8 @@ def parse_signer(line: str) -> TrustedKey:
                 else:
                     raise SignerLineError(f"the option {name!r} is not supported by gate "
                                           "(only namespaces=\"...\")")
-    if index >= 1:
-        principal = tokens[0]
-    else:
-        principal = " ".join(tokens[index + 2:]) or fingerprint(blob)
+    # allowed-signers form: the principal comes first; public-key form: it is the comment
+    principal = tokens[0] if index >= 1 else " ".join(tokens[index + 2:]) or fingerprint(blob)
     return TrustedKey(blob=blob, principal=principal, namespaces=namespaces)
 
 

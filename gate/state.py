@@ -19,10 +19,11 @@ import uuid
 import zlib
 from collections.abc import Iterable, Iterator
 from contextlib import contextmanager
+from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
-from gate import __version__
+from gate import __version__, audit
 from gate.errors import StateError
 
 APP_ID = 0x67617465  # "gate": SQLite's application_id marks the file as ours
@@ -155,6 +156,23 @@ CORPUS_COLS = ("doc_id", "path", "source_url", "sha256", "text_sha256", "minhash
                "date", "first_seen", "run_id", "placed", "cache_key")
 
 
+@dataclass
+class Rows:
+    """The rows one run (a chunk of its documents) or one review action records, in the
+    column order of their tables."""
+
+    decisions: list[tuple] = field(default_factory=list)
+    corpus_upserts: list[tuple] = field(default_factory=list)
+    corpus_deletes: list[str] = field(default_factory=list)
+    placements: list[tuple] = field(default_factory=list)
+    entries: list[tuple] = field(default_factory=list)
+    entry_updates: list[tuple] = field(default_factory=list)  # folder, fingerprint, run,
+    entry_deletes: list[str] = field(default_factory=list)  # status, review, id
+    releases: list[tuple] = field(default_factory=list)
+    changes: list[str] = field(default_factory=list)  # changes.jsonl lines
+    audit: list[dict[str, Any]] = field(default_factory=list)
+
+
 class State:
     """A connection to the state database. Use :func:`open_state`."""
 
@@ -178,17 +196,6 @@ class State:
             self.conn.execute("COMMIT")
 
     # -- cache -------------------------------------------------------------------------
-
-    def cache_get(self, key: str) -> tuple[dict, dict, str] | None:
-        row = self.conn.execute("SELECT extracted, measures, text FROM cache WHERE key = ?",
-                                (key,)).fetchone()
-        if row is None:
-            return None
-        return loads(row[0]), loads(row[1]), zlib.decompress(row[2]).decode("utf-8")
-
-    def cache_has(self, key: str) -> bool:
-        return self.conn.execute("SELECT 1 FROM cache WHERE key = ?", (key,)).fetchone() \
-            is not None
 
     def cache_meta(self, key: str) -> tuple[dict, dict] | None:
         row = self.conn.execute("SELECT extracted, measures FROM cache WHERE key = ?",
@@ -233,13 +240,103 @@ class State:
                          "info) VALUES (?, ?, 'processing', ?, ?, ?, ?)",
                          (run_id, seq, fingerprint, as_of, mode, json.dumps(info)))
 
-    def set_run_state(self, run_id: str, state: str, summary: dict | None = None) -> None:
+    def set_run_state(self, run_id: str, state: str) -> None:
         with self.transaction() as conn:
-            if summary is None:
-                conn.execute("UPDATE runs SET state = ? WHERE run_id = ?", (state, run_id))
-            else:
-                conn.execute("UPDATE runs SET state = ?, summary = ? WHERE run_id = ?",
-                             (state, json.dumps(summary, sort_keys=True), run_id))
+            conn.execute("UPDATE runs SET state = ? WHERE run_id = ?", (state, run_id))
+
+    def mark_decided(self, run_id: str, summary: dict[str, Any]) -> None:
+        """Inside the commit transaction: the run's decisions are recorded."""
+        self.conn.execute("UPDATE runs SET state = 'decided', summary = ? WHERE run_id = ?",
+                          (json.dumps(summary, sort_keys=True), run_id))
+
+    def begin_review(self, review_id: str, seq: int, fingerprint: str, at: str,
+                     info: dict[str, Any]) -> None:
+        """Inside a review's transaction: the review action, recorded as a run."""
+        self.conn.execute("INSERT INTO runs (run_id, seq, state, fingerprint, as_of, mode, "
+                          "info) VALUES (?, ?, 'decided', ?, ?, 'review', ?)",
+                          (review_id, seq, fingerprint, at, json.dumps(info)))
+
+    def complete_run(self, run_id: str) -> None:
+        """Every placement of the run is done: mark it complete and drop its work rows."""
+        with self.transaction() as conn:
+            conn.execute("UPDATE runs SET state = 'complete' WHERE run_id = ?", (run_id,))
+            conn.execute("DELETE FROM placements WHERE run_id = ? AND done = 1", (run_id,))
+            conn.execute("DELETE FROM run_docs WHERE run_id = ?", (run_id,))
+
+    def run_summary(self, run_id: str) -> dict[str, Any]:
+        row = self.conn.execute("SELECT summary FROM runs WHERE run_id = ?",
+                                (run_id,)).fetchone()
+        return json.loads(row[0]) if row and row[0] else {}
+
+    def change_lines(self) -> list[str]:
+        """What changes.jsonl holds: the latest run's changes, then those of every review
+        action after it, each line naming the run or review that made it."""
+        rows = self.conn.execute(
+            "SELECT run_id, seq, mode FROM runs WHERE state IN ('decided', 'complete') "
+            "ORDER BY seq").fetchall()
+        latest = max((seq for _rid, seq, mode in rows if mode != "review"), default=0)
+        lines: list[str] = []
+        for rid, seq, _mode in rows:
+            if seq >= latest:
+                lines.extend(self.changes(rid))
+        return lines
+
+    # -- the documents of a run between their checks and the commit --------------------
+
+    def clear_run_docs(self, run_id: str) -> None:
+        self.conn.execute("DELETE FROM run_docs WHERE run_id = ?", (run_id,))
+
+    def put_run_docs(self, rows: list[tuple[str, int, str]]) -> None:
+        with self.transaction() as conn:
+            conn.executemany("INSERT OR REPLACE INTO run_docs (run_id, idx, blob) "
+                             "VALUES (?, ?, ?)", rows)
+
+    def run_docs(self, run_id: str, first: int, last: int) -> dict[int, str]:
+        """The records of documents ``first`` to ``last`` (inbox order) of a run."""
+        return dict(self.conn.execute(
+            "SELECT idx, blob FROM run_docs WHERE run_id = ? AND idx BETWEEN ? AND ?",
+            (run_id, first, last)).fetchall())
+
+    # -- what a run or a review action records -----------------------------------------
+
+    def restart_rows(self, run_id: str) -> None:
+        """Inside the commit transaction: a resumed run writes its rows afresh."""
+        self.conn.execute("DELETE FROM placements WHERE run_id = ?", (run_id,))
+        self.conn.execute("DELETE FROM changes WHERE run_id = ?", (run_id,))
+
+    def write(self, run_id: str, rows: Rows, first_change: int = 0) -> str:
+        """Inside a transaction: record ``rows`` for a run or review action; returns the
+        audit log's head after its entries."""
+        conn = self.conn
+        conn.executemany("INSERT OR REPLACE INTO decisions (run_id, path, doc_id, decision, "
+                         "record) VALUES (?, ?, ?, ?, ?)", rows.decisions)
+        conn.executemany("DELETE FROM corpus WHERE doc_id = ?",
+                         [(k,) for k in rows.corpus_deletes])
+        conn.executemany("INSERT OR REPLACE INTO corpus (doc_id, path, sha256, text_sha256, "
+                         "minhash, trust, date, first_seen, run_id, placed, cache_key, "
+                         "source_url) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)",
+                         rows.corpus_upserts)
+        conn.executemany("INSERT OR REPLACE INTO placements (run_id, doc_id, target, payload) "
+                         "VALUES (?, ?, ?, ?)", rows.placements)
+        conn.executemany("INSERT OR REPLACE INTO entries (doc_id, folder, path, sha256, "
+                         "fingerprint, run_id, cache_key, trust, date, status, review) "
+                         "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", rows.entries)
+        conn.executemany("UPDATE entries SET folder = ?, fingerprint = ?, run_id = ?, "
+                         "status = ?, review = ? WHERE doc_id = ?", rows.entry_updates)
+        conn.executemany("DELETE FROM entries WHERE doc_id = ?",
+                         [(k,) for k in rows.entry_deletes])
+        conn.executemany("INSERT OR REPLACE INTO releases (sha256, code, note, by, at) "
+                         "VALUES (?, ?, ?, ?, ?)", rows.releases)
+        conn.executemany("INSERT INTO changes (run_id, seq, line) VALUES (?, ?, ?)",
+                         [(run_id, first_change + i, line)
+                          for i, line in enumerate(rows.changes)])
+        return audit.append(conn, rows.audit)
+
+    def verify_audit(self, expected_head: str | None = None) -> audit.Verdict:
+        return audit.verify(self.conn, expected_head)
+
+    def audit_entries(self, doc_id: str | None, limit: int) -> list[dict[str, Any]]:
+        return list(audit.entries(self.conn, doc_id=doc_id, limit=limit))
 
     def meta(self, key: str) -> str | None:
         row = self.conn.execute("SELECT value FROM meta WHERE key = ?", (key,)).fetchone()
@@ -248,10 +345,6 @@ class State:
     def set_meta(self, key: str, value: str) -> None:
         with self.transaction() as conn:
             conn.execute("INSERT OR REPLACE INTO meta (key, value) VALUES (?, ?)", (key, value))
-
-    def completed_runs(self) -> int:
-        return self.conn.execute("SELECT COUNT(*) FROM runs WHERE state = 'complete'"
-                                 ).fetchone()[0]
 
     # -- corpus ------------------------------------------------------------------------
 
@@ -263,8 +356,9 @@ class State:
                                  "path").fetchall()
         return [dict(zip(CORPUS_COLS, row)) for row in rows]
 
-    def first_seen(self) -> dict[str, int]:
-        return dict(self.conn.execute("SELECT doc_id, first_seen FROM corpus").fetchall())
+    def corpus_digests(self) -> list[tuple[str, str]]:
+        """(doc id, sha256) of every accepted document."""
+        return self.conn.execute("SELECT doc_id, sha256 FROM corpus").fetchall()
 
     def pending_count(self, run_id: str) -> int:
         return self.conn.execute("SELECT COUNT(*) FROM placements WHERE run_id = ? AND "
@@ -301,6 +395,15 @@ class State:
         return {row[0]: row[1:] for row in self.conn.execute(
             "SELECT doc_id, folder, sha256, fingerprint, status, review FROM entries")}
 
+    def quarantine_ids(self) -> list[str]:
+        """The quarantine entries' ids, in inbox path order."""
+        return [r[0] for r in self.conn.execute(
+            "SELECT doc_id FROM entries WHERE folder = 'quarantine' ORDER BY path")]
+
+    def ids_at_path(self, path: str) -> list[str]:
+        return [r[0] for r in self.conn.execute("SELECT doc_id FROM entries WHERE path = ?",
+                                                (path,))]
+
     def entry(self, doc_id: str) -> dict[str, Any] | None:
         cols = ("doc_id", "folder", "path", "sha256", "fingerprint", "run_id", "cache_key",
                 "trust", "date", "status", "review")
@@ -317,9 +420,6 @@ class State:
         return [r[0] for r in self.conn.execute(
             "SELECT line FROM changes WHERE run_id = ? ORDER BY seq", (run_id,))]
 
-    def decisions(self, run_id: str) -> list[dict[str, Any]]:
-        return [json.loads(r[0]) for r in self.conn.execute(
-            "SELECT record FROM decisions WHERE run_id = ? ORDER BY rowid", (run_id,))]
 
 
 def open_state(path: Path) -> State:
@@ -332,6 +432,11 @@ def open_state(path: Path) -> State:
         conn.execute("PRAGMA synchronous=FULL")
         conn.execute("PRAGMA foreign_keys=ON")
         app_id = conn.execute("PRAGMA application_id").fetchone()[0]
+        # a run killed while it created the file leaves an SQLite file with no tables and
+        # no application id yet: that is an unfinished start, not someone else's database
+        if existed and app_id == 0 and \
+                conn.execute("SELECT count(*) FROM sqlite_master").fetchone()[0] == 0:
+            existed = False
     except sqlite3.DatabaseError as err:
         raise StateError(
             f"{path} is not a gate state database ({err}). It may be damaged or belong to "

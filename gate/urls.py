@@ -48,10 +48,6 @@ class URL:
     query: str | None
     fragment: str | None
 
-    @property
-    def host_is_ip(self) -> bool:
-        return self.host is not None and (self.host.startswith("[") or _is_ipv4(self.host))
-
     def __str__(self) -> str:
         # RFC 3986 section 5.3, component recomposition.
         out = [self.scheme, ":"]
@@ -113,45 +109,6 @@ def remove_dot_segments(path: str) -> str:
             out.append(inp[:cut])
             inp = inp[cut:]
     return "".join(out)
-
-
-def resolve(base: str, reference: str) -> str:
-    """RFC 3986 section 5.2.2 (strict): the target URI of ``reference`` against ``base``."""
-    bs, ba, bp, bq, _ = _split(base)
-    rs, ra, rp, rq, rf = _split(reference)
-    if rs is not None:
-        ts, ta, tp, tq = rs, ra, remove_dot_segments(rp), rq
-    else:
-        if ra is not None:
-            ta, tp, tq = ra, remove_dot_segments(rp), rq
-        else:
-            if rp == "":
-                tp = bp
-                tq = rq if rq is not None else bq
-            else:
-                if rp.startswith("/"):
-                    tp = remove_dot_segments(rp)
-                else:
-                    # 5.2.3 merge
-                    if ba is not None and bp == "":
-                        merged = "/" + rp
-                    else:
-                        merged = bp[: bp.rfind("/") + 1] + rp
-                    tp = remove_dot_segments(merged)
-                tq = rq
-            ta = ba
-        ts = bs
-    out = ""
-    if ts is not None:
-        out += ts + ":"
-    if ta is not None:
-        out += "//" + ta
-    out += tp
-    if tq is not None:
-        out += "?" + tq
-    if rf is not None:
-        out += "#" + rf
-    return out
 
 
 def _split(ref: str) -> tuple[str | None, str | None, str, str | None, str | None]:

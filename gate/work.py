@@ -14,7 +14,7 @@ from dataclasses import dataclass
 from typing import Any
 
 from gate import __version__
-from gate.checks import ALL_CHECKS
+from gate import checks
 from gate.extract import EXTRACT_VERSION, extract
 
 
@@ -30,7 +30,7 @@ class Params:
     def fingerprint(self) -> str:
         """Identifies gate's version, the measurements' versions and these limits."""
         material = {"gate": __version__, "extract": EXTRACT_VERSION, "params": self.__dict__,
-                    "measures": {c.id: c.measure_version for c in ALL_CHECKS
+                    "measures": {c.id: c.measure_version for c in checks.all_checks()
                                  if c.measure is not None}}
         blob = json.dumps(material, sort_keys=True).encode("utf-8")
         return hashlib.sha256(blob).hexdigest()[:16]
@@ -45,7 +45,7 @@ def process(task: tuple[str, bytes, Params]) -> dict[str, Any]:
     measures: dict[str, Any] = {}
     errors: dict[str, str] = {}
     if extraction.summary.ok:
-        for check in ALL_CHECKS:
+        for check in checks.all_checks():
             if check.measure is None:
                 continue
             started = time.perf_counter()
@@ -69,8 +69,8 @@ def warm_up() -> None:
         langdetect.detect_langs("warm up the language profiles before forking")
     except Exception:  # noqa: BLE001 - warming up is an optimisation only
         pass
-    import gate.extract.html  # noqa: F401
-    import gate.extract.mail  # noqa: F401
-    import gate.extract.office  # noqa: F401
-    import gate.extract.pdf  # noqa: F401
+    import gate.extract.html
+    import gate.extract.mail
+    import gate.extract.office
+    import gate.extract.pdf
     import gate.extract.text  # noqa: F401

@@ -18,7 +18,8 @@ def test_policy_check_valid(tmp_path):
     path.write_text("version: 1\nname: ok\nsources:\n  allow:\n    - domain: a.example.org\n")
     result = gate("policy", "check", path)
     assert result.returncode == 0
-    assert result.stdout == f"{path}: valid policy 'ok' (checks on: sources)\n"
+    assert result.stdout == \
+        f"{path}: valid policy 'ok' (sections: sources; checks on: format, source)\n"
 
 
 def test_policy_check_reports_line_and_key(tmp_path):
@@ -100,9 +101,9 @@ def test_codes_lists_every_code():
 
 
 def test_terminal_output_escapes_control_characters():
-    from gate.cli import shown
-    assert shown("evil\x1b[2J\x07name") == "evil\\x1b[2J\\x07name"
-    assert shown("bad-\udcff.txt") == "bad-\\udcff.txt"
+    from gate.cli.common import shown
+    assert shown("evil\x1b[2J\x07name") == "evil<U+001B>[2J<U+0007>name"
+    assert shown("bad-\udcff.txt") == "bad-<U+DCFF>.txt"
     assert shown("Grüße.txt") == "Grüße.txt"
 
 
@@ -112,4 +113,4 @@ def test_error_messages_with_hostile_names_are_escaped(tmp_path):
     missing = tmp_path / "in\x1b[31mred"
     result = gate("run", missing, "--policy", policy, "--out", tmp_path / "o")
     assert result.returncode == 2 and "\x1b" not in result.stderr
-    assert "in\\x1b[31mred" in result.stderr
+    assert "in<U+001B>[31mred" in result.stderr

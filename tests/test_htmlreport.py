@@ -26,7 +26,8 @@ from pathlib import Path
 import pytest
 
 from gate.htmlreport import CSP, Histogram, log_edges, render, text
-from gate.report import build, summary
+from gate import __version__
+from gate.report import CAUTIONS, Tally
 
 ROOT = Path(__file__).resolve().parent.parent
 GATE = [sys.executable, "-m", "gate"]
@@ -58,8 +59,21 @@ RUN = {"id": "run-0007", "as_of": "2026-12-01T00:00:00Z", "mode": "full",
                                          "sha256": "c0ffee" + "0" * 58}}
 
 
+def summary(documents: list[dict], removed: list[dict]) -> dict:
+    """The summary as a run counts it (report.Tally, one document at a time)."""
+    tally = Tally()
+    for entry in documents:
+        tally.add(entry)
+    return tally.summary(removed)
+
+
 def report_of(documents: list[dict], removed=(), unmatched=()) -> dict:
-    return json.loads(json.dumps(build(RUN, documents, list(removed), list(unmatched))))
+    """An invented report with the keys a run writes (gate.commit)."""
+    report = {"gate": {"version": __version__}, "run": RUN,
+              "summary": summary(documents, list(removed)), "documents": documents,
+              "removed": list(removed), "manifest_unmatched": list(unmatched),
+              "cautions": list(CAUTIONS)}
+    return json.loads(json.dumps(report))
 
 
 def plain_report() -> dict:
@@ -302,10 +316,10 @@ def test_planted_markup_is_text_not_markup():
         "#counts", "#reasons", "#scores", "#checks", "#quarantined", "#warnings", "#accepted"]
     assert f'<span class="mono">{JS_URL}</span>' in out
     # undecodable names and control/bidi characters become visible escapes
-    assert "odd/name-\\udcff\\udcfe.txt" in page.text
-    assert "name \\udcff is not UTF-8" in page.text
-    assert "inv/report\\u202etxt.exe" in page.text and "\u202e" not in out
-    assert "m\\x1b[2Jcleared" in page.text and "\x1b" not in out
+    assert "odd/name-<U+DCFF><U+DCFE>.txt" in page.text
+    assert "name <U+DCFF> is not UTF-8" in page.text
+    assert "inv/report<U+202E>txt.exe" in page.text and "\u202e" not in out
+    assert "m<U+001B>[2Jcleared" in page.text and "\x1b" not in out
 
 
 def test_content_security_policy_and_no_outside_references():
@@ -331,7 +345,7 @@ def test_content_security_policy_and_no_outside_references():
 
 def test_text_escapes_for_attributes_and_content():
     assert text('a"b\'c<d>&e') == "a&quot;b&#x27;c&lt;d&gt;&amp;e"
-    assert text("\udcff") == "\\udcff"
+    assert text("\udcff") == "&lt;U+DCFF&gt;"
     assert text(None) == "" and text(3) == "3"
 
 

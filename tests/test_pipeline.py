@@ -241,6 +241,28 @@ def test_foreign_state_file_is_refused_not_overwritten(tmp_path):
     assert (state / "gate.sqlite").read_bytes().startswith(b"this is not")
 
 
+def test_a_state_file_left_empty_by_a_killed_start_is_initialised(tmp_path):
+    """Killed between creating gate.sqlite (WAL mode set) and writing its schema."""
+    import sqlite3
+    inbox = make_inbox(tmp_path)
+    state = tmp_path / "out" / "state"
+    state.mkdir(parents=True)
+    conn = sqlite3.connect(state / "gate.sqlite")
+    conn.execute("PRAGMA journal_mode=WAL")
+    conn.close()
+    assert (state / "gate.sqlite").stat().st_size > 0
+    go(tmp_path, inbox, tmp_path / "out")
+    assert report(tmp_path / "out")["summary"]["documents"] == 20
+    foreign = tmp_path / "other" / "state"
+    foreign.mkdir(parents=True)
+    conn = sqlite3.connect(foreign / "gate.sqlite")
+    conn.execute("CREATE TABLE notes (line TEXT)")  # someone's database: still refused
+    conn.commit()
+    conn.close()
+    with pytest.raises(StateError, match="not a gate state database"):
+        go(tmp_path, inbox, tmp_path / "other")
+
+
 def test_second_concurrent_run_is_refused(tmp_path):
     inbox = make_inbox(tmp_path)
     lock = tmp_path / "out" / "state" / "lock"

@@ -23,16 +23,17 @@ def test_defaults_are_the_gopher_values():
     # Rae et al. 2021, appendix A (quality filters) and Table A1 (repetition), as verified
     # via an implementation quoting the paper (check-values.md section 4).
     s = quality.QualitySettings()
-    assert (s.min_words, s.max_words) == (50, 100_000)
-    assert (s.min_mean_word_length, s.max_mean_word_length) == (3, 10)
-    assert s.max_symbol_ratio == 0.1
-    assert (s.max_bullet_lines, s.max_ellipsis_lines, s.min_alphabetic_words) == (0.9, 0.3, 0.8)
-    assert s.min_stop_words == 2
+    assert (s.words_at_least, s.words_at_most) == (50, 100_000)
+    assert (s.word_length_at_least, s.word_length_at_most) == (3, 10)
+    assert s.symbols_per_word_at_most == 0.1
+    assert (s.bullet_lines_at_most, s.ellipsis_lines_at_most) == (0.9, 0.3)
+    assert s.lettered_words_at_least == 0.8
+    assert s.stop_words_at_least == 2
     assert quality.STOP_LISTS["en"] == ("the", "be", "to", "of", "and", "that", "have", "with")
-    assert (s.max_duplicate_lines, s.max_duplicate_paragraphs) == (0.30, 0.30)
-    assert (s.max_duplicate_line_chars, s.max_duplicate_paragraph_chars) == (0.20, 0.20)
-    assert s.max_top_ngram_chars == {2: 0.20, 3: 0.18, 4: 0.16}
-    assert s.max_duplicate_ngram_chars == {5: 0.15, 6: 0.14, 7: 0.13, 8: 0.12, 9: 0.11,
+    assert (s.repeated_lines_at_most, s.repeated_paragraphs_at_most) == (0.30, 0.30)
+    assert (s.repeated_line_chars_at_most, s.repeated_paragraph_chars_at_most) == (0.20, 0.20)
+    assert s.top_ngram_chars_at_most == {2: 0.20, 3: 0.18, 4: 0.16}
+    assert s.repeated_ngram_chars_at_most == {5: 0.15, 6: 0.14, 7: 0.13, 8: 0.12, 9: 0.11,
                                            10: 0.10}
 
 
@@ -106,8 +107,8 @@ def test_each_rule_fires(text, code):
 
 def test_rules_can_be_switched_off_or_changed():
     short = "The depot opens at seven and closes at nineteen on weekdays."
-    assert evaluate(short, "quality:\n  min_words: 5\n") == []
-    assert evaluate(short, "quality:\n  min_words: null\n") == []
+    assert evaluate(short, "quality:\n  words_at_least: 5\n") == []
+    assert evaluate(short, "quality:\n  words_at_least: null\n") == []
 
 
 def test_stop_word_rule_follows_the_detected_language():

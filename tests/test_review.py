@@ -12,6 +12,7 @@ from gate import audit, review
 from gate.errors import GateError
 from gate.pipeline import RunOptions, run
 from gate.policy import load_policy
+from gate.visible import visible
 
 ROOT = Path(__file__).resolve().parent.parent
 INBOX = ROOT / "sample_docs" / "inbox"
@@ -149,4 +150,4 @@ def test_report_records_the_audit_head(out):
 
 
 def test_visible_makes_invisible_characters_visible():
-    assert review.visible("a\u200bb\u202ec\U000e0041") == "a<U+200B>b<U+202E>c<U+E0041>"
+    assert visible("a\u200bb\u202ec\U000e0041") == "a<U+200B>b<U+202E>c<U+E0041>"

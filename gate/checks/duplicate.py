@@ -9,7 +9,8 @@ How similarity is measured (in the worker): the text is normalised (NFKC, case-f
 punctuation to spaces), split into words, and turned into the set of word 5-grams (the
 shingles of Broder 1997, with w = 5 as in published corpus pipelines, for example FineWeb
 and RefinedWeb). A MinHash sketch of 256 permutations (datasketch, ``affine32`` scheme,
-seed 1; each shingle hashed to 32 bits from the CRC-32 of its words) estimates the Jaccard similarity of two shingle sets with a standard error of
+seed 1; each shingle hashed to 32 bits from the CRC-32 of its words) estimates the Jaccard
+similarity of two shingle sets with a standard error of
 ``sqrt(J(1-J)/256)``, 0.025 at J = 0.8. Exact copies (same bytes, or same normalised text,
 whatever the format) are caught first by hash. Documents with fewer than ``min_shingles``
 shingles are compared only exactly, because sketches of tiny sets collide.
@@ -49,10 +50,10 @@ import numpy as np
 from datasketch import LeanMinHash, MinHash, MinHashLSH
 from pydantic import Field
 
-from gate.checks.base import CorpusCheck
+from gate.checks.base import CorpusCheck, CorpusOutcome, CorpusView
 from gate.extract.model import Extraction
 from gate.findings import Finding, define
-from gate.policy.base import Section
+from gate.settings import Section
 
 NUM_PERM = 256
 SEED = 1
@@ -88,31 +89,9 @@ def words(text: str) -> list[str]:
     return _WORD.findall(unicodedata.normalize("NFKC", text).casefold())
 
 
-def shingles(tokens: Sequence[str], w: int = SHINGLE) -> set[str]:
-    """Broder's w-shingling: the set of contiguous w-token sequences."""
-    if len(tokens) < w:
-        return {" ".join(tokens)} if tokens else set()
-    return {" ".join(tokens[i:i + w]) for i in range(len(tokens) - w + 1)}
-
-
 @lru_cache(maxsize=1)
 def _permutations() -> Any:
     return MinHash(num_perm=NUM_PERM, seed=SEED).permutations
-
-
-def sketch(items: set[str]) -> MinHash:
-    """A MinHash of a set of strings (datasketch, affine32, seed 1, 256 permutations).
-
-    Items are hashed with CRC-32 (zlib, deterministic across processes, unlike Python's
-    salted ``hash``); datasketch's affine32 scheme mixes the input hash with the
-    MurmurHash3 finaliser before permuting, which makes up for CRC-32's weak mixing. The
-    accuracy against exact Jaccard is checked in tests/test_duplicate.py.
-    """
-    m = MinHash(num_perm=NUM_PERM, seed=SEED, permutations=_permutations(), scheme=SCHEME,
-                hashfunc=zlib.crc32)
-    if items:
-        m.update_batch([s.encode("utf-8") for s in items])
-    return m
 
 
 def lean(hashvalues: bytes) -> LeanMinHash:
@@ -223,9 +202,7 @@ class Item:
 
 
 @dataclass
-class Outcome:
-    findings: dict[str, list[Finding]] = field(default_factory=dict)
-    superseded: dict[str, Finding] = field(default_factory=dict)  # stored, not in batch
+class Outcome(CorpusOutcome):
     keepers: set[str] = field(default_factory=set)
 
 
@@ -343,5 +320,30 @@ def _finding(item: Item, keeper: Item, how: str, similarity: float,
     return NEAR(**details)
 
 
+def compare(view: CorpusView, settings: DuplicatesSettings) -> Outcome:
+    """The corpus stage's call: the batch's documents with text, plus the stored documents
+    they compete with (in an incremental run: every stored one, or with a shared index
+    only the stored documents that are LSH candidates of the batch)."""
+    items = [Item(key=m.key, path=m.path, sha256=m.sha256 or "",
+                  text_sha256=m.measured["text_sha256"],
+                  minhash=None if m.measured["shingles"] < settings.min_shingles
+                  else m.measured["minhash"],
+                  trust=m.trust, date=m.date, seen=m.seen, in_batch=True,
+                  accepted_before=m.accepted_before, candidate=m.candidate)
+             for m in view.members]
+    if view.index is not None:
+        items.extend(view.index.candidates(items, batch_ids=view.batch_ids,
+                                           include_own=view.incremental))
+    elif view.incremental:
+        items.extend(Item(key=row["doc_id"], path=row["path"], sha256=row["sha256"],
+                          text_sha256=row["text_sha256"], minhash=row["minhash"],
+                          trust=row["trust"],
+                          date=datetime.fromisoformat(row["date"]) if row["date"] else None,
+                          seen=(row["first_seen"], -1), in_batch=False, accepted_before=True)
+                     for row in view.stored if row["doc_id"] not in view.batch_ids)
+    return evaluate(items, settings, text_of=view.text_of)
+
+
 CHECK = CorpusCheck(id="duplicate", section="duplicates", settings=DuplicatesSettings,
-                    measure=measure, measure_version=3, doc=__doc__ or "")
+                    measure=measure, evaluate=compare, measure_version=3,
+                    doc=__doc__ or "")

@@ -5,10 +5,11 @@ cannot be read, empty files, content gate does not read (images, archives, execu
 other XML), text in no detectable encoding, broken or encrypted PDFs, PDFs over
 ``limits.max_pages``, files over ``limits.max_bytes``, HTML nested deeper than
 ``limits.max_nesting`` (or office, e-book and mail documents nested beyond their parsers'
-bounds), decompression bombs (a PDF stream or a ZIP container inflating past its caps), documents whose extraction ran out of time
-(``limits.timeout_s``) or memory (``limits.memory_mb``) or crashed its worker, and documents
-with no text after extraction. Those mean the document could not be evaluated, so they
-always quarantine, whatever ``format.action`` says.
+bounds), decompression bombs (a PDF stream or a ZIP container inflating past its caps),
+documents whose extraction ran out of time (``limits.timeout_s``) or memory
+(``limits.memory_mb``) or crashed its worker, and documents with no text after extraction.
+Those mean the document could not be evaluated, so they always quarantine, whatever
+``format.action`` says.
 
 Two findings are softer and follow ``format.action``: the file name's extension promising
 another type than the content (``report.pdf`` that is HTML), and an HTML page whose declared
@@ -35,7 +36,7 @@ from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.extract import TYPES
 from gate.extract.sniff import expected_type
 from gate.findings import Finding, define
-from gate.policy.base import Section, Strict
+from gate.settings import Section, Strict
 
 NOT_REGULAR = define("format.not-regular", "not a regular file (link, FIFO, device...)",
                      "the entry is {what}; only regular files are documents, and links are "

@@ -39,10 +39,10 @@ from pydantic import Field
 
 from gate import dates
 from gate.checks import source as source_check
-from gate.checks.base import Document, DocumentCheck, RunContext
+from gate.checks.base import Document, DocumentCheck, RunContext, once_per_document
 from gate.extract.model import DateClaim
 from gate.findings import Finding, define
-from gate.policy.base import Section
+from gate.settings import Section
 
 STALE = define("freshness.stale", "older than the allowed age",
                "the document is dated {date} ({source}), {age_days} days before the as-of "
@@ -81,6 +81,7 @@ def _claims(document: Document) -> list[DateClaim]:
     return claims
 
 
+@once_per_document
 def choose(document: Document, run: RunContext) -> tuple[DateClaim, dates.Stamp] | Finding | None:
     """The document's date by the documented precedence, a bad-date finding, or None."""
     for claim in _claims(document):

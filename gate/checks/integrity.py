@@ -28,7 +28,7 @@ from pydantic import Field
 
 from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.findings import Finding, define
-from gate.policy.base import Section
+from gate.settings import Section
 
 MISMATCH = define("integrity.mismatch", "the bytes do not match the manifest's sha256",
                   "the file's SHA-256 is {actual} but the manifest says {expected}; the file "

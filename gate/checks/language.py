@@ -33,7 +33,7 @@ from pydantic import Field, field_validator
 from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.extract.model import Extraction
 from gate.findings import Finding, define
-from gate.policy.base import Section
+from gate.settings import Section
 
 DetectorFactory.seed = 0
 

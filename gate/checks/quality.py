@@ -7,24 +7,32 @@ default below is the paper's value; every limit can be changed or switched off w
 ``null``. Words are whitespace-separated tokens; lines and paragraphs (blocks separated by a
 blank line) are counted without empty ones.
 
-* word count within ``min_words`` .. ``max_words`` (50 .. 100,000);
-* mean word length within 3 .. 10 characters;
-* symbol-to-word ratio at most 0.1, separately for ``#`` and for ellipses (``...``, ``…``);
-* at most 90 % of lines starting with a bullet, at most 30 % ending with an ellipsis;
-* at least 80 % of words containing an alphabetic character;
-* at least ``min_stop_words`` (2) distinct stop words. The paper's list is English (the, be,
-  to, of, and, that, have, with) and is applied to English text; gate ships lists for a few
-  other languages (compiled from common usage, not from the paper) and skips the rule for
-  languages it has no list for;
-* repetition: duplicate lines and paragraphs (fraction 0.30, character fraction 0.20), the
-  most frequent 2-, 3-, 4-gram's character share (0.20, 0.18, 0.16), and the character share
-  covered by duplicated 5- to 10-grams (0.15 down to 0.10).
+* how much text: ``words_at_least`` .. ``words_at_most`` words (50 .. 100,000);
+* what the words look like: mean word length ``word_length_at_least`` ..
+  ``word_length_at_most`` (3 .. 10 characters); at least ``lettered_words_at_least`` (80 %)
+  of words containing an alphabetic character; at least ``stop_words_at_least`` (2)
+  distinct stop words. The paper's list is English (the, be, to, of, and, that, have,
+  with) and is applied to English text; gate ships lists for a few other languages
+  (compiled from common usage, not from the paper) and skips the rule for languages it has
+  no list for;
+* symbols and line shapes: at most ``symbols_per_word_at_most`` (0.1) per word, separately
+  for ``#`` and for ellipses (``...``, ``…``); at most ``bullet_lines_at_most`` (90 %) of
+  lines starting with a bullet, at most ``ellipsis_lines_at_most`` (30 %) ending with an
+  ellipsis;
+* repetition: repeated lines and paragraphs (``repeated_lines_at_most``,
+  ``repeated_paragraphs_at_most``: share 0.30; ``repeated_line_chars_at_most``,
+  ``repeated_paragraph_chars_at_most``: character share 0.20), the most frequent 2-, 3-,
+  4-gram's character share (``top_ngram_chars_at_most``: 0.20, 0.18, 0.16), and the
+  character share covered by repeated 5- to 10-grams (``repeated_ngram_chars_at_most``:
+  0.15 down to 0.10).
+
+Keys are named by what they measure; the rules and values are the paper's.
 
 Example::
 
     quality:
-      min_words: 20            # short notices are welcome in this corpus
-      min_stop_words: null     # switch the stop-word rule off
+      words_at_least: 20           # short notices are welcome in this corpus
+      stop_words_at_least: null    # switch the stop-word rule off
       action: warn
 """
 
@@ -39,9 +47,9 @@ from pydantic import Field
 from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.extract.model import Extraction
 from gate.findings import Finding, define
-from gate.policy.base import Section
+from gate.settings import Section
 
-MAX_SCANNED_WORDS = 120_000  # beyond max_words the document fails anyway
+MAX_SCANNED_WORDS = 120_000  # beyond words_at_most the document fails anyway
 
 WORD_COUNT = define("quality.word-count", "too few or too many words",
                     "the text has {words} words; the limits are {low} to {high}")
@@ -78,37 +86,46 @@ _PARAGRAPH = re.compile(r"\n\s*\n")
 
 
 class QualitySettings(Section):
-    """Gopher document-quality filters; defaults are the paper's values, null disables."""
+    """Gopher document-quality filters; defaults are the paper's values, null disables.
 
-    min_words: int | None = Field(50, ge=0, description="Fewest words.")
-    max_words: int | None = Field(100_000, ge=1, description="Most words.")
-    min_mean_word_length: float | None = Field(3, ge=0, description="Shortest mean word "
-                                               "length, characters.")
-    max_mean_word_length: float | None = Field(10, ge=0, description="Longest mean word "
-                                               "length, characters.")
-    max_symbol_ratio: float | None = Field(0.1, ge=0, description="Most '#' (or ellipses) "
-                                           "per word.")
-    max_bullet_lines: float | None = Field(0.9, ge=0, le=1, description="Largest share of "
-                                           "lines starting with a bullet.")
-    max_ellipsis_lines: float | None = Field(0.3, ge=0, le=1, description="Largest share of "
-                                             "lines ending with an ellipsis.")
-    min_alphabetic_words: float | None = Field(0.8, ge=0, le=1, description="Smallest share "
-                                               "of words containing a letter.")
-    min_stop_words: int | None = Field(2, ge=0, description="Fewest distinct stop words "
-                                       "(for languages gate has a list for).")
-    max_duplicate_lines: float | None = Field(0.30, ge=0, le=1, description="Largest share "
-                                              "of lines that repeat an earlier line.")
-    max_duplicate_paragraphs: float | None = Field(0.30, ge=0, le=1, description="Largest "
-                                                   "share of repeated paragraphs.")
-    max_duplicate_line_chars: float | None = Field(0.20, ge=0, le=1, description="Largest "
-                                                   "character share of repeated lines.")
-    max_duplicate_paragraph_chars: float | None = Field(0.20, ge=0, le=1, description=""
-                                                        "Largest character share of "
-                                                        "repeated paragraphs.")
-    max_top_ngram_chars: dict[int, float] = Field(
+    Keys are named by what they measure, then the bound: ``<measure>_at_least`` or
+    ``<measure>_at_most``. Groups: how much text (``words_*``), what its words look like
+    (``word_length_*``, ``lettered_words_*``, ``stop_words_*``), symbols and line shapes
+    (``symbols_per_word_*``, ``bullet_lines_*``, ``ellipsis_lines_*``), and repetition
+    (``repeated_*``, ``top_ngram_chars_*``)."""
+
+    # how much text (Gopher: 50 to 100,000 words)
+    words_at_least: int | None = Field(50, ge=0, description="Fewest words.")
+    words_at_most: int | None = Field(100_000, ge=1, description="Most words.")
+    # what the words look like (Gopher: mean length 3 to 10, 80 % with a letter, 2 stop words)
+    word_length_at_least: float | None = Field(
+        3, ge=0, description="Shortest mean word length, characters.")
+    word_length_at_most: float | None = Field(
+        10, ge=0, description="Longest mean word length, characters.")
+    lettered_words_at_least: float | None = Field(
+        0.8, ge=0, le=1, description="Smallest share of words containing a letter.")
+    stop_words_at_least: int | None = Field(
+        2, ge=0, description="Fewest distinct stop words (for languages gate has a list for).")
+    # symbols and line shapes (Gopher: 0.1 per word, 90 % bullets, 30 % ellipsis endings)
+    symbols_per_word_at_most: float | None = Field(
+        0.1, ge=0, description="Most '#' (or ellipses) per word.")
+    bullet_lines_at_most: float | None = Field(
+        0.9, ge=0, le=1, description="Largest share of lines starting with a bullet.")
+    ellipsis_lines_at_most: float | None = Field(
+        0.3, ge=0, le=1, description="Largest share of lines ending with an ellipsis.")
+    # repetition (Gopher Table A1)
+    repeated_lines_at_most: float | None = Field(
+        0.30, ge=0, le=1, description="Largest share of lines that repeat an earlier line.")
+    repeated_paragraphs_at_most: float | None = Field(
+        0.30, ge=0, le=1, description="Largest share of repeated paragraphs.")
+    repeated_line_chars_at_most: float | None = Field(
+        0.20, ge=0, le=1, description="Largest character share of repeated lines.")
+    repeated_paragraph_chars_at_most: float | None = Field(
+        0.20, ge=0, le=1, description="Largest character share of repeated paragraphs.")
+    top_ngram_chars_at_most: dict[int, float] = Field(
         {2: 0.20, 3: 0.18, 4: 0.16}, description="n -> largest character share of the most "
         "frequent n-gram (Gopher Table A1); remove an entry to switch it off.")
-    max_duplicate_ngram_chars: dict[int, float] = Field(
+    repeated_ngram_chars_at_most: dict[int, float] = Field(
         {5: 0.15, 6: 0.14, 7: 0.13, 8: 0.12, 9: 0.11, 10: 0.10},
         description="n -> largest character share covered by n-grams that occur more "
         "than once (Gopher Table A1).")
@@ -220,49 +237,52 @@ def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding] 
     s = settings
     found: list[Finding] = []
     words = m["words"]
-    low = s.min_words if s.min_words is not None else 0
-    high = s.max_words if s.max_words is not None else "unlimited"
-    if (s.min_words is not None and words < s.min_words) or \
-            (s.max_words is not None and words > s.max_words):
+    low = s.words_at_least if s.words_at_least is not None else 0
+    high = s.words_at_most if s.words_at_most is not None else "unlimited"
+    if (s.words_at_least is not None and words < s.words_at_least) or \
+            (s.words_at_most is not None and words > s.words_at_most):
         found.append(WORD_COUNT(words=words, low=low, high=high))
     mean = m["mean_word_length"]
-    if (s.min_mean_word_length is not None and mean < s.min_mean_word_length) or \
-            (s.max_mean_word_length is not None and mean > s.max_mean_word_length):
-        found.append(WORD_LENGTH(mean=mean, low=s.min_mean_word_length,
-                                 high=s.max_mean_word_length))
-    if s.max_symbol_ratio is not None:
+    if (s.word_length_at_least is not None and mean < s.word_length_at_least) or \
+            (s.word_length_at_most is not None and mean > s.word_length_at_most):
+        found.append(WORD_LENGTH(mean=mean, low=s.word_length_at_least,
+                                 high=s.word_length_at_most))
+    if s.symbols_per_word_at_most is not None:
         for key, symbol in (("hash_ratio", "'#'"), ("ellipsis_ratio", "ellipses")):
-            if m[key] > s.max_symbol_ratio:
-                found.append(SYMBOLS(ratio=m[key], symbol=symbol, limit=s.max_symbol_ratio))
-    if s.max_bullet_lines is not None and m["bullet_lines"] > s.max_bullet_lines:
-        found.append(BULLETS(share=m["bullet_lines"], limit=s.max_bullet_lines))
-    if s.max_ellipsis_lines is not None and m["ellipsis_lines"] > s.max_ellipsis_lines:
-        found.append(ELLIPSIS_LINES(share=m["ellipsis_lines"], limit=s.max_ellipsis_lines))
-    if s.min_alphabetic_words is not None and m["alphabetic_words"] < s.min_alphabetic_words:
-        found.append(NON_ALPHA(share=m["alphabetic_words"], limit=s.min_alphabetic_words))
+            if m[key] > s.symbols_per_word_at_most:
+                found.append(SYMBOLS(ratio=m[key], symbol=symbol,
+                                     limit=s.symbols_per_word_at_most))
+    if s.bullet_lines_at_most is not None and m["bullet_lines"] > s.bullet_lines_at_most:
+        found.append(BULLETS(share=m["bullet_lines"], limit=s.bullet_lines_at_most))
+    if s.ellipsis_lines_at_most is not None and m["ellipsis_lines"] > s.ellipsis_lines_at_most:
+        found.append(ELLIPSIS_LINES(share=m["ellipsis_lines"], limit=s.ellipsis_lines_at_most))
+    if s.lettered_words_at_least is not None and \
+            m["alphabetic_words"] < s.lettered_words_at_least:
+        found.append(NON_ALPHA(share=m["alphabetic_words"], limit=s.lettered_words_at_least))
     language = (document.measures.get("language") or {}).get("languages") or []
     lang = language[0][0] if language else None
-    if s.min_stop_words is not None and lang in m["stop_words"]:
+    if s.stop_words_at_least is not None and lang in m["stop_words"]:
         present = m["stop_words"][lang]
-        if len(present) < s.min_stop_words:
+        if len(present) < s.stop_words_at_least:
             found.append(STOP_WORDS(language=lang, found=len(present),
-                                    words=", ".join(present) or "none", limit=s.min_stop_words))
+                                    words=", ".join(present) or "none",
+                                    limit=s.stop_words_at_least))
     repeats: list[dict[str, Any]] = []
     for key, limit, name in (
-            ("duplicate_lines", s.max_duplicate_lines, "repeated lines"),
-            ("duplicate_paragraphs", s.max_duplicate_paragraphs, "repeated paragraphs"),
-            ("duplicate_line_chars", s.max_duplicate_line_chars,
+            ("duplicate_lines", s.repeated_lines_at_most, "repeated lines"),
+            ("duplicate_paragraphs", s.repeated_paragraphs_at_most, "repeated paragraphs"),
+            ("duplicate_line_chars", s.repeated_line_chars_at_most,
              "characters in repeated lines"),
-            ("duplicate_paragraph_chars", s.max_duplicate_paragraph_chars,
+            ("duplicate_paragraph_chars", s.repeated_paragraph_chars_at_most,
              "characters in repeated paragraphs")):
         if limit is not None and m[key] > limit:
             repeats.append({"measure": key, "name": name, "value": m[key], "limit": limit})
-    for n, limit in sorted(s.max_top_ngram_chars.items()):
+    for n, limit in sorted(s.top_ngram_chars_at_most.items()):
         value = m["top_ngram_chars"].get(str(n))
         if value is not None and value > limit:
             repeats.append({"measure": f"top_{n}gram_chars", "value": value, "limit": limit,
                             "name": f"characters in the most frequent {n}-gram"})
-    for n, limit in sorted(s.max_duplicate_ngram_chars.items()):
+    for n, limit in sorted(s.repeated_ngram_chars_at_most.items()):
         value = m["duplicate_ngram_chars"].get(str(n))
         if value is not None and value > limit:
             repeats.append({"measure": f"duplicate_{n}gram_chars", "value": value,

@@ -44,7 +44,7 @@ from gate import signing
 from gate.checks import source as source_check
 from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.findings import Finding, define
-from gate.policy.base import Section
+from gate.settings import Section
 
 UNSIGNED = define("signature.unsigned", "the manifest line is not in a signed batch",
                   "{what} is not covered by a signature line, so who recorded it cannot be "
@@ -137,5 +137,6 @@ def _trusted_elsewhere(policy: Any, blob: bytes) -> list[str]:
             if any(key.blob == blob for key in _keys(rule.signers))]
 
 
+# per_source off: the keys already belong to the allow rules, so overrides add nothing
 CHECK = DocumentCheck(id="signature", section="signature", evaluate=evaluate,
-                      settings=SignatureSettings, doc=__doc__ or "")
+                      settings=SignatureSettings, per_source=False, doc=__doc__ or "")

@@ -40,10 +40,10 @@ from typing import Annotated, Any, Union
 from pydantic import Discriminator, Field, Tag, field_validator
 
 from gate import signing, urls
-from gate.checks.base import Document, DocumentCheck, RunContext
+from gate.checks.base import Document, DocumentCheck, RunContext, once_per_document
 from gate.findings import Finding, define
 from gate.manifest import normalize_path
-from gate.policy.base import Section, Strict
+from gate.settings import Section, Strict
 
 DENIED = define("source.denied", "the source is on the deny list",
                 "{what} is denied by sources.deny[{rule}] ({rule_text})")
@@ -103,9 +103,9 @@ class _AllowRule(_Rule):
     max_age_days: int | None = Field(None, ge=0, description="Overrides freshness."
                                      "max_age_days for documents this rule admits.")
     overrides: dict[str, Any] | None = Field(
-        None, description="Policy sections (integrity, freshness, language, injection, "
-        "quality, format) that apply differently to the documents this rule admits; merged "
-        "onto the policy.", examples=[{"language": {"allowed": ["en", "fr"]}}])
+        None, description="Policy sections of the per-document checks (every one but "
+        "sources) that apply differently to the documents this rule admits; merged onto "
+        "the policy.", examples=[{"language": {"allowed": ["en", "fr"]}}])
     signers: tuple[str, ...] = Field(
         (), description="Keys trusted to sign the manifest lines of the documents this rule "
         "admits (the signature check): OpenSSH allowed-signers or public-key lines, or "
@@ -201,11 +201,11 @@ def _rule_kind(value: Any) -> str | None:
 
 _RULE_ERROR = dict(custom_error_type="rule_kind",
                    custom_error_message="a rule needs exactly one of domain, url_prefix, path")
-AllowRule = Annotated[Union[Annotated[DomainAllow, Tag("domain")],
+AllowRule = Annotated[Union[Annotated[DomainAllow, Tag("domain")],  # noqa: UP007
                             Annotated[PrefixAllow, Tag("url_prefix")],
                             Annotated[PathAllow, Tag("path")]],
                       Discriminator(_rule_kind, **_RULE_ERROR)]
-DenyRule = Annotated[Union[Annotated[DomainDeny, Tag("domain")],
+DenyRule = Annotated[Union[Annotated[DomainDeny, Tag("domain")],  # noqa: UP007
                            Annotated[PrefixDeny, Tag("url_prefix")],
                            Annotated[PathDeny, Tag("path")]],
                      Discriminator(_rule_kind, **_RULE_ERROR)]
@@ -253,6 +253,7 @@ class SourceMatch:
     max_age_days: int | None = None
 
 
+@once_per_document
 def match(document: Document, settings: SourcesSettings) -> SourceMatch:
     """Match one document against the source rules (pure)."""
     raw = document.manifest.source_url if document.manifest else None
@@ -310,5 +311,5 @@ def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding]:
     return []
 
 
-CHECK = DocumentCheck(id="source", section="sources", evaluate=evaluate,
+CHECK = DocumentCheck(id="source", section="sources", evaluate=evaluate, per_source=False,
                       settings=SourcesSettings, doc=__doc__ or "")

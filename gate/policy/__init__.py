@@ -26,25 +26,16 @@ from typing import Any
 
 from pydantic import BaseModel, ValidationError
 
-from gate import signing
+from gate import checks, signing
 from gate.errors import PolicyError
 from gate.policy import yamlload
+from gate.policy.model import Policy
 
 __all__ = ["LoadedPolicy", "Policy", "load_policy", "parse_policy", "schema"]
 
 _TAGS = {"domain", "url_prefix", "path"}
 
 
-def __getattr__(name: str) -> Any:
-    # The model is assembled from the check registry, and the checks import
-    # gate.policy.base: importing it lazily keeps that cycle from forming.
-    if name == "Policy":
-        from gate.policy.model import Policy
-        return Policy
-    raise AttributeError(name)
-
-
-OVERRIDABLE = ("integrity", "freshness", "language", "injection", "quality", "format")
 
 
 @dataclass(frozen=True)
@@ -90,7 +81,6 @@ def _dotted(loc: tuple) -> str:
 
 def _model_at(loc: tuple, raw_loc: tuple) -> type[BaseModel] | None:
     """The model class that owns the last key of ``loc`` (for unknown-key suggestions)."""
-    from gate.policy.model import Policy
     model: Any = Policy
     for index, part in enumerate(loc[:-1]):
         if isinstance(part, int):
@@ -262,7 +252,6 @@ def _read_layers(path: Path, chain: tuple[Path, ...] = ()) -> tuple[dict, dict, 
 
 
 def _validate(data: dict, where: dict, top: str) -> tuple[Any, dict[int, Any]]:
-    from gate.policy.model import Policy
     try:
         policy = Policy.model_validate(data)
     except ValidationError as exc:
@@ -275,16 +264,20 @@ def _validate(data: dict, where: dict, top: str) -> tuple[Any, dict[int, Any]]:
         if not overrides:
             continue
         prefix = ("sources", "allow", index, "overrides")
-        bad = [k for k in overrides if k not in OVERRIDABLE]
+        overridable = checks.per_source_sections()
+        bad = [k for k in overrides if k not in overridable]
         if bad:
             file, line = where.get(prefix + (bad[0],), (top, 0))
             place = f"line {line}: " if file == top else f"{file} line {line}: "
             problems.append(f"{place}{_dotted(prefix + (bad[0],))}: {bad[0]!r} cannot be "
-                            f"overridden per source (only {', '.join(OVERRIDABLE)})")
+                            f"overridden per source (only the sections {', '.join(overridable)})")
             continue
         effective = _merge(data, overrides)
         try:
-            by_rule[index] = Policy.model_validate(effective)
+            # the sources section cannot be overridden: share it, so a document's source
+            # match is computed once whichever variant asks (checks.base.once_per_document)
+            by_rule[index] = Policy.model_validate(effective).model_copy(
+                update={"sources": policy.sources})
         except ValidationError as exc:
             problems += _problems(exc, where, top, prefix)
     if problems:
@@ -317,7 +310,6 @@ def load_policy(path: str | Path) -> LoadedPolicy:
 
 def schema() -> dict[str, Any]:
     """The JSON Schema of policy files (for editors' completion and validation)."""
-    from gate.policy.model import Policy
     out = Policy.model_json_schema()
     out["$schema"] = "https://json-schema.org/draft/2020-12/schema"
     out["title"] = "gate policy"

@@ -10,9 +10,9 @@ from typing import Any, Literal, Optional
 
 from pydantic import Field, create_model, model_validator
 
-from gate.checks import ALL_CHECKS
+from gate import checks
 from gate.checks.format import LimitsSettings
-from gate.policy.base import Strict
+from gate.settings import Strict
 
 
 class PolicyBase(Strict):
@@ -48,7 +48,7 @@ class PolicyBase(Strict):
 
 def _section_fields() -> dict[str, Any]:
     fields: dict[str, Any] = {}
-    for check in ALL_CHECKS:
+    for check in checks.all_checks():
         if check.section is None or check.settings is None:
             continue
         summary = (check.doc.strip().splitlines() or [""])[0]

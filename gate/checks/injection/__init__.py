@@ -53,7 +53,7 @@ from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.checks.injection import score
 from gate.checks.injection.screen import MEASURE_VERSION, measure
 from gate.findings import Finding
-from gate.policy.base import Section
+from gate.settings import Section
 
 MAX_FINDINGS = 20
 

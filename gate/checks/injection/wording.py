@@ -180,7 +180,7 @@ rule("override", "de", 0.55,
      r"\bvergiss\w*\W+(?:alles|all\W+das)\W+(?:\w+\W+){0,4}?(?:oben|zuvor|vorher|bisher|"
      r"gesagt|gelernt|bekommen)\b", "vergi")
 rule("override", "de", 0.55,
-     rf"\b(?:alle|samtliche|die)\W+(?:vorherigen|bisherigen|obigen|fruheren|ursprunglichen)\W+"
+     r"\b(?:alle|samtliche|die)\W+(?:vorherigen|bisherigen|obigen|fruheren|ursprunglichen)\W+"
      r"(?:anweisungen|regeln|vorgaben|befehle|instruktionen)\W+(?:sind|gelten|werden)\W+"
      r"(?:\w+\W+){0,2}?(?:ungultig|aufgehoben|nichtig|hinfallig|ausser\W+kraft|"
      r"nicht\W+mehr\W+(?:gultig|relevant))\b",

@@ -1,5 +1,5 @@
-"""Commands for the operator's day: review the quarantine, verify the audit log, explain a
-document. Registered on the main app by gate/cli.py."""
+"""The operator's commands: review the quarantine, verify the audit log, explain a
+document."""
 
 from __future__ import annotations
 
@@ -10,7 +10,7 @@ from typing import Annotated, Optional
 
 import typer
 
-from gate.cli import _guard, out_console, shown
+from gate.cli.common import guard, say
 
 review_app = typer.Typer(add_completion=False, no_args_is_help=True,
                          help="Review quarantined documents: list, show, release, reject, "
@@ -20,24 +20,20 @@ audit_app = typer.Typer(add_completion=False, no_args_is_help=True,
 
 OutDir = Annotated[Path, typer.Argument(help="The output folder of gate run (--out).")]
 Note = Annotated[str, typer.Option("--note", help="Why (required; kept in the audit log).")]
-By = Annotated[Optional[str], typer.Option(  # noqa: UP007
+By = Annotated[Optional[str], typer.Option(  # noqa: UP045
     "--by", help="Reviewer name for the audit log (default: the login name).")]
 Refs = Annotated[list[str], typer.Argument(help="Entry ids or inbox paths.")]
-
-
-def _print(line: str) -> None:
-    out_console.print(shown(line), markup=False)
 
 
 @review_app.command("list")
 def review_list(
     out: OutDir,
-    check: Annotated[Optional[str], typer.Option(help="Only entries held by this check.")] = None,  # noqa: UP007,E501
-    code: Annotated[Optional[str], typer.Option(help="Only this finding code (or a code prefix such as 'source').")] = None,  # noqa: UP007,E501
-    source: Annotated[Optional[str], typer.Option(help="Only sources containing this text (host or URL).")] = None,  # noqa: UP007,E501
-    run: Annotated[Optional[str], typer.Option(help="Only entries placed by this run id.")] = None,  # noqa: UP007,E501
-    since: Annotated[Optional[str], typer.Option(help="Only entries decided on or after this date (YYYY-MM-DD).")] = None,  # noqa: UP007,E501
-    until: Annotated[Optional[str], typer.Option(help="Only entries decided on or before this date.")] = None,  # noqa: UP007,E501
+    check: Annotated[Optional[str], typer.Option(help="Only entries held by this check.")] = None,  # noqa: UP045
+    code: Annotated[Optional[str], typer.Option(help="Only this finding code (or a code prefix such as 'source').")] = None,  # noqa: UP045,E501
+    source: Annotated[Optional[str], typer.Option(help="Only sources containing this text (host or URL).")] = None,  # noqa: UP045,E501
+    run: Annotated[Optional[str], typer.Option(help="Only entries placed by this run id.")] = None,  # noqa: UP045
+    since: Annotated[Optional[str], typer.Option(help="Only entries decided on or after this date (YYYY-MM-DD).")] = None,  # noqa: UP045,E501
+    until: Annotated[Optional[str], typer.Option(help="Only entries decided on or before this date.")] = None,  # noqa: UP045,E501
     status: Annotated[str, typer.Option(help="open, rejected or all.")] = "open",
     as_json: Annotated[bool, typer.Option("--json", help="JSON for scripts.")] = False,
 ) -> None:
@@ -52,15 +48,15 @@ def review_list(
                                         ensure_ascii=True) + "\n")
             return
         if not entries:
-            _print("no matching entries")
+            say("no matching entries")
             return
         for entry in entries:
-            _print(f"{entry.id}  {entry.status:<8}  {entry.path}")
+            say(f"{entry.id}  {entry.status:<8}  {entry.path}")
             for reason in entry.record.get("reasons", []):
-                _print(f"    {reason['code']}: {reason['message']}")
-        _print(f"{len(entries)} entries")
+                say(f"    {reason['code']}: {reason['message']}")
+        say(f"{len(entries)} entries")
 
-    _guard(body)
+    guard(body)
 
 
 @review_app.command("show")
@@ -77,40 +73,40 @@ def review_show(out: OutDir,
             return
         record = data["record"]
         doc = record.get("document", {})
-        _print(f"{data['folder']}/{data['id']}  ({data['status']})")
-        _print(f"path:    {data['path']}")
-        _print(f"sha256:  {doc.get('sha256')}")
+        say(f"{data['folder']}/{data['id']}  ({data['status']})")
+        say(f"path:    {data['path']}")
+        say(f"sha256:  {doc.get('sha256')}")
         source = record.get("source") or {}
         if source.get("url"):
-            _print(f"source:  {source['url']} (trust {source.get('trust')})")
+            say(f"source:  {source['url']} (trust {source.get('trust')})")
         if record.get("date"):
-            _print(f"date:    {record['date']['value']} ({record['date']['source']})")
-        _print(f"checks:  " + ", ".join(f"{k} {v}" for k, v in sorted(record.get("checks",
+            say(f"date:    {record['date']['value']} ({record['date']['source']})")
+        say("checks:  " + ", ".join(f"{k} {v}" for k, v in sorted(record.get("checks",
                                                                                 {}).items())))
         for title, key in (("reasons", "reasons"), ("warnings", "warnings")):
             items = record.get(key) or []
             if items:
-                _print(f"{title}:")
+                say(f"{title}:")
             for item in items:
-                _print(f"  {item['code']}: {visible(item['message'])}")
+                say(f"  {item['code']}: {visible(item['message'])}")
                 details = item.get("details") or {}
                 for field in ("snippet", "payload", "decoded", "span", "signal"):
                     if field in details:
-                        _print(f"      {field}: {visible(str(details[field]))}")
+                        say(f"      {field}: {visible(str(details[field]))}")
         for review_key in ("review", "released"):
             if record.get(review_key):
                 r = record[review_key]
-                _print(f"{review_key}: {r['action']} by {r['by']} at {r['at']}: {r['note']}")
+                say(f"{review_key}: {r['action']} by {r['by']} at {r['at']}: {r['note']}")
         for diff in data["keeper_diffs"]:
-            _print(f"diff against the keeper {diff['keeper']}:")
+            say(f"diff against the keeper {diff['keeper']}:")
             for line in diff["diff"].splitlines():
-                _print(f"  {line}")
+                say(f"  {line}")
         if data["text_start"]:
-            _print("text (start, invisible characters shown as <U+XXXX>):")
+            say("text (start, invisible characters shown as <U+XXXX>):")
             for line in data["text_start"].splitlines()[:20]:
-                _print(f"  | {line}")
+                say(f"  | {line}")
 
-    _guard(body)
+    guard(body)
 
 
 def _act(action: str, out: Path, refs: list[str], note: str, by: str | None) -> None:
@@ -119,11 +115,11 @@ def _act(action: str, out: Path, refs: list[str], note: str, by: str | None) -> 
         result = act(out, action, refs, note=note, by=by)
         verb = {"release": "released", "reject": "rejected", "purge": "purged"}[action]
         for doc_id, path in zip(result.ids, result.paths):
-            _print(f"{verb} {doc_id}  {path}")
-        _print(f"{result.review_id}: {len(result.ids)} entries {verb}"
+            say(f"{verb} {doc_id}  {path}")
+        say(f"{result.review_id}: {len(result.ids)} entries {verb}"
                + (" (changes.jsonl updated)" if action == "release" else ""))
 
-    _guard(body)
+    guard(body)
 
 
 @review_app.command("release")
@@ -145,42 +141,40 @@ def review_purge(out: OutDir, refs: Refs, note: Note, by: By = None) -> None:
 
 
 @audit_app.command("verify")
-def audit_verify(out: OutDir, head: Annotated[Optional[str], typer.Option(  # noqa: UP007
+def audit_verify(out: OutDir, head: Annotated[Optional[str], typer.Option(  # noqa: UP045
         "--head", help="A head hash recorded earlier (report.json run.audit_head) that "
                        "must still be in the log.")] = None) -> None:
     """Recompute the hash chain; exit 1 if any entry was changed or removed."""
 
     def body():
-        from gate import audit
-        from gate.review import _state
-        state = _state(out)
+        from gate.review import open_folder
+        state = open_folder(out)
         try:
-            verdict = audit.verify(state.conn, head)
+            verdict = state.verify_audit(head)
         finally:
             state.close()
         if verdict.ok:
-            _print(f"audit log intact: {verdict.entries} entries, head {verdict.head}")
+            say(f"audit log intact: {verdict.entries} entries, head {verdict.head}")
             return
-        _print(f"audit log BROKEN after {verdict.entries} entries: {verdict.problem}")
+        say(f"audit log BROKEN after {verdict.entries} entries: {verdict.problem}")
         raise typer.Exit(1)
 
-    _guard(body)
+    guard(body)
 
 
 @audit_app.command("show")
 def audit_show(out: OutDir,
-               ref: Annotated[Optional[str], typer.Option("--id", help="Only this entry id or path.")] = None,  # noqa: UP007,E501
+               ref: Annotated[Optional[str], typer.Option("--id", help="Only this entry id or path.")] = None,  # noqa: UP045,E501
                limit: Annotated[int, typer.Option(help="Newest entries to show.")] = 50,
                as_json: Annotated[bool, typer.Option("--json")] = False) -> None:
     """Show the newest audit entries (newest first)."""
 
     def body():
-        from gate import audit
-        from gate.review import _state, resolve
-        state = _state(out)
+        from gate.review import open_folder, resolve
+        state = open_folder(out)
         try:
             doc_id = resolve(state, ref) if ref else None
-            rows = list(audit.entries(state.conn, doc_id=doc_id, limit=limit))
+            rows = state.audit_entries(doc_id, limit)
         finally:
             state.close()
         if as_json:
@@ -189,21 +183,21 @@ def audit_show(out: OutDir,
         for row in rows:
             what = row.get("path") or row.get("run")
             extra = row.get("decision") or row.get("note") or ""
-            _print(f"{row['seq']:>7}  {row['action']:<10}  {what}  {extra}")
+            say(f"{row['seq']:>7}  {row['action']:<10}  {what}  {extra}")
 
-    _guard(body)
+    guard(body)
 
 
 def explain_command(
     file: Annotated[Path, typer.Argument(help="The document to explain.")],
     policy: Annotated[Path, typer.Option("--policy", help="Policy file.")],
-    source_url: Annotated[Optional[str], typer.Option(help="Its source URL (as the manifest would say).")] = None,  # noqa: UP007,E501
-    sha256: Annotated[Optional[str], typer.Option(help="Its recorded SHA-256.")] = None,  # noqa: UP007,E501
-    published_at: Annotated[Optional[str], typer.Option(help="Its publication date.")] = None,  # noqa: UP007,E501
-    retrieved_at: Annotated[Optional[str], typer.Option(help="When it was gathered.")] = None,  # noqa: UP007,E501
-    inbox_path: Annotated[Optional[str], typer.Option(help="The inbox-relative path to use for path rules (default: the file name).")] = None,  # noqa: UP007,E501
-    as_of: Annotated[Optional[str], typer.Option("--as-of", help="Clock for freshness (default now).")] = None,  # noqa: UP007,E501
-    against: Annotated[Optional[Path], typer.Option(help="An output folder whose accepted corpus to compare with for duplicates.")] = None,  # noqa: UP007,E501
+    source_url: Annotated[Optional[str], typer.Option(help="Its source URL (as the manifest would say).")] = None,  # noqa: UP045,E501
+    sha256: Annotated[Optional[str], typer.Option(help="Its recorded SHA-256.")] = None,  # noqa: UP045
+    published_at: Annotated[Optional[str], typer.Option(help="Its publication date.")] = None,  # noqa: UP045
+    retrieved_at: Annotated[Optional[str], typer.Option(help="When it was gathered.")] = None,  # noqa: UP045
+    inbox_path: Annotated[Optional[str], typer.Option(help="The inbox-relative path to use for path rules (default: the file name).")] = None,  # noqa: UP045,E501
+    as_of: Annotated[Optional[str], typer.Option("--as-of", help="Clock for freshness (default now).")] = None,  # noqa: UP045,E501
+    against: Annotated[Optional[Path], typer.Option(help="An output folder whose accepted corpus to compare with for duplicates.")] = None,  # noqa: UP045,E501
     as_json: Annotated[bool, typer.Option("--json")] = False,
 ) -> None:
     """Explain one document under a policy: each check's outcome, findings and values."""
@@ -235,15 +229,16 @@ def explain_command(
             return
         ex = result.document.extracted
         kind = ex.type or (ex.problem or "unsupported").replace("-", " ")
-        _print(f"{rel}: {kind}, {result.document.size} bytes, "
+        say(f"{rel}: {kind}, {result.document.size} bytes, "
                f"{ex.text_chars} characters of text")
-        _print(f"decision under {loaded.name!r}: {result.decision}")
+        say(f"decision under {loaded.name!r}: {result.decision}")
+        say("checks (outcome, measured values; findings below each):")
         for check in result.checks:
-            _print(f"  {check['check']:<10} {check['outcome']:<5} {_measured(check)}")
+            say(f"  {check['check']:<10} {check['outcome']:<5} {_measured(check)}")
             for finding in check["findings"]:
-                _print(f"      {finding['code']}: {finding['message']}")
+                say(f"      {finding['code']}: {finding['message']}")
 
-    _guard(body)
+    guard(body)
 
 
 def _measured(check: dict) -> str:

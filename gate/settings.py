@@ -1,4 +1,7 @@
-"""Building blocks for policy sections: strict models and the per-section action."""
+"""Building blocks for policy sections: strict models and the per-section action.
+
+A leaf module (it imports nothing from gate), so the checks can declare their settings
+without importing the policy package that is assembled from them."""
 
 from __future__ import annotations
 

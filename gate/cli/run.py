@@ -1,122 +1,24 @@
-"""The command line: a thin layer over :mod:`gate.pipeline` and :mod:`gate.policy`.
-
-Every command turns the library's errors into one paragraph on stderr and an exit code:
-0 the command completed (whatever was quarantined), 2 it could not run (bad policy,
-missing inbox, unreadable manifest, busy or unusable output folder), 3 the run completed
-but exceeded a --max-quarantine-rate or --max-code-rate limit, 130 interrupted (re-run the
-same command to resume), 70 an internal error in gate itself.
-"""
+"""The run commands: ``gate run``, ``gate policy check|schema``, ``gate report html``,
+``gate codes`` and ``gate version``."""
 
 from __future__ import annotations
 
 import os
 import sys
-import time
 from pathlib import Path
 from typing import Annotated, Optional
 
-os.environ.setdefault("OPENBLAS_NUM_THREADS", "1")  # numpy is used single-threaded here
+import typer
 
-import typer  # noqa: E402
-from rich.console import Console  # noqa: E402
-from rich.progress import (BarColumn, MofNCompleteColumn, Progress, TextColumn,  # noqa: E402
-                           TimeElapsedColumn)
+from gate import __version__
+from gate.cli.common import (EXIT_CHECK_BUG, EXIT_LIMITS, BarReporter, err_console, guard,
+                             out_console, shown)
+from gate.errors import UsageError
 
-from gate import __version__  # noqa: E402
-from gate.errors import GateError, UsageError  # noqa: E402
-
-EXIT_UNABLE = 2
-EXIT_LIMITS = 3
-EXIT_INTERNAL = 70
-EXIT_INTERRUPTED = 130
-
-app = typer.Typer(add_completion=False, pretty_exceptions_enable=False, no_args_is_help=True,
-                  help="gate: check documents against a policy before they reach a "
-                       "retrieval index.")
 policy_app = typer.Typer(add_completion=False, no_args_is_help=True,
                          help="Validate policy files and print their schema.")
-app.add_typer(policy_app, name="policy")
-
-err_console = Console(stderr=True, highlight=False, soft_wrap=True)
-out_console = Console(highlight=False, soft_wrap=True)
-
-
-_CONTROL = {c: f"\\x{c:02x}" for c in [*range(0x00, 0x20), 0x7F, *range(0x80, 0xA0)]}
-
-
-def shown(text: str) -> str:
-    """A document-controlled string made safe for a terminal: control characters (an
-    ESC sequence in a file name could rewrite the screen) become visible escapes, and
-    surrogates from undecodable file names become backslash escapes."""
-    text = text.encode("utf-8", "backslashreplace").decode("utf-8")
-    return text.translate(_CONTROL)
-
-
-def _fail(message: str, code: int = EXIT_UNABLE) -> None:
-    err_console.print(f"error: {shown(message)}", markup=False, soft_wrap=True)
-    raise typer.Exit(code)
-
-
-def _guard(fn):
-    """Run a command body, mapping every failure to one paragraph and an exit code."""
-    try:
-        return fn()
-    except typer.Exit:
-        raise
-    except GateError as err:
-        _fail(str(err))
-    except KeyboardInterrupt:
-        _fail("interrupted. Nothing is lost: re-run the same command to complete the run.",
-              EXIT_INTERRUPTED)
-    except Exception as err:  # noqa: BLE001 - the last line of defence against tracebacks
-        if os.environ.get("GATE_DEBUG"):
-            raise
-        _fail(f"gate hit an internal error ({type(err).__name__}: {err}). This is a bug; "
-              "please report it with the command you ran. Set GATE_DEBUG=1 to see the "
-              "traceback.", EXIT_INTERNAL)
-
-
-class BarReporter:
-    """Progress on stderr, drawn only when stderr is a terminal. No refresh thread: the
-    worker pool forks, and a forked child must not inherit a thread's locks."""
-
-    def __init__(self, enabled: bool):
-        self.enabled = enabled
-        self.progress: Progress | None = None
-        self.task = None
-        self.last = 0.0
-
-    def stage(self, name: str, total: int | None) -> None:
-        if not self.enabled:
-            return
-        if self.progress is None:
-            self.progress = Progress(TextColumn("{task.description:<11}"), BarColumn(),
-                                     MofNCompleteColumn(), TimeElapsedColumn(),
-                                     TextColumn("{task.fields[path]}", style="dim",
-                                                markup=False),
-                                     console=err_console, auto_refresh=False, transient=True)
-            self.progress.start()
-        if self.task is not None:
-            self.progress.update(self.task, visible=False)
-        self.task = self.progress.add_task(name, total=total, path="")
-        self.progress.refresh()
-
-    def advance(self, path: str | None = None) -> None:
-        if self.progress is None or self.task is None:
-            return
-        self.progress.update(self.task, advance=1, path=shown((path or "")[-50:]))
-        now = time.monotonic()
-        if now - self.last > 0.1:
-            self.last = now
-            self.progress.refresh()
-
-    def note(self, message: str) -> None:
-        err_console.print(shown(message), markup=False)
-
-    def close(self) -> None:
-        if self.progress is not None:
-            self.progress.stop()
-            self.progress = None
+report_app = typer.Typer(add_completion=False, no_args_is_help=True,
+                         help="Render the report of a completed run for people.")
 
 
 def _print_summary(result, report: dict) -> None:
@@ -143,43 +45,47 @@ def _print_summary(result, report: dict) -> None:
                       f"{rate:.1f} documents/s)", markup=False)
 
 
-@app.command("run")
 def run_command(
     inbox: Annotated[Path, typer.Argument(help="Folder of incoming documents (walked "
                                                "recursively; never modified).")],
     policy: Annotated[Path, typer.Option("--policy", help="Policy file (YAML).")],
     out: Annotated[Path, typer.Option("--out", help="Output folder: accepted/, quarantine/, "
                                                     "report.json, changes.jsonl, state/.")],
-    manifest: Annotated[Optional[Path], typer.Option(  # noqa: UP007
+    manifest: Annotated[Optional[Path], typer.Option(  # noqa: UP045
         "--manifest", help="Manifest (JSON lines); default INBOX/manifest.jsonl.")] = None,
-    as_of: Annotated[Optional[str], typer.Option(  # noqa: UP007
+    as_of: Annotated[Optional[str], typer.Option(  # noqa: UP045
         "--as-of", help="Clock for freshness, ISO 8601 (default: now, UTC).")] = None,
-    workers: Annotated[Optional[int], typer.Option(  # noqa: UP007
+    workers: Annotated[Optional[int], typer.Option(  # noqa: UP045
         "--workers", min=1, max=256, help="Worker processes (default: the number of "
                                           "cores).")] = None,
     incremental: Annotated[bool, typer.Option(
         "--incremental", help="The inbox holds only new or changed documents: do not "
                               "remove earlier documents that are missing from it.")] = False,
     quiet: Annotated[bool, typer.Option("--quiet", "-q", help="No progress bar.")] = False,
-    cluster: Annotated[Optional[str], typer.Option(  # noqa: UP007
+    cluster: Annotated[Optional[str], typer.Option(  # noqa: UP045
         "--cluster", help="Run extraction on a Dask cluster: the scheduler address, e.g. "
                           "tcp://10.0.0.5:8786 (decisions stay in this process).")] = None,
-    index: Annotated[Optional[str], typer.Option(  # noqa: UP007
+    index: Annotated[Optional[str], typer.Option(  # noqa: UP045
         "--index", help="Keep the near-duplicate index in Redis (redis://HOST:PORT/DB), "
                         "shared with other output folders using the same --index-name.")
     ] = None,
     index_name: Annotated[str, typer.Option(
         "--index-name", help="Name of the shared index in Redis.")] = "default",
-    max_quarantine_rate: Annotated[Optional[float], typer.Option(  # noqa: UP007
+    max_quarantine_rate: Annotated[Optional[float], typer.Option(  # noqa: UP045
         "--max-quarantine-rate", min=0.0, max=1.0,
         help="Exit 3 when more than this share of documents is quarantined (the run still "
              "completes), so a re-index job can stop on a poisoned batch.")] = None,
-    max_code_rate: Annotated[Optional[list[str]], typer.Option(  # noqa: UP007
+    max_code_rate: Annotated[Optional[list[str]], typer.Option(  # noqa: UP045
         "--max-code-rate", help="CODE=RATE: exit 3 when more than RATE of documents are "
                                 "quarantined for CODE (a code, or a check id such as "
                                 "injection). Repeatable.")] = None,
 ) -> None:
-    """Check every document of INBOX and route it to accepted/ or quarantine/."""
+    """Check every document of INBOX and route it to accepted/ or quarantine/.
+
+    Exit status: 0 done; 2 could not run; 3 over a --max-quarantine-rate or
+    --max-code-rate limit; 4 a check failed on a document (a bug in gate; the document is
+    quarantined, the run completed); 130 interrupted; 70 internal error.
+    """
     reporter = BarReporter(enabled=not quiet and err_console.is_terminal)
 
     def body():
@@ -210,6 +116,13 @@ def run_command(
         if os.environ.get("GATE_TIMINGS"):  # for benchmarks/scale.py: worker seconds by stage
             err_console.print("timings: " + json.dumps(result.timings, sort_keys=True),
                               markup=False, soft_wrap=True)
+        bugs = sorted(code for code in result.summary["quarantined_by_code"]
+                      if code.endswith(".internal-error"))
+        if bugs:
+            err_console.print("error: a check failed on some documents (" + ", ".join(bugs) +
+                              "): a bug in gate. The run completed and those documents are "
+                              "quarantined; please report it.", markup=False, soft_wrap=True)
+            raise typer.Exit(EXIT_CHECK_BUG)
         breaches = _breaches(report, max_quarantine_rate, limits)
         if breaches:
             err_console.print("error: the batch exceeds its quarantine limits: " +
@@ -217,7 +130,7 @@ def run_command(
                               "quarantine before re-indexing.", markup=False, soft_wrap=True)
             raise typer.Exit(EXIT_LIMITS)
 
-    _guard(body)
+    guard(body)
 
 
 def _code_limits(values: list[str]) -> dict[str, float]:
@@ -258,15 +171,18 @@ def policy_check(file: Annotated[Path, typer.Argument(help="Policy file to valid
     """Validate a policy file; errors name the line and the key path."""
 
     def body():
+        from gate import checks
         from gate.policy import load_policy
         loaded = load_policy(file)
-        sections = [name for name in ("sources", "integrity", "freshness", "language",
-                                      "duplicates", "injection", "quality", "format")
-                    if getattr(loaded.policy, name, None) is not None]
-        out_console.print(f"{file}: valid policy {loaded.name!r} (checks on: "
-                          f"{', '.join(sections) or 'format only'})", markup=False)
+        on = [check for check in checks.all_checks() if check.always_on or
+              getattr(loaded.policy, check.section or "", None) is not None]
+        sections = [check.section for check in on
+                    if getattr(loaded.policy, check.section or "", None) is not None]
+        out_console.print(f"{shown(str(file))}: valid policy {shown(loaded.name)!r} (sections: "
+                          f"{', '.join(sections) or 'none'}; checks on: "
+                          f"{', '.join(check.id for check in on)})", markup=False)
 
-    _guard(body)
+    guard(body)
 
 
 @policy_app.command("schema")
@@ -277,19 +193,14 @@ def policy_schema() -> None:
         from gate.policy import schema_text
         sys.stdout.write(schema_text())
 
-    _guard(body)
-
-
-report_app = typer.Typer(add_completion=False, no_args_is_help=True,
-                         help="Render the report of a completed run for people.")
-app.add_typer(report_app, name="report")
+    guard(body)
 
 
 @report_app.command("html")
 def report_html(
     directory: Annotated[Path, typer.Argument(help="Output folder of a completed run "
                                                    "(the one holding report.json).")],
-    output: Annotated[Optional[Path], typer.Option(  # noqa: UP007
+    output: Annotated[Optional[Path], typer.Option(  # noqa: UP045
         "--output", "-o", help="HTML file to write (default: DIR/report.html).")] = None,
 ) -> None:
     """Write DIR/report.json as one self-contained HTML page (no scripts, loads nothing)."""
@@ -297,7 +208,7 @@ def report_html(
     def body():
         import json
 
-        from gate.commit import write_atomic
+        from gate.placement import write_atomic
         from gate.errors import OutputError
         from gate.htmlreport import render
 
@@ -328,10 +239,9 @@ def report_html(
                               "its folder exists and is writable.") from None
         out_console.print(f"wrote {shown(str(target))}", markup=False)
 
-    _guard(body)
+    guard(body)
 
 
-@app.command("codes")
 def codes_command(markdown: Annotated[bool, typer.Option(
         "--markdown", help="Print the table as Markdown (docs/codes.md).")] = False) -> None:
     """List every finding code with its check and meaning."""
@@ -340,25 +250,9 @@ def codes_command(markdown: Annotated[bool, typer.Option(
         from gate.codes import markdown_table, text_table
         sys.stdout.write(markdown_table() if markdown else text_table())
 
-    _guard(body)
+    guard(body)
 
 
-@app.command("version")
 def version_command() -> None:
     """Print gate's version."""
     out_console.print(f"gate {__version__}", markup=False)
-
-
-from gate.cli_ops import audit_app, explain_command, review_app  # noqa: E402
-
-app.add_typer(review_app, name="review")
-app.add_typer(audit_app, name="audit")
-app.command("explain")(explain_command)
-
-
-def main() -> None:
-    try:
-        app()
-    except KeyboardInterrupt:
-        err_console.print("error: interrupted.", markup=False)
-        sys.exit(EXIT_INTERRUPTED)

@@ -1,0 +1,150 @@
+"""The per-document stage of a run: every inbox document read once (:mod:`gate.intake`),
+staged, extracted and measured in a worker or found in the digest-keyed cache, then
+evaluated (:mod:`gate.evaluation`) as its result arrives, in whatever order the workers
+finish. Each document's :class:`~gate.record.DocRecord` goes to the state at once; only
+its :class:`~gate.record.Slim` stays in memory for the corpus checks.
+"""
+
+from __future__ import annotations
+
+import hashlib
+from dataclasses import dataclass, field
+from pathlib import Path
+from typing import Any
+
+from gate import containers
+from gate.checks.base import Document, RunContext
+from gate.cluster import executor
+from gate.commit import Output, Reporter
+from gate.discovery import Entry, walk
+from gate.evaluation import Releases, evaluate_document, extraction_of
+from gate.extract.model import Extracted
+from gate.extract.pool import Failure
+from gate.intake import Intake, read_entry
+from gate.manifest import Manifest, ManifestRecord
+from gate.policy import LoadedPolicy
+from gate.record import Slim, doc_record, slim
+from gate.work import Params, warm_up
+
+CACHE_BATCH = 64  # results written to the cache and the state per transaction
+
+
+def doc_id(path: str) -> str:
+    """A document's id: stable for its inbox path, safe as a folder name."""
+    raw = path.encode("utf-8", "surrogateescape")
+    return hashlib.sha256(b"gate-document\x00" + raw).hexdigest()[:20]
+
+
+def params_of(loaded: LoadedPolicy) -> Params:
+    limits = loaded.policy.limits
+    return Params(max_pages=limits.max_pages, max_nesting=limits.max_nesting,
+                  timeout_s=limits.timeout_s, memory_mb=limits.memory_mb)
+
+
+
+@dataclass
+class _Item:
+    """One inbox document on its way from intake to its evaluation."""
+
+    index: int
+    entry: Entry
+    intake: Intake
+    record: ManifestRecord | None = None
+    cache_key: str | None = None
+    extracted: Extracted | None = None
+    measures: dict[str, Any] = field(default_factory=dict)
+    measure_errors: dict[str, str] = field(default_factory=dict)
+
+
+def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, output: Output,
+                    reporter: Reporter, ctx: RunContext, run_id: str, releases: Releases,
+                    timings: dict[str, float], *, workers: int = 1,
+                    cluster: str | None = None) -> list[Slim]:
+    """Read, extract, measure and evaluate every document, streaming: each one's record
+    goes to the state as soon as it is evaluated, and only its Slim stays in memory.
+    ``timings`` gathers the workers' seconds per stage (for benchmarks)."""
+    state = output.state
+    params = params_of(loaded)
+    entries = list(containers.expand(inbox, walk(inbox), manifest))  # WARC, mbox: records
+    reporter.stage("extracting", len(entries))
+    cache_print = params.fingerprint()
+    known = state.entries()
+    slims: list[Slim | None] = [None] * len(entries)
+    cache_rows: list[tuple[str, str, dict, dict, str]] = []
+    doc_rows: list[tuple[str, int, str]] = []
+    state.clear_run_docs(run_id)
+
+    def flush() -> None:
+        if cache_rows:
+            state.cache_put_many(cache_rows)
+            cache_rows.clear()
+        if doc_rows:
+            state.put_run_docs(doc_rows)
+            doc_rows.clear()
+
+    def evaluated(item: _Item) -> None:
+        assert item.extracted is not None
+        record = item.record
+        document = Document(path=item.entry.path, kind=item.entry.kind,
+                            size=item.intake.size, sha256=item.intake.sha256,
+                            manifest=record, extracted=item.extracted,
+                            measures=item.measures, link_target=item.entry.link_target)
+        evaluation = evaluate_document(document, loaded, ctx,
+                                       measure_errors=item.measure_errors, releases=releases)
+        rec = doc_record(item.index, doc_id(item.entry.path), item.entry, item.intake,
+                         document, evaluation, item.cache_key, loaded.policy)
+        slims[item.index] = slim(rec, evaluation, document, item.measure_errors)
+        doc_rows.append((run_id, item.index, rec.to_json()))
+        if len(doc_rows) >= CACHE_BATCH:
+            flush()
+        reporter.advance(item.entry.path)
+
+    def tasks():
+        for index, entry in enumerate(entries):
+            max_bytes = loaded.policy.limits.max_bytes
+            if isinstance(entry, containers.Member):
+                intake, record = containers.read(inbox, entry, max_bytes, manifest)
+            else:
+                intake, record = read_entry(inbox, entry, max_bytes), manifest.get(entry.path)
+            item = _Item(index=index, entry=entry, intake=intake, record=record)
+            if intake.problem is not None:
+                item.extracted = Extracted(type=None, problem=intake.problem,
+                                           problem_detail=intake.detail)
+                evaluated(item)
+                continue
+            item.cache_key = f"{intake.sha256}:{cache_print}"
+            placed = known.get(doc_id(entry.path))
+            # the placed entry's original is reused when it holds these bytes; an entry
+            # without one (a file once over limits.max_bytes, now within) needs them staged
+            if placed is None or placed[1] != intake.sha256 or \
+                    not output.placer.has_original(placed[0], doc_id(entry.path)):
+                output.blobs.put(intake.sha256, intake.data)
+            cached = state.cache_meta(item.cache_key)
+            if cached is not None:
+                item.extracted = Extracted.from_json(cached[0])
+                item.measures = cached[1].get("measures", {})
+                intake.data = None
+                evaluated(item)
+                continue
+            yield item
+
+    if not cluster:
+        warm_up()
+    with executor(cluster, workers, params) as pool:
+        for item, result in pool.run(
+                (item, (item.entry.path, item.intake.data, params)) for item in tasks()):
+            item.extracted, item.measures, item.measure_errors = \
+                extraction_of(result, item.intake.data)
+            item.intake.data = None
+            if isinstance(result, dict):
+                for stage, seconds in result.get("timings", {}).items():
+                    timings[stage] = timings.get(stage, 0.0) + seconds
+            bug = item.measure_errors or (isinstance(result, Failure) and result.kind == "error")
+            if not bug:  # a bug in gate is retried on the next run, not remembered
+                cache_rows.append((item.cache_key, item.intake.sha256,
+                                   item.extracted.to_json(),
+                                   {"measures": item.measures, "errors": {}},
+                                   result.get("text", "") if isinstance(result, dict) else ""))
+            evaluated(item)
+    flush()
+    return [s for s in slims if s is not None]

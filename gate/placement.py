@@ -1,0 +1,183 @@
+"""Placement: materialise ``accepted/`` and ``quarantine/`` from the state database.
+
+Every document has one entry folder named by its id, ``accepted/<id>/`` or
+``quarantine/<id>/``. An entry is assembled in ``state/tmp/``, its files are flushed to
+disk, and only then is the whole folder renamed into place, so a reader never sees a
+half-written entry. Replacing an entry renames the old one aside first; the entry for the
+same id in the other folder is removed after the new one is in place. Each placement is
+idempotent and marked done in the database only after it is durable, so a run killed at
+any moment is finished by applying the placements not yet marked.
+
+Originals come from the content-addressed staging area ``state/blobs/`` (the exact bytes
+that were hashed and checked, never re-read from the inbox) or, when unchanged, from the
+document's existing entry; they are hard-linked where possible and made read-only.
+"""
+
+from __future__ import annotations
+
+import json
+import os
+import shutil
+from pathlib import Path
+from typing import Any
+
+from gate import provjson
+from gate.state import State
+
+FOLDERS = ("accepted", "quarantine")
+
+
+def _fsync_dir(path: Path) -> None:
+    try:
+        fd = os.open(path, os.O_RDONLY | os.O_DIRECTORY)
+    except OSError:
+        return
+    try:
+        os.fsync(fd)
+    finally:
+        os.close(fd)
+
+
+def write_file(path: Path, data: bytes, *, sync: bool = True) -> None:
+    with open(path, "wb") as fh:
+        fh.write(data)
+        if sync:
+            fh.flush()
+            os.fsync(fh.fileno())
+
+
+def write_atomic(path: Path, data: bytes) -> None:
+    """Write then rename, so ``path`` is always either the old or the new content."""
+    tmp = path.with_name(f".{path.name}.tmp-{os.getpid()}")
+    write_file(tmp, data)
+    os.replace(tmp, path)
+    _fsync_dir(path.parent)
+
+
+class Blobs:
+    """Content-addressed copies of the bytes that were checked, kept until placement."""
+
+    def __init__(self, root: Path):
+        self.root = root
+
+    def path(self, sha256: str) -> Path:
+        return self.root / sha256[:2] / sha256
+
+    def has(self, sha256: str) -> bool:
+        return self.path(sha256).exists()
+
+    def put(self, sha256: str, data: bytes) -> None:
+        target = self.path(sha256)
+        if target.exists():
+            return
+        target.parent.mkdir(parents=True, exist_ok=True)
+        tmp = target.with_name(f".{sha256}.tmp-{os.getpid()}")
+        write_file(tmp, data, sync=False)  # made durable by one sync before deciding
+        os.replace(tmp, target)
+
+    def clear(self) -> None:
+        shutil.rmtree(self.root, ignore_errors=True)
+
+
+class Placer:
+    """Applies placements: (document id, target folder, payload)."""
+
+    def __init__(self, out: Path, state: State, blobs: Blobs):
+        self.out = out
+        self.state = state
+        self.blobs = blobs
+        self.tmp = out / "state" / "tmp"
+        self.trash = out / "state" / "trash"
+        for folder in FOLDERS:
+            (out / folder).mkdir(parents=True, exist_ok=True)
+        self.tmp.mkdir(parents=True, exist_ok=True)
+        self.trash.mkdir(parents=True, exist_ok=True)
+
+    def entry(self, folder: str, doc_id: str) -> Path:
+        return self.out / folder / doc_id
+
+    def has_original(self, folder: str, doc_id: str) -> bool:
+        """Whether the entry placed in ``folder`` holds a copy of its original."""
+        return folder in FOLDERS and (self.entry(folder, doc_id) / "original").exists()
+
+    def _original_source(self, doc_id: str, sha256: str | None) -> Path | None:
+        if sha256 is None:
+            return None
+        if self.blobs.has(sha256):
+            return self.blobs.path(sha256)
+        for folder in FOLDERS:
+            candidate = self.entry(folder, doc_id) / "original"
+            if candidate.exists():
+                return candidate
+        return None
+
+    def _aside(self, path: Path) -> None:
+        if path.exists() or path.is_symlink():
+            target = self.trash / f"{path.parent.name}-{path.name}-{os.getpid()}"
+            if target.exists():
+                shutil.rmtree(target, ignore_errors=True)
+            os.replace(path, target)
+
+    def build(self, doc_id: str, target: str, payload: dict[str, Any]) -> Path | None:
+        """Assemble an entry in state/tmp (not yet visible). None for removals."""
+        if target == "absent":
+            return None
+        build = self.tmp / doc_id
+        shutil.rmtree(build, ignore_errors=True)
+        build.mkdir(parents=True)
+        source = self._original_source(doc_id, payload.get("sha256"))
+        if payload.get("sha256") and source is None and not payload.get("reused"):
+            raise FileNotFoundError(f"the staged copy of {payload['path']!r} is missing")
+        if source is not None:
+            dest = build / "original"
+            try:
+                os.link(source, dest)
+            except OSError:
+                shutil.copyfile(source, dest)
+            os.chmod(dest, 0o444)
+        text = self.state.cache_text(payload["text_key"]) if payload.get("text_key") else None
+        if text is not None:
+            write_file(build / "text.txt", text.encode("utf-8", "surrogatepass"), sync=False)
+        record_name = "provenance.json" if target == "accepted" else "reasons.json"
+        record = json.dumps(payload["record"], indent=2, sort_keys=True, ensure_ascii=False)
+        write_file(build / record_name, record.encode("utf-8", "surrogatepass") + b"\n",
+                   sync=False)
+        if target == "accepted":  # the same facts in W3C PROV-JSON (gate.provjson)
+            prov = json.dumps(provjson.from_record(payload["record"]), indent=2, sort_keys=True,
+                              ensure_ascii=False)
+            write_file(build / provjson.FILE_NAME, prov.encode("utf-8", "surrogatepass") + b"\n",
+                       sync=False)
+        return build
+
+    def install(self, doc_id: str, target: str, build: Path | None) -> None:
+        """Make an assembled entry visible (one rename) and remove the other folder's."""
+        if target == "absent":
+            for folder in FOLDERS:
+                self._aside(self.entry(folder, doc_id))
+            return
+        assert build is not None
+        other = "quarantine" if target == "accepted" else "accepted"
+        final = self.entry(target, doc_id)
+        self._aside(final)
+        os.replace(build, final)
+        self._aside(self.entry(other, doc_id))
+
+    def apply_batch(self, placements: list[tuple[str, str, dict[str, Any]]]) -> None:
+        """Apply placements durably with two syncs for the whole batch, not per file:
+        every entry is written in state/tmp, everything is flushed to disk, only then are
+        the entries renamed into place, and the renames are flushed before the caller
+        marks them done. A crash at any point leaves either the old entry or the complete
+        new one visible, and the placements not yet marked are simply applied again."""
+        built = [(doc_id, target, self.build(doc_id, target, payload))
+                 for doc_id, target, payload in placements]
+        os.sync()
+        for doc_id, target, path in built:
+            self.install(doc_id, target, path)
+        os.sync()
+
+    def empty_trash(self) -> None:
+        for item in self.trash.iterdir():
+            if item.is_dir() and not item.is_symlink():
+                shutil.rmtree(item, ignore_errors=True)
+            else:
+                item.unlink(missing_ok=True)
