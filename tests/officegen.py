@@ -84,7 +84,7 @@ def _package(main: str, content_type: str, xml: str, rels: list[tuple[str, str, 
 # -- DOCX -------------------------------------------------------------------------------------
 
 def run(text: str, **props: str | bool) -> str:
-    """A w:r; props: vanish=True, color="FFFFFF", sz="2", style="Name"."""
+    """A w:r; props: vanish=True, color="FFFFFF", sz="2", style="Name", shade="1F3864"."""
     rpr = []
     if props.get("style"):
         rpr.append(f'<w:rStyle w:val="{props["style"]}"/>')
@@ -94,6 +94,8 @@ def run(text: str, **props: str | bool) -> str:
         rpr.append(f'<w:color w:val="{props["color"]}"/>')
     if props.get("sz"):
         rpr.append(f'<w:sz w:val="{props["sz"]}"/>')
+    if props.get("shade"):
+        rpr.append(f'<w:shd w:val="clear" w:color="auto" w:fill="{props["shade"]}"/>')
     pr = f"<w:rPr>{''.join(rpr)}</w:rPr>" if rpr else ""
     return f'<w:r>{pr}<w:t xml:space="preserve">{escape(text)}</w:t></w:r>'
 

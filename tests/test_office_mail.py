@@ -52,7 +52,8 @@ def test_docx_text_hidden_runs_comments_deletions_alt_text_and_dates():
     assert sniff(data).type == "docx"
     result = ex(data)
     assert result.summary.ok and result.summary.type == "docx"
-    assert result.text == PLAIN  # nothing hidden reaches the indexed text
+    # hidden runs stay out of the indexed text; white and tiny text is kept there too
+    assert result.text == PLAIN + "\nwhite wordstiny words"
     found = hidden(result)
     assert found["hidden-run"] == ["vanished words", "styled away"]
     assert found["white-text"] == ["white words"]
@@ -67,13 +68,21 @@ def test_docx_text_hidden_runs_comments_deletions_alt_text_and_dates():
         datetime(2026, 11, 2, 10, tzinfo=UTC)
 
 
+def test_white_text_on_a_shaded_background_is_ordinary_text():
+    # a table header in white on dark blue: common, and visible
+    result = ex(g.docx(g.para(g.run(PLAIN)), g.para(g.run("Zone", color="FFFFFF",
+                                                          shade="1F3864"))))
+    assert result.text == PLAIN + "\nZone"
+    assert "white-text" not in hidden(result)
+
+
 def test_pptx_hidden_slide_notes_white_tiny_and_alt_text():
     data = g.pptx([g.slide_xml(["Depot tour"], white="white run", tiny="tiny run",
                                alt="photo of the yard"),
                    g.slide_xml(["Draft figures"], show=False)], notes={1: "say hello"})
     result = ex(data)
     assert result.summary.type == "pptx" and result.summary.pages == 2
-    assert result.text == "Depot tour"
+    assert result.text == "Depot tour\nwhite run\ntiny run"
     found = hidden(result)
     assert found["hidden-slide"] == ["Draft figures"]
     assert found["speaker-notes"] == ["say hello"]
@@ -106,7 +115,7 @@ def test_odt_styles_annotations_hidden_text_and_meta_dates():
                  created="2026-10-01T08:00:00", modified="2026-10-05T08:00:00")
     result = ex(data)
     assert result.summary.type == "odt"
-    assert result.text == "Visible\nSecond\nThird"
+    assert result.text == "Visible white span\nSecond\nThird"
     found = hidden(result)
     assert found["white-text"] == ["white span"]
     assert found["comment"] == ["a remark"]

@@ -1,7 +1,8 @@
 """Text a reader does not see, collected by the office, EPUB and e-mail extractors.
 
 Each extractor puts the text it would show a reader into the indexed text and everything
-else it found into ``Extraction.extras["hidden"]``: a list of pieces
+else it found (and white or tiny text, which is in both) into
+``Extraction.extras["hidden"]``: a list of pieces
 ``{"text": ..., "where": ..., "technique": ...}`` (``where`` names the place in words, for
 example "comment 2 of the DOCX", ``technique`` is a slug such as ``hidden-run``,
 ``white-text``, ``tiny-text``, ``comment``, ``tracked-deletion``, ``speaker-notes``,

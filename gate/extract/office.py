@@ -10,11 +10,13 @@ state of slides, sheets, rows and columns, alternative text. Elements are matche
 name, so ECMA-376 Transitional and Strict namespaces both work.
 
 The indexed text is what a reader of the document sees. Everything else found is returned
-as hidden pieces (:mod:`gate.extract.hidden`) for the injection screen:
+as hidden pieces (:mod:`gate.extract.hidden`) for the injection screen; white and tiny text
+is both (a dark slide background or a shaded cell can show white text), the rest is only
+screened:
 
 * DOCX: runs hidden with ``w:vanish`` (directly or through a style), white runs
-  (``w:color FFFFFF``), runs under 2.5 pt (``w:sz`` < 5 half-points), tracked deletions
-  (``w:delText``), comments, field codes (``w:instrText``), image alt text (``wp:docPr``);
+  (``w:color FFFFFF`` without a shaded background), runs under 2.5 pt (``w:sz`` < 5
+  half-points), tracked deletions (``w:delText``), comments, field codes (``w:instrText``), image alt text (``wp:docPr``);
 * PPTX: hidden slides (``show="0"``), hidden shapes, white or tiny runs, speaker notes,
   comments, alt text;
 * XLSX: hidden and very hidden sheets, hidden rows and columns, cell comments;
@@ -54,6 +56,9 @@ TINY_HUNDREDTHS = 250  # DrawingML sizes are in hundredths of a point
 _MIMETYPES = {"application/vnd.oasis.opendocument.text": "odt",
               "application/epub+zip": "epub"}
 _WHITE = {"ffffff", "fff", "white"}
+# White or tiny text stays in the indexed text as well: on a dark slide or shaded cell, or
+# zoomed in, a reader may see it (pypdf likewise keeps such PDF text).
+_SEEN_MAYBE = frozenset({"white-text", "tiny-text"})
 
 
 def _local(tag: Any) -> str:
@@ -233,6 +238,9 @@ def _props(rpr: Any) -> dict[str, Any]:
                 found["size"] = int(_attr(el, "val") or "")
             except ValueError:
                 pass
+        elif tag in ("shd", "highlight"):  # a filled background: white text may show
+            fill = (_attr(el, "fill") or _attr(el, "val") or "").lower()
+            found["background"] = fill not in ("", "auto", "none", "ffffff", "white")
     return found
 
 
@@ -269,7 +277,7 @@ def _styles(archive: SafeZip) -> tuple[dict[str, dict[str, Any]], dict[str, Any]
 def _technique(props: dict[str, Any]) -> str | None:
     if props.get("hidden"):
         return "hidden-run"
-    if props.get("color") in _WHITE:
+    if props.get("color") in _WHITE and not props.get("background"):
         return "white-text"
     size = props.get("size")
     if size is not None and size < TINY_HALF_POINTS:
@@ -375,8 +383,10 @@ class _Word:
                 continue
             if technique is None or not self.visible:
                 self.line.append(text)
-            else:
-                self.hidden.setdefault(technique, []).append(text)
+                continue
+            self.hidden.setdefault(technique, []).append(text)
+            if technique in _SEEN_MAYBE:
+                self.line.append(text)
 
     def text(self) -> str:
         return "\n".join(self.lines)
@@ -456,7 +466,7 @@ def _drawing_text(out: _Out, root: Any, where: str) -> str:
             text = "".join(t.text or "" for t in run if _local(t.tag) == "t")
             if technique:
                 hidden.setdefault(technique, []).append(text)
-            else:
+            if technique is None or technique in _SEEN_MAYBE:
                 line.append(text)
         for technique, texts in hidden.items():
             out.hide("".join(texts), f"a run on {where}", technique)
@@ -681,7 +691,7 @@ class _Odf:
     def _emit(self, text: str, technique: str | None) -> None:
         if technique:
             self.hidden.setdefault(technique, []).append(text)
-        else:
+        if technique is None or technique in _SEEN_MAYBE:
             self.buffer.append(text)
 
     def _flush(self) -> None:
