@@ -16,7 +16,8 @@ screened:
 
 * DOCX: runs hidden with ``w:vanish`` (directly or through a style), white runs
   (``w:color FFFFFF`` without a shaded background), runs under 2.5 pt (``w:sz`` < 5
-  half-points), tracked deletions (``w:delText``), comments, field codes (``w:instrText``), image alt text (``wp:docPr``);
+  half-points), tracked deletions (``w:delText``), comments, field codes
+  (``w:instrText``), image alt text (``wp:docPr``);
 * PPTX: hidden slides (``show="0"``), hidden shapes, white or tiny runs, speaker notes,
   comments, alt text;
 * XLSX: hidden and very hidden sheets, hidden rows and columns, cell comments;
