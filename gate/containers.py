@@ -46,6 +46,11 @@ from gate.intake import Intake
 from gate.manifest import Manifest, ManifestRecord
 
 CHUNK = 1 << 20
+BLOCK = 16384  # warcio's read size
+# Raw bytes warcio may read while it parses one record's WARC and HTTP headers (real ones
+# are a few KB). Compressed, 64 KB inflate to at most about 66 MB (deflate's limit is
+# about 1032:1), so even a hostile header stays within bounds.
+HEADER_CAP = 4 * BLOCK
 _MBOX_HEAD = 65536
 _GZIP_HEAD = 8192
 
@@ -168,9 +173,10 @@ def _warc(full: str, entry: Entry) -> Iterator[Member]:
     number = 0
     warnings = io.StringIO()  # warcio writes its complaints to stderr; they become reasons
     try:
-        with _open(full) as fh:
-            iterator = ArchiveIterator(fh, no_record_parse=True)
-            for record in _quietly(iterator, warnings):
+        with _open(full) as raw:
+            fh = _Capped(raw)
+            iterator = ArchiveIterator(fh, no_record_parse=True, block_size=BLOCK)
+            for record in _quietly(iterator, warnings, fh):
                 number += 1
                 # a block shorter than its Content-Length: the archive was cut off (warcio
                 # reads a truncated last record without complaint)
@@ -210,11 +216,44 @@ class _Damaged(Exception):
         self.number = number
 
 
-def _quietly(iterator: Any, sink: io.StringIO) -> Iterator[Any]:
+class _Capped:
+    """A file whose reads are counted against ``budget`` while warcio parses headers.
+
+    warcio reads a header line to its end however long it is; without a cap a hostile
+    archive with one endless header line would exhaust the parent's memory. Payloads are
+    read with the budget off (``None``), in chunks.
+    """
+
+    def __init__(self, fh: BinaryIO):
+        self.fh = fh
+        self.budget: int | None = None
+
+    def read(self, size: int = -1) -> bytes:
+        data = self.fh.read(size)
+        if self.budget is not None:
+            self.budget -= len(data)
+            if self.budget < 0:
+                raise ValueError(f"a record's headers run past {HEADER_CAP:,} bytes")
+        return data
+
+    def __getattr__(self, name: str) -> Any:
+        return getattr(self.fh, name)
+
+
+def _headers(fh: _Capped, iterator: Any) -> Any:
+    """The next record of ``iterator`` (or None), its headers read within the cap."""
+    fh.budget = HEADER_CAP
+    try:
+        return next(iterator, None)
+    finally:
+        fh.budget = None
+
+
+def _quietly(iterator: Any, sink: io.StringIO, fh: _Capped) -> Iterator[Any]:
     """Records of ``iterator``; a warning warcio prints about one is raised as an error."""
     while True:
         with contextlib.redirect_stderr(sink):
-            record = next(iterator, None)
+            record = _headers(fh, iterator)
         if sink.getvalue():
             raise ValueError(" ".join(sink.getvalue().split())[:300])
         if record is None:
@@ -251,9 +290,10 @@ def _read_warc(inbox: Path, member: Member, max_bytes: int) -> tuple[Intake, dic
 
     full = os.path.join(os.fspath(inbox), member.container)
     facts: dict[str, Any] = {}
-    with _open(full) as fh, contextlib.redirect_stderr(io.StringIO()):
-        fh.seek(member.offset)
-        record = next(iter(ArchiveIterator(fh)))
+    with _open(full) as raw, contextlib.redirect_stderr(io.StringIO()):
+        raw.seek(member.offset)
+        fh = _Capped(raw)
+        record = _headers(fh, iter(ArchiveIterator(fh, block_size=BLOCK)))
         sha1, sha256, size = hashlib.sha1(), hashlib.sha256(), 0  # WARC's own digest
         while chunk := record.raw_stream.read(CHUNK):
             sha1.update(chunk)
@@ -267,9 +307,10 @@ def _read_warc(inbox: Path, member: Member, max_bytes: int) -> tuple[Intake, dic
         return Intake(problem="unsupported", detail=f"the crawler got HTTP {status} for this "
                                                     "URL: the record holds an error page or a "
                                                     "redirect, not the document"), facts
-    with _open(full) as fh, contextlib.redirect_stderr(io.StringIO()):
-        fh.seek(member.offset)
-        record = next(iter(ArchiveIterator(fh)))
+    with _open(full) as raw, contextlib.redirect_stderr(io.StringIO()):
+        raw.seek(member.offset)
+        fh = _Capped(raw)
+        record = _headers(fh, iter(ArchiveIterator(fh, block_size=BLOCK)))
         stream = record.content_stream()
         data = stream.read(max_bytes + 1)
     if len(data) > max_bytes:
@@ -330,7 +371,8 @@ def read(inbox: Path, member: Member, max_bytes: int,
             intake, facts = _read_warc(inbox, member, max_bytes)
         else:
             intake = _read_mbox(inbox, member, max_bytes)
-    except (OSError, EOFError, ValueError, StopIteration, zlib.error, gzip.BadGzipFile) as err:
+    except (OSError, EOFError, ValueError, StopIteration, AttributeError, zlib.error,
+            gzip.BadGzipFile) as err:
         intake = Intake(problem="broken", detail=f"the record cannot be read from "
                                                  f"{member.container}: {_why(err)}")
     digests = tuple(d for d in (member.container_digest, facts.get("payload_digest")) if d)

@@ -184,3 +184,15 @@ def test_a_gzip_warc_whose_first_record_is_large_is_still_recognised():
     data = out.getvalue()
     assert kind_of(data[:64]) is None  # 64 bytes do not get past the Huffman tables
     assert kind_of(data[:8192]) == "warc"
+
+
+def test_an_endless_header_line_is_cut_off_not_read_into_memory(tmp_path):
+    endless = b"WARC/1.1\r\nWARC-Type: response\r\nX-Padding: " + b"a" * 400_000
+    good = warc([("https://docs.example.org/a.html", page("line one"), "200 OK")])
+    got = outcomes(go(tmp_path, {"crawl/endless.warc": endless, "crawl/good.warc.gz": good}))
+    assert "format.broken" in got["crawl/endless.warc#record-00001"][1]
+    assert got["crawl/good.warc.gz#record-00003"] == ("accepted", [])
+    report = json.loads((tmp_path / "out" / "report.json").read_text())
+    reason = next(r for d in report["documents"] if d["path"].startswith("crawl/endless")
+                  for r in d["reasons"] if r["code"] == "format.broken")
+    assert "headers run past" in reason["message"]
