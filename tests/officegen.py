@@ -180,11 +180,16 @@ def pptx(slides: list[str], notes: dict[int, str] | None = None,
 # -- XLSX -------------------------------------------------------------------------------------
 
 def sheet_xml(rows: list[list[str]], *, hidden_rows: tuple[int, ...] = (),
-              hidden_cols: tuple[int, ...] = ()) -> str:
+              hidden_cols: tuple[int, ...] = (),
+              styled: dict[tuple[int, int], int] | None = None) -> str:
+    """styled: (row, column) from 1 -> cell style index (the ``s`` attribute)."""
+    styled = styled or {}
     cols = "".join(f'<col min="{c}" max="{c}" hidden="1"/>' for c in hidden_cols)
     body = []
     for r, row in enumerate(rows, 1):
-        cells = "".join(f'<c r="{chr(64 + c)}{r}" t="inlineStr"><is><t>{escape(v)}</t></is></c>'
+        cells = "".join(f'<c r="{chr(64 + c)}{r}"'
+                        + (f' s="{styled[(r, c)]}"' if (r, c) in styled else "")
+                        + f' t="inlineStr"><is><t>{escape(v)}</t></is></c>'
                         for c, v in enumerate(row, 1))
         flag = ' hidden="1"' if r in hidden_rows else ""
         body.append(f'<row r="{r}"{flag}>{cells}</row>')
@@ -193,15 +198,32 @@ def sheet_xml(rows: list[list[str]], *, hidden_rows: tuple[int, ...] = (),
             "</sheetData></worksheet>")
 
 
-def xlsx(sheets: list[tuple[str, str, str]], core_xml: str = "") -> bytes:
+# A stylesheet with cell styles 0 plain, 1 white font, 2 number format ";;;", 3 white font
+# on a solid fill (SpreadsheetML, ECMA-376 Part 1 section 18.8; from memory).
+STYLES = (f'<?xml version="1.0" encoding="UTF-8"?><styleSheet xmlns="{S}"><numFmts count="1">'
+          '<numFmt numFmtId="164" formatCode=";;;"/></numFmts><fonts count="2"><font><sz '
+          'val="11"/></font><font><sz val="11"/><color rgb="FFFFFFFF"/></font></fonts><fills '
+          'count="3"><fill><patternFill patternType="none"/></fill><fill><patternFill '
+          'patternType="gray125"/></fill><fill><patternFill patternType="solid"><fgColor '
+          'rgb="FF1F3864"/></patternFill></fill></fills><cellXfs count="4"><xf fontId="0" '
+          'fillId="0" numFmtId="0"/><xf fontId="1" fillId="0" numFmtId="0"/><xf fontId="0" '
+          'fillId="0" numFmtId="164"/><xf fontId="1" fillId="2" numFmtId="0"/></cellXfs>'
+          "</styleSheet>")
+
+
+def xlsx(sheets: list[tuple[str, str, str]], core_xml: str = "", styles: str = "") -> bytes:
     """sheets: (name, state, worksheet xml); state visible | hidden | veryHidden."""
     listed = "".join(f'<sheet name="{escape(name)}" sheetId="{n}" state="{state}" '
                      f'r:id="rId{n}"/>' for n, (name, state, _) in enumerate(sheets, 1))
     book = (f'<?xml version="1.0" encoding="UTF-8"?><workbook xmlns="{S}" xmlns:r="{R}">'
             f"<sheets>{listed}</sheets></workbook>")
-    entries = _package("xl/workbook.xml", "spreadsheetml.sheet.main+xml", book,
-                       [(f"rId{n}", REL + "worksheet", f"worksheets/sheet{n}.xml")
-                        for n in range(1, len(sheets) + 1)], core_xml)
+    rels = [(f"rId{n}", REL + "worksheet", f"worksheets/sheet{n}.xml")
+            for n in range(1, len(sheets) + 1)]
+    if styles:
+        rels.append(("rIdS", REL + "styles", "styles.xml"))
+    entries = _package("xl/workbook.xml", "spreadsheetml.sheet.main+xml", book, rels, core_xml)
+    if styles:
+        entries.append(("xl/styles.xml", styles))
     for n, (_, _, xml) in enumerate(sheets, 1):
         entries.append((f"xl/worksheets/sheet{n}.xml", xml))
     return zip_bytes(entries)

@@ -104,6 +104,16 @@ def test_xlsx_hidden_sheets_rows_and_columns():
     assert found["hidden-sheet"] == ["kept out of sight"]
 
 
+def test_xlsx_cells_styled_to_hide():
+    sheet = g.sheet_xml([["zone", "fare"], ["white words", "format words"], ["header", "x"]],
+                        styled={(2, 1): 1, (2, 2): 2, (3, 1): 3})
+    result = ex(g.xlsx([("Fares", "visible", sheet)], styles=g.STYLES))
+    found = hidden(result)
+    assert found["white-text"] == ["white words"]  # white on no fill: screened, and indexed
+    assert found["hidden-format"] == ["format words"]  # ';;;' shows nothing: not indexed
+    assert result.text == "Fares\nzone\tfare\nwhite words\nheader\tx"  # white on dark fill
+
+
 def test_odt_styles_annotations_hidden_text_and_meta_dates():
     body = ('<text:p>Visible <text:span text:style-name="W">white span</text:span></text:p>'
             '<text:p>Second<office:annotation><dc:creator>R</dc:creator><text:p>a remark'

@@ -6,7 +6,8 @@ else it found (and white or tiny text, which is in both) into
 ``{"text": ..., "where": ..., "technique": ...}`` (``where`` names the place in words, for
 example "comment 2 of the DOCX", ``technique`` is a slug such as ``hidden-run``,
 ``white-text``, ``tiny-text``, ``comment``, ``tracked-deletion``, ``speaker-notes``,
-``hidden-slide``, ``hidden-sheet``, ``hidden-row``, ``hidden-column``, ``alt-text``,
+``hidden-slide``, ``hidden-sheet``, ``hidden-row``, ``hidden-column``, ``hidden-format``,
+``alt-text``,
 ``metadata``, ``field-code``, ``html-part``, ``attachment``). The injection screen scans
 every piece as concealed text, the way it scans hidden HTML and PDF text.
 

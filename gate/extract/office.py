@@ -20,7 +20,9 @@ screened:
   (``w:instrText``), image alt text (``wp:docPr``);
 * PPTX: hidden slides (``show="0"``), hidden shapes, white or tiny runs, speaker notes,
   comments, alt text;
-* XLSX: hidden and very hidden sheets, hidden rows and columns, cell comments;
+* XLSX: hidden and very hidden sheets, hidden rows and columns, cell comments, cells in a
+  white font on no fill or under 2.5 pt, and cells whose number format ``;;;`` shows
+  nothing;
 * ODT: ``text:hidden-text``, hidden paragraphs and sections, styles with
   ``text:display="none"``, white or tiny text, annotations, tracked deletions,
   ``svg:title``/``svg:desc`` of frames;
@@ -542,6 +544,7 @@ def _xlsx(archive: SafeZip, out: _Out) -> None:
     rels = _rels(archive, main)
     targets = {rid: target for rid, _, target in rels}
     strings = _shared(archive, rels)
+    styles = _cell_styles(_maybe(archive, next(iter(_of_type(rels, "/styles")), None)))
     sheets = [(s.get("name") or "", s.get("state") or "visible",
                targets.get(next((v for k, v in s.attrib.items() if k.endswith("}id")), "")))
               for s in root.iter() if _local(s.tag) == "sheet"]
@@ -560,6 +563,7 @@ def _xlsx(archive: SafeZip, out: _Out) -> None:
                     continue
                 hidden_cols.update(range(lo, min(hi, lo + 16384) + 1))
         visible_rows, hidden_rows, hidden_col_text = [], [], []
+        styled: dict[str, list[str]] = {}
         for row in tree.iter():
             if _local(row.tag) != "row":
                 continue
@@ -573,6 +577,11 @@ def _xlsx(archive: SafeZip, out: _Out) -> None:
                 value = _cell(c, strings)
                 if not value:
                     continue
+                technique = styles.get(c.get("s") or "0")
+                if technique is not None:
+                    styled.setdefault(technique, []).append(value)
+                    if technique not in _SEEN_MAYBE:  # ';;;' shows nothing at all
+                        continue
                 if _column(c.get("r")) in hidden_cols:
                     in_hidden_cols.append(value)
                 else:
@@ -591,11 +600,53 @@ def _xlsx(archive: SafeZip, out: _Out) -> None:
             out.text(f"{name}\n{sheet_text}\n\n")
         out.hide("\n".join(hidden_rows), f"hidden rows of {where}", "hidden-row")
         out.hide("\n".join(hidden_col_text), f"hidden columns of {where}", "hidden-column")
+        for technique, texts in styled.items():
+            out.hide("\n".join(texts), f"cells of {where} styled to hide", technique)
         for comments in _of_type(_rels(archive, target or ""), "comments"):
             tree_c = _maybe(archive, comments)
             if tree_c is not None:
                 out.hide(_all_text(tree_c, ("t", "text")), f"a cell comment on {where}",
                          "comment")
+
+
+def _cell_styles(root: Any) -> dict[str, str]:
+    """Cell style index (the ``s`` attribute) -> technique, for styles that hide a value:
+    a white font on no fill (white-text), a font under 2.5 pt (tiny-text), or the number
+    format ``;;;`` that displays nothing (hidden-format; ECMA-376 Part 1, 18.8.31)."""
+    if root is None:
+        return {}
+    part = {_local(el.tag): el for el in root}
+    fonts, fills, formats = [], [], {}
+    for font in part.get("fonts", []):
+        white = any(_local(c.tag) == "color" and (c.get("rgb") or "").upper().endswith("FFFFFF")
+                    for c in font)
+        size = next((c.get("val") for c in font if _local(c.tag) == "sz"), None)
+        try:
+            tiny = size is not None and float(size) < TINY_HALF_POINTS / 2
+        except ValueError:
+            tiny = False
+        fonts.append("white-text" if white else "tiny-text" if tiny else None)
+    for fill in part.get("fills", []):
+        pattern = next((c for c in fill if _local(c.tag) == "patternFill"), None)
+        fills.append(pattern is not None and pattern.get("patternType") not in (None, "none"))
+    for fmt in part.get("numFmts", []):
+        code = (fmt.get("formatCode") or "").replace(" ", "")
+        if code and code.strip(";") == "":
+            formats[fmt.get("numFmtId") or ""] = "hidden-format"
+    out: dict[str, str] = {}
+    for index, xf in enumerate(x for x in part.get("cellXfs", []) if _local(x.tag) == "xf"):
+        technique = formats.get(xf.get("numFmtId") or "")
+        if technique is None:
+            try:
+                font, fill = int(xf.get("fontId") or 0), int(xf.get("fillId") or 0)
+            except ValueError:
+                continue
+            technique = fonts[font] if font < len(fonts) else None
+            if technique == "white-text" and fill < len(fills) and fills[fill]:
+                technique = None  # white on a filled cell can be read
+        if technique is not None:
+            out[str(index)] = technique
+    return out
 
 
 def _cell(c: Any, strings: list[str]) -> str:
