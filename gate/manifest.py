@@ -84,8 +84,9 @@ def normalize_path(value: str) -> str | None:
     return norm
 
 
-def parse(text: str, source: str) -> Manifest:
-    """Parse manifest text; ``source`` names the file in error messages."""
+def parse(text: str, source: str, detached: tuple[str, str] | None = None) -> Manifest:
+    """Parse manifest text; ``source`` names the file in error messages; ``detached`` is a
+    detached signature over the whole text and its file name."""
     records: dict[str, ManifestRecord] = {}
     batches = signing.Batches(text)
     for number, raw in enumerate(text.splitlines(), 1):
@@ -132,6 +133,8 @@ def parse(text: str, source: str) -> Manifest:
             retrieved_at=obj.get("retrieved_at"), published_at=obj.get("published_at"),
             extra={k: v for k, v in obj.items() if k.startswith("x_")})
         batches.member(path)
+    if detached is not None:
+        batches.detached(*detached)
     return Manifest(source=source, records=batches.apply(records),
                     sha256=hashlib.sha256(text.encode("utf-8")).hexdigest())
 
@@ -147,4 +150,4 @@ def load(path: Path) -> Manifest:
     except UnicodeDecodeError as err:
         raise ManifestError(f"manifest {path} is not UTF-8 (byte {err.start}); write it as "
                             "UTF-8 JSON lines.") from None
-    return parse(text, str(path))
+    return parse(text, str(path), signing.detached_signature(path))

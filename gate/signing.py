@@ -5,7 +5,9 @@ and appends the signature as one more line, ``{"signature": "-----BEGIN SSH SIGN
 ..."}``. A signature line covers the exact bytes of the lines before it, back to the
 previous signature line or the start of the file, so signed batches can be concatenated
 into one manifest and each stays verifiable. Lines after the last signature line are
-unsigned.
+unsigned, unless a detached signature ``<manifest>.sig`` over the whole file (what
+``ssh-keygen -Y sign manifest.jsonl`` writes) lies beside the manifest: it covers every
+line no signature line covers.
 
 The format is OpenSSH's PROTOCOL.sshsig: the armored blob holds the magic ``SSHSIG``,
 version 1, the signer's public key, the namespace, a reserved string, the hash algorithm
@@ -313,17 +315,19 @@ class Verdict:
 
     batch: int
     lines: tuple[int, int]  # first and last manifest line covered
-    signature_line: int
+    signature_line: int  # 0: a detached signature file (``where`` names it)
     valid: bool
     problem: str = ""
     namespace: str = ""
     key: str = ""  # "keytype base64" of the signer, when the blob could be read
     fingerprint: str = ""
+    where: str = ""  # "signature line N" or the detached signature file's name
 
     def to_json(self) -> dict[str, Any]:
         out = {"batch": self.batch, "lines": list(self.lines),
                "signature_line": self.signature_line, "valid": self.valid,
-               "namespace": self.namespace, "key": self.key, "fingerprint": self.fingerprint}
+               "namespace": self.namespace, "key": self.key, "fingerprint": self.fingerprint,
+               "where": self.where or f"signature line {self.signature_line}"}
         if self.problem:
             out["problem"] = self.problem
         return out
@@ -337,10 +341,12 @@ class Batches:
         self.start = 1
         self.members: list[str] = []
         self.verdicts: dict[str, Verdict] = {}
+        self.everyone: list[str] = []
         self.count = 0
 
     def member(self, path: str) -> None:
         self.members.append(path)
+        self.everyone.append(path)
 
     def seal(self, obj: dict[str, Any], number: int) -> str | None:
         """Close the batch at a signature line; returns a structural problem, if any."""
@@ -358,6 +364,17 @@ class Batches:
         self.members = []
         self.start = number + 1
         return None
+
+    def detached(self, text: str, name: str) -> None:
+        """A detached signature file over the whole manifest (``ssh-keygen -Y sign
+        manifest.jsonl`` writes ``manifest.jsonl.sig``): it vouches for every line that no
+        signature line covers."""
+        self.count += 1
+        message = "".join(self.lines).encode("utf-8")
+        verdict = replace(_judge(text, message, self.count, (1, len(self.lines)), 0),
+                          where=name)
+        for path in self.everyone:
+            self.verdicts.setdefault(path, verdict)
 
     def apply(self, records: dict[str, Any]) -> dict[str, Any]:
         """The records with each signed one's verdict attached (``signature`` field)."""
@@ -380,6 +397,17 @@ def _judge(text: str, message: bytes, batch: int, lines: tuple[int, int],
     except SignatureProblem as err:
         return Verdict(valid=False, problem=str(err), **base, **signer)
     return Verdict(valid=True, **base, **signer)
+
+
+def detached_signature(manifest: Path) -> tuple[str, str] | None:
+    """(text, name) of ``<manifest>.sig`` when it exists beside the manifest, else None."""
+    sig = manifest.with_name(manifest.name + ".sig")
+    try:
+        with open(sig, "rb") as fh:
+            data = fh.read(MAX_SIGNATURE_CHARS + 1)
+    except OSError:
+        return None
+    return data.decode("utf-8", errors="replace"), sig.name
 
 
 def signature_line(armored: str) -> str:

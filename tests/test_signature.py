@@ -16,7 +16,7 @@ from gate.checks.base import Document, RunContext
 from gate.checks.signature import evaluate
 from gate.errors import ManifestError, PolicyError
 from gate.extract.model import Extracted
-from gate.manifest import parse
+from gate.manifest import load, parse
 from gate.pipeline import RunOptions, run
 from gate.policy import load_policy
 
@@ -214,3 +214,19 @@ def test_end_to_end_signed_and_tampered_batches(tmp_path):
     report = json.loads((tmp_path / "out" / "report.json").read_text())
     got = {d["path"]: [r["code"] for r in d["reasons"]] for d in report["documents"]}
     assert got == {"a.txt": [], "b.txt": ["signature.invalid"], "c.txt": ["signature.unsigned"]}
+
+
+def test_a_detached_signature_beside_the_manifest_covers_the_whole_file(tmp_path):
+    key, pub = keygen(tmp_path, "collector")
+    elsewhere = tmp_path / "manifests"
+    elsewhere.mkdir()
+    manifest_path = elsewhere / "manifest.jsonl"
+    manifest_path.write_bytes(lines("a.html", "b.html"))
+    subprocess.run(["ssh-keygen", "-q", "-Y", "sign", "-f", str(key), "-n", "gate-manifest",
+                    str(manifest_path)], check=True, capture_output=True)  # writes .sig
+    manifest = load(manifest_path)
+    assert codes(evaluate(doc(manifest, "b.html"), pol(pub), RUN)) == []
+    assert manifest.get("a.html").signature["where"] == "manifest.jsonl.sig"
+    manifest_path.write_bytes(lines("a.html", "c.html"))  # changed after signing
+    found = evaluate(doc(load(manifest_path), "a.html"), pol(pub), RUN)
+    assert codes(found) == ["signature.invalid"] and "manifest.jsonl.sig" in found[0].message

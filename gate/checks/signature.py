@@ -4,8 +4,9 @@ A checksum in the manifest catches corruption, not tampering: whoever can write 
 inbox can usually rewrite the manifest line beside the file. With a ``signature`` section,
 a document is accepted only when its manifest line belongs to a batch signed with an
 OpenSSH key (``ssh-keygen -Y sign -n gate-manifest``; the signature travels as a manifest
-line ``{"signature": "-----BEGIN SSH SIGNATURE-----..."}`` after the lines it covers, see
-gate/signing.py and the README) and that key is trusted for the document's source.
+line ``{"signature": "-----BEGIN SSH SIGNATURE-----..."}`` after the lines it covers, or as a
+detached ``<manifest>.sig`` beside a manifest kept outside the inbox; see gate/signing.py
+and the README) and that key is trusted for the document's source.
 
 Trusted keys are OpenSSH allowed-signers lines (``collector@example.org ssh-ed25519
 AAAA...``) or public-key lines (``ssh-ed25519 AAAA... collector@example.org``), or paths of
@@ -50,8 +51,8 @@ UNSIGNED = define("signature.unsigned", "the manifest line is not in a signed ba
                   "{what} is not covered by a signature line, so who recorded it cannot be "
                   "verified")
 INVALID = define("signature.invalid", "the batch signature does not verify",
-                 "the signature on manifest lines {first}-{last} (signature line {line}) "
-                 "does not verify: {problem}")
+                 "the signature on manifest lines {first}-{last} ({where}) does not verify: "
+                 "{problem}")
 UNTRUSTED = define("signature.untrusted", "signed by a key not trusted for the source",
                    "manifest lines {first}-{last} are signed by {signer}, {why}")
 
@@ -105,6 +106,7 @@ def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding] 
         return [UNSIGNED(what=what, line=record.line if record else None)]
     first, last = verdict["lines"]
     common = dict(first=first, last=last, line=verdict["signature_line"],
+                  where=verdict.get("where") or f"signature line {verdict['signature_line']}",
                   fingerprint=verdict.get("fingerprint") or None)
     if not verdict["valid"]:
         return [INVALID(problem=verdict.get("problem", ""), **common)]

@@ -7,8 +7,8 @@ else it found (and white or tiny text, which is in both) into
 example "comment 2 of the DOCX", ``technique`` is a slug such as ``hidden-run``,
 ``white-text``, ``tiny-text``, ``comment``, ``tracked-deletion``, ``speaker-notes``,
 ``hidden-slide``, ``hidden-sheet``, ``hidden-row``, ``hidden-column``, ``hidden-format``,
-``alt-text``, ``metadata``, ``field-code``, ``html-part``, ``attachment``). The injection screen scans
-every piece as concealed text, the way it scans hidden HTML and PDF text.
+``alt-text``, ``metadata``, ``field-code``, ``html-part``, ``attachment``). The injection
+screen scans every piece as concealed text, the way it scans hidden HTML and PDF text.
 
 :func:`markup_pieces` does the same for an XHTML/HTML tree (EPUB chapters, the HTML part of
 a mail): inline-styled hidden elements, the ``hidden`` attribute, comments, ``alt`` and
