@@ -319,3 +319,17 @@ def test_new_formats_run_through_the_worker_pool(tmp_path):
     assert "injection.html-hidden" in got["local/planted.docx"][1]
     assert got["local/bomb.xlsx"] == ("quarantined", ["format.bomb", "freshness.undated"])
     assert got["local/old.eml"] == ("quarantined", ["freshness.stale"])
+
+
+def test_encoded_headers_and_charsets_are_decoded():
+    # RFC 2047 encoded words in the subject, ISO-8859-1 body (invented German notice)
+    data = g.eml("Fahrplanänderung für Linie 4", "Die Straßenbahn fährt ab Montag später.")
+    assert b"=?utf-8?" in data.lower()
+    result = ex(data)
+    assert result.summary.title == "Fahrplanänderung für Linie 4"
+    latin = (b"From: desk@example.org\r\nSubject: =?iso-8859-1?q?Gr=FC=DFe?=\r\n"
+             b"Date: Mon, 23 Nov 2026 10:00:00 +0100\r\nMessage-ID: <m2@example.org>\r\n"
+             b"MIME-Version: 1.0\r\nContent-Type: text/plain; charset=iso-8859-1\r\n"
+             b"Content-Transfer-Encoding: quoted-printable\r\n\r\nF=E4hre sp=E4ter.\r\n")
+    result = ex(latin)
+    assert result.text == "Grüße\n\nFähre später."
