@@ -28,6 +28,7 @@ import base64
 import binascii
 import hashlib
 import json
+import os
 import re
 import shlex
 from dataclasses import dataclass, replace
@@ -39,7 +40,10 @@ from cryptography.hazmat.primitives import hashes
 from cryptography.hazmat.primitives.asymmetric import ec, ed25519, padding, rsa
 from cryptography.hazmat.primitives.asymmetric.utils import encode_dss_signature
 
+from gate.bounded import InputFileProblem, open_regular, read_regular
+
 NAMESPACE = "gate-manifest"
+MAX_SIGNERS_FILE = 1 << 20
 ARMOR_BEGIN = "-----BEGIN SSH SIGNATURE-----"
 ARMOR_END = "-----END SSH SIGNATURE-----"
 MAX_SIGNATURE_CHARS = 20_000
@@ -142,13 +146,18 @@ def parse_armored(text: str) -> SshSig:
         raise SignatureProblem("the signature's namespace or hash name is not text") from None
 
 
-def verify(sig: SshSig, message: bytes) -> None:
-    """Raise :class:`SignatureProblem` unless ``sig`` is a valid signature of ``message``."""
-    digest = _HASHES.get(sig.hash_algorithm)
-    if digest is None:
+def verify(sig: SshSig, message: bytes | _Hashes) -> None:
+    """Raise :class:`SignatureProblem` unless ``sig`` is a valid signature of ``message``
+    (the bytes, or their running hashes)."""
+    if isinstance(message, bytes):
+        digest = _HASHES.get(sig.hash_algorithm)
+        hashed = digest(message).digest() if digest is not None else None
+    else:
+        hashed = message.digest(sig.hash_algorithm)
+    if hashed is None:
         raise SignatureProblem(f"unknown hash algorithm {sig.hash_algorithm!r}")
     signed = b"SSHSIG" + _string(sig.namespace.encode("utf-8")) + _string(b"") + \
-        _string(sig.hash_algorithm.encode("ascii")) + _string(digest(message).digest())
+        _string(sig.hash_algorithm.encode("ascii")) + _string(hashed)
     key = _Reader(sig.public_key)
     kind = key.string().decode("ascii", errors="replace")
     outer = _Reader(sig.signature)
@@ -241,9 +250,8 @@ def is_key_line(entry: str) -> bool:
     return any(f"{kind} " in entry or entry.startswith(kind) for kind in KEY_TYPES + _SK_TYPES)
 
 
-def read_signers_file(path: Path) -> list[str]:
+def _signer_lines(text: str) -> list[str]:
     """The key lines of an allowed_signers file (comments and blank lines left out)."""
-    text = path.read_text(encoding="utf-8")
     return [line.strip() for line in text.splitlines()
             if line.strip() and not line.lstrip().startswith("#")]
 
@@ -277,9 +285,9 @@ def expand_signer_files(data: dict[str, Any], base: Path) -> tuple[
                 continue
             path = (base / entry).resolve()
             try:
-                raw = path.read_bytes()
-                lines = read_signers_file(path)
-            except (OSError, UnicodeDecodeError) as err:
+                raw = read_regular(path, MAX_SIGNERS_FILE)  # no links or FIFOs, size capped
+                lines = _signer_lines(raw.decode("utf-8"))
+            except (InputFileProblem, OSError, UnicodeDecodeError) as err:
                 problems.append((where + (number,), "cannot read the allowed_signers file "
                                  f"{entry!r} ({getattr(err, 'strerror', None) or err})"))
                 continue
@@ -334,22 +342,48 @@ class Verdict:
 
 
 class Batches:
-    """Tracks manifest lines into signed batches while the manifest is parsed."""
+    """Tracks manifest lines into signed batches while the manifest is read line by line.
 
-    def __init__(self, text: str):
-        self.lines = text.splitlines(keepends=True)
+    Only running hashes are kept (SHA-256 and SHA-512, the two hash algorithms SSHSIG
+    allows), so memory does not grow with the manifest: a batch's hashes cover the exact
+    bytes of its lines, each with the newline that ended it; the whole file's cover every
+    byte, for a detached signature.
+    """
+
+    def __init__(self) -> None:
         self.start = 1
         self.members: list[str] = []
-        self.verdicts: dict[str, Verdict] = {}
         self.everyone: list[str] = []
+        self.verdicts: dict[str, Verdict] = {}
         self.count = 0
+        self.batch = _Hashes()
+        self.whole = _Hashes()
+        self.last = 0
+
+    def take(self, raw: bytes, number: int) -> None:
+        """Every line of the file, as read (without its newline)."""
+        if number > 1:
+            self.whole.update(b"\n")
+        self.whole.update(raw)
+        self.last = number
+
+    def add(self, raw: bytes) -> None:
+        """A line that belongs to the current batch (everything but signature lines)."""
+        self.batch.update(raw + b"\n")
 
     def member(self, path: str) -> None:
         self.members.append(path)
         self.everyone.append(path)
 
-    def seal(self, obj: dict[str, Any], number: int) -> str | None:
-        """Close the batch at a signature line; returns a structural problem, if any."""
+    def seal(self, line: str, number: int) -> str | None:
+        """A line mentioning "signature": "" when it closed a batch, None when it is not a
+        signature line after all, else the structural problem to report."""
+        try:
+            obj = json.loads(line)
+        except (json.JSONDecodeError, RecursionError):
+            return None
+        if not isinstance(obj, dict) or "signature" not in obj:
+            return None
         unknown = sorted(k for k in obj if k != "signature" and not k.startswith("x_"))
         if unknown:
             return (f"unknown key {unknown[0]!r} on a signature line (a signature line holds "
@@ -357,21 +391,21 @@ class Batches:
         if not isinstance(obj["signature"], str):
             return "'signature' must be a string (the armored SSH signature)"
         self.count += 1
-        message = "".join(self.lines[self.start - 1:number - 1]).encode("utf-8")
-        verdict = _judge(obj["signature"], message, self.count, (self.start, number - 1), number)
+        verdict = _judge(obj["signature"], self.batch, self.count, (self.start, number - 1),
+                         number)
         for path in self.members:
             self.verdicts[path] = verdict
         self.members = []
         self.start = number + 1
-        return None
+        self.batch = _Hashes()
+        return ""
 
-    def detached(self, text: str, name: str) -> None:
+    def detached(self, text: str, name: str, hashes: _Hashes | None = None) -> None:
         """A detached signature file over the whole manifest (``ssh-keygen -Y sign
         manifest.jsonl`` writes ``manifest.jsonl.sig``): it vouches for every line that no
         signature line covers."""
         self.count += 1
-        message = "".join(self.lines).encode("utf-8")
-        verdict = replace(_judge(text, message, self.count, (1, len(self.lines)), 0),
+        verdict = replace(_judge(text, hashes or self.whole, self.count, (1, self.last), 0),
                           where=name)
         for path in self.everyone:
             self.verdicts.setdefault(path, verdict)
@@ -382,7 +416,22 @@ class Batches:
                 if path in self.verdicts else record for path, record in records.items()}
 
 
-def _judge(text: str, message: bytes, batch: int, lines: tuple[int, int],
+class _Hashes:
+    """Running SHA-256 and SHA-512 of a message."""
+
+    def __init__(self) -> None:
+        self.hashes = {"sha256": hashlib.sha256(), "sha512": hashlib.sha512()}
+
+    def update(self, data: bytes) -> None:
+        for h in self.hashes.values():
+            h.update(data)
+
+    def digest(self, algorithm: str) -> bytes | None:
+        h = self.hashes.get(algorithm)
+        return h.digest() if h is not None else None
+
+
+def _judge(text: str, message: bytes | _Hashes, batch: int, lines: tuple[int, int],
            number: int) -> Verdict:
     base = dict(batch=batch, lines=lines, signature_line=number)
     try:
@@ -399,15 +448,22 @@ def _judge(text: str, message: bytes, batch: int, lines: tuple[int, int],
     return Verdict(valid=True, **base, **signer)
 
 
-def detached_signature(manifest: Path) -> tuple[str, str] | None:
-    """(text, name) of ``<manifest>.sig`` when it exists beside the manifest, else None."""
+def detached_signature(manifest: Path) -> tuple[str, str, _Hashes] | None:
+    """(text, name) of ``<manifest>.sig`` when it exists beside the manifest, and the hashes
+    of the manifest file's bytes (read again, in chunks); else None."""
     sig = manifest.with_name(manifest.name + ".sig")
+    hashes = _Hashes()
     try:
-        with open(sig, "rb") as fh:
-            data = fh.read(MAX_SIGNATURE_CHARS + 1)
-    except OSError:
+        data = read_regular(sig, MAX_SIGNATURE_CHARS)
+        fd = open_regular(manifest)
+        try:
+            while chunk := os.read(fd, 1 << 20):
+                hashes.update(chunk)
+        finally:
+            os.close(fd)
+    except (InputFileProblem, OSError):
         return None
-    return data.decode("utf-8", errors="replace"), sig.name
+    return data.decode("utf-8", errors="replace"), sig.name, hashes
 
 
 def signature_line(armored: str) -> str:
