@@ -101,8 +101,8 @@ class LimitsSettings(Strict):
     timeout_s: float = Field(30, gt=0, le=3600, description="CPU time allowed to extract "
                              "and measure one document, seconds (elapsed time may be 4 times "
                              "this plus 5 s, so a busy machine does not change decisions).")
-    memory_mb: int = Field(1024, ge=64, le=1 << 20, description="Memory one document may use while it is "
-                           "extracted, MiB (on top of the worker's baseline).")
+    memory_mb: int = Field(1024, ge=64, le=1 << 20, description="Memory one document may "
+                           "use while it is extracted, MiB (on top of the worker's baseline).")
     max_nesting: int = Field(250, ge=16, le=2000, description="Deepest HTML element "
                              "nesting read; deeper pages are held.")
 
