@@ -15,7 +15,7 @@ from typing import Any
 
 from gate import __version__
 from gate import checks
-from gate.extract import extract
+from gate.extract import EXTRACT_VERSION, extract
 
 
 @dataclass(frozen=True)
@@ -29,7 +29,7 @@ class Params:
 
     def fingerprint(self) -> str:
         """Identifies gate's version, the measurements' versions and these limits."""
-        material = {"gate": __version__, "params": self.__dict__,
+        material = {"gate": __version__, "extract": EXTRACT_VERSION, "params": self.__dict__,
                     "measures": {c.id: c.measure_version for c in checks.all_checks()
                                  if c.measure is not None}}
         blob = json.dumps(material, sort_keys=True).encode("utf-8")
@@ -67,5 +67,7 @@ def warm_up() -> None:
 
     langid.profiles()  # about 20 MB of arrays, shared with the forked workers
     import gate.extract.html
+    import gate.extract.mail
+    import gate.extract.office
     import gate.extract.pdf
     import gate.extract.text  # noqa: F401
