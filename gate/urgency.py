@@ -8,7 +8,7 @@ from gate.findings import CODES
 
 # what needs a person first: a document gate could not evaluate, then planted
 # instructions, then tampering and provenance, then the rest; stale and duplicate last
-URGENCY = ("injection", "integrity", "source", "format", "quality", "language",
+URGENCY = ("injection", "integrity", "signature", "source", "format", "quality", "language",
            "freshness", "duplicate")
 
 

@@ -264,7 +264,8 @@ def test_clearing_the_demo_queue_with_bulk_commands(out):
     quarantine, against one named entry per entry before."""
     open_before = len(json.loads(gate("review", "list", out, "--json").stdout))
     plan = [("purge", "--check", "format"), ("reject", "--check", "injection"),
-            ("reject", "--check", "integrity"), ("reject", "--check", "source"),
+            ("reject", "--check", "integrity"), ("reject", "--check", "signature"),
+            ("reject", "--check", "source"),
             ("reject", "--check", "quality"), ("reject", "--check", "language"),
             ("release", "--code", "freshness.undated"), ("reject", "--check", "freshness"),
             ("reject", "--check", "duplicate")]
@@ -273,7 +274,7 @@ def test_clearing_the_demo_queue_with_bulk_commands(out):
         assert result.returncode == 0, (selection, result.stderr)
     assert gate("review", "list", out).stdout == "no matching entries\n"
     report = json.loads((out / "report.json").read_text())
-    assert open_before == report["summary"]["quarantined"] and len(plan) == 9
+    assert open_before == report["summary"]["quarantined"] and len(plan) == 10
     page = (out / "report.html").read_text(encoding="utf-8")
     assert "Review queue: 0 entries to decide" in page and "nothing left to decide" in page
 
