@@ -48,6 +48,7 @@ class Extracted:
     nesting_depth: int | None = None
     dates: tuple[DateClaim, ...] = ()
     metadata: dict[str, str] = field(default_factory=dict)
+    template: dict[str, Any] = field(default_factory=dict)  # site-template removal done
 
     @property
     def ok(self) -> bool:
@@ -66,6 +67,18 @@ class Extracted:
         return cls(**data)
 
 
+@dataclass(frozen=True)
+class Block:
+    """One block of a document (a paragraph, heading, list item, table cell, link list or
+    line) with the hash of its words (:func:`gate.tokens.block_hash`)."""
+
+    text: str
+    hash: int
+    main: bool = True  # in the main text the extractor chose (HTML: trafilatura's)
+    links: float = 0.0  # share of its characters inside links (HTML)
+    kind: str = "text"  # heading | item (list item, term) | cell (table) | text
+
+
 @dataclass
 class Extraction:
     """Worker-side result: the summary, the text and the raw material measurements use."""
@@ -77,6 +90,9 @@ class Extraction:
     tree: Any = None  # lxml root element, for HTML
     reader: Any = None  # pypdf.PdfReader, for PDF
     extras: dict[str, Any] = field(default_factory=dict)  # e.g. PDF annotations, XMP text
+    # the whole page in blocks, in document order (HTML: every block of the body, the
+    # template included; other formats: the text's lines), for template removal
+    blocks: tuple[Block, ...] = ()
 
 
 def failed(type_: str | None, problem: str, detail: str, sniffed: str = "",

@@ -1,0 +1,157 @@
+"""Site templates: blocks that recur across many pages of one host are not the pages' text.
+
+A page on a heavy site template (a mega-menu, a column of teasers, a long legal footer)
+can hold far more template than text of its own; shingled whole, every page of the site
+looks like every other, and an extractor that picks the template as the main text makes
+distinct pages "identical". This module learns each site's template from the pages the
+run can see and removes it before the text is checked, shingled or indexed.
+
+Learning (parent process, pure and deterministic): every extraction comes with the page's
+blocks (paragraphs, headings, list items, table cells, link lists; for PDF and text, the
+lines), each with a hash of its words (:func:`gate.tokens.block_hash`). Pages are grouped
+by the host of their ``source_url``; the pages of a host are the batch's plus, in an
+incremental run, the stored corpus's (their blocks come from the digest-keyed cache). Pages
+with identical block sets count once. On a host with ``n`` distinct pages, a block is
+template when it occurs on at least ``MIN_PAGES`` of them and
+
+* on at least ``SHARE_ANY`` of them wherever it stands, or
+* on at least ``SHARE_ASIDE`` of them and outside trafilatura's main text on at least half
+  of those (menus, teasers and footers that vary by section).
+
+A host with fewer than ``MIN_PAGES`` distinct pages (the first run of a new site with a
+handful of pages) teaches nothing: its pages keep trafilatura's text, as before. A body
+shared by a few versions of one page stays, because a version cluster is much smaller
+than a site.
+
+Removal (worker, :func:`compose`): the page's template blocks are dropped from
+trafilatura's text; when what remains is less than ``MAIN_RATIO`` of the page's own
+(non-template, not link-dominated) blocks, trafilatura chose the template as the main
+text, and the page's own blocks are used instead. When nothing would remain, the page is
+kept as extracted.
+"""
+
+from __future__ import annotations
+
+import hashlib
+import math
+from collections.abc import Iterable, Sequence
+from dataclasses import dataclass
+
+import numpy as np
+
+from gate import urls
+from gate.extract.model import Block
+from gate.tokens import block_hash, words
+
+TEMPLATES_VERSION = 1  # part of the cache key: bump when blocks or composition change
+MIN_PAGES = 5
+SHARE_ANY = 0.8
+SHARE_ASIDE = 0.3
+MAIN_RATIO = 0.5
+LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
+
+
+def site_of(source_url: str | None) -> str | None:
+    """The host pages are grouped by (None without a usable ``source_url``: such a
+    document keeps trafilatura's text)."""
+    if not source_url:
+        return None
+    try:
+        return urls.parse(source_url).host or None
+    except ValueError:
+        return None
+
+
+def block_summary(blocks: Sequence[Block]) -> dict[str, list[int]]:
+    """The page's distinct block hashes, in trafilatura's main text or not (for the cache
+    and the parent's learning; a few hundred bytes a page)."""
+    main = sorted({b.hash for b in blocks if b.main})
+    taken = set(main)
+    other = sorted({b.hash for b in blocks if b.hash not in taken})
+    return {"main": main, "other": other}
+
+
+@dataclass(frozen=True)
+class Page:
+    """One page taking part in learning: its host and its block hashes."""
+
+    site: str
+    main: np.ndarray  # uint64, sorted, distinct
+    other: np.ndarray  # uint64, sorted, distinct, none of them in main
+
+    @classmethod
+    def of(cls, site: str, summary: dict[str, list[int]]) -> Page:
+        return cls(site, np.array(summary.get("main", ()), dtype=np.uint64),
+                   np.array(summary.get("other", ()), dtype=np.uint64))
+
+    @property
+    def hashes(self) -> np.ndarray:
+        return np.union1d(self.main, self.other)
+
+    def signature(self) -> bytes:
+        return hashlib.sha256(self.main.tobytes() + b"|" + self.other.tobytes()).digest()
+
+
+def learn(pages: Iterable[Page]) -> dict[str, np.ndarray]:
+    """Each host's template blocks (sorted uint64 hashes), for hosts that teach any."""
+    by_site: dict[str, dict[bytes, Page]] = {}
+    for page in pages:
+        by_site.setdefault(page.site, {}).setdefault(page.signature(), page)
+    learnt: dict[str, np.ndarray] = {}
+    for site in sorted(by_site):
+        distinct = list(by_site[site].values())
+        n = len(distinct)
+        if n < MIN_PAGES:
+            continue
+        every, total = np.unique(np.concatenate([p.hashes for p in distinct]),
+                                 return_counts=True)
+        in_main, main_count = np.unique(np.concatenate([p.main for p in distinct]),
+                                        return_counts=True)
+        mains = np.zeros(len(every), dtype=np.int64)
+        mains[np.searchsorted(every, in_main)] = main_count
+        anywhere = total >= max(MIN_PAGES, math.ceil(SHARE_ANY * n))
+        aside = (total >= max(MIN_PAGES, math.ceil(SHARE_ASIDE * n))) & (2 * mains <= total)
+        template = every[anywhere | aside]
+        if len(template):
+            learnt[site] = template
+    return learnt
+
+
+def removal(page: Page, learnt: dict[str, np.ndarray]) -> tuple[int, ...]:
+    """The template blocks of ``page`` (sorted hashes), empty when none."""
+    template = learnt.get(page.site)
+    if template is None:
+        return ()
+    return tuple(int(h) for h in np.intersect1d(page.hashes, template, assume_unique=True))
+
+
+def removal_key(hashes: Sequence[int]) -> str:
+    """A short stable name for a removal set (part of the cache key of the cleaned text)."""
+    blob = b"".join(int(h).to_bytes(8, "little") for h in sorted(hashes))
+    return hashlib.sha256(blob).hexdigest()[:16]
+
+
+def _word_count(lines: Iterable[str]) -> int:
+    return sum(len(words(line)) for line in lines)
+
+
+def compose(text: str, blocks: Sequence[Block], template: Iterable[int]
+            ) -> tuple[str, dict[str, int | str]]:
+    """The page's own text: ``text`` (trafilatura's) without the template blocks, or the
+    page's own blocks when trafilatura had chosen the template (see the module
+    docstring). Returns the text and what was done, for the record."""
+    drop = set(template)
+    if not drop:
+        return text, {}
+    main_rest = [line for line in text.split("\n")
+                 if (digest := block_hash(line)) is None or digest not in drop]
+    own = [b.text for b in blocks if b.hash not in drop and b.links < LINK_DOMINATED]
+    main_words, own_words = _word_count(main_rest), _word_count(own)
+    if main_words and main_words >= MAIN_RATIO * own_words:
+        cleaned, source = "\n".join(main_rest).strip("\n"), "main"
+    elif own_words:
+        cleaned, source = "\n".join(own), "page"
+    else:
+        return text, {"template_blocks": len(drop), "kept": "all (nothing of its own)"}
+    return cleaned, {"template_blocks": len(drop), "kept": source,
+                     "chars_before": len(text), "chars_after": len(cleaned)}
