@@ -300,7 +300,23 @@ def make(out: Path, seed: int = 13) -> Path:
             path = f"{host}/{section}/page-{n:03d}.html"
             add(path, site.page(rng, body, section), f"https://{host}/{section}/{n}", bid, host)
             roll = rng.random()
-            if roll < 0.25:  # an edited copy on the same site
+            if roll < 0.06:  # a family: an edited copy, a printed view and a text copy
+                vid = f"{bid}e2"
+                variant = edit_body(rng, body, 0.02)
+                texts[vid] = body_text(variant)
+                family = [(f"{host}/{section}/page-{n:03d}-v2.html",
+                           site.page(rng, variant, section), vid),
+                          (f"{host}/{section}/page-{n:03d}-print.html",
+                           site.page(rng, body, section), bid),
+                          (f"{host}/files/page-{n:03d}.txt", as_text(body, False), bid)]
+                for vpath, data, ref in family:
+                    add(vpath, data, f"https://{host}/{vpath}", ref, host)
+                    relations.append((path, vpath, "exact" if ref == bid else "near"))
+                for i, (one, _d, ref_one) in enumerate(family):
+                    for two, _e, ref_two in family[i + 1:]:
+                        relations.append((one, two, "exact" if ref_one == ref_two else
+                                          "near"))
+            elif roll < 0.25:  # an edited copy on the same site
                 share = rng.choice((0.01, 0.02, 0.03, 0.05, 0.1, 0.2, 0.4))
                 vid = f"{bid}e{int(share * 100)}"
                 variant = edit_body(rng, body, share)

@@ -118,7 +118,7 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
         if item.site is None or not blocks or item.measure_errors or not item.extracted.ok:
             evaluated(item)
             return
-        item.page = Page.of(item.site, blocks)
+        item.page = Page.of(f"{item.site} {item.extracted.type}", blocks)
         item.measures = {}  # measured after learning, on the page's own text
         waiting.append(item)
 
@@ -231,5 +231,5 @@ def _stored_pages(state: Any, batch: set[str]) -> list[Page]:
             continue
         cached = state.cache_meta(row["cache_key"])
         if cached is not None and cached[1].get("blocks"):
-            pages.append(Page.of(site, cached[1]["blocks"]))
+            pages.append(Page.of(f"{site} {cached[0].get('type')}", cached[1]["blocks"]))
     return pages

@@ -9,19 +9,24 @@ run can see and removes it before the text is checked, shingled or indexed.
 Learning (parent process, pure and deterministic): every extraction comes with the page's
 blocks (paragraphs, headings, list items, table cells, link lists; for PDF and text, the
 lines), each with a hash of its words (:func:`gate.tokens.block_hash`). Pages are grouped
-by the host of their ``source_url``; the pages of a host are the batch's plus, in an
+by the host of their ``source_url`` and their type (an HTML template is learnt from the
+host's HTML pages, a PDF running header from its PDFs); the pages of a host are the
+batch's plus, in an
 incremental run, the stored corpus's (their blocks come from the digest-keyed cache). Pages
 with identical block sets count once. On a host with ``n`` distinct pages, a block is
-template when it occurs on at least ``MIN_PAGES`` of them and
+template when it occurs
 
-* on at least ``SHARE_ANY`` of them wherever it stands, or
-* on at least ``SHARE_ASIDE`` of them and outside trafilatura's main text on at least half
-  of those (menus, teasers and footers that vary by section).
+* on at least ``SHARE_ANY`` of them (and at least ``MIN_PAGES``) wherever it stands, or
+* on at least ``SHARE_ASIDE`` of them (and at least ``ASIDE_MIN_PAGES``) and outside
+  trafilatura's main text on at least half of those (menus, teasers and footers that vary
+  by section, teasers that rotate).
 
-A host with fewer than ``MIN_PAGES`` distinct pages (the first run of a new site with a
-handful of pages) teaches nothing: its pages keep trafilatura's text, as before. A body
-shared by a few versions of one page stays, because a version cluster is much smaller
-than a site.
+A host with fewer than ``MIN_PAGES`` distinct pages teaches nothing: its pages keep
+trafilatura's text, as before. On the first run of a new site with three or four pages,
+only what is on every page is template. A body shared by a few versions of one page
+stays, because a version cluster is much smaller than a site; the exception is a site
+whose every page is a version of one document, whose shared body is taken for template
+(the versions then keep their own differences only).
 
 Removal (worker, :func:`compose`): the page's template blocks are dropped from
 trafilatura's text; when what remains is less than ``MAIN_RATIO`` of the page's own
@@ -43,10 +48,11 @@ from gate import urls
 from gate.extract.model import Block
 from gate.tokens import block_hash, words
 
-TEMPLATES_VERSION = 1  # part of the cache key: bump when blocks or composition change
-MIN_PAGES = 5
+TEMPLATES_VERSION = 2  # part of the cache key: bump when blocks or composition change
+MIN_PAGES = 3
+ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
-SHARE_ASIDE = 0.3
+SHARE_ASIDE = 0.2
 MAIN_RATIO = 0.5
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
 
@@ -110,7 +116,8 @@ def learn(pages: Iterable[Page]) -> dict[str, np.ndarray]:
         mains = np.zeros(len(every), dtype=np.int64)
         mains[np.searchsorted(every, in_main)] = main_count
         anywhere = total >= max(MIN_PAGES, math.ceil(SHARE_ANY * n))
-        aside = (total >= max(MIN_PAGES, math.ceil(SHARE_ASIDE * n))) & (2 * mains <= total)
+        aside = (total >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n))) & \
+            (2 * mains <= total)
         template = every[anywhere | aside]
         if len(template):
             learnt[site] = template

@@ -234,32 +234,59 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
     return tuple(blocks)
 
 
+def _row_cells(line: str) -> list[int]:
+    """The cell hashes of a table row trafilatura wrote as ``| a | b |``."""
+    if not line.lstrip().startswith("|"):
+        return []
+    return [h for h in map(block_hash, line.strip().strip("|").split("|")) if h is not None]
+
+
 def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Block, ...]]:
     """trafilatura's text with the headings, list items and table cells it dropped inside
-    the stretch of the page it chose (and the headings right before it), so a heading, a
-    list or a table counts in HTML as it does in PDF, text and Markdown.
+    the stretch of the page it chose (and those right before and after it: a title, a
+    closing list or table), so a heading, a list or a table counts in HTML as it does in
+    PDF, text and Markdown.
 
-    Only when every line trafilatura wrote is one of the page's blocks (so the text can be
-    rebuilt from them in document order); otherwise its text is kept as it is.
+    Only when every line trafilatura wrote is one of the page's blocks, or a table row of
+    them (so each line has a place in the page); otherwise its text is kept as it is.
     """
-    page = {b.hash for b in blocks}
-    if any(h is not None and h not in page for h in map(block_hash, text.split("\n"))):
+    where: dict[int, list[int]] = {}
+    for i, block in enumerate(blocks):
+        where.setdefault(block.hash, []).append(i)
+    placed: list[tuple[int, int, str]] = []
+    covered: set[int] = set()
+    cursor = -1
+    for order, line in enumerate(text.split("\n")):
+        digest = block_hash(line)
+        if digest is None:
+            continue
+        parts = [digest] if digest in where else _row_cells(line)
+        if not parts or any(part not in where for part in parts):
+            return text, blocks
+        position = next((i for i in where[parts[0]] if i > cursor), where[parts[0]][0])
+        cursor = max(cursor, position)
+        placed.append((position, order, line))
+        covered.update(parts)
+    if not placed:
         return text, blocks
-    chosen = [i for i, b in enumerate(blocks) if b.main]
-    if not chosen:
-        return text, blocks
-    first, last = chosen[0], chosen[-1]
+    first = min(p for p, _o, _l in placed)
+    last = max(p for p, _o, _l in placed)
     while first > 0 and blocks[first - 1].kind == "heading" and \
             blocks[first - 1].links < 0.5:
         first -= 1
-    kept = [b if b.main or not (first <= i <= last and b.kind != "text" and b.links < 0.5)
-            else Block(text=b.text, hash=b.hash, main=True, links=b.links, kind=b.kind)
-            for i, b in enumerate(blocks)]
-    added = sum(1 for old, new in zip(blocks, kept) if new.main and not old.main)
+    while last + 1 < len(blocks) and blocks[last + 1].kind != "text" and \
+            blocks[last + 1].links < 0.5:
+        last += 1
+    added = [i for i in range(first, last + 1) if blocks[i].hash not in covered and
+             blocks[i].kind != "text" and blocks[i].links < 0.5]
     if not added:
         return text, blocks
-    lines = [b.text for b in kept if b.main]
-    return "\n".join(lines), tuple(kept)
+    main = covered | {blocks[i].hash for i in added}
+    kept = tuple(b if b.main == (b.hash in main) else
+                 Block(text=b.text, hash=b.hash, main=b.hash in main, links=b.links,
+                       kind=b.kind) for b in blocks)
+    lines = sorted(placed + [(i, -1, blocks[i].text) for i in added])
+    return "\n".join(line for _p, _o, line in lines), kept
 
 
 def extract_html(data: bytes, encoding: str | None, max_nesting: int,
