@@ -26,17 +26,13 @@ import json
 import shutil
 import subprocess
 import sys
-import time
-from datetime import UTC, datetime
 from pathlib import Path
 
 ROOT = Path(__file__).resolve().parent.parent
 sys.path.insert(0, str(ROOT))
 
-from gate import templates  # noqa: E402
+from benchmarks.templates import run_once  # noqa: E402
 from gate.extract import extract  # noqa: E402
-from gate.pipeline import RunOptions, run  # noqa: E402
-from gate.policy import load_policy  # noqa: E402
 from gate.tokens import words  # noqa: E402
 
 POLICY = "version: 1\nname: manual-bench\nduplicates:\n  threshold: 0.80\n"
@@ -109,18 +105,7 @@ def main() -> None:
           f"with Jaccard >= 0.85: {sum(j >= 0.85 for *_x, j in same_page)}")
     for learn in (True, False):
         out = args.work / ("out-learn" if learn else "out-plain")
-        shutil.rmtree(out, ignore_errors=True)
-        saved = templates.MIN_PAGES
-        if not learn:
-            templates.MIN_PAGES = 10 ** 9
-        try:
-            started = time.perf_counter()
-            result = run(RunOptions(inbox=inbox, policy=load_policy(policy), out=out,
-                                    workers=args.workers,
-                                    as_of=datetime(2026, 12, 1, tzinfo=UTC)))
-            seconds = time.perf_counter() - started
-        finally:
-            templates.MIN_PAGES = saved
+        result, seconds = run_once(inbox, policy, out, args.workers, learn)
         report = json.loads((out / "report.json").read_text(encoding="utf-8"))
         keeper = {}
         for doc in report["documents"]:

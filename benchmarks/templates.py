@@ -18,7 +18,11 @@ duplicate check on (threshold 0.80) and scored against its pairs and bodies:
   in text.txt (kept) and the share of text.txt's words not in the body (template left).
 
 ``--baseline`` also runs with template learning switched off (trafilatura's text only),
-for comparison. The generated corpora live under bench-out/ (git-ignored).
+for comparison. ``--cost N`` runs the scale benchmark's generated corpus of N documents
+(benchmarks/corpus.py: pages of one host sharing a navigation, cookie-banner and footer
+template) with and without template learning and prints documents per second and the
+worker seconds per stage, which is what learning and removal cost. The generated corpora
+live under bench-out/ (git-ignored).
 """
 
 from __future__ import annotations
@@ -32,6 +36,7 @@ import time
 from collections import Counter
 from datetime import UTC, datetime
 from pathlib import Path
+from typing import Any
 
 ROOT = Path(__file__).resolve().parent.parent
 sys.path.insert(0, str(ROOT))
@@ -45,23 +50,31 @@ THRESHOLD = 0.80
 POLICY = f"version: 1\nname: template-bench\nduplicates:\n  threshold: {THRESHOLD}\n"
 
 
-def run_gate(corpus: Path, out: Path, workers: int, learn: bool) -> tuple[dict, float, dict]:
-    """Run gate over ``corpus``; returns (report, seconds, worker timings)."""
+def run_once(inbox: Path, policy: Path, out: Path, workers: int, learn: bool,
+             manifest: Path | None = None) -> tuple[Any, float]:
+    """One fresh ``gate run`` in this process, with or without template learning;
+    returns (RunResult, seconds)."""
     shutil.rmtree(out, ignore_errors=True)
-    out.parent.mkdir(parents=True, exist_ok=True)
-    policy = out.parent / "template-bench.yaml"
-    policy.write_text(POLICY, encoding="utf-8")
     saved = templates.MIN_PAGES
     if not learn:
         templates.MIN_PAGES = 10 ** 9  # no site is large enough to teach a template
     try:
         started = time.perf_counter()
-        result = run(RunOptions(inbox=corpus / "inbox", policy=load_policy(policy), out=out,
-                                manifest=corpus / "manifest.jsonl", workers=workers,
+        result = run(RunOptions(inbox=inbox, policy=load_policy(policy), out=out,
+                                manifest=manifest, workers=workers,
                                 as_of=datetime(2026, 12, 1, tzinfo=UTC)))
-        seconds = time.perf_counter() - started
+        return result, time.perf_counter() - started
     finally:
         templates.MIN_PAGES = saved
+
+
+def run_gate(corpus: Path, out: Path, workers: int, learn: bool) -> tuple[dict, float, dict]:
+    """Run gate over a labelled corpus; returns (report, seconds, worker timings)."""
+    out.parent.mkdir(parents=True, exist_ok=True)
+    policy = out.parent / "template-bench.yaml"
+    policy.write_text(POLICY, encoding="utf-8")
+    result, seconds = run_once(corpus / "inbox", policy, out, workers, learn,
+                               corpus / "manifest.jsonl")
     report = json.loads((out / "report.json").read_text(encoding="utf-8"))
     return report, seconds, result.timings
 
@@ -144,6 +157,20 @@ def bench(name: str, corpus: Path, work: Path, workers: int, baseline: bool) -> 
              len(report["documents"]))
 
 
+def cost(n: int, work: Path, workers: int) -> None:
+    from benchmarks.corpus import BENCH_POLICY, make_corpus
+    inbox = make_corpus(work / f"cost-corpus-{n}", n)
+    policy = work / "cost-policy.yaml"
+    policy.write_text(BENCH_POLICY, encoding="utf-8")
+    for learn in (False, True):
+        out = work / f"cost-{n}-{'learn' if learn else 'plain'}"
+        result, seconds = run_once(inbox, policy, out, workers, learn)
+        label = "with template learning" if learn else "without (trafilatura only)"
+        stages = ", ".join(f"{k} {v:.1f}" for k, v in sorted(result.timings.items()))
+        print(f"cost, {n} documents, {workers} workers, {label}: {seconds:.1f} s, "
+              f"{n / seconds:.1f} documents/s; worker seconds: {stages}", flush=True)
+
+
 def main() -> None:
     parser = argparse.ArgumentParser(description=__doc__.split("\n")[0])
     parser.add_argument("--tuning", action="store_true")
@@ -151,7 +178,12 @@ def main() -> None:
     parser.add_argument("--baseline", action="store_true")
     parser.add_argument("--workers", type=int, default=2)
     parser.add_argument("--work", type=Path, default=ROOT / "bench-out" / "templates")
+    parser.add_argument("--cost", type=int, default=0, metavar="N")
     args = parser.parse_args()
+    if args.cost:
+        args.work.mkdir(parents=True, exist_ok=True)
+        cost(args.cost, args.work, args.workers)
+        return
     if not (args.tuning or args.blind):
         args.tuning = args.blind = True
     args.work.mkdir(parents=True, exist_ok=True)
