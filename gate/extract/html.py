@@ -21,7 +21,7 @@ import lxml.etree
 import lxml.html
 import trafilatura
 
-from gate.extract.model import Block, DateClaim, Extracted, Extraction, failed
+from gate.extract.model import Block, DateClaim, Extracted, Extraction, failed, line_hashes
 from gate.extract.text import clean_text, decode
 from gate.tokens import block_hash
 
@@ -174,7 +174,6 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
     what holds it, and ``main`` says whether trafilatura kept a line with the same words
     in ``main_text``.
     """
-    main = {h for h in map(block_hash, main_text.split("\n")) if h is not None}
     body = root.find("body")
     start = body if body is not None else root
     blocks: list[Block] = []
@@ -191,7 +190,7 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
         if text:
             digest = block_hash(text)
             if digest is not None:
-                blocks.append(Block(text=text, hash=digest, main=digest in main,
+                blocks.append(Block(text=text, hash=digest, main=False,
                                     links=round(min(1.0, linked / len(text)), 3),
                                     kind=_KINDS.get(holders[-1], "text")))
         linked = 0
@@ -231,7 +230,9 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
         if node is not start:
             add(node.tail)
     flush()
-    return tuple(blocks)
+    main = set(line_hashes(main_text, blocks))
+    return tuple(Block(text=b.text, hash=b.hash, main=True, links=b.links, kind=b.kind)
+                 if b.hash in main else b for b in blocks)
 
 
 def _row_cells(line: str) -> list[int]:
@@ -256,8 +257,7 @@ def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Bloc
     placed: list[tuple[int, int, str]] = []
     covered: set[int] = set()
     cursor = -1
-    for order, line in enumerate(text.split("\n")):
-        digest = block_hash(line)
+    for order, (line, digest) in enumerate(zip(text.split("\n"), line_hashes(text, blocks))):
         if digest is None:
             continue
         parts = [digest] if digest in where else _row_cells(line)

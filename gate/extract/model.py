@@ -8,8 +8,11 @@ travel back to the parent process.
 
 from __future__ import annotations
 
+from collections.abc import Sequence
 from dataclasses import asdict, dataclass, field
 from typing import Any
+
+from gate.tokens import block_hash
 
 # Extraction problems. Each one becomes a ``format`` finding in the parent.
 PROBLEMS = {
@@ -101,3 +104,10 @@ def failed(type_: str | None, problem: str, detail: str, sniffed: str = "",
     assert problem in PROBLEMS, problem
     return Extraction(Extracted(type=type_, problem=problem, problem_detail=detail,
                                 sniffed=sniffed, **more))
+
+
+def line_hashes(text: str, blocks: Sequence[Block]) -> list[int | None]:
+    """The block hash of each line of ``text`` (a line that is a block's text verbatim
+    takes its hash without normalising it again)."""
+    known = {b.text: b.hash for b in blocks}
+    return [known.get(line.strip()) or block_hash(line) for line in text.split("\n")]
