@@ -5,8 +5,9 @@ against ground truth.
 
 ``--tuning`` generates the invented tuning corpus (benchmarks/template_corpus.py);
 ``--blind`` generates the blind corpus (benchmarks/data/template_blind/, written by
-someone who never saw the detector). Each corpus is run through ``gate run`` with only the
-duplicate check on (threshold 0.80) and scored against its pairs and bodies:
+someone who never saw the detector; its README describes it). Each corpus is run
+through ``gate run`` with only the duplicate check on (threshold 0.80) and scored against
+its pairs and bodies:
 
 * near-duplicate recall: pairs whose ground-truth bodies have Jaccard >= 0.80 (word
   5-grams, exact), found by gate (one kept and the other held as its duplicate, or both
@@ -87,7 +88,9 @@ def load_truth(corpus: Path) -> tuple[list[dict], dict[str, str]]:
     for line in (corpus / "manifest.jsonl").read_text().splitlines():
         if line.strip():
             record = json.loads(line)
-            body = corpus / "bodies" / f"{record['x_body']}.txt"
+            # the tuning corpus names a body by id; the blind one stores it by path
+            name = record["x_body"] if "x_body" in record else record["path"]
+            body = corpus / "bodies" / f"{name}.txt"
             bodies[record["path"]] = body.read_text(encoding="utf-8")
     return pairs, bodies
 
@@ -194,11 +197,16 @@ def main() -> None:
             make(corpus)
         bench("tuning", corpus, args.work, args.workers, args.baseline)
     if args.blind:
-        corpus = args.work / "blind-corpus"
+        # the generator writes out/ beside itself: run a copy under bench-out/
+        home = args.work / "blind-generator"
+        corpus = home / "out"
         if not (corpus / "pairs.jsonl").exists():
-            generator = ROOT / "benchmarks" / "data" / "template_blind" / "make_corpus.py"
-            subprocess.run([sys.executable, str(generator), "--out", str(corpus)],
-                           check=True)
+            home.mkdir(parents=True, exist_ok=True)
+            source = ROOT / "benchmarks" / "data" / "template_blind"
+            for name in ("make_corpus.py", "validate.py"):
+                shutil.copyfile(source / name, home / name)
+            subprocess.run([sys.executable, str(home / "make_corpus.py")], check=True,
+                           cwd=home, stdout=subprocess.DEVNULL)
         bench("blind", corpus, args.work, args.workers, args.baseline)
 
 
