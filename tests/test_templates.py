@@ -100,15 +100,15 @@ def test_blocks_on_most_pages_of_a_host_are_template():
     menu, footer = [1, 2, 3], [4]
     pages = [page("a.example.org", [100 + i, 200 + i], menu + footer) for i in range(6)]
     learnt = templates.learn(pages)
-    assert set(learnt["a.example.org"].tolist()) == {1, 2, 3, 4}
-    assert templates.removal(pages[0], learnt) == (1, 2, 3, 4)
+    assert set(learnt["a.example.org"][0].tolist()) == {1, 2, 3, 4}
+    assert templates.removal(pages[0], learnt) == ((1, 2, 3, 4), ())
 
 
 def test_a_new_site_with_few_pages_learns_only_what_is_on_every_page():
     pages = [page("new.example.org", [100 + i], [1, 2, 3]) for i in range(2)]
     assert templates.learn(pages) == {}
     pages.append(page("new.example.org", [102], [1, 2, 4]))
-    assert set(templates.learn(pages)["new.example.org"].tolist()) == {1, 2}
+    assert set(templates.learn(pages)["new.example.org"][0].tolist()) == {1, 2}
     # identical pages count once: five copies of one page are one page
     copies = [page("copy.example.org", [7], [1, 2])] * 5
     assert templates.learn(copies) == {}
@@ -119,9 +119,8 @@ def test_a_version_cluster_in_the_main_text_is_not_template():
     # text on 6 of 20 pages, below SHARE_ANY; an aside outside it on 6 of 20 is template
     pages = [page("b.example.org", [50, 51, 60 + i], [1, 90]) for i in range(6)]
     pages += [page("b.example.org", [300 + i], [1, 91]) for i in range(14)]
-    template = set(templates.learn(pages)["b.example.org"].tolist())
-    assert 1 in template and 90 in template
-    assert not template & {50, 51}
+    everywhere, aside = templates.learn(pages)["b.example.org"]
+    assert everywhere.tolist() == [1] and aside.tolist() == [90, 91]  # not 50, 51
 
 
 def test_compose_uses_the_pages_own_blocks_when_the_main_text_was_template():
@@ -132,11 +131,15 @@ def test_compose_uses_the_pages_own_blocks_when_the_main_text_was_template():
     menu = Block("Home Bins Roads", block_hash("Home Bins Roads"), main=False, links=1.0)
     blocks = [menu] + teaser + notice
     text = "\n".join(b.text for b in teaser)
-    cleaned, info = templates.compose(text, blocks, [b.hash for b in teaser] + [menu.hash])
+    cleaned, info = templates.compose(text, blocks, ((menu.hash,), tuple(b.hash for b in teaser)))
     assert cleaned == "\n".join(b.text for b in notice)
     assert info["kept"] == "page" and info["template_blocks"] == 6
     # nothing learnt: the text as extracted
-    assert templates.compose(text, blocks, []) == (text, {})
+    assert templates.compose(text, blocks, ()) == (text, {})
+    # a block named by the aside rule only, with no link or everywhere-template block
+    # beside it, is a paragraph the page shares with others: it stays
+    stock = ((), (notice[1].hash,))
+    assert templates.compose(text, blocks, stock) == (text, {})
 
 
 # -- duplicate claims --------------------------------------------------------------------

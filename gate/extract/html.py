@@ -21,7 +21,8 @@ import lxml.etree
 import lxml.html
 import trafilatura
 
-from gate.extract.model import Block, DateClaim, Extracted, Extraction, failed, line_hashes
+from gate.extract.model import (Block, DateClaim, Extracted, Extraction, failed,
+                                line_hashes, row_cells)
 from gate.extract.text import clean_text, decode
 from gate.tokens import block_hash
 
@@ -185,10 +186,13 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
 
     def flush() -> None:
         nonlocal linked
-        text = re.sub(r"\s+", " ", "".join(parts)).strip()
+        raw = "".join(parts)
         parts.clear()
-        if text:
-            digest = block_hash(text)
+        # preformatted text is a block per line, as trafilatura writes it
+        pieces = raw.split("\n") if "pre" in holders else [raw]
+        for piece in pieces:
+            text = re.sub(r"\s+", " ", piece).strip()
+            digest = block_hash(text) if text else None
             if digest is not None:
                 blocks.append(Block(text=text, hash=digest, main=False,
                                     links=round(min(1.0, linked / len(text)), 3),
@@ -235,13 +239,6 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
                  if b.hash in main else b for b in blocks)
 
 
-def _row_cells(line: str) -> list[int]:
-    """The cell hashes of a table row trafilatura wrote as ``| a | b |``."""
-    if not line.lstrip().startswith("|"):
-        return []
-    return [h for h in map(block_hash, line.strip().strip("|").split("|")) if h is not None]
-
-
 def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Block, ...]]:
     """trafilatura's text with the headings, list items and table cells it dropped inside
     the stretch of the page it chose (and those right before and after it: a title, a
@@ -260,7 +257,7 @@ def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Bloc
     for order, (line, digest) in enumerate(zip(text.split("\n"), line_hashes(text, blocks))):
         if digest is None:
             continue
-        parts = [digest] if digest in where else _row_cells(line)
+        parts = [digest] if digest in where else row_cells(line)
         if not parts or any(part not in where for part in parts):
             return text, blocks
         position = next((i for i in where[parts[0]] if i > cursor), where[parts[0]][0])

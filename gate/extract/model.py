@@ -111,3 +111,10 @@ def line_hashes(text: str, blocks: Sequence[Block]) -> list[int | None]:
     takes its hash without normalising it again)."""
     known = {b.text: b.hash for b in blocks}
     return [known.get(line.strip()) or block_hash(line) for line in text.split("\n")]
+
+
+def row_cells(line: str) -> list[int]:
+    """The cell hashes of a table row written as ``| a | b |`` (trafilatura's tables)."""
+    if not line.lstrip().startswith("|"):
+        return []
+    return [h for h in map(block_hash, line.strip().strip("|").split("|")) if h is not None]
