@@ -37,8 +37,8 @@ text, and the page's own blocks are used instead. So they are when trafilatura's
 cannot be laid onto the page's blocks line by line (a layout table's cell written as one
 line), because the template cannot then be taken out of it. Either happens only when the
 page's own blocks hold at least ``MIN_OWN_WORDS`` words (more than trafilatura's
-remainder, in the first case): a table of contents or a page of links keeps its text. When nothing would remain, the page is
-kept as extracted.
+remainder, in the first case): a table of contents or a page of links keeps its text.
+When nothing would remain, the page is kept as extracted.
 """
 
 from __future__ import annotations
