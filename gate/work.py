@@ -85,12 +85,9 @@ def process(task: tuple[Any, ...]) -> dict[str, Any]:
 
 def warm_up() -> None:
     """Load what every worker needs before forking (language profiles, parsers)."""
-    import langdetect
+    from gate import langid
 
-    try:
-        langdetect.detect_langs("warm up the language profiles before forking")
-    except Exception:  # noqa: BLE001 - warming up is an optimisation only
-        pass
+    langid.profiles()  # about 20 MB of arrays, shared with the forked workers
     import gate.extract.html
     import gate.extract.pdf
     import gate.extract.text  # noqa: F401

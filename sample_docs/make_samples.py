@@ -263,6 +263,27 @@ MIXED_BULLETIN = (
     "Vielen Dank für Ihre Geduld, während wir das Netz verbessern.",
 )
 
+# Mostly English, with one French paragraph: the most likely language is allowed and clear,
+# but the allowed languages make up less than min_allowed_share of the text.
+ENGLISH_WITH_FRENCH = (
+    "From Monday the depot at the harbour opens at six in the morning instead of seven. "
+    "Drivers on the early shift collect their vehicles from bay two, where the new "
+    "charging posts have been installed. The canteen keeps its usual hours, and the "
+    "staff car park stays open through the night. Please check the rota in the usual "
+    "place before your first shift of the week.",
+    "The maintenance team will inspect every charging post on Tuesday afternoon. If a "
+    "post shows a red light, leave the vehicle on the neighbouring post and report the "
+    "fault to the duty manager by radio. Spare cables are kept in the locked cabinet "
+    "beside the wash bay, and the key hangs in the supervisor's office.",
+    "Timetables for the winter service are printed and waiting in the drivers' room. Each "
+    "driver takes one copy for the cab; the old timetables go into the blue recycling box "
+    "by the door, not into the bins in the yard. Questions about the new running times go "
+    "to the planning office, which answers within two working days.",
+    "Les conducteurs qui prennent leur service au dépôt du port doivent désormais "
+    "badger à l'entrée nord, car l'entrée sud sera fermée pendant les travaux de "
+    "rénovation du parking jusqu'à la fin du mois de janvier.",
+)
+
 
 # -- the documents ----------------------------------------------------------------------
 
@@ -589,6 +610,12 @@ def documents() -> list[Doc]:
                  "probability is below min_confidence 0.80.",
             source_url=f"{PORTAL}/notices/line-4-weekend.txt", published_at="2026-11-26",
             **q("language.low-confidence")),
+        Doc("language/depot-hours.txt", text_file(*ENGLISH_WITH_FRENCH), lang="en+fr",
+            note="Mostly English with one French paragraph: English is allowed and clear, "
+                 "but English and German together are less than min_allowed_share 0.90 of "
+                 "the text.",
+            source_url=f"{PORTAL}/notices/depot-hours.txt", published_at="2026-11-25",
+            **q("language.mixed")),
 
         # -- format --------------------------------------------------------------------
         Doc("format/empty.txt", b"", "A zero-byte file (its manifest record is otherwise "

@@ -232,8 +232,9 @@ def test_language_measure_is_deterministic_and_bounded():
             "Die Lieferungen werden in drei Zeitfenstern geplant. " * 200)
     first = language.measure(_Extraction(text))
     assert all(language.measure(_Extraction(text)) == first for _ in range(5))
-    assert len(language.sample(text)) <= 3 * language.WINDOW + 2
-    assert {lang for lang, _ in first["languages"]} == {"en", "de"}  # mixed: both seen
+    shares = dict(first["languages"])
+    assert set(shares) == {"en", "de"}  # mixed: both seen, each about half of the letters
+    assert 0.4 < shares["en"] < 0.6 and 0.4 < shares["de"] < 0.6
 
 
 LIMITS = policy("limits:\n  max_bytes: 1000\n")

@@ -51,7 +51,7 @@ def test_review_list_json_and_filters(out):
                                                   "source/raw-paste.txt"]
     assert all(e["location"].startswith("quarantine/") for e in entries)
     text = gate("review", "list", out, "--check", "language").stdout
-    assert "language/avis-aux-voyageurs.html" in text and text.endswith("2 entries\n")
+    assert "language/avis-aux-voyageurs.html" in text and text.endswith("3 entries\n")
 
 
 def test_review_show_makes_the_reasons_readable(out):

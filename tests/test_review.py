@@ -46,7 +46,8 @@ def test_list_filters(out):
     everything = review.list_entries(out)
     assert len(everything) == HELD  # the demo's quarantined documents
     assert {e.path for e in review.list_entries(out, check="language")} == {
-        "language/avis-aux-voyageurs.html", "language/mixed-bulletin.txt"}
+        "language/avis-aux-voyageurs.html", "language/mixed-bulletin.txt",
+        "language/depot-hours.txt"}
     assert [e.path for e in review.list_entries(out, code="integrity.mismatch")] == \
         ["integrity/edited-after-recording.txt"]
     report = json.loads((out / "report.json").read_text())

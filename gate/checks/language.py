@@ -1,13 +1,20 @@
 """language: is the text in a language the index serves?
 
-Detection uses langdetect with its seed fixed (``DetectorFactory.seed = 0``, as the
-library's README prescribes for reproducible results) on a bounded sample: three windows of
-400 characters from the start, middle and end of the text, so a long document costs the
-same as a short one and a document that switches language part-way lowers the confidence
-instead of going unnoticed. langdetect is confidently wrong on short strings, so text
-shorter than ``min_chars`` is *undetermined*; ``undetermined`` says what that means
-(``quarantine``, ``warn`` or ``allow``; left out, the section's ``action`` decides). Text
-with no letters at all is undetermined too.
+The whole text is read. It is cut into chunks at paragraph breaks (about 600 characters),
+every chunk is identified with langdetect's own language profiles, and the document's
+*share* of each language is the chunks' verdicts weighted by the letters they hold
+(``gate/langid.py`` says exactly how; Latin letters and other scripts in one chunk are
+judged apart, so identifiers in a Japanese page do not outvote it). A page that is mostly
+Spanish with untranslated English option lists is therefore judged Spanish, and a page that
+switches language part-way shows both languages with their shares.
+
+The most likely language is the one with the largest share. A document is held when that
+language is not in ``allowed``, when its share is below ``min_confidence`` (the text is too
+mixed or too unclear to say), or, if ``min_allowed_share`` is set, when the allowed
+languages together make up less than that share of the text. Text shorter than
+``min_chars`` is *undetermined*; ``undetermined`` says what that means (``quarantine``,
+``warn`` or ``allow``; left out, the section's ``action`` decides). Text with no letters at
+all is undetermined too.
 
 Codes are langdetect's: ISO 639-1 (``en``, ``de``, ``fr`` ...) plus ``zh-cn`` and ``zh-tw``.
 
@@ -16,6 +23,7 @@ Example::
     language:
       allowed: [en, de]
       min_confidence: 0.80
+      min_allowed_share: 0.90
       min_chars: 200
       undetermined: warn
 """
@@ -26,27 +34,24 @@ import os
 from typing import Any, Literal
 
 import langdetect
-from langdetect import DetectorFactory
-from langdetect.lang_detect_exception import LangDetectException
 from pydantic import Field, field_validator
 
 from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.extract.model import Extraction
 from gate.findings import Finding, define
+from gate.langid import identify
 from gate.settings import Section
 
-DetectorFactory.seed = 0
-
-WINDOW = 400
-WINDOWS = 3
-
 NOT_ALLOWED = define("language.not-allowed", "the text is in a language not allowed",
-                     "the text is in {language} (probability {probability:.2f}); the policy "
+                     "the text is mostly {language} ({probability:.0%} of it); the policy "
                      "allows {allowed}")
 LOW_CONFIDENCE = define("language.low-confidence", "the language is uncertain",
-                        "the most likely language is {language} at probability "
-                        "{probability:.2f}, below min_confidence {min_confidence:.2f} "
-                        "(candidates: {candidates})")
+                        "the most likely language is {language}, but only {probability:.0%} "
+                        "of the text is in it, below min_confidence {min_confidence:.2f} "
+                        "(shares: {candidates})")
+MIXED = define("language.mixed", "too much of the text is in other languages",
+               "only {allowed_share:.0%} of the text is in allowed languages ({allowed}), "
+               "below min_allowed_share {min_allowed_share:.2f} (shares: {candidates})")
 UNDETERMINED = define("language.undetermined", "too little text to tell the language",
                       "the language cannot be determined: {why}")
 
@@ -60,7 +65,12 @@ class LanguageSettings(Section):
     allowed: tuple[str, ...] = Field(min_length=1, description="langdetect language codes.",
                                      examples=[["en", "de"]])
     min_confidence: float = Field(0.80, ge=0.0, le=1.0, description="Hold documents whose "
-                                  "most likely language is less probable than this.")
+                                  "most likely language makes up a smaller share of the "
+                                  "text than this.")
+    min_allowed_share: float | None = Field(
+        None, ge=0.0, le=1.0, description="Hold documents in which the allowed languages "
+        "together make up a smaller share of the text than this; left out, only the most "
+        "likely language is judged.", examples=[0.9])
     min_chars: int = Field(200, ge=1, description="Below this many characters of text the "
                            "language is undetermined.")
     undetermined: Literal["quarantine", "warn", "allow"] | None = Field(
@@ -81,31 +91,12 @@ class LanguageSettings(Section):
         return tuple(out)
 
 
-def sample(text: str) -> str:
-    """Up to three 400-character windows (start, middle, end), cut at white space."""
-    if len(text) <= WINDOW * WINDOWS:
-        return text
-    starts = [0, (len(text) - WINDOW) // 2, len(text) - WINDOW]
-    parts = []
-    for start in starts:
-        chunk = text[start:start + WINDOW]
-        if start:
-            space = chunk.find(" ")
-            chunk = chunk[space + 1:] if 0 <= space < 50 else chunk
-        parts.append(chunk)
-    return "\n".join(parts)
-
-
 def measure(extraction: Extraction) -> dict[str, Any]:
-    """Detect the language of a bounded sample (runs in the worker)."""
+    """The share of each language in the whole text (runs in the worker)."""
     text = extraction.text
-    piece = sample(text)
-    try:
-        found = langdetect.detect_langs(piece)
-    except LangDetectException:
-        return {"chars": len(text), "languages": []}
-    return {"chars": len(text),
-            "languages": [[str(lang.lang), round(float(lang.prob), 4)] for lang in found]}
+    found = identify(text)
+    return {"chars": len(text), "letters": found.letters, "chunks": found.chunks,
+            "languages": [[lang, share] for lang, share in found.shares]}
 
 
 def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding] | None:
@@ -126,17 +117,23 @@ def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding] 
         return [UNDETERMINED(why=why, chars=measured["chars"], action=settings.undetermined)]
     language, probability = languages[0]
     candidates = ", ".join(f"{lang} {prob:.2f}" for lang, prob in languages)
+    allowed = ", ".join(settings.allowed)
     findings = []
     if language not in settings.allowed:
         findings.append(NOT_ALLOWED(language=language, probability=probability,
-                                    allowed=", ".join(settings.allowed)))
+                                    allowed=allowed, candidates=candidates))
     elif probability < settings.min_confidence:
         findings.append(LOW_CONFIDENCE(language=language, probability=probability,
                                        min_confidence=settings.min_confidence,
                                        candidates=candidates))
+    share = round(sum(p for lang, p in languages if lang in settings.allowed), 4)
+    if language in settings.allowed and settings.min_allowed_share is not None and \
+            share < settings.min_allowed_share:
+        findings.append(MIXED(allowed_share=share, allowed=allowed, candidates=candidates,
+                              min_allowed_share=settings.min_allowed_share))
     return findings
 
 
 CHECK = DocumentCheck(id="language", section="language", evaluate=evaluate,
-                      settings=LanguageSettings, measure=measure, measure_version=2,
+                      settings=LanguageSettings, measure=measure, measure_version=3,
                       doc=__doc__ or "")

@@ -1,0 +1,238 @@
+"""Language shares of a whole text, read with langdetect's own profiles.
+
+langdetect identifies a language by sampling character n-grams (1 to 3 letters, words padded
+with a space) at random and multiplying, for every language, ``alpha / 10000 + P(n-gram |
+language)`` until one language dominates; its profiles are the frequency tables of 55
+languages built from Wikipedia. Sampling at random in pure Python is what makes it slow,
+so gate reads the same profiles differently:
+
+* the text is cut into chunks at paragraph breaks (a paragraph a chunk; short ones join the
+  next, long ones are cut at about :data:`CHUNK` characters);
+* every chunk's n-grams are extracted exactly as langdetect extracts them (its character
+  normalisation, URL and e-mail removal, Vietnamese recomposition, the rule that drops Latin
+  letters from mostly non-Latin text, and the rule that skips n-grams inside words in
+  capitals), but with numpy over code points instead of a loop over characters;
+* each chunk is scored deterministically over *all* its n-grams with the same smoothing
+  (``log(0.5 / 10000 + P)`` summed: naive Bayes), and its posterior is the softmax of the
+  sums;
+* the document's share of each language is the posterior of every chunk weighted by the
+  number of letters the chunk holds.
+
+So the whole text is read, a page that is mostly Spanish with untranslated option lists is
+judged Spanish, and the result does not depend on a random seed. langdetect itself stays
+the reference: the tests compare the two on chunks of real text.
+"""
+
+from __future__ import annotations
+
+import re
+from dataclasses import dataclass
+
+import numpy as np
+from scipy import sparse
+from langdetect import detector_factory
+from langdetect.detector import Detector
+from langdetect.utils.ngram import NGram
+
+CHUNK = 600  # a paragraph longer than twice this is cut into pieces of about this size
+MIN_CHUNK = 200  # a shorter paragraph is judged together with the next
+MAX_CHARS = 400_000  # beyond this many characters, chunks are taken evenly from the text
+SEPARATOR = "\ue000"  # a private-use character, untouched by langdetect's normalisation
+_BASE_FREQ = 10_000  # langdetect's Detector.BASE_FREQ
+_ALPHA = 0.5  # langdetect's Detector.ALPHA_DEFAULT (its random jitter is left out)
+
+
+@dataclass(frozen=True)
+class Shares:
+    """How a text divides between languages."""
+
+    letters: int  # letters that matched a profile n-gram (the weight of the judgement)
+    chunks: int
+    shares: tuple[tuple[str, float], ...]  # (language, share of letters), largest first
+
+
+class _Profiles:
+    """langdetect's profiles as arrays: sorted n-gram keys and log-probabilities."""
+
+    def __init__(self) -> None:
+        detector_factory.init_factory()
+        factory = detector_factory._factory
+        self.langs = tuple(factory.langlist)
+        items = sorted((self.key(gram), probs)
+                       for gram, probs in factory.word_lang_prob_map.items())
+        self.keys = np.array([key for key, _ in items], dtype=np.uint64)
+        probs = np.array([p for _, p in items], dtype=np.float64)
+        self.logp = np.log(probs + _ALPHA / _BASE_FREQ).astype(np.float32)
+        # NGram.normalize maps one character to one character: a table over the BMP
+        self.normal = np.arange(0x10000, dtype=np.uint64)
+        self.upper = np.zeros(0x10000, dtype=bool)
+        # what a character weighs in a share: about the Latin letters it stands for when
+        # romanised (kana 2, Hangul syllables and Han ideographs 3; from memory, rounded)
+        self.weight = np.ones(0x10000, dtype=np.float64)
+        self.weight[0x3040:0x3100] = 2.0  # hiragana, katakana
+        self.weight[0xAC00:0xD7B0] = 3.0  # Hangul syllables
+        self.weight[0x4E00:0xA000] = 3.0  # CJK unified ideographs
+        self.weight[0x3400:0x4DC0] = 3.0  # CJK extension A
+        for cp in range(0x10000):
+            ch = chr(cp)
+            self.normal[cp] = ord(NGram.normalize(ch))
+            self.upper[cp] = ch.isupper()
+
+    @staticmethod
+    def key(gram: str) -> int:
+        """An n-gram as one integer: 21 bits a code point, so lengths cannot collide."""
+        value = 0
+        for ch in gram:
+            value = (value << 21) | ord(ch)
+        return value
+
+
+_profiles: _Profiles | None = None
+
+
+def profiles() -> _Profiles:
+    """The profiles, loaded once per process (workers inherit them from the parent)."""
+    global _profiles
+    if _profiles is None:
+        _profiles = _Profiles()
+    return _profiles
+
+
+_PARAGRAPH = re.compile(r"\n\s*\n|\n(?=\s*[-*•·]|\s*\d+[.)] )")
+
+
+def chunks(text: str) -> list[str]:
+    """Paragraphs, each its own chunk; one shorter than MIN_CHUNK characters (a heading, a
+    list item) joins the next, one longer than twice CHUNK is cut at spaces."""
+    out: list[str] = []
+    current = ""
+    for part in _PARAGRAPH.split(text):
+        part = part.strip()
+        if not part:
+            continue
+        current = f"{current}\n{part}" if current else part
+        while len(current) > 2 * CHUNK:
+            cut = current.rfind(" ", CHUNK, 2 * CHUNK)
+            cut = cut if cut > 0 else CHUNK
+            out.append(current[:cut])
+            current = current[cut:].lstrip()
+        if len(current) >= MIN_CHUNK:
+            out.append(current)
+            current = ""
+    if current:
+        if out and len(current) < MIN_CHUNK:
+            out[-1] = f"{out[-1]}\n{current}"
+        else:
+            out.append(current)
+    if len(text) > MAX_CHARS and out:
+        keep = max(1, MAX_CHARS // CHUNK)
+        if len(out) > keep:
+            picks = np.linspace(0, len(out) - 1, keep).round().astype(int)
+            out = [out[i] for i in sorted(set(picks.tolist()))]
+    return out
+
+
+def _grams(pieces: list[str], prof: _Profiles):
+    """langdetect's n-grams of every piece, vectorised: the normalised code points, the
+    piece each belongs to, and (keys, end positions) for n = 1, 2, 3, each in text order."""
+    joined = SEPARATOR.join(pieces)
+    joined = Detector.URL_RE.sub(" ", joined)
+    joined = Detector.MAIL_RE.sub(" ", joined)
+    joined = NGram.normalize_vi(joined)
+    cps = np.frombuffer(joined.encode("utf-32-le"), dtype=np.uint32).astype(np.uint64)
+    bmp = cps < 0x10000
+    cps[bmp] = prof.normal[cps[bmp]]
+    sep = cps == ord(SEPARATOR)
+    chunk_of = np.cumsum(sep)
+    # langdetect drops Latin letters from a text whose non-Latin letters are more than twice
+    # as many (cleaning_text); here per chunk
+    latin = (cps >= 65) & (cps <= 122)
+    nonlatin = (cps >= 0x300) & ~((cps >= 0x1E00) & (cps <= 0x1EFF)) & ~sep
+    n_chunks = len(pieces)
+    drop_latin = (np.bincount(chunk_of, latin, n_chunks) * 2 <
+                  np.bincount(chunk_of, nonlatin, n_chunks))
+    if drop_latin.any():
+        keep = ~(latin & drop_latin[chunk_of])
+        cps, sep, chunk_of = cps[keep], sep[keep], chunk_of[keep]
+    space = (cps == 32) | sep
+    cps = np.where(sep, np.uint64(32), cps)
+    # runs of spaces become one (Detector.append), and the text starts with one (NGram())
+    keep = ~(space & np.concatenate(([True], space[:-1])))
+    cps = np.concatenate((np.array([32], dtype=np.uint64), cps[keep]))
+    space = np.concatenate(([True], space[keep]))
+    chunk_of = np.concatenate(([0], chunk_of[keep]))
+    upper = np.zeros(cps.size, dtype=bool)
+    bmp = cps < 0x10000
+    upper[bmp] = prof.upper[cps[bmp]]
+    skip = upper & np.concatenate(([False], upper[:-1]))  # inside a word in capitals
+    one = ~space & ~skip
+    two = ~(space[:-1] & space[1:]) & ~skip[1:]
+    three = ~space[1:-1] & ~skip[2:]
+    grams = (  # (key, end position) of every 1-, 2- and 3-gram, each in text order
+        (cps[one], np.flatnonzero(one)),
+        ((cps[:-1][two] << np.uint64(21)) | cps[1:][two], np.flatnonzero(two) + 1),
+        ((cps[:-2][three] << np.uint64(42)) | (cps[1:-1][three] << np.uint64(21)) |
+         cps[2:][three], np.flatnonzero(three) + 2))
+    return cps, chunk_of, grams
+
+
+def _lookup(prof: _Profiles, keys: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+    """Each key's row in the profiles, and whether the profiles have it at all."""
+    found = np.searchsorted(prof.keys, keys)
+    found[found >= prof.keys.size] = 0
+    return found, prof.keys[found] == keys
+
+
+def profile_ngrams(text: str) -> list[str]:
+    """The n-grams of ``text`` (as one piece) that the profiles know, sorted: what
+    langdetect's ``Detector._extract_ngrams`` yields, for the tests to compare."""
+    prof = profiles()
+    _cps, _owner, grams = _grams([text], prof)
+    out = []
+    for length, (keys, _ends) in enumerate(grams, start=1):
+        _found, hit = _lookup(prof, keys)
+        for key in keys[hit].tolist():
+            out.append("".join(chr((key >> (21 * i)) & 0x1FFFFF)
+                               for i in reversed(range(length))))
+    return sorted(out)
+
+
+def identify(text: str) -> Shares:
+    """The share of each language in ``text`` (see the module docstring)."""
+    prof = profiles()
+    pieces = chunks(text)
+    if not pieces:
+        return Shares(0, 0, ())
+    n_chunks = len(pieces)
+    cps, chunk_of, grams = _grams(pieces, prof)
+    bmp = cps < 0x10000
+    # a chunk is scored twice: its n-grams that end in a Latin letter, and the others, so
+    # identifiers in a Japanese page or a Russian quote in a German one are judged apart
+    latin_end = (cps < 0x250) | ((cps >= 0x1E00) & (cps < 0x1F00))
+    char_weight = np.ones(cps.size)
+    char_weight[bmp] = prof.weight[cps[bmp]]
+    scores = np.zeros((2, n_chunks, len(prof.langs)), dtype=np.float32)
+    weight = np.zeros((2, n_chunks))
+    bounds = np.arange(n_chunks + 1)
+    for length, (keys, ends) in enumerate(grams, start=1):
+        found, hit = _lookup(prof, keys)
+        for part, mask in enumerate((hit & latin_end[ends], hit & ~latin_end[ends])):
+            owner = chunk_of[ends[mask]]  # in text order, so grouped by chunk
+            counts = sparse.csr_matrix(
+                (np.ones(owner.size, dtype=np.float32), found[mask],
+                 np.searchsorted(owner, bounds)), shape=(n_chunks, prof.keys.size))
+            scores[part] += counts @ prof.logp
+            if length == 1:  # a part weighs by the letters of it that the profiles know
+                weight[part] = np.bincount(owner, char_weight[ends[mask]], n_chunks)
+    total = weight.sum()
+    if total <= 0:
+        return Shares(0, n_chunks, ())
+    scores64 = scores.reshape(2 * n_chunks, -1).astype(np.float64)
+    scores64 -= scores64.max(axis=1, keepdims=True)
+    posterior = np.exp(scores64)
+    posterior /= posterior.sum(axis=1, keepdims=True)
+    share = (posterior * weight.reshape(-1, 1)).sum(axis=0) / total
+    ranked = np.argsort(-share, kind="stable")
+    shares = tuple((prof.langs[i], round(float(share[i]), 4)) for i in ranked
+                   if share[i] >= 0.005)
+    return Shares(int(total), n_chunks, shares)

@@ -1,0 +1,97 @@
+"""The whole-text language reading (gate/langid.py) against langdetect, its reference.
+
+langdetect 1.0.9 is the reference library: its own n-gram extraction and its own verdicts are
+the expected values. The texts are invented for these tests (invented places and services).
+"""
+
+from __future__ import annotations
+
+import pytest
+from langdetect import DetectorFactory, detect, detector_factory
+
+from gate import langid
+
+DetectorFactory.seed = 0
+
+
+def _langdetect_ngrams(text: str) -> list[str]:
+    """What langdetect itself extracts (Detector.append, cleaning_text, _extract_ngrams)."""
+    detector_factory.init_factory()
+    detector = detector_factory._factory.create()
+    detector.append(text)
+    detector.cleaning_text()
+    return sorted(detector._extract_ngrams())
+
+
+TEXTS = {
+    "en": "The northern depot opens at seven and closes at nineteen on weekdays. Drivers "
+          "collect their keys from the office beside the wash bay.",
+    "de": "Die Fahrgäste der Linie vier sollten am Wochenende mehr Zeit einplanen, weil "
+          "die Gleise zwischen dem Hafen und dem Altmarkt erneuert werden.",
+    "fr": "Le dépôt du nord ouvre à sept heures et ferme à dix-neuf heures en semaine; les "
+          "conducteurs récupèrent leurs clés au bureau à côté de la station de lavage.",
+    "es": "El almacén del norte abre a las siete y cierra a las diecinueve entre semana; "
+          "los conductores recogen las llaves en la oficina junto al lavadero.",
+    "it": "Il deposito nord apre alle sette e chiude alle diciannove nei giorni feriali; "
+          "gli autisti ritirano le chiavi nell'ufficio accanto all'autolavaggio.",
+    "pl": "Zajezdnia północna jest otwarta od siódmej do dziewiętnastej w dni robocze; "
+          "kierowcy odbierają klucze w biurze obok myjni.",
+    "ru": "Северное депо открывается в семь и закрывается в девятнадцать часов по будням; "
+          "водители забирают ключи в конторе рядом с мойкой.",
+    "ja": "北の車庫は平日の七時に開き、十九時に閉まります。運転手は洗車場の隣の事務所で鍵を"
+          "受け取ります。",
+    "vi": "Kho phía bắc mở cửa lúc bảy giờ và đóng cửa lúc mười chín giờ vào các ngày "
+          "trong tuần; tài xế nhận chìa khóa tại văn phòng cạnh khu rửa xe.",
+}
+
+
+@pytest.mark.parametrize("code", sorted(TEXTS))
+def test_ngrams_are_langdetects_own(code):
+    assert langid.profile_ngrams(TEXTS[code]) == _langdetect_ngrams(TEXTS[code])
+
+
+@pytest.mark.parametrize("text", [
+    "SEE THE NOTICE at https://transit.example.org/notices?id=4 or write to "
+    "desk@transit.example.org  --  twice   spaced   words, ALLCAPS and MixedCase.",
+    "運転手は ID カード (badge-v2) を提示してください。事務所は 8 時に開きます。",
+    "",
+    "    ",
+])
+def test_ngrams_match_langdetect_on_awkward_text(text):
+    assert langid.profile_ngrams(text) == _langdetect_ngrams(text)
+
+
+@pytest.mark.parametrize("code", sorted(TEXTS))
+def test_verdict_agrees_with_langdetect(code):
+    text = TEXTS[code]
+    found = langid.identify(text)
+    assert detect(text) == code  # the reference's verdict on the invented text
+    assert found.shares[0][0] == code
+    assert found.shares[0][1] > 0.95
+
+
+def test_shares_follow_the_paragraphs():
+    # each paragraph is long enough (MIN_CHUNK) to be judged on its own
+    text = "\n\n".join([TEXTS["es"] * 2, TEXTS["en"] * 2, TEXTS["es"] * 2, TEXTS["es"] * 2])
+    shares = dict(langid.identify(text).shares)
+    assert shares["es"] > 0.7 and 0.1 < shares["en"] < 0.3
+    assert abs(sum(shares.values()) - 1.0) < 0.02
+
+
+def test_identifiers_do_not_outvote_japanese():
+    # a Japanese page whose option lists are Latin: judged Japanese (man-page shape)
+    text = "\n\n".join([TEXTS["ja"], "--verbose --quiet --config FILE --no-color --dry-run",
+                        TEXTS["ja"]])
+    assert langid.identify(text).shares[0][0] == "ja"
+
+
+def test_nothing_to_read():
+    assert langid.identify("") == langid.Shares(0, 0, ())
+    assert langid.identify("1234 5678 — 90").shares == ()
+
+
+def test_chunks_cover_the_text_and_stay_bounded():
+    paragraphs = ["word " * n for n in (3, 50, 400, 10, 2)]
+    pieces = langid.chunks("\n\n".join(paragraphs))
+    assert " ".join(pieces).split() == "\n\n".join(paragraphs).split()
+    assert all(len(piece) <= 2 * langid.CHUNK + langid.MIN_CHUNK for piece in pieces)
