@@ -230,3 +230,23 @@ def test_an_incremental_run_learns_from_the_stored_corpus(tmp_path):
     assert report["documents"][0]["decision"] == "accepted"
     text = (out / report["documents"][0]["location"] / "text.txt").read_text()
     assert prose(5000, 26) not in text and prose(900, 40) in text
+
+
+def test_a_layout_cell_written_as_one_line_gives_way_to_the_pages_own_blocks():
+    # trafilatura writes a layout table's cell (template and body together) as one row
+    # line; it cannot be laid onto the page's blocks, so the page's own blocks are used
+    notice = [Block(prose(70 + i, 20), block_hash(prose(70 + i, 20)), main=False)
+              for i in range(3)]
+    teaser = Block("Teaser " + prose(80, 20), block_hash("Teaser " + prose(80, 20)),
+                   main=False)
+    blocks = [teaser] + notice
+    text = "| " + " ".join(b.text for b in blocks) + " |"
+    cleaned, info = templates.compose(text, blocks, ((teaser.hash,), ()))
+    assert cleaned == "\n".join(b.text for b in notice) and info["kept"] == "page"
+
+
+def test_preformatted_text_is_a_block_per_line():
+    page = (b"<html><body><p>Run these two commands in the shell of the invented depot:</p>"
+            b"<pre>make demo\nmake test</pre></body></html>")
+    texts = [b.text for b in extract(page, max_pages=10, max_nesting=100).blocks]
+    assert texts[-2:] == ["make demo", "make test"]
