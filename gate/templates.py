@@ -35,7 +35,8 @@ trafilatura's text; when what remains is less than ``MAIN_RATIO`` of the page's 
 (non-template, not link-dominated) blocks, trafilatura chose the template as the main
 text, and the page's own blocks are used instead. So they are when trafilatura's text
 cannot be laid onto the page's blocks line by line (a layout table's cell written as one
-line), because the template cannot then be taken out of it. Either happens only when the
+line), because the template cannot then be taken out of it, and template blocks make up
+at least ``TEMPLATE_SHARE`` of it (otherwise it is kept as it is). Either happens only when the
 page's own blocks hold at least ``MIN_OWN_WORDS`` words (more than trafilatura's
 remainder, in the first case): a table of contents or a page of links keeps its text.
 When nothing would remain, the page is kept as extracted.
@@ -53,12 +54,13 @@ import numpy as np
 from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 
-TEMPLATES_VERSION = 6  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 7  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
 SHARE_ASIDE = 0.2
 MAIN_RATIO = 0.5
+TEMPLATE_SHARE = 0.3  # template share of an unplaceable text that makes it give way
 MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilatura's text
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
 
@@ -200,6 +202,11 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
             main_rest.append(line)
     own = [b.text for b in blocks if b.hash not in drop and b.links < LINK_DOMINATED]
     main_words, own_words = _word_count(main_rest), _word_count(own)
+    if not placed:
+        # how much of trafilatura's text is template: the template blocks found in it
+        found = {b.hash: b.text for b in blocks if b.hash in drop and b.text in text}
+        if _word_count(found.values()) < TEMPLATE_SHARE * _word_count(text.split("\n")):
+            return text, {"template_blocks": len(drop), "kept": "all (little template in it)"}
     if placed and main_words and (main_words >= MAIN_RATIO * own_words or
                                   own_words - main_words < MIN_OWN_WORDS):
         cleaned, source = "\n".join(main_rest).strip("\n"), "main"

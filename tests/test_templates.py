@@ -237,12 +237,16 @@ def test_a_layout_cell_written_as_one_line_gives_way_to_the_pages_own_blocks():
     # line; it cannot be laid onto the page's blocks, so the page's own blocks are used
     notice = [Block(prose(70 + i, 20), block_hash(prose(70 + i, 20)), main=False)
               for i in range(3)]
-    teaser = Block("Teaser " + prose(80, 20), block_hash("Teaser " + prose(80, 20)),
+    teaser = Block("Teaser " + prose(80, 40), block_hash("Teaser " + prose(80, 40)),
                    main=False)
     blocks = [teaser] + notice
     text = "| " + " ".join(b.text for b in blocks) + " |"
     cleaned, info = templates.compose(text, blocks, ((teaser.hash,), ()))
     assert cleaned == "\n".join(b.text for b in notice) and info["kept"] == "page"
+    # when the template is a small part of such a text (here 3 of 63 words), it is kept
+    small = Block("Home and contact", block_hash("Home and contact"), main=False)
+    text = "| " + " ".join(b.text for b in [small] + notice) + " |"
+    assert templates.compose(text, [small] + notice, ((small.hash,), ()))[0] == text
 
 
 def test_preformatted_text_is_a_block_per_line():
