@@ -124,7 +124,13 @@ def executor(cluster: str | None, workers: int, params: Params) -> Any:
     if cluster:
         return ClusterExecutor(cluster)
     return WorkerPool(process, workers=max(1, workers), timeout_s=params.timeout_s,
-                      memory_bytes=params.memory_mb * 1024 * 1024)
+                      memory_bytes=params.memory_mb * 1024 * 1024,
+                      batch_weight=_payload_bytes)
+
+
+def _payload_bytes(payload: tuple[str, bytes | None, Params]) -> int:
+    """How much a task carries: small documents travel to the workers in batches."""
+    return len(payload[1] or b"")
 
 
 def cpu_count() -> int:

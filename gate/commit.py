@@ -18,7 +18,7 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Any, Protocol
 
-from gate import __version__, report
+from gate import __version__, brake, report
 from gate.corpus import CorpusResult
 from gate.errors import OutputError
 from gate.findings import Finding
@@ -29,7 +29,7 @@ from gate.record import DocRecord, Slim
 from gate.state import Rows, State
 
 CHUNK = 500  # documents decided per read of the run_docs table
-PLACE_BATCH = 256  # placements per pair of syncs
+PLACE_BATCH = 1024  # placements per pair of syncs
 HTML_REASONS = 5000  # held documents whose reasons' details the HTML page keeps
 
 
@@ -97,6 +97,7 @@ class Run:
     seq: int
     mode: str  # full | incremental
     info: dict[str, Any]
+    allow_removals: int | None = None  # confirms a full run's large removal (gate.brake)
 
 
 def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
@@ -141,6 +142,9 @@ def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
         removed_report, rows = _removals(run, corpus)
         unmatched = sorted(set(manifest.records) - set(seen_ids.values()))
         summary = tally.summary(removed_report)
+        brake.check(mode=run.mode, accepted_before=len(stored), inbox_documents=len(slims),
+                    removing=sum(summary["changes"].get(k, 0) for k in ("remove", "superseded")),
+                    allowed=run.allow_removals)  # raises before anything is committed
         rows.audit.append({"action": "run", "run": run.id, "as_of": run.info["as_of"],
                            "mode": run.mode, "policy": run.info["policy"],
                            "summary": summary})

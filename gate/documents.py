@@ -17,6 +17,7 @@ batch teaches the same template, reuses it, and a different template never does.
 from __future__ import annotations
 
 import hashlib
+import time
 from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
@@ -35,7 +36,8 @@ from gate.record import Slim, doc_record, slim
 from gate.templates import Page, learn, removal, removal_key, site_of
 from gate.work import Params, warm_up
 
-CACHE_BATCH = 64  # results written to the cache and the state per transaction
+CACHE_BATCH = 64  # results written to the cache and the state per transaction, at least
+CACHE_PAUSE_S = 0.5  # ... and seconds between two writes (each ends in an fsync)
 
 
 def doc_id(path: str) -> str:
@@ -85,7 +87,10 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
     doc_rows: list[tuple[str, int, str]] = []
     state.clear_run_docs(run_id)
 
+    flushed = [time.monotonic()]
+
     def flush() -> None:
+        flushed[0] = time.monotonic()
         if cache_rows:
             state.cache_put_many(cache_rows)
             cache_rows.clear()
@@ -106,7 +111,8 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
                          document, evaluation, item.cache_key, loaded.policy)
         slims[item.index] = slim(rec, evaluation, document, item.measure_errors)
         doc_rows.append((run_id, item.index, rec.to_json()))
-        if len(doc_rows) >= CACHE_BATCH:
+        if len(doc_rows) >= CACHE_BATCH and (time.monotonic() - flushed[0] >= CACHE_PAUSE_S
+                                             or len(doc_rows) >= 16 * CACHE_BATCH):
             flush()
 
     waiting: list[_Item] = []

@@ -7,8 +7,10 @@ class GateError(Exception):
     """Base of every error the gate reports to the user instead of a traceback.
 
     ``str(err)`` is a complete, one-paragraph message: what is wrong, where (file, line,
-    key path) and how to fix it.
+    key path) and how to fix it. ``exit_code`` is the command's exit status for it.
     """
+
+    exit_code = 2
 
 
 class PolicyError(GateError):

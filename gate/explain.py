@@ -22,7 +22,7 @@ from typing import Any
 from gate import checks
 from gate.checks.base import Document, RunContext
 from gate.corpus import run_corpus_checks
-from gate.discovery import Entry
+from gate.discovery import Entry, display_name
 from gate.documents import params_of
 from gate.errors import InboxError
 from gate.evaluation import evaluate_document, extraction_of
@@ -60,8 +60,10 @@ def _entry(file: Path) -> Entry:
     st = os.lstat(file)
     kind = "file" if stat.S_ISREG(st.st_mode) else \
         ("symlink" if stat.S_ISLNK(st.st_mode) else "other")
-    return Entry(path=file.name, kind=kind, size=st.st_size if kind == "file" else None,
-                 link_target=os.readlink(file) if kind == "symlink" else None)
+    shown = display_name(file.name)  # the escaped form runs use, for a name not UTF-8
+    return Entry(path=shown, kind=kind, size=st.st_size if kind == "file" else None,
+                 link_target=display_name(os.readlink(file)) if kind == "symlink" else None,
+                 os_path=file.name if shown != file.name else None)
 
 
 def explain(file: Path, loaded: LoadedPolicy, *, record: ManifestRecord | None,
@@ -72,7 +74,7 @@ def explain(file: Path, loaded: LoadedPolicy, *, record: ManifestRecord | None,
     if not file.exists() and not file.is_symlink():
         raise InboxError(f"{file} does not exist.")
     limits = loaded.policy.limits
-    rel = inbox_path or file.name
+    rel = inbox_path or display_name(file.name)
     entry = _entry(file)
     intake = read_entry(file.parent, entry, limits.max_bytes)
     params = params_of(loaded)

@@ -31,44 +31,61 @@ import socket
 from typing import Any
 from urllib.parse import urlsplit
 
+from gate import redact
 from gate.checks import duplicate as dup
 from gate.errors import LockError, UsageError
 
 LOCK_SECONDS = 6 * 3600
 
 
-def _connection(url: str) -> dict[str, Any]:
-    parts = urlsplit(url)
-    if parts.scheme != "redis" or not parts.hostname:
-        raise UsageError(f"--index {url!r} must look like redis://HOST:PORT/DB")
+def connection_settings(url: str) -> dict[str, Any]:
+    """redis-py's connection settings for an --index URL. Messages never repeat the URL
+    as given (it may hold a password), only its redacted form."""
+    shown = redact.text(url)
+    form = ("--index must look like redis://HOST:PORT/DB or rediss://HOST:PORT/DB (TLS); "
+            f"got {shown!r}")
+    try:
+        parts = urlsplit(url)
+        port = parts.port
+    except ValueError:  # a port that is not a number from 0 to 65535
+        raise UsageError(f"{form}: the port must be a number from 1 to 65535.") from None
+    if parts.scheme not in ("redis", "rediss") or not parts.hostname:
+        raise UsageError(form + ".")
+    if port == 0:
+        raise UsageError(f"{form}: the port must be a number from 1 to 65535.")
     try:
         db = int(parts.path.lstrip("/") or 0)
     except ValueError:
-        raise UsageError(f"--index {url!r}: the database must be a number") from None
-    return {"host": parts.hostname, "port": parts.port or 6379, "db": db,
+        raise UsageError(f"{form}: the database must be a number.") from None
+    if not 0 <= db <= 65535:
+        raise UsageError(f"{form}: the database must be a number from 0 to 65535.")
+    return {"host": parts.hostname, "port": port or 6379, "db": db,
             "password": parts.password or os.environ.get("GATE_REDIS_PASSWORD"),
+            "ssl": parts.scheme == "rediss",
             "socket_connect_timeout": 5, "socket_timeout": 30}
 
 
 def display_url(url: str) -> str:
-    """The URL without a password, for state and reports."""
-    parts = urlsplit(url)
-    host = parts.hostname or ""
-    port = f":{parts.port}" if parts.port else ""
-    return f"{parts.scheme}://{host}{port}{parts.path}"
+    """The URL without user information, for state, reports and messages."""
+    try:
+        parts = urlsplit(url)
+        port = f":{parts.port}" if parts.port else ""
+    except ValueError:
+        return redact.text(url)
+    return f"{parts.scheme}://{parts.hostname or ''}{port}{parts.path}"
 
 
 class SharedIndex:
     """The Redis-backed corpus index for one output folder (``owner``)."""
 
     def __init__(self, url: str, name: str, owner: str, threshold: float):
+        self.config = connection_settings(url)
         try:
             import redis
         except ImportError:
             raise UsageError("--index needs the 'redis' package: pip install "
                              "'gate[cluster]'") from None
         from datasketch import MinHashLSH
-        self.config = _connection(url)
         self.url = display_url(url)
         self.name = name
         self.owner = owner
@@ -77,7 +94,8 @@ class SharedIndex:
         try:
             self.redis.ping()
         except redis.RedisError as err:
-            raise UsageError(f"cannot reach the index at {self.url} ({err}); start Redis or "
+            raise UsageError(f"cannot reach the index at {self.url} ({redact.text(str(err))}); "
+                             "start Redis or "
                              "run without --index.") from None
         bands, rows = dup.band_params(threshold)
         basename = (f"gate:{name}:lsh:{dup.NUM_PERM}:{bands}x{rows}:{dup.SCHEME}:"

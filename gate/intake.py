@@ -40,7 +40,7 @@ def read_entry(inbox: Path, entry: Entry, max_bytes: int) -> Intake:
     """Read and hash one regular-file entry (other kinds are not opened at all)."""
     if not entry.regular:
         return Intake(problem="not-regular")
-    full = os.path.join(os.fspath(inbox), entry.path)
+    full = os.path.join(os.fspath(inbox), entry.fs_path)
     try:
         fd = _open(full)
     except OSError as err:

@@ -9,18 +9,32 @@ they are kept, carried into the provenance record and otherwise ignored.
 
 The *values* (is the URL well formed, is the digest hex, is the date a date) are judged by
 the checks, so one bad value holds one document, not the whole batch.
+
+Limits: the manifest must be a regular file (a link, FIFO or device is an error, never
+followed or read), of at most :data:`MAX_BYTES`; lines are split on ``\\n`` only (a raw
+U+2028 or U+0085 inside a JSON string is text, not a line break), each at most
+:data:`MAX_LINE_BYTES`; an ``x_`` value may take at most :data:`MAX_EXTRA_BYTES` written as
+JSON, and strings must be valid Unicode (no unpaired ``\\uD800``-style escapes).
 """
 
 from __future__ import annotations
 
 import hashlib
 import json
+import os
 import posixpath
 from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
+from gate import redact
+from gate.bounded import InputFileProblem, lines
 from gate.errors import ManifestError
+
+MAX_BYTES = 512 << 20  # the whole manifest
+MAX_LINE_BYTES = 64 << 10  # one line
+MAX_EXTRA_BYTES = 4 << 10  # one x_ value, as UTF-8 JSON
+DEFAULT_NAME = "manifest.jsonl"
 
 FIELDS = ("path", "source_url", "sha256", "retrieved_at", "published_at")
 
@@ -42,7 +56,7 @@ class ManifestRecord:
         for name in FIELDS[1:]:
             value = getattr(self, name)
             if value is not None:
-                out[name] = value
+                out[name] = redact.url(value) if name == "source_url" else value
         if self.extra:
             out["extra"] = self.extra
         return out
@@ -75,58 +89,107 @@ def normalize_path(value: str) -> str | None:
 
 def parse(text: str, source: str) -> Manifest:
     """Parse manifest text; ``source`` names the file in error messages."""
+    data = text.encode("utf-8", "surrogatepass")
+    return _parse(enumerate(data.split(b"\n"), 1), source, hashlib.sha256(data))
+
+
+def _parse(numbered: Any, source: str, digest: Any) -> Manifest:
     records: dict[str, ManifestRecord] = {}
-    for number, raw in enumerate(text.splitlines(), 1):
-        line = raw.lstrip("\ufeff") if number == 1 else raw
-        if not line.strip():
-            continue
+    for number, raw in numbered:
+        if digest is not None and number > 1:
+            digest.update(b"\n")
+        if digest is not None:
+            digest.update(raw)
         where = f"manifest {source}, line {number}"
         try:
-            obj = json.loads(line)
-        except json.JSONDecodeError as err:
-            raise ManifestError(f"{where}: not valid JSON ({err.msg} at column {err.colno}). "
-                                "Each line must hold one JSON object.") from None
-        if not isinstance(obj, dict):
-            raise ManifestError(f"{where}: expected a JSON object, found "
-                                f"{type(obj).__name__}.")
-        unknown = sorted(k for k in obj if k not in FIELDS and not k.startswith("x_"))
-        if unknown:
-            raise ManifestError(
-                f"{where}: unknown key {unknown[0]!r}. Known keys are "
-                f"{', '.join(FIELDS)}; put your own fields under keys starting with 'x_'.")
-        for name in FIELDS:
-            value = obj.get(name)
-            if value is not None and not isinstance(value, str):
-                raise ManifestError(f"{where}: {name!r} must be a string, found "
-                                    f"{type(value).__name__}.")
-        if "path" not in obj or not obj["path"]:
-            raise ManifestError(f"{where}: missing 'path' (the document's path relative to "
-                                "the inbox).")
-        path = normalize_path(obj["path"])
-        if path is None:
-            raise ManifestError(f"{where}: path {obj['path']!r} is not relative to the inbox "
-                                "(absolute, empty or leaving it with '..').")
-        if path in records:
-            raise ManifestError(f"{where}: path {path!r} is listed twice (first at line "
-                                f"{records[path].line}).")
-        records[path] = ManifestRecord(
-            path=path, line=number,
-            source_url=obj.get("source_url"), sha256=obj.get("sha256"),
-            retrieved_at=obj.get("retrieved_at"), published_at=obj.get("published_at"),
-            extra={k: v for k, v in obj.items() if k.startswith("x_")})
+            line = raw.decode("utf-8")
+        except UnicodeDecodeError as err:
+            raise ManifestError(f"{where}: not UTF-8 (byte {err.start + 1} of the line); "
+                                "write the manifest as UTF-8 JSON lines.") from None
+        if number == 1:
+            line = line.lstrip("\ufeff")
+        if not line.strip():
+            continue
+        record = _record(line, number, where)
+        if record.path in records:
+            raise ManifestError(f"{where}: path {record.path!r} is listed twice (first at "
+                                f"line {records[record.path].line}).")
+        records[record.path] = record
     return Manifest(source=source, records=records,
-                    sha256=hashlib.sha256(text.encode("utf-8")).hexdigest())
+                    sha256=digest.hexdigest() if digest is not None else None)
 
 
-def load(path: Path) -> Manifest:
-    """Read and parse a manifest file; every failure is a :class:`ManifestError`."""
+def _record(line: str, number: int, where: str) -> ManifestRecord:
     try:
-        data = path.read_bytes()
-    except OSError as err:
-        raise ManifestError(f"cannot read manifest {path}: {err.strerror or err}.") from None
+        obj = json.loads(line)
+    except json.JSONDecodeError as err:
+        raise ManifestError(f"{where}: not valid JSON ({err.msg} at column {err.colno}). "
+                            "Each line must hold one JSON object.") from None
+    except RecursionError:
+        raise ManifestError(f"{where}: the JSON nests too deeply. Each line must hold one "
+                            "flat JSON object.") from None
+    if not isinstance(obj, dict):
+        raise ManifestError(f"{where}: expected a JSON object, found {type(obj).__name__}.")
+    unknown = sorted(k for k in obj if k not in FIELDS and not k.startswith("x_"))
+    if unknown:
+        raise ManifestError(
+            f"{where}: unknown key {unknown[0]!r}. Known keys are "
+            f"{', '.join(FIELDS)}; put your own fields under keys starting with 'x_'.")
+    for name, value in obj.items():
+        if name not in FIELDS:
+            size = len(_utf8(json.dumps(value, ensure_ascii=False), where, name))
+            if size > MAX_EXTRA_BYTES:
+                raise ManifestError(f"{where}: {name!r} holds {size:,} bytes; an x_ value "
+                                    f"may hold at most {MAX_EXTRA_BYTES:,} (it is copied "
+                                    "into every provenance record). Keep large data "
+                                    "elsewhere and refer to it.")
+        elif value is not None and not isinstance(value, str):
+            raise ManifestError(f"{where}: {name!r} must be a string, found "
+                                f"{type(value).__name__}.")
+        elif value is not None:
+            _utf8(value, where, name)
+    if "path" not in obj or not obj["path"]:
+        raise ManifestError(f"{where}: missing 'path' (the document's path relative to "
+                            "the inbox).")
+    path = normalize_path(obj["path"])
+    if path is None:
+        raise ManifestError(f"{where}: path {obj['path']!r} is not relative to the inbox "
+                            "(absolute, empty or leaving it with '..').")
+    return ManifestRecord(
+        path=path, line=number,
+        source_url=obj.get("source_url"), sha256=obj.get("sha256"),
+        retrieved_at=obj.get("retrieved_at"), published_at=obj.get("published_at"),
+        extra={k: v for k, v in obj.items() if k.startswith("x_")})
+
+
+def _utf8(text: str, where: str, name: str) -> bytes:
     try:
-        text = data.decode("utf-8")
-    except UnicodeDecodeError as err:
-        raise ManifestError(f"manifest {path} is not UTF-8 (byte {err.start}); write it as "
-                            "UTF-8 JSON lines.") from None
-    return parse(text, str(path))
+        return text.encode("utf-8")
+    except UnicodeEncodeError:
+        raise ManifestError(f"{where}: {name!r} holds an unpaired surrogate escape (such "
+                            "as \\udce9), which is not text; write the character itself "
+                            "or escape a whole pair.") from None
+
+
+def load(path: Path, default: bool = False) -> Manifest:
+    """Read and parse a manifest file; every failure is a :class:`ManifestError`.
+    ``default`` says the file is the inbox's own ``manifest.jsonl``, not --manifest."""
+    what = f"the inbox's {DEFAULT_NAME}" if default else "--manifest"
+    digest = hashlib.sha256()
+    try:
+        return _parse(lines(path, MAX_BYTES, MAX_LINE_BYTES), str(path), digest)
+    except InputFileProblem as err:
+        raise ManifestError(f"cannot read the manifest {path} ({what}): {err}. The manifest "
+                            "must be a regular file of JSON lines.") from None
+
+
+def for_inbox(inbox: Path, given: Path | None) -> Manifest:
+    """The run's manifest: --manifest when given, else ``INBOX/manifest.jsonl`` when
+    anything by that name exists (a link or FIFO there is an error, never skipped:
+    skipping it would run the batch without the provenance it was meant to have)."""
+    if given is not None:
+        return load(given)
+    default = inbox / DEFAULT_NAME
+    if os.path.lexists(default):
+        return load(default, default=True)
+    return EMPTY

@@ -55,6 +55,7 @@ class RunOptions:
     cluster: str | None = None  # a Dask scheduler address for the per-document stage
     index: str | None = None  # a redis:// URL for a shared near-duplicate index
     index_name: str | None = None
+    allow_removals: int | None = None  # confirms a full run's large removal (gate.brake)
 
 
 @dataclass
@@ -100,12 +101,7 @@ def _prepare(opts: RunOptions) -> tuple[Path, Path, manifest_mod.Manifest]:
                           f"({err.strerror}).") from None
     if not os.access(out, os.W_OK):
         raise OutputError(f"the output folder {opts.out} is not writable.")
-    if opts.manifest is not None:
-        manifest = manifest_mod.load(opts.manifest)
-    elif (inbox / "manifest.jsonl").is_file():
-        manifest = manifest_mod.load(inbox / "manifest.jsonl")
-    else:
-        manifest = manifest_mod.EMPTY
+    manifest = manifest_mod.for_inbox(inbox, opts.manifest)
     return inbox, out, manifest
 
 
@@ -211,6 +207,7 @@ def _run(opts: RunOptions, inbox: Path, manifest: manifest_mod.Manifest, output:
                        "files": list(loaded.files)},
             "manifest": {"path": manifest.source, "sha256": manifest.sha256,
                          "records": len(manifest.records)}}
-    commit(output, Run(run_id, seq, mode, info), slims, corpus, manifest, loaded, reporter)
+    commit(output, Run(run_id, seq, mode, info, opts.allow_removals), slims, corpus, manifest,
+           loaded, reporter)
     return RunResult(run_id, output.out / "report.json", state.run_summary(run_id),
                      resumed=resume is not None, timings=timings)

@@ -14,7 +14,7 @@ from dataclasses import dataclass, field
 from datetime import datetime
 from typing import Any
 
-from gate import checks
+from gate import checks, redact
 from gate.checks import source as source_check
 from gate.checks.base import Document
 from gate.decide import Decision
@@ -106,7 +106,7 @@ def doc_record(index: int, doc_id: str, entry: Entry, intake: Intake, document: 
         sha256=intake.sha256, link_target=entry.link_target, problem=intake.problem,
         extraction=document.extracted.to_json(),
         manifest=record.to_json() if record else None,
-        manifest_source=record.source_url if record else None,
+        manifest_source=redact.url(record.source_url) if record else None,
         checks=evaluation.marks, reasons=decision.reasons, warnings=decision.warnings,
         measures=public_measures(dict(document.measures)), cache_key=cache_key,
         has_text=document.has_text, rule=evaluation.rule, source=source, date=date)

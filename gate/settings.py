@@ -13,9 +13,10 @@ Action = Literal["quarantine", "warn"]
 
 
 class Strict(BaseModel):
-    """A policy model: unknown keys are errors, values are immutable after loading."""
+    """A policy model: unknown keys are errors, values are immutable after loading, and
+    infinities and NaN are refused (every number has a finite range)."""
 
-    model_config = ConfigDict(extra="forbid", frozen=True)
+    model_config = ConfigDict(extra="forbid", frozen=True, allow_inf_nan=False)
 
 
 class Section(Strict):

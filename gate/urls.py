@@ -23,6 +23,9 @@ _UNRESERVED = frozenset("ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz012
 # RFC 3986 section 2: unreserved, reserved (gen-delims and sub-delims) and "%".
 _ALLOWED_ASCII = _UNRESERVED | frozenset(":/?#[]@!$&'()*+,;=%")
 _HEX = frozenset("0123456789abcdefABCDEF")
+MAX_HOST = 253  # characters of a DNS name in text form, RFC 1035 section 2.3.4 (255 octets)
+MAX_LABEL = 63  # octets of one label, RFC 1035 section 2.3.4
+MAX_HOST_INPUT = 4 * MAX_HOST * 3  # raw host text, room for percent-escaped Unicode
 _LABEL = re.compile(r"^[a-z0-9_](?:[a-z0-9_-]{0,61}[a-z0-9_])?\Z")
 
 DEFAULT_PORTS = {"http": 80, "https": 443, "ftp": 21, "ws": 80, "wss": 443}
@@ -179,6 +182,9 @@ def normalize_host(host: str) -> str:
             return "[" + ipaddress.IPv6Address(inner).compressed + "]"
         except ValueError as err:
             raise URLProblem("host", f"invalid IPv6 literal {host!r}") from err
+    if len(host) > MAX_HOST_INPUT:  # refuse early: no decoding or IDNA work on it
+        raise URLProblem("host", f"the host is {len(host):,} characters long; a DNS name "
+                                 f"has at most {MAX_HOST} (RFC 1035)")
     name = _percent_decode_utf8(host) if "%" in host else host
     if name.endswith("."):
         name = name[:-1]  # the DNS root: "example.org." names the same host
@@ -193,18 +199,37 @@ def normalize_host(host: str) -> str:
             if label.startswith("xn--"):
                 _idna(label)  # validates the A-label
             elif not _LABEL.match(label):
-                raise URLProblem("host", f"{host!r} is not a valid host name "
-                                         f"(label {label!r})")
-        return name
-    return _idna(name)
+                raise URLProblem("host", f"{_short(host)!r} is not a valid host name "
+                                         f"(label {_short(label)!r})")
+        return _dns_length(name)
+    return _dns_length(_idna(name))
+
+
+def _short(text: str, keep: int = 80) -> str:
+    """A hostile value cut for a message (a finding must not carry 96 KB)."""
+    return text if len(text) <= keep else f"{text[:keep]}... ({len(text):,} characters)"
+
+
+def _dns_length(name: str) -> str:
+    """``name`` (ASCII, no trailing dot) if it fits RFC 1035 section 2.3.4: at most 63
+    octets a label and 253 characters in all (255 octets on the wire)."""
+    if len(name) > MAX_HOST:
+        raise URLProblem("host", f"the host is {len(name):,} characters long; a DNS name "
+                                 f"has at most {MAX_HOST} (RFC 1035)")
+    for label in name.split("."):
+        if len(label) > MAX_LABEL:
+            raise URLProblem("host", f"the host label {_short(label)!r} is {len(label)} "
+                                     f"characters long; a DNS label has at most {MAX_LABEL} "
+                                     "(RFC 1035)")
+    return name
 
 
 def _idna(name: str) -> str:
     try:
         return idna.encode(name, uts46=True).decode("ascii")
     except (idna.IDNAError, UnicodeError) as err:
-        raise URLProblem("host", f"{name!r} is not a valid internationalised host name "
-                                 f"({err})") from err
+        raise URLProblem("host", f"{_short(name)!r} is not a valid internationalised host "
+                                 f"name ({err})") from err
 
 
 def parse(text: str) -> URL:

@@ -56,5 +56,7 @@ def test_odd_names(tmp_path):
         fh.write(b"t")
     paths = [e.path for e in walk(inbox)]
     assert set(names) <= set(paths)
-    assert "bad-\udcff.txt" in paths  # surrogate escape round-trips to the same bytes
+    assert "bad-\\xff.txt" in paths  # the documented escaped form (valid Unicode)
+    bad_entry = next(e for e in walk(inbox) if e.path == "bad-\\xff.txt")
+    assert os.fsencode(bad_entry.fs_path) == b"bad-\xff.txt"  # opens the real name
     assert len(paths) == len(names) + 1

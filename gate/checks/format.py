@@ -4,8 +4,8 @@ Always on. Holds entries that are not regular files (links are never followed), 
 cannot be read, empty files, content gate does not read (images, archives, executables,
 other XML), text in no detectable encoding, broken or encrypted PDFs, PDFs over
 ``limits.max_pages``, files over ``limits.max_bytes``, HTML nested deeper than
-``limits.max_nesting``, decompression bombs, documents whose extraction ran out of time
-(``limits.timeout_s``) or memory (``limits.memory_mb``) or crashed its worker, and documents
+``limits.max_nesting``, decompression bombs, documents whose extraction ran out of CPU time
+(``limits.timeout_s``; CPU time, so the load of the machine does not matter) or memory (``limits.memory_mb``) or crashed its worker, and documents
 with no text after extraction. Those mean the document could not be evaluated, so they
 always quarantine, whatever ``format.action`` says.
 
@@ -59,9 +59,9 @@ TOO_DEEP = define("format.too-deep", "HTML nested deeper than limits.max_nesting
                   "{detail}", fail_closed=True)
 BOMB = define("format.bomb", "a stream decompresses past the safety cap", "{detail}",
               fail_closed=True)
-TIMEOUT = define("format.timeout", "processing took longer than limits.timeout_s",
-                 "processing the document took longer than limits.timeout_s ({timeout_s} s) "
-                 "and was stopped", fail_closed=True)
+TIMEOUT = define("format.timeout", "processing used more than limits.timeout_s of CPU time",
+                 "processing the document used more than limits.timeout_s ({timeout_s} s) of "
+                 "CPU time, or hung, and was stopped", fail_closed=True)
 MEMORY = define("format.memory", "processing needed more than limits.memory_mb",
                 "processing the document needed more memory than limits.memory_mb "
                 "({memory_mb} MiB) and was stopped", fail_closed=True)
@@ -91,11 +91,13 @@ _KIND_WORDS = {"symlink": "a symbolic link", "fifo": "a named pipe (FIFO)",
 class LimitsSettings(Strict):
     """Resource limits per document; they always apply."""
 
-    max_bytes: int = Field(20_000_000, ge=1, description="Largest file size on disk, bytes.")
-    max_pages: int = Field(500, ge=1, description="Most pages a PDF may have.")
-    timeout_s: float = Field(30, gt=0, le=3600, description="Wall-clock time allowed to "
-                             "extract and measure one document, seconds.")
-    memory_mb: int = Field(1024, ge=64, description="Memory one document may use while it is "
+    max_bytes: int = Field(20_000_000, ge=1, le=1 << 30, description="Largest file size on "
+                           "disk, bytes (at most 1 GiB: the file is held in memory).")
+    max_pages: int = Field(500, ge=1, le=100_000, description="Most pages a PDF may have.")
+    timeout_s: float = Field(30, gt=0, le=3600, description="CPU time allowed to extract "
+                             "and measure one document, seconds (elapsed time may be 4 times "
+                             "this plus 5 s, so a busy machine does not change decisions).")
+    memory_mb: int = Field(1024, ge=64, le=1 << 20, description="Memory one document may use while it is "
                            "extracted, MiB (on top of the worker's baseline).")
     max_nesting: int = Field(250, ge=16, le=2000, description="Deepest HTML element "
                              "nesting read; deeper pages are held.")

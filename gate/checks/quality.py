@@ -42,7 +42,7 @@ import re
 from typing import Any
 
 import numpy as np
-from pydantic import Field
+from pydantic import Field, field_validator
 
 from gate.checks.base import Document, DocumentCheck, RunContext
 from gate.extract.model import Extraction
@@ -85,6 +85,10 @@ _ELLIPSES = ("...", "…")
 _PARAGRAPH = re.compile(r"\n\s*\n")
 
 
+_TOP_N = range(2, 5)  # n of the most-frequent n-gram shares measured (Gopher Table A1)
+_DUP_N = range(5, 11)  # n of the repeated n-gram shares measured
+
+
 class QualitySettings(Section):
     """Gopher document-quality filters; defaults are the paper's values, null disables.
 
@@ -95,20 +99,20 @@ class QualitySettings(Section):
     (``repeated_*``, ``top_ngram_chars_*``)."""
 
     # how much text (Gopher: 50 to 100,000 words)
-    words_at_least: int | None = Field(50, ge=0, description="Fewest words.")
-    words_at_most: int | None = Field(100_000, ge=1, description="Most words.")
+    words_at_least: int | None = Field(50, ge=0, le=100_000_000, description="Fewest words.")
+    words_at_most: int | None = Field(100_000, ge=1, le=100_000_000, description="Most words.")
     # what the words look like (Gopher: mean length 3 to 10, 80 % with a letter, 2 stop words)
     word_length_at_least: float | None = Field(
-        3, ge=0, description="Shortest mean word length, characters.")
+        3, ge=0, le=1000, description="Shortest mean word length, characters.")
     word_length_at_most: float | None = Field(
-        10, ge=0, description="Longest mean word length, characters.")
+        10, ge=0, le=1000, description="Longest mean word length, characters.")
     lettered_words_at_least: float | None = Field(
         0.8, ge=0, le=1, description="Smallest share of words containing a letter.")
     stop_words_at_least: int | None = Field(
-        2, ge=0, description="Fewest distinct stop words (for languages gate has a list for).")
+        2, ge=0, le=10_000, description="Fewest distinct stop words (for languages gate has a list for).")
     # symbols and line shapes (Gopher: 0.1 per word, 90 % bullets, 30 % ellipsis endings)
     symbols_per_word_at_most: float | None = Field(
-        0.1, ge=0, description="Most '#' (or ellipses) per word.")
+        0.1, ge=0, le=1000, description="Most '#' (or ellipses) per word.")
     bullet_lines_at_most: float | None = Field(
         0.9, ge=0, le=1, description="Largest share of lines starting with a bullet.")
     ellipsis_lines_at_most: float | None = Field(
@@ -129,6 +133,18 @@ class QualitySettings(Section):
         {5: 0.15, 6: 0.14, 7: 0.13, 8: 0.12, 9: 0.11, 10: 0.10},
         description="n -> largest character share covered by n-grams that occur more "
         "than once (Gopher Table A1).")
+
+    @field_validator("top_ngram_chars_at_most", "repeated_ngram_chars_at_most")
+    @classmethod
+    def _ngram_limits(cls, value: dict[int, float], info: Any) -> dict[int, float]:
+        measured = _TOP_N if info.field_name == "top_ngram_chars_at_most" else _DUP_N
+        for n, share in value.items():
+            if n not in measured:
+                raise ValueError(f"n = {n} is not measured; use n from {measured[0]} to "
+                                 f"{measured[-1]}")
+            if not 0.0 <= share <= 1.0:
+                raise ValueError(f"the share for n = {n} must be between 0 and 1")
+        return value
 
 
 def _duplicates(parts: list[str]) -> tuple[float, float]:
@@ -152,8 +168,8 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
     Each n-gram is identified by a 64-bit polynomial hash of its word ids (a collision
     would need two different n-grams of one document to hash alike: negligible).
     """
-    top = {str(n): 0.0 for n in range(2, 5)}
-    dup = {str(n): 0.0 for n in range(5, 11)}
+    top = {str(n): 0.0 for n in _TOP_N}
+    dup = {str(n): 0.0 for n in _DUP_N}
     if len(words) < 2:
         return top, dup
     ids = {w: i for i, w in enumerate(dict.fromkeys(words), 1)}

@@ -39,7 +39,7 @@ from typing import Annotated, Any, Union
 
 from pydantic import Discriminator, Field, Tag, field_validator
 
-from gate import urls
+from gate import redact, urls
 from gate.checks.base import Document, DocumentCheck, RunContext, once_per_document
 from gate.findings import Finding, define
 from gate.manifest import normalize_path
@@ -73,16 +73,17 @@ def _domain(value: str) -> str:
 
 
 def _prefix(value: str) -> str:
+    shown = redact.text(value)
     try:
         parsed = urls.parse(value)
     except urls.URLProblem as err:
-        raise ValueError(f"{value!r} is not a usable URL prefix: {err}") from None
+        raise ValueError(f"{shown!r} is not a usable URL prefix: {err}") from None
     if parsed.host is None:
-        raise ValueError(f"{value!r} has no host")
+        raise ValueError(f"{shown!r} has no host")
     if parsed.query is not None or parsed.fragment is not None:
-        raise ValueError(f"{value!r}: a URL prefix must not have a query or fragment")
+        raise ValueError(f"{shown!r}: a URL prefix must not have a query or fragment")
     if parsed.userinfo is not None:
-        raise ValueError(f"{value!r}: a URL prefix must not have user information")
+        raise ValueError(f"{shown!r}: a URL prefix must not have user information")
     return str(parsed)
 
 
@@ -100,7 +101,7 @@ class _Rule(Strict):
 class _AllowRule(_Rule):
     trust: int = Field(1, ge=1, le=100, description="Higher wins when near-duplicates "
                                                     "conflict.", examples=[3])
-    max_age_days: int | None = Field(None, ge=0, description="Overrides freshness."
+    max_age_days: int | None = Field(None, ge=0, le=100_000, description="Overrides freshness."
                                      "max_age_days for documents this rule admits.")
     overrides: dict[str, Any] | None = Field(
         None, description="Policy sections of the per-document checks (every one but "
@@ -252,12 +253,14 @@ def match(document: Document, settings: SourcesSettings) -> SourceMatch:
         try:
             parsed = urls.parse(raw)
         except urls.URLProblem as err:
-            return SourceMatch(problem=BAD_URL(url=raw, problem=str(err)))
+            return SourceMatch(problem=BAD_URL(url=redact.text(raw),
+                                               problem=redact.text(str(err))))
         if parsed.host is None:
-            return SourceMatch(problem=BAD_URL(url=raw, problem="the URL has no host"))
-        if parsed.userinfo is not None:
-            return SourceMatch(url=str(parsed),
-                               problem=USERINFO(url=raw, host=parsed.host))
+            return SourceMatch(problem=BAD_URL(url=redact.text(raw),
+                                               problem="the URL has no host"))
+        if parsed.userinfo is not None:  # never repeated: it may be a password
+            return SourceMatch(url=redact.text(str(parsed)),
+                               problem=USERINFO(url=redact.text(raw), host=parsed.host))
     for index, rule in enumerate(settings.deny):
         if isinstance(rule, PathDeny):
             hit = _path_under(document.path, rule.path)

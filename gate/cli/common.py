@@ -10,6 +10,7 @@ import typer
 from rich.console import Console
 from rich.progress import BarColumn, MofNCompleteColumn, Progress, TextColumn, TimeElapsedColumn
 
+from gate import redact
 from gate.errors import GateError
 from gate.visible import visible
 
@@ -36,7 +37,7 @@ def say(line: str) -> None:
 
 
 def fail(message: str, code: int = EXIT_UNABLE) -> None:
-    err_console.print(f"error: {shown(message)}", markup=False, soft_wrap=True)
+    err_console.print(f"error: {shown(redact.text(message))}", markup=False, soft_wrap=True)
     raise typer.Exit(code)
 
 
@@ -47,7 +48,7 @@ def guard(fn):
     except typer.Exit:
         raise
     except GateError as err:
-        fail(str(err))
+        fail(str(err), err.exit_code)  # 2, or 5 for the removal brake (gate.brake)
     except KeyboardInterrupt:
         fail("interrupted. Nothing is lost: re-run the same command to complete the run.",
               EXIT_INTERRUPTED)
@@ -94,7 +95,7 @@ class BarReporter:
             self.progress.refresh()
 
     def note(self, message: str) -> None:
-        err_console.print(shown(message), markup=False)
+        err_console.print(shown(redact.text(message)), markup=False)
 
     def close(self) -> None:
         if self.progress is not None:

@@ -25,6 +25,17 @@ By = Annotated[Optional[str], typer.Option(  # noqa: UP045
 Refs = Annotated[list[str], typer.Argument(help="Entry ids or inbox paths.")]
 
 
+def _filters(check, code, run, since, until, status) -> dict:
+    """review list's filters, each checked: a typo must not make the list look empty."""
+    from gate import cliargs
+    return {"check": check and cliargs.check_id(check, "--check"),
+            "code": code and cliargs.check_or_code(code, "--code"),
+            "run": run and cliargs.run_id(run, "--run"),
+            "since": since and cliargs.day_or_time(since, "--since"),
+            "until": until and cliargs.day_or_time(until, "--until"),
+            "status": cliargs.choice(status, "--status", ("open", "rejected", "all"))}
+
+
 @review_app.command("list")
 def review_list(
     out: OutDir,
@@ -41,8 +52,8 @@ def review_list(
 
     def body():
         from gate.review import list_entries
-        entries = list_entries(out, check=check, code=code, source=source, run=run,
-                               since=since, until=until, status=status)
+        entries = list_entries(out, **_filters(check, code, run, since, until, status),
+                               source=source)
         if as_json:
             sys.stdout.write(json.dumps([e.to_json() for e in entries], indent=2,
                                         ensure_ascii=True) + "\n")
@@ -207,6 +218,7 @@ def explain_command(
 
         from gate import dates
         from gate.errors import UsageError
+        from gate.discovery import display_name
         from gate.explain import explain
         from gate.manifest import ManifestRecord
         from gate.policy import load_policy
@@ -217,7 +229,7 @@ def explain_command(
                 when = dates.parse_as_of(as_of)
             except dates.DateProblem as err:
                 raise UsageError(str(err)) from None
-        rel = inbox_path or file.name
+        rel = inbox_path or display_name(file.name)
         record = None
         if any((source_url, sha256, published_at, retrieved_at)):
             record = ManifestRecord(path=rel, line=0, source_url=source_url, sha256=sha256,

@@ -10,7 +10,7 @@ from typing import Annotated, Optional
 
 import typer
 
-from gate import __version__
+from gate import __version__, cliargs
 from gate.cli.common import (EXIT_CHECK_BUG, EXIT_LIMITS, BarReporter, err_console, guard,
                              out_console, shown)
 from gate.errors import UsageError
@@ -75,6 +75,10 @@ def run_command(
         "--max-quarantine-rate", min=0.0, max=1.0,
         help="Exit 3 when more than this share of documents is quarantined (the run still "
              "completes), so a re-index job can stop on a poisoned batch.")] = None,
+    allow_removals: Annotated[Optional[int], typer.Option(  # noqa: UP045
+        "--allow-removals", min=0, help="Confirm that a full run removes exactly this many "
+        "accepted documents (needed when it would remove more than half of them, or the "
+        "inbox is empty; otherwise the run stops with exit 5 and changes nothing).")] = None,
     max_code_rate: Annotated[Optional[list[str]], typer.Option(  # noqa: UP045
         "--max-code-rate", help="CODE=RATE: exit 3 when more than RATE of documents are "
                                 "quarantined for CODE (a code, or a check id such as "
@@ -84,7 +88,9 @@ def run_command(
 
     Exit status: 0 done; 2 could not run; 3 over a --max-quarantine-rate or
     --max-code-rate limit; 4 a check failed on a document (a bug in gate; the document is
-    quarantined, the run completed); 130 interrupted; 70 internal error.
+    quarantined, the run completed); 5 the removal brake held a full run that would remove
+    more than half of the accepted corpus, or ran over an empty inbox (nothing changed;
+    confirm with --allow-removals N); 130 interrupted; 70 internal error.
     """
     reporter = BarReporter(enabled=not quiet and err_console.is_terminal)
 
@@ -101,11 +107,14 @@ def run_command(
             except dates.DateProblem as err:
                 raise UsageError(str(err)) from None
         limits = _code_limits(max_code_rate or [])
+        if index is not None:
+            from gate.index import connection_settings
+            connection_settings(index)  # a malformed --index is an error even unused
         loaded = load_policy(policy)
         options = RunOptions(inbox=inbox, policy=loaded, out=out, manifest=manifest,
                              as_of=when, workers=workers or os.cpu_count() or 1,
                              incremental=incremental, cluster=cluster, index=index,
-                             index_name=index_name)
+                             index_name=index_name, allow_removals=allow_removals)
         try:
             result = run_pipeline(options, reporter)
         finally:
@@ -144,7 +153,7 @@ def _code_limits(values: list[str]) -> dict[str, float]:
         if not sep or not code or not 0.0 <= number <= 1.0:
             raise UsageError(f"--max-code-rate {value!r} must be CODE=RATE with RATE between "
                              "0 and 1 (for example injection=0.01).")
-        limits[code] = number
+        limits[cliargs.check_or_code(code, "--max-code-rate")] = number
     return limits
 
 

@@ -1,0 +1,148 @@
+"""Per-file overhead: how many tiny documents a second a run gets through.
+
+    .venv/bin/python benchmarks/small_files.py [--docs 5000] [--workers 2] [--profile]
+
+Generates an inbox of tiny invented text notes (one or two sentences each, with a manifest
+giving each a source URL, digest and date) under bench-out/small-<N>/, runs gate over it
+with every check on (the benchmark policy of benchmarks/corpus.py), and prints documents/s
+for the first run and for a second run over the unchanged inbox. The target is at least 500
+documents/s on 2 cores. ``--profile`` prints the parent process's top functions (cProfile)
+for the first run.
+"""
+
+from __future__ import annotations
+
+import argparse
+import hashlib
+import json
+import os
+import resource
+import shutil
+import sys
+import time
+from datetime import UTC, datetime
+from pathlib import Path
+
+ROOT = Path(__file__).resolve().parent.parent
+sys.path.insert(0, str(ROOT))
+
+from benchmarks.corpus import BENCH_POLICY  # noqa: E402
+from gate.pipeline import RunOptions, run  # noqa: E402
+from gate.policy import load_policy  # noqa: E402
+
+AS_OF = datetime(2026, 12, 1, tzinfo=UTC)
+WORDS = ("depot timetable freight loading slot driver harbour crane season office monday "
+         "notice route platform ticket cargo shift").split()
+
+
+def make_inbox(root: Path, count: int) -> Path:
+    """``count`` tiny notes (invented text) and their manifest; reused when present."""
+    inbox = root / "inbox"
+    done = root / ".complete"
+    if done.exists():
+        return inbox
+    shutil.rmtree(root, ignore_errors=True)
+    inbox.mkdir(parents=True)
+    lines = []
+    for number in range(count):
+        words = [WORDS[(number * 7 + k * 3) % len(WORDS)] for k in range(8 + number % 9)]
+        text = (f"Note {number} of the invented Quillby Freight cooperative: "
+                + " ".join(words) + ".\n").encode()
+        rel = f"notes/{number // 500:03d}/note-{number:05d}.txt"
+        (inbox / rel).parent.mkdir(parents=True, exist_ok=True)
+        (inbox / rel).write_bytes(text)
+        lines.append(json.dumps({"path": rel,
+                                 "source_url": f"https://docs.example.org/notes/{number}",
+                                 "sha256": hashlib.sha256(text).hexdigest(),
+                                 "published_at": "2026-11-01"}))
+    (inbox / "manifest.jsonl").write_text("\n".join(lines) + "\n", encoding="utf-8")
+    done.touch()
+    return inbox
+
+
+class StageClock:
+    """A reporter that notes the parent's CPU time per stage of the run."""
+
+    def __init__(self) -> None:
+        self.stages: dict[str, float] = {}
+        self.current: str | None = None
+        self.since = time.process_time()
+
+    def stage(self, name: str, total: int | None) -> None:
+        now = time.process_time()
+        if self.current is not None:
+            self.stages[self.current] = self.stages.get(self.current, 0.0) + now - self.since
+        self.current, self.since = name, now
+
+    def advance(self, path: str | None = None) -> None:
+        pass
+
+    def note(self, message: str) -> None:
+        pass
+
+
+def _idle_seconds(stages: dict[str, float], workers_cpu: float, cores: int) -> float:
+    """Elapsed time the run would take on ``cores`` otherwise idle cores: extraction
+    overlaps the parent's intake and checks with the workers; the later stages run in
+    the parent alone."""
+    extracting = stages.get("extracting", 0.0)
+    rest = sum(spent for name, spent in stages.items() if name != "extracting")
+    return max(extracting, (extracting + workers_cpu) / cores) + rest
+
+
+def timed(inbox: Path, policy: Path, out: Path, workers: int) -> tuple[float, dict]:
+    """Run once; print elapsed time, documents/s and CPU time per document (the parent's
+    and the workers'), which does not depend on what else the machine is doing."""
+    opts = RunOptions(inbox=inbox, policy=load_policy(policy), out=out, as_of=AS_OF,
+                      workers=workers)
+    children = resource.getrusage(resource.RUSAGE_CHILDREN)
+    cpu = time.process_time()
+    started = time.perf_counter()
+    clock = StageClock()
+    result = run(opts, clock)
+    clock.stage("end", None)
+    seconds = time.perf_counter() - started
+    parent = time.process_time() - cpu
+    after = resource.getrusage(resource.RUSAGE_CHILDREN)
+    workers_cpu = (after.ru_utime + after.ru_stime) - (children.ru_utime + children.ru_stime)
+    docs = result.summary["documents"]
+    idle = _idle_seconds(clock.stages, workers_cpu, workers)
+    print(f"  {seconds:6.1f} s, {docs / seconds:7.0f} documents/s; CPU per document: parent "
+          f"{parent / docs * 1000:.2f} ms, workers {workers_cpu / docs * 1000:.2f} ms "
+          f"(so on {workers} idle cores: about {docs / idle:.0f} documents/s)")
+    print("  parent CPU per document by stage: " + ", ".join(
+        f"{name} {spent / docs * 1000:.2f} ms" for name, spent in clock.stages.items()))
+    return seconds, result.summary
+
+
+def main() -> None:
+    parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
+    parser.add_argument("--docs", type=int, default=5000)
+    parser.add_argument("--workers", type=int, default=2)
+    parser.add_argument("--profile", action="store_true")
+    args = parser.parse_args()
+    work = ROOT / "bench-out" / f"small-{args.docs}"
+    inbox = make_inbox(work, args.docs)
+    policy = work / "policy.yaml"
+    policy.write_text(BENCH_POLICY, encoding="utf-8")
+    out = work / f"out-{args.workers}"
+    shutil.rmtree(out, ignore_errors=True)
+    print(f"{args.docs} tiny text documents, {args.workers} workers, "
+          f"{os.cpu_count()} cores")
+    if args.profile:
+        import cProfile
+        import pstats
+        profiler = cProfile.Profile(time.process_time)  # CPU, not waiting
+        profiler.enable()
+    print("first run (extraction, checks, placement):")
+    seconds, summary = timed(inbox, policy, out, args.workers)
+    if args.profile:
+        profiler.disable()
+        pstats.Stats(profiler).sort_stats("tottime").print_stats(30)
+    print(f"  {summary['accepted']} accepted, {summary['quarantined']} quarantined")
+    print("second run (unchanged inbox, cached extraction):")
+    timed(inbox, policy, out, args.workers)
+
+
+if __name__ == "__main__":
+    main()
