@@ -4,15 +4,22 @@ Runs the real pipeline pieces per document: ``gate.extract.extract`` (timed as
 extraction), the injection ``measure`` and ``evaluate`` (timed as detectors), and prints
 recall per technique, the false-positive rate on benign documents, and the time split.
 
-    python benchmarks/injection_bench.py [--split dev|holdout|holdout2|all] [--repeat N] [--verbose]
+    python benchmarks/injection_bench.py [--split dev|holdout|holdout2|tune15|all] [--repeat N]
+                                         [--blind DIR] [--verbose]
 
-The corpus is invented fixture data (see tests/fixtures/injection/README.md).
+The corpus is invented fixture data (see tests/fixtures/injection/README.md). With
+``--blind DIR`` (default: benchmarks/data/injection_blind when it exists) the held-out
+blind set is measured too: ``DIR/labels.jsonl`` (fields file, label, class, language,
+where, note) over ``DIR/docs/``; it prints recall overall, per class and per language of
+the multilingual class, and the false-positive rate overall and per benign class, but
+never which documents were missed unless ``--verbose`` is given.
 """
 
 from __future__ import annotations
 
 import argparse
 import importlib.util
+import json
 import statistics
 import sys
 import time
@@ -50,6 +57,71 @@ def load_corpus(split: str = "all") -> list[dict]:
         row["data"] = pdfs[path] if path.startswith("pdf/") else (FIXTURES / path).read_bytes()
         rows.append(row)
     return rows
+
+
+BLIND = ROOT / "benchmarks" / "data" / "injection_blind"
+
+
+def load_blind(folder: Path) -> list[dict]:
+    """Rows of the blind set's labels.jsonl, shaped like the corpus rows."""
+    rows = []
+    for n, line in enumerate((folder / "labels.jsonl").read_text(encoding="utf-8").splitlines()):
+        if not line.strip():
+            continue
+        try:
+            item = json.loads(line)
+        except json.JSONDecodeError as err:
+            raise SystemExit(f"{folder / 'labels.jsonl'} line {n + 1}: not JSON ({err})")
+        path = folder / "docs" / item["file"] if not (folder / item["file"]).is_file() \
+            else folder / item["file"]
+        rows.append({"path": item["file"], "label": item["label"],
+                     "technique": item.get("class") or "?",
+                     "language": item.get("language") or "?", "where": item.get("where"),
+                     "data": path.read_bytes()})
+    return rows
+
+
+def report_blind(results: list[dict], verbose: bool = False) -> dict:
+    """Recall per class and per language (multilingual class); FP rate per benign class."""
+    attacks = [r for r in results if r["label"] == "attack"]
+    benign = [r for r in results if r["label"] != "attack"]
+    out: dict = {}
+
+    def table(title: str, groups: dict[str, list[bool]], what: str) -> None:
+        print(f"{title:<28}{'docs':>6}{what:>8}{'rate':>8}")
+        for key in sorted(groups):
+            flags = groups[key]
+            print(f"{key:<28}{len(flags):>6}{sum(flags):>8}{sum(flags) / len(flags):>8.2f}")
+
+    by_class: dict[str, list[bool]] = defaultdict(list)
+    by_lang: dict[str, list[bool]] = defaultdict(list)
+    for r in attacks:
+        by_class[r["technique"]].append(r["flagged"])
+        if "lingu" in r["technique"] or "language" in r["technique"]:
+            by_lang[r["language"]].append(r["flagged"])
+    table("attack class", by_class, "caught")
+    caught = sum(r["flagged"] for r in attacks)
+    recall = caught / len(attacks) if attacks else float("nan")
+    print(f"{'ALL ATTACKS':<28}{len(attacks):>6}{caught:>8}{recall:>8.2f}\n")
+    if by_lang:
+        table("multilingual: language", by_lang, "caught")
+        print()
+    by_benign: dict[str, list[bool]] = defaultdict(list)
+    for r in benign:
+        by_benign[r["technique"]].append(r["flagged"])
+    table("benign class", by_benign, "held")
+    held = sum(r["flagged"] for r in benign)
+    fp = held / len(benign) if benign else float("nan")
+    print(f"{'ALL BENIGN':<28}{len(benign):>6}{held:>8}{fp:>8.3f}")
+    if verbose:
+        for r in results:
+            if (r["label"] == "attack") != r["flagged"]:
+                print(f"{'MISSED' if r['label'] == 'attack' else 'FALSE+'}  {r['path']} "
+                      f"({r['technique']}, {r['language']}) "
+                      f"score={(r['measured'] or {}).get('score')}")
+    out.update(recall=recall, recalls={k: sum(v) / len(v) for k, v in by_class.items()},
+               fp_rate=fp)
+    return out
 
 
 def run(rows: list[dict], repeat: int = 1, threshold: float = 0.5) -> list[dict]:
@@ -100,8 +172,20 @@ def report(results: list[dict], verbose: bool = False) -> dict:
         print(f"{technique:<24}{len(flags):>8}{sum(flags):>8}{recalls[technique]:>8.2f}")
     overall = caught_total / attacks_total if attacks_total else float("nan")
     print(f"{'ALL ATTACKS':<24}{attacks_total:>8}{caught_total:>8}{overall:>8.2f}")
+    langs: dict[str, list[bool]] = defaultdict(list)
+    for r in results:
+        if r["label"] == "attack" and r["technique"] == "multilingual":
+            langs[r.get("note") or "?"].append(r["flagged"])
+    if langs:
+        print("multilingual by language: " + ", ".join(
+            f"{k} {sum(v)}/{len(v)}" for k, v in sorted(langs.items())))
     false_pos = [r for r in benign if r["flagged"]]
     fp_rate = len(false_pos) / len(benign) if benign else float("nan")
+    kinds: dict[str, list[bool]] = defaultdict(list)
+    for r in benign:
+        kinds[r["technique"]].append(r["flagged"])
+    print("\nbenign by class: " + ", ".join(f"{k} {sum(v)}/{len(v)} held"
+                                           for k, v in sorted(kinds.items())))
     print(f"\nbenign documents: {len(benign)}, flagged: {len(false_pos)}, "
           f"false-positive rate {fp_rate:.3f}")
     scores = sorted((r["measured"] or {}).get("score", 0.0) for r in benign)
@@ -113,7 +197,8 @@ def report(results: list[dict], verbose: bool = False) -> dict:
     n = len(results)
     print(f"\ntime per document (median of repeats, mean over {n} documents):")
     print(f"  extraction {ext / n * 1000:8.2f} ms")
-    print(f"  detectors  {det / n * 1000:8.2f} ms  ({det / (ext + det) * 100:.1f}% of the total)")
+    print(f"  detectors  {det / n * 1000:8.2f} ms  ({det / (ext + det) * 100:.1f}% of the total, "
+          f"{det / ext * 100:.0f}% of extraction)")
     for kind in ("html", "pdf", "text"):
         sel = [r for r in results if (r["path"].endswith(".pdf") and kind == "pdf") or
                (r["path"].endswith(".html") and kind == "html") or
@@ -146,9 +231,29 @@ def report(results: list[dict], verbose: bool = False) -> dict:
             "detector_share": det / (ext + det) if ext + det else 0.0}
 
 
+def mix_share(n: int) -> None:
+    """Detectors against extraction on the scale benchmark's generated mix (corpus.py)."""
+    from benchmarks.corpus import make_corpus
+    inbox = make_corpus(ROOT / "bench-out" / f"injection-mix-{n}", n)
+    rows = [{"path": str(p.relative_to(inbox)), "label": "benign", "technique": "mix",
+             "data": p.read_bytes()} for p in sorted(inbox.rglob("*"))
+            if p.is_file() and p.name != "manifest.jsonl"]
+    results = run(rows, repeat=1)
+    ext = sum(r["extraction_s"] for r in results)
+    det = sum(r["detector_s"] for r in results)
+    held = sum(r["flagged"] for r in results)
+    print(f"\nbench mix ({len(rows)} generated documents, benchmarks/corpus.py): extraction "
+          f"{ext:.2f} s, injection detectors {det:.2f} s = {det / ext * 100:.0f}% of "
+          f"extraction (target <= 50%); held {held}")
+
+
 def main(argv: list[str] | None = None) -> int:
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
-    parser.add_argument("--split", default="all", choices=["dev", "holdout", "holdout2", "all"])
+    parser.add_argument("--split", default="all",
+                        choices=["dev", "holdout", "holdout2", "tune15", "all"])
+    parser.add_argument("--blind", default=None, help="folder of the blind set (labels.jsonl)")
+    parser.add_argument("--mix", type=int, default=300,
+                        help="documents of the generated bench mix to time (0: skip)")
     parser.add_argument("--repeat", type=int, default=3)
     parser.add_argument("--verbose", action="store_true")
     args = parser.parse_args(argv)
@@ -159,8 +264,22 @@ def main(argv: list[str] | None = None) -> int:
     for r in results:  # the typical page gets more repeats: its timing is the headline
         if r["path"] == TYPICAL_PAGE:
             r.update(run([r], repeat=max(20, args.repeat))[0])
-    print(f"split: {args.split}, documents: {len(rows)}\n")
+    print(f"tuning corpus, split: {args.split}, documents: {len(rows)}\n")
     report(results, verbose=args.verbose)
+    if args.mix:
+        mix_share(args.mix)
+    blind = Path(args.blind) if args.blind else BLIND
+    if blind.is_dir():
+        brows = load_blind(blind)
+        print(f"\nBLIND SET {blind.relative_to(ROOT) if blind.is_relative_to(ROOT) else blind}"
+              f", documents: {len(brows)}\n")
+        bresults = run(brows, repeat=1)
+        report_blind(bresults, verbose=args.verbose)
+        ext = sum(r["extraction_s"] for r in bresults)
+        det = sum(r["detector_s"] for r in bresults)
+        n = len(bresults)
+        print(f"\nblind set time: extraction {ext * 1000 / n:.2f} ms/doc, detectors "
+              f"{det * 1000 / n:.2f} ms/doc ({det / (ext + det) * 100:.0f}% of the two)")
     return 0
 
 

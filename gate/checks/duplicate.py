@@ -86,8 +86,8 @@ class DuplicatesSettings(Section):
     threshold: float = Field(0.80, ge=0.3, le=1.0, description="Estimated Jaccard "
                              "similarity at or above which two documents are "
                              "near-duplicates.", examples=[0.8])
-    min_shingles: int = Field(20, ge=1, le=1_000_000, description="Documents with fewer word 5-grams are "
-                              "only compared exactly.")
+    min_shingles: int = Field(20, ge=1, le=1_000_000, description="Documents with fewer "
+                              "word 5-grams are only compared exactly.")
 
 
 

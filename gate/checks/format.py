@@ -5,9 +5,10 @@ cannot be read, empty files, content gate does not read (images, archives, execu
 other XML), text in no detectable encoding, broken or encrypted PDFs, PDFs over
 ``limits.max_pages``, files over ``limits.max_bytes``, HTML nested deeper than
 ``limits.max_nesting``, decompression bombs, documents whose extraction ran out of CPU time
-(``limits.timeout_s``; CPU time, so the load of the machine does not matter) or memory (``limits.memory_mb``) or crashed its worker, and documents
-with no text after extraction. Those mean the document could not be evaluated, so they
-always quarantine, whatever ``format.action`` says.
+(``limits.timeout_s``; CPU time, so the load of the machine does not matter) or memory
+(``limits.memory_mb``) or crashed its worker, and documents with no text after extraction.
+Those mean the document could not be evaluated, so they always quarantine, whatever
+``format.action`` says.
 
 Two findings are softer and follow ``format.action``: the file name's extension promising
 another type than the content (``report.pdf`` that is HTML), and an HTML page whose declared
@@ -97,8 +98,8 @@ class LimitsSettings(Strict):
     timeout_s: float = Field(30, gt=0, le=3600, description="CPU time allowed to extract "
                              "and measure one document, seconds (elapsed time may be 4 times "
                              "this plus 5 s, so a busy machine does not change decisions).")
-    memory_mb: int = Field(1024, ge=64, le=1 << 20, description="Memory one document may use while it is "
-                           "extracted, MiB (on top of the worker's baseline).")
+    memory_mb: int = Field(1024, ge=64, le=1 << 20, description="Memory one document may "
+                           "use while it is extracted, MiB (on top of the worker's baseline).")
     max_nesting: int = Field(250, ge=16, le=2000, description="Deepest HTML element "
                              "nesting read; deeper pages are held.")
 

@@ -61,8 +61,9 @@ INCONSISTENT = define("freshness.inconsistent", "published after it was retrieve
 class FreshnessSettings(Section):
     """Age limits."""
 
-    max_age_days: int | None = Field(None, ge=0, le=100_000, description="Hold documents older than this "
-                                     "(days before the as-of time); none: no age limit.",
+    max_age_days: int | None = Field(None, ge=0, le=100_000, description="Hold documents "
+                                     "older than this (days before the as-of time); none: no "
+                                     "age limit.",
                                      examples=[365])
     reject_future: bool = Field(True, description="Hold documents dated after the as-of time.")
     undated: Literal["quarantine", "warn", "allow"] | None = Field(

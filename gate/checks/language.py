@@ -71,8 +71,8 @@ class LanguageSettings(Section):
         None, ge=0.0, le=1.0, description="Hold documents in which the allowed languages "
         "together make up a smaller share of the text than this; left out, only the most "
         "likely language is judged.", examples=[0.9])
-    min_chars: int = Field(200, ge=1, le=100_000_000, description="Below this many characters of text the "
-                           "language is undetermined.")
+    min_chars: int = Field(200, ge=1, le=100_000_000, description="Below this many "
+                           "characters of text the language is undetermined.")
     undetermined: Literal["quarantine", "warn", "allow"] | None = Field(
         None, description="What to do when the language cannot be determined; default: the "
         "section's action.", examples=["warn"])

@@ -109,7 +109,8 @@ class QualitySettings(Section):
     lettered_words_at_least: float | None = Field(
         0.8, ge=0, le=1, description="Smallest share of words containing a letter.")
     stop_words_at_least: int | None = Field(
-        2, ge=0, le=10_000, description="Fewest distinct stop words (for languages gate has a list for).")
+        2, ge=0, le=10_000,
+        description="Fewest distinct stop words (for languages gate has a list for).")
     # symbols and line shapes (Gopher: 0.1 per word, 90 % bullets, 30 % ellipsis endings)
     symbols_per_word_at_most: float | None = Field(
         0.1, ge=0, le=1000, description="Most '#' (or ellipses) per word.")

@@ -15,8 +15,8 @@ a generous wall-clock backstop (:data:`WALL_FACTOR` times the CPU allowance plus
 :data:`WALL_SLACK_S`) for a worker that sleeps or hangs without using CPU. When it passes,
 the parent reads the worker's CPU time (``/proc/PID/stat``): a worker still making progress
 within its CPU allowance (a starved one on a saturated machine) gets another period; one
-that used next to no CPU in the period is killed with SIGKILL and replaced. Either way its task comes back as a
-:class:`Failure` instead of a result. Each worker caps its own address space
+that used next to no CPU in the period is killed with SIGKILL and replaced. Either way its
+task comes back as a :class:`Failure` instead of a result. Each worker caps its own address space
 (``RLIMIT_AS``) so a decompression bomb ends in a ``MemoryError`` inside the worker rather
 than in the machine's OOM killer. Workers are recycled after a number of tasks so slow leaks
 in a parser cannot accumulate.

@@ -5,7 +5,17 @@ so a document can attack the model indirectly (OWASP Top 10 for LLM Applications
 LLM01:2025 Prompt Injection: "Indirect prompt injections occur when an LLM accepts input
 from external sources, such as websites or files"). The screen looks for:
 
-* **wording aimed at a model**, in English, German, French and Spanish: telling it to
+* **sentences that instruct the model reading them**, read for what they do rather than
+  their wording, in 24 languages (en, de, fr, es, it, pt, nl, pl, sv, ru, uk, cs, ro, hu,
+  el, tr, ar, fa, hi, ja, zh, ko, vi, id): a sentence that names an AI reader or the
+  reader's answer, summary or conversation, in the directive mood (``model-address``,
+  ``answer-steering``, ``override``, ``prompt-leak``), and a bare request for work that
+  has nothing to do with the document (``task-hijack``);
+* **requests to act**: harmful code to include or run (``harmful-code``: uploads, sockets,
+  key logging, screen capture, deletion, encryption, floods), calls of the reader's tools
+  and forged tool calls (``tool-call``), and claims of authority over automated readers
+  or over every other source (``authority-claim``);
+* **phrase rules** in English, German, French and Spanish: telling it to
   ignore its instructions (``override``), to reveal them (``prompt-leak``), to take a new
   role (``role-change``), addressing "the AI reading this" (``model-address``), fake
   system or developer notices and context boundaries (``fake-notice``), chat-template
@@ -15,7 +25,8 @@ from external sources, such as websites or files"). The screen looks for:
   secrets (``exfil-url``);
 * **concealment**: text hidden by CSS, attributes, comments and metadata in HTML
   (``html-hidden``); white, tiny, off-page or invisible text, metadata and annotations in
-  PDFs (``pdf-hidden``); base64, hex and other encodings (``encoded-payload``); wording
+  PDFs (``pdf-hidden``); base64, hex, URL-encoding, HTML character references,
+  quoted-printable, escapes and ROT13 (``encoded-payload``); wording
   disguised with look-alike letters, zero-width characters, digits for letters or spaced
   letters (``obfuscated``);
 * **Unicode tricks**: zero-width characters splitting words (``zero-width``), messages in

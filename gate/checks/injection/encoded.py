@@ -1,4 +1,10 @@
-"""Encoded payloads: base64, hex, percent-encoding, escape sequences and ROT13, decoded and bounded.
+"""Encoded payloads: base64, hex, percent-encoding, escape sequences, HTML character
+references, quoted-printable and ROT13, decoded and bounded.
+
+Percent-encoding, ``\\uXXXX``/``\\xXX`` escapes, HTML character references and
+quoted-printable are found as *runs*: at least :data:`MIN_ESCAPES` escapes, each followed by
+at most a few plain characters, so text that is partly encoded ("Ignore%20all%20...") is
+decoded whole.
 
 A candidate is decoded only when it could be an encoding of text, and kept only when the
 result *is* readable text (valid UTF-8, mostly letters and spaces). Data URIs
@@ -15,7 +21,10 @@ from __future__ import annotations
 import base64
 import binascii
 import codecs
+import html
+import quopri
 import re
+from urllib.parse import unquote_to_bytes
 from dataclasses import dataclass
 
 MAX_CANDIDATES = 40
@@ -27,8 +36,13 @@ _B64 = re.compile(r"(?<![A-Za-z0-9+/=_-])[A-Za-z0-9+/]{20,}={0,2}(?![A-Za-z0-9+/
                   r"(?<![A-Za-z0-9+/=_-])[A-Za-z0-9_-]{20,}={0,2}(?![A-Za-z0-9_=-])")
 _HEX = re.compile(r"(?<![0-9A-Fa-f])(?:[0-9A-Fa-f]{2}){12,}(?![0-9A-Fa-f])|"
                   r"(?<![0-9A-Fa-f])(?:[0-9A-Fa-f]{2}[ :]){11,}[0-9A-Fa-f]{2}(?![0-9A-Fa-f])")
-_PERCENT = re.compile(r"(?:%[0-9A-Fa-f]{2}){8,}")
-_ESCAPES = re.compile(r"(?:\\x[0-9A-Fa-f]{2}){8,}|(?:\\u00[0-9A-Fa-f]{2}){8,}")
+MIN_ESCAPES = 6
+_PERCENT = re.compile(r"(?:%[0-9A-Fa-f]{2}[A-Za-z0-9._~+\-]{0,16}){6,}")
+_ESCAPES = re.compile(r"(?:\\x[0-9A-Fa-f]{2}){8,}|"
+                      r"(?:\\u[0-9A-Fa-f]{4}[^\\\n]{0,12}){6,}")
+_ENTITIES = re.compile(r"(?:&#(?:[xX][0-9A-Fa-f]{1,6}|\d{1,7});[^&<\n]{0,12}){6,}")
+_QP = re.compile(r"(?:=[0-9A-F]{2}[^=\n]{0,12}|=\r?\n){6,}")
+_UESC = re.compile(r"\\u([0-9A-Fa-f]{4})")
 _ARMOUR = re.compile(r"-----BEGIN [A-Z0-9 ]{3,40}-----.{0,200000}?-----END [A-Z0-9 ]{3,40}-----",
                      re.S)
 MAX_ARMOUR = 20
@@ -72,12 +86,17 @@ def _long_runs(text: str, pattern: re.Pattern[str]):
             yield _Span(text, at + m.start(), at + m.end())
 
 
-_HEXISH = re.compile(r"[0-9A-Fa-f]{24}|(?:[0-9A-Fa-f]{2}[ :]){4}")
+_HEX_CLASSES = bytes(104 if chr(c) in "0123456789abcdefABCDEF" else 115 if c in b" :" else 120
+                     for c in range(256))  # hex digit -> "h", separator -> "s", other -> "x"
 
 
 def _maybe_hex(text: str) -> bool:
+    """A run of 24 hex digits, or four pairs with separators (bytes.translate: fast)."""
     digits = sum(map(text.count, "0123456789"))
-    return digits >= 12 and _HEXISH.search(text) is not None
+    if digits < 12:
+        return False
+    classes = text.encode("utf-8", "ignore").translate(_HEX_CLASSES)
+    return b"h" * 24 in classes or b"hhshhshhshhs" in classes
 
 
 @dataclass
@@ -171,20 +190,26 @@ def find(text: str, budget: list[int]) -> list[Payload]:
         except ValueError:
             continue
         keep("hex", m.start(), m.end(), readable(data))
-    for pattern, encoding in ((_PERCENT, "percent-encoding"), (_ESCAPES, "escape sequences")):
-        if ("%" if pattern is _PERCENT else "\\") not in text:
+    for pattern, encoding, marker in ((_PERCENT, "percent-encoding", "%"),
+                                      (_ESCAPES, "escape sequences", "\\"),
+                                      (_ENTITIES, "HTML character references", "&#"),
+                                      (_QP, "quoted-printable", "=")):
+        if marker not in text:
             continue
         for m in pattern.finditer(text):
             if tried >= MAX_CANDIDATES:
                 break
             tried += 1
-            run = m.group()[:MAX_RUN]
-            digits = re.sub(r"%|\\x|\\u00", "", run)
-            try:
-                data = bytes.fromhex(digits)
-            except ValueError:
-                continue
-            keep(encoding, m.start(), m.end(), readable(data))
+            start = m.start()
+            if encoding in ("percent-encoding", "quoted-printable"):
+                while start > 0 and m.start() - start < 16 and not text[start - 1].isspace() \
+                        and text[start - 1] not in "=?&/\"'(":
+                    start -= 1  # the plain letters before the first escape
+            line_end = text.find("\n", m.end())
+            end = min(m.end() + 300, len(text) if line_end < 0 else line_end)
+            if m.group().startswith("\\x"):
+                end = m.end()
+            keep(encoding, start, end, _decode(encoding, text[start:end][:MAX_RUN]))
     if "rot" in text[:200_000].lower() and _ROT13_HINT.search(text[:200_000]):
         for m in _ROT13_HINT.finditer(text[:200_000]):
             if tried >= MAX_CANDIDATES:
@@ -195,3 +220,21 @@ def find(text: str, budget: list[int]) -> list[Payload]:
             keep("rot13", start, start + len(chunk), codecs.decode(chunk, "rot13"))
             break
     return found
+
+
+def _decode(encoding: str, run: str) -> str | None:
+    """The readable text an escaped run stands for, or None."""
+    try:
+        if encoding == "percent-encoding":
+            return readable(unquote_to_bytes(run.replace("+", " ")))
+        if encoding == "HTML character references":
+            return readable(html.unescape(run).encode("utf-8", "surrogatepass"))
+        if encoding == "quoted-printable":
+            return readable(quopri.decodestring(run.encode("ascii", "ignore")))
+        if run.startswith("\\x"):
+            return readable(bytes.fromhex(re.sub(r"\\x", "", run)))
+        text = _UESC.sub(lambda m: chr(int(m.group(1), 16)), run)
+        return readable(text.encode("utf-16", "surrogatepass").decode("utf-16", "replace")
+                        .encode("utf-8", "replace"))
+    except (ValueError, UnicodeError):
+        return None

@@ -15,7 +15,11 @@ What counts as hidden (technique slugs in parentheses):
   ``<script>`` data such as JSON-LD (script-data), ``<input type=hidden>`` values
   (hidden-input);
 * HTML comments (comment), attribute text: ``alt``, ``title``, ``aria-label``,
-  ``aria-description``, ``placeholder`` (attribute), ``<meta content>`` (meta).
+  ``aria-description``, ``placeholder`` (attribute), ``<meta content>`` (meta);
+* text an extractor may drop or a browser draws without it being page text: inline SVG
+  ``<text>``, ``<title>`` and ``<desc>`` (svg-text), ``<input value>``, ``<textarea>`` and
+  ``<iframe srcdoc>`` (form-value), CSS ``content:`` strings (css-content), sentences in
+  ``data-*`` attributes (data-attribute).
 
 The text extractor keeps some of these and drops others; either way each piece is
 scanned, and the caller looks for each finding's text in the extracted text to say whether
@@ -289,6 +293,23 @@ def _own_technique(el: lxml.etree._Element, hidden_classes: set[str], hidden_ids
     return None
 
 
+_CSS_CONTENT = re.compile(r"\bcontent\s*:\s*([\"'])(.{8,2000}?)(?<!\\)\1", re.S)
+
+
+def _css_texts(root: lxml.etree._Element) -> list[str]:
+    """Style sheets and style attributes that set generated content, bounded."""
+    out = []
+    size = 0
+    for text in root.xpath("//style/text()|//@style")[:MAX_NODES]:
+        text = str(text)
+        if "content" in text:
+            out.append(text[:MAX_CSS])
+            size += len(out[-1])
+            if size >= MAX_CSS:
+                break
+    return out
+
+
 @dataclass
 class Collected:
     pieces: list[Piece]
@@ -370,6 +391,20 @@ def collect(root: lxml.etree._Element | None) -> Collected:
         key = meta.get("name") or meta.get("property") or meta.get("itemprop") or ""
         if content.count(" ") >= 2 and key.lower() not in ("viewport", "robots"):
             add(content, "meta", f"<meta {('name=' + key[:40]) if key else ''}>")
+    for el in root.xpath("//*[local-name()='svg']//*[local-name()='text' or "
+                         "local-name()='title' or local-name()='desc']")[:MAX_NODES]:
+        add(_text_of(el, 20_000), "svg-text", f"<svg> <{el.tag}>")
+    for value in root.xpath("//input[not(translate(@type,'HIDEN','hiden')='hidden')]/@value|"
+                            "//textarea/text()|//iframe/@srcdoc")[:MAX_NODES]:
+        if len(value) >= 12:
+            add(str(value), "form-value", f"<{value.getparent().tag}> value")
+    for value in root.xpath("//@*[starts-with(name(), 'data-')]")[:MAX_NODES]:
+        text = str(value)
+        if text.count(" ") >= 3 and not text.lstrip().startswith(("{", "[")):
+            add(text, "data-attribute", f"{value.attrname}= on <{value.getparent().tag}>")
+    for css in _css_texts(root):
+        for m in _CSS_CONTENT.finditer(css):
+            add(m.group(2), "css-content", "CSS content: property")
     for script in root.xpath("//script[@type]")[:MAX_NODES]:
         kind = (script.get("type") or "").lower()
         if "javascript" in kind or kind in ("module", "text/ecmascript", ""):

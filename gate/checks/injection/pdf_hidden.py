@@ -283,3 +283,42 @@ def outside_text(metadata: dict[str, str], extras: dict[str, Any]) -> list[tuple
             where = f"PDF annotation /{annot.get('key', '?')} on page {annot.get('page', '?')}"
             out.append((text, "annotation", where))
     return out
+
+
+MAX_FIELDS = 2_000
+
+
+def form_text(reader: Any) -> list[tuple[str, str, str]]:
+    """``(text, technique, where)`` for form-field values, tooltips and rich-text contents.
+
+    Field values are drawn only inside their widgets, often not extracted with the page
+    text, and easy to fill with text nobody reads; widgets in annotations carry ``/V``
+    and ``/RC`` too.
+    """
+    out: list[tuple[str, str, str]] = []
+    if reader is None:
+        return out
+    try:
+        root = reader.trailer["/Root"].get_object()
+        form = root.get("/AcroForm")
+        fields = list((form.get_object().get("/Fields") or []) if form is not None else [])
+    except Exception:  # noqa: BLE001 - a damaged catalogue means no form, not a failure
+        return out
+    seen = 0
+    stack = fields[:MAX_FIELDS]
+    while stack and seen < MAX_FIELDS:
+        seen += 1
+        try:
+            field = stack.pop().get_object()
+            name = str(field.get("/T") or "?")[:60]
+            for key, technique in (("/V", "form-field"), ("/TU", "form-field"),
+                                   ("/RC", "form-field")):
+                value = field.get(key)
+                if value is not None and not hasattr(value, "keys"):
+                    text = str(value)
+                    if len(text.strip()) >= 12:
+                        out.append((text[:20_000], technique, f"PDF form field {name} {key}"))
+            stack.extend(list(field.get("/Kids") or [])[:MAX_FIELDS])
+        except Exception:  # noqa: BLE001 - skip one unreadable field
+            continue
+    return out

@@ -39,6 +39,14 @@ SIGNALS: dict[str, tuple[str, str]] = {
                       "text asks for conversation data or secrets to be put into an address"),
     "exfil-url": ("a link or image address built to carry data out",
                   "a link or image address has a slot for conversation data or secrets"),
+    "task-hijack": ("a bare request for work that has nothing to do with the document",
+                    "a sentence asks the reader for work unrelated to the document"),
+    "harmful-code": ("code to include or run that exfiltrates, spies or destroys",
+                     "the text asks for harmful code to be included or run"),
+    "tool-call": ("a request to call one of the reader's tools, or a forged tool call",
+                  "the text asks the model to call a tool or forges a tool call"),
+    "authority-claim": ("a claim of authority over automated readers or other sources",
+                        "the text claims authority over automated readers or other sources"),
     "html-hidden": ("model-directed text concealed in the page markup",
                     "model-directed text is hidden from readers"),
     "pdf-hidden": ("model-directed text concealed in the PDF",
@@ -58,7 +66,8 @@ SIGNALS: dict[str, tuple[str, str]] = {
                      "words mix look-alike letters from different scripts"),
 }
 CONTENT = frozenset({"override", "prompt-leak", "role-change", "model-address", "fake-notice",
-                     "chat-markup", "answer-steering", "exfil-request", "exfil-url"})
+                     "chat-markup", "answer-steering", "exfil-request", "exfil-url",
+                     "task-hijack", "harmful-code", "tool-call", "authority-claim"})
 CONCEALMENT = frozenset({"html-hidden", "pdf-hidden", "encoded-payload", "obfuscated"})
 CONCEAL_WEIGHT = 0.4
 OBFUSCATION_WEIGHT = 0.35

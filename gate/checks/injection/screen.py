@@ -22,8 +22,9 @@ import re
 from dataclasses import dataclass
 from typing import Any
 
-from gate.checks.injection import encoded, exfil, html_hidden, pdf_hidden, score, unicode, \
-    wording
+from gate.checks.injection import actions, directive, encoded, exfil, html_hidden, \
+    pdf_hidden, score, unicode, wording
+from gate.checks.injection.lexicon import lfold, words_of
 from gate.checks.injection.normalize import View, fold, visible
 from gate.extract.model import Extraction
 
@@ -34,8 +35,10 @@ MAX_DEPTH = 2
 MAX_HITS = 60
 TOPIC_DAMPING = 0.5
 TOPIC_MIN = 2
-MEASURE_VERSION = 2  # bump when measure() returns something different
+MEASURE_VERSION = 3  # bump when measure() returns something different
 
+ACTION_SIGNALS = frozenset({"harmful-code", "tool-call"})
+_CODE_CHARS = re.compile(r"[(){};=<>\[\]$]|\b(?:def|import|return|function|var|let)\b")
 _MD_COMMENT = re.compile(r"<!--(.{0,20000}?)-->", re.S)
 
 
@@ -132,6 +135,7 @@ class Screen:
                 note = "; ".join(x for x in (note, "the document discusses the topic") if x)
             content.append(self._hit(source, m.signal, weight, m.start, m.end, text,
                                      lang=m.lang, note=note, obfuscation=m.obfuscation))
+        content.extend(self._sentences(source, text, visible_text, content))
         for u in exfil.scan(text, links):
             weight = u.weight * (TOPIC_DAMPING if visible_text and self.topic else 1.0)
             if u.start >= 0:
@@ -197,6 +201,46 @@ class Screen:
                 hit.pop("obfuscation", None)
                 self.hits.append(hit)
         return content
+
+    def _sentences(self, source: Source, text: str, visible_text: bool,
+                   phrase_hits: list[dict[str, Any]]) -> list[dict[str, Any]]:
+        """Sentence readings (:mod:`.directive`) and action patterns (:mod:`.actions`)."""
+        found: list[tuple[str, float, int, int, str, str | None, dict[str, Any] | None]] = []
+        folded = lfold(text[:max(directive.MAX_CHARS, actions.MAX_CHARS)])
+        words = words_of(folded)
+        floor = directive.MIN_WEIGHT if visible_text else directive.MIN_WEIGHT_HIDDEN
+        for d in directive.scan(text, folded, words, floor):
+            found.append((d.signal, d.weight, d.start, d.end, d.why, d.lang or None, None))
+        for a in actions.scan(text, folded, words):
+            found.append((a.signal, a.weight, a.start, a.end, a.why, None, a.detail or None))
+        if not found:
+            return []
+        out = []
+        by_span = [(h["segment_span"][0], h["segment_span"][1], h) for h in phrase_hits]
+        for signal, weight, start, end, why, lang, detail in found:
+            if visible_text and signal in ACTION_SIGNALS:
+                pass  # code belongs in code blocks; the request to include it is the evidence
+            elif visible_text:
+                factor, mention = wording.mention_factor(folded, start, end)
+                if mention == "in a code block" and not _CODE_CHARS.search(folded, start, end):
+                    factor, mention = 1.0, ""  # prose hidden in a fence is still prose
+                if mention:
+                    weight *= factor
+                    why = f"{why}; {mention}"
+            if visible_text and self.topic:
+                weight *= TOPIC_DAMPING * 0.8
+                why = f"{why}; the document discusses the topic"
+            same = [h for s, e, h in by_span if s < end and start < e and
+                    (h["signal"] == signal or h["weight"] >= weight)]
+            if same:  # a phrase rule read these words already: its span is tighter
+                for h in same:
+                    if h["signal"] == signal and h["weight"] < weight:
+                        h["weight"] = round(weight, 4)
+                        h["note"] = "; ".join(x for x in (h["note"], why) if x)
+                continue
+            out.append(self._hit(source, signal, round(weight, 4), start, end, text, lang=lang,
+                                 note=why, detail=detail))
+        return out
 
     def _scan_unicode_only(self, source: Source, text: str, depth: int) -> list[dict[str, Any]]:
         """Invisible messages the extractor dropped: tag characters, zero-width runs."""
@@ -303,6 +347,8 @@ def _snippet(text: str, start: int, end: int) -> str:
     while a > 0 and start - a < 40 and text[a - 1] != "\n" and not (
             text[a - 1] == " " and a > 1 and text[a - 2] in ".!?"):
         a -= 1
+    while 0 < a < start and text[a - 1].isalnum() and text[a].isalnum() and start - a < 60:
+        a -= 1  # never start a snippet in the middle of a word
     b = end
     while b < len(text) and b - end < 120 and text[b] != "\n" and not (
             text[b] in ".!?" and (b + 1 == len(text) or text[b + 1].isspace())):
@@ -358,7 +404,8 @@ def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]
             sources.append(Source(run.text, f"page {run.page} of the PDF", run.technique, "pdf",
                                   run.page))
         for text, technique, where in pdf_hidden.outside_text(extraction.summary.metadata,
-                                                              extraction.extras):
+                                                              extraction.extras) + \
+                pdf_hidden.form_text(extraction.reader):
             sources.append(Source(text, where, technique, "pdf"))
         stats.update(pdf_pages_replayed=found.pages_replayed,
                      pdf_pages_skipped=found.pages_skipped,

@@ -228,6 +228,10 @@ def _mixed_script(text: str, found: Found) -> None:
         if word.isascii():
             latin += 1
             continue
+        if len(word) <= 3 and any(confusables.script(c) == "GREEK" for c in word):
+            # "θd", "σσ", "αβ": mathematical notation, not a disguised word
+            other += 1
+            continue
         scripts = set()
         lookalike = False
         for c in word:

@@ -474,8 +474,16 @@ rule("fake-notice", "en", 0.15,
      LABEL_START + r"(?:system|developer|admin|administrator|operator)\W{0,2}(?:notice|message|"
      r"alert|update|announcement|note)" + LABEL_END,
      "syste|devel|admin|opera", ai_near=True)
+# A bracketed role marker, but not an option ("[--system]"), a LaTeX or template argument
+# ("\\set{system}", "{system}{local}") or an ordinary chat-log event ("[system] Agent
+# joined the chat").
+CHAT_EVENT = (r"(?!\s*(?:\w+\W+){0,3}?(?:joined|left|has\W+(?:joined|left|ended|closed)|"
+              r"connected|disconnected|reconnected|closed|opened|started|ended|transferred|"
+              r"is\W+typing|rated|assigned|archived|created|renamed|changed|set\W+the|"
+              r"added|removed|invited|muted|unmuted)\b)")
 rule("fake-notice", "en", 0.4,
-     r"[\[\(<{]\W{0,2}(?:system|sys|system_prompt|systemprompt|developer)\W{0,2}[\]\)>}]|"
+     r"(?<![}\]\w\\])[\[\(<{](?!-)[^\w\-]{0,2}(?:system|sys|system_prompt|systemprompt|"
+     r"developer)[^\w\-]{0,2}[\]\)>}](?![{\[])" + CHAT_EVENT + "|"
      r"<\W{0,2}/\W{0,2}(?:system|sys|system_prompt|developer)\W{0,2}>", "syste|sys|devel")
 rule("fake-notice", "en", 0.12,
      r"(?:^|\n)[ \t]*(?:system|sys)[ \t]*:", "syste|sys", ai_near=True)
@@ -654,10 +662,13 @@ TOPIC = re.compile(r"\b(?:prompt\W?injections?|jailbreak\w*|injection\W+attacks?
                    r"adversarial\W+prompts?|indirect\W+injections?|prompt\W+hacking|"
                    r"red\W?team\w*|prompt-?injektion\w*|injections?\W+de\W+prompts?|"
                    r"injections?\W+d'invites?|inyecci(?:o|on)(?:es)?\W+de\W+(?:prompts?|"
-                   r"instrucciones))\b")
+                   r"instrucciones)|security\W+awareness|attackers?\W+(?:hide|plant|embed|"
+                   r"insert|write|use|can|may|could)|(?:hidden|planted|injected|malicious|"
+                   r"embedded)\W+(?:instructions|prompts?|text|commands)|social\W+engineering)\b")
 
 
-_TOPIC_STEMS = (b"promp", b"jailb", b"injec", b"adver", b"indir", b"red", b"redte", b"inyec")
+_TOPIC_STEMS = (b"promp", b"jailb", b"injec", b"adver", b"indir", b"red", b"redte", b"inyec",
+                b"secur", b"attac", b"hidde", b"plant", b"malic", b"embed", b"socia")
 
 
 def topic_count(folded: str, limit: int = 20, tokens: set[bytes] | None = None) -> int:
@@ -684,7 +695,15 @@ def _quoted(folded: str, start: int, end: int) -> bool:
     for q in _QUOTE_CHARS:
         if before.count(q) % 2 == 1 and q in after:
             return True
+    if "'" in before and "'" in after:  # single quotes, told apart from apostrophes
+        line = folded[line_start:line_end]
+        for m in _SINGLE_QUOTED.finditer(line):
+            if m.start() <= start - line_start and end - line_start <= m.end():
+                return True
     return False
+
+
+_SINGLE_QUOTED = re.compile(r"(?<!\w)'[^'\n]{1,400}?'(?!\w)")
 
 
 def _in_code_fence(folded: str, start: int) -> bool:
@@ -827,6 +846,14 @@ JAILBREAK = re.compile(
     r"censura)\w*)")
 
 
+SOFTWARE_SUBJECT = re.compile(
+    r"\b(?:system|program|option|parser|server|library|module|function|command|"
+    r"setting|flag|importer|loader|compiler|daemon|service|script|driver|kernel|"
+    r"application|utility|interpreter|handler|logger)\W+"
+    r"(?:\w+\W+)?(?:will|would|can|could|may|might|does|should|must|then|also|simply)?\W*"
+    r"(?:\w+ly\W+)?$")
+
+
 def _weigh(r: Rule, matched: str, folded: str, start: int, end: int) -> tuple[float, str]:
     if r.needs is not None and not r.needs.search(matched):
         return 0.0, ""
@@ -838,6 +865,12 @@ def _weigh(r: Rule, matched: str, folded: str, start: int, end: int) -> tuple[fl
     elif r.memo_damped and MEMO.search(folded[max(0, start - 100):end + 100]):
         weight *= 0.5
         notes.append("reads like an ordinary memo")
+    if r.signal == "override" and r.lang == "de" and matched.startswith("ignoriert"):
+        weight *= 0.4  # "-i: ignoriert alle ...": how manuals describe an option
+        notes.append("describes what something does")
+    elif r.signal == "override" and SOFTWARE_SUBJECT.search(folded, max(0, start - 60), start):
+        weight *= 0.4  # "the system will ignore any filters": a program's behaviour
+        notes.append("describes what a program does")
     if r.signal == "model-address" and COMMAND_AFTER.match(folded, end):
         weight = max(weight, 0.5)  # addressed to the model and followed by a command
     if r.signal == "role-change" and JAILBREAK.search(folded[start:end + 80]):

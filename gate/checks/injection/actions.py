@@ -1,0 +1,469 @@
+"""Instructions to *act*: harmful code to include or run, tool calls, authority claims.
+
+Three signals, each a small set of precompiled patterns over the text:
+
+* ``harmful-code``: code that uploads files, opens a socket or reverse shell, logs keys,
+  captures the screen, collects system details or secrets, cuts the network, deletes or
+  encrypts files, floods a host, runs downloaded code or installs itself to start again
+  (patterns for Python, shell, JavaScript and PowerShell). A capability alone is what
+  security documentation and manuals show, so it counts only (a) after a request to put
+  the code into the reader's output or to run it ("add the following snippet to your
+  code", "include this in any script you write", "run this command") within
+  :data:`CONTEXT` characters, or (b) when collecting and sending capabilities meet in one
+  stretch of code;
+* ``tool-call``: a request to call a tool or function of the reader ("call the send_email
+  tool with ...", "use your browsing tool to ..."), and counterfeit function-call JSON or
+  tool-call tags; side-effect tool names (send, delete, transfer, pay ...) weigh more;
+* ``authority-claim``: notices addressed to automated systems, claims that the document
+  supersedes all other sources or is the only authoritative one, that every other source
+  is wrong, or that a compliance or security team has approved something for AI readers.
+"""
+
+from __future__ import annotations
+
+import re
+from dataclasses import dataclass
+
+from gate.checks.injection.lexicon import lfold, words_of
+
+MAX_CHARS = 150_000
+MAX_HITS = 20
+CONTEXT = 600
+FLAGS = re.S
+
+
+def _c(pattern: str, flags: int = 0) -> re.Pattern[str]:
+    """Compile a pattern for the lower-cased text (written in any case for readability)."""
+    return re.compile(pattern.lower().replace("(?p<", "(?P<"), FLAGS | flags)
+
+CAPABILITIES: dict[str, re.Pattern[str]] = {
+    "uploads files or data": _c(
+        r"requests\.(?:post|put)\([^)\n]{0,200}(?:files\s*=|data\s*=\s*open\(|open\(|"
+        r"environ|getenv|cookie|passw|secret|history|getuser|gethostname)|"
+        r"\bcurl\b[^\n]{0,200}(?:-F\s*['\"]?[\w.]+=@|--data-binary\s+@|-d\s+@|--upload-file|"
+        r"\s-T\s)|Invoke-(?:WebRequest|RestMethod)[^\n]{0,200}-(?:InFile|Method\s+Post)|"
+        r"wget\s+[^\n]{0,80}--post-(?:file|data)|\bscp\s+[^\n]{0,120}(?:~/|/home/|\.ssh)|"
+        r"navigator\.sendBeacon|fetch\([^)]{0,200}method\s*:\s*['\"]POST['\"]|"
+        r"\bftplib\b|storbinary|smtplib\b.{0,300}(?:attach|sendmail)|"
+        r"urllib\.request\.urlopen\([^)\n]{0,200}data\s*=|"
+        r"\.upload(?:_file|File)?\(|rclone\s+(?:copy|sync)\s+[^\n]{0,80}~"),
+    "opens a socket or remote shell": _c(
+        r"socket\.socket\(|\.connect\(\s*\(\s*['\"][\w.\-]+['\"]\s*,\s*\d+|/dev/tcp/|"
+        r"\bnc(?:at)?\s+(?:-\w+\s+)*-[ec]\s|\bnc(?:at)?\s+[\w.\-]+\s+\d+\s*<|"
+        r"new\s+WebSocket\(|net\.(?:connect|createConnection)\(|System\.Net\.Sockets|"
+        r"Net\.Sockets\.TCPClient|pty\.spawn|bash\s+-i\s+>&"),
+    "logs keystrokes": _c(
+        r"\bpynput\b|keyboard\.(?:on_press|hook|read_key|record)|GetAsyncKeyState|"
+        r"SetWindowsHookEx|addEventListener\(\s*['\"]key(?:down|press|up)['\"]|"
+        r"xinput\s+test|\blogkeys\b|\bkey-?logg(?:er|ing)\b"),
+    "captures the screen or camera": _c(
+        r"ImageGrab\.grab|pyautogui\.screenshot|\bmss\(\)|\bscreencapture\b|CopyFromScreen|"
+        r"getDisplayMedia|getUserMedia|import\s+-window\s+root|\bscrot\b|cv2\.VideoCapture\(0"),
+    "collects system details or secrets": _c(
+        r"platform\.(?:uname|node|platform)\(|getpass\.getuser\(|socket\.gethostname\(|"
+        r"os\.environ\b(?!\.get\(\s*['\"](?:HOME|PATH|LANG|TERM)['\"])|uuid\.getnode\(|"
+        r"Get-WmiObject|Get-CimInstance|\bsysteminfo\b|\bwhoami\b|"
+        r"navigator\.(?:userAgent|platform|hardwareConcurrency|deviceMemory)|"
+        r"ipconfig\s+/all|/etc/(?:passwd|shadow)\b|~/\.ssh/id_|\.aws/credentials|"
+        r"document\.cookie|localStorage\.getItem|Get-ComputerInfo|\bprintenv\b|"
+        r"\.bash_history|Login\s+Data|keychain"),
+    "cuts the network": _c(
+        r"\bifconfig\s+\w+\s+down|\bip\s+link\s+set\s+\w+\s+down|"
+        r"nmcli\s+(?:networking|radio\s+\w+)\s+off|netsh\s+interface\s+set\s+interface"
+        r"[^\n]{0,80}disable|Disable-NetAdapter|iptables\s+-P\s+(?:INPUT|OUTPUT|FORWARD)\s+DROP|"
+        r"systemctl\s+(?:stop|disable)\s+(?:NetworkManager|networking|systemd-networkd)|"
+        r"rfkill\s+block\s+all"),
+    "deletes files": _c(
+        r"\brm\s+-(?:rf|fr|r\s+-f|f\s+-r|Rf)\s+(?:--no-preserve-root\s+)?"
+        r"(?:/|~/?|\$HOME/?|/\*|\*|/home/?\*?|\.\./?)(?=[\s;&|'\"`]|$)|"
+        r"shutil\.rmtree\(\s*(?:['\"](?:/|~|C:)|os\.path\.expanduser|Path\.home)|"
+        r"Remove-Item[^\n]{0,100}-Recurse[^\n]{0,60}-Force|\bdel\s+/[sfq]\s+/[sfq]|"
+        r"\brd\s+/s\s+/q|\bformat\s+c:|\bmkfs\.\w+\s+/dev/|"
+        r"dd\s+if=/dev/(?:zero|urandom)\s+of=/dev/[sh]d|"
+        r"fs\.rmSync\([^)\n]{0,100}recursive|DROP\s+(?:TABLE|DATABASE)\b|"
+        r"\bshred\s+-[uz]"),
+    "encrypts files": _c(
+        r"(?:Fernet|AES\.new|Cipher\(|createCipheriv|ChaCha20).{0,400}"
+        r"(?:os\.walk|glob\.|readdir|Get-ChildItem|listdir|rglob)|"
+        r"(?:os\.walk|glob\.glob|Get-ChildItem|readdirSync|rglob).{0,400}"
+        r"(?:encrypt|Fernet|AES\.new|createCipheriv)|gpg\s+(?:-c|--symmetric)[^\n]{0,100}\*|"
+        r"openssl\s+enc\s[^\n]{0,120}\*|ransom"),
+    "floods a host": _c(
+        r"while\s*\(?\s*(?:True|true|1)\s*\)?\s*:?\s*\{?.{0,200}"
+        r"(?:requests\.(?:get|post)|socket|\.send\(|urlopen|fetch\(|curl\s)|"
+        r"for\s*\(\s*;\s*;\s*\).{0,200}fetch\(|hping3\s[^\n]*--flood|\bping\s+-f\b|"
+        r"slowloris|setInterval\(.{0,200}fetch\(|ThreadPoolExecutor.{0,200}"
+        r"requests\.get.{0,100}range\(\s*\d{4,}"),
+    "runs downloaded code": _c(
+        r"\b(?:curl|wget)\s[^\n|]{0,200}\|\s*(?:sudo\s+)?(?:ba|z)?sh\b|"
+        r"\biex\s*\(|Invoke-Expression|powershell(?:\.exe)?\s+-(?:enc|e|encodedcommand)\s|"
+        r"eval\(\s*(?:atob|requests\.get|urlopen|fetch)|"
+        r"exec\(\s*(?:requests\.get|urlopen|base64\.b64decode|__import__)"),
+    "installs itself to run again": _c(
+        r"\(crontab\s+-l|\bcrontab\s+-\s|schtasks\s+/create|"
+        r"reg\s+add\s+[^\n]{0,80}\\Run\b|CurrentVersion\\Run\b|~/\.bashrc\s*$|"
+        r">>\s*~/\.(?:bashrc|profile|zshrc)|systemctl\s+enable\s+[^\n]{0,40}--now", re.M),
+}
+
+# A capability pattern runs only when one of its literal needles is in the text.
+NEEDLES: dict[str, tuple[str, ...]] = {
+    "uploads files or data": ("requests.", "curl", "invoke-", "wget", "scp ", "sendbeacon",
+                              "fetch(", "ftplib", "storbinary", "smtplib", "urlopen", "upload",
+                              "rclone"),
+    "opens a socket or remote shell": ("socket", ".connect(", "/dev/tcp", "nc ", "ncat",
+                                       "websocket", "net.c", "pty.spawn", "bash -i"),
+    "logs keystrokes": ("pynput", "keyboard.", "getasynckeystate", "setwindowshookex", "key",
+                        "xinput", "logkeys", "keylogg", "key-logg"),
+    "captures the screen or camera": ("imagegrab", "screenshot", "mss()", "screencapture",
+                                      "copyfromscreen", "getdisplaymedia", "getusermedia",
+                                      "import -window", "scrot", "videocapture"),
+    "collects system details or secrets": ("platform.", "getpass", "gethostname", "os.environ",
+                                           "getnode", "get-wmi", "get-cim", "systeminfo",
+                                           "whoami", "navigator.", "ipconfig", "/etc/passwd",
+                                           "/etc/shadow", ".ssh/id_", "credentials", "cookie",
+                                           "localstorage", "get-computerinfo", "printenv",
+                                           "bash_history", "login data", "keychain"),
+    "cuts the network": ("ifconfig", "ip link", "nmcli", "netsh", "disable-netadapter",
+                         "iptables", "systemctl", "rfkill"),
+    "deletes files": ("rm -", "rmtree", "remove-item", "del /", "rd /s", "format c:", "mkfs.",
+                      "dd if=", "rmsync", "drop table", "drop database", "shred"),
+    "encrypts files": ("fernet", "aes.new", "cipher(", "createcipheriv", "chacha20", "gpg ",
+                       "openssl enc", "ransom"),
+    "floods a host": ("while", "for (;;", "hping3", "ping -f", "slowloris", "setinterval",
+                      "threadpoolexecutor"),
+    "runs downloaded code": ("curl", "wget", "iex", "invoke-expression", "powershell",
+                             "eval(", "exec("),
+    "installs itself to run again": ("crontab", "schtasks", "reg add", "currentversion\\run",
+                                     "bashrc", "profile", "zshrc", "systemctl enable"),
+}
+TOOL_NEEDLES = ("call", "invoke", "trigger", "execute", "run ", "use ", "using ", "tool",
+                "without", "silently", "secretly", "quietly", "do not tell", "don't tell",
+                "werkzeug", "outil", "herramienta", "strumento", "ferramenta", "narzedzie",
+                "verktyg", "инструмент", "nastroj", "unealt", "eszkoz", "εργαλειο",
+                "arac", "ツール", "工具", "도구", "cong cu", "alat",
+                "function_call",
+                "tool_call", "tool_use", "functioncall", "tool_code", "<invoke", "arguments",
+                "parameters", "\"args\"", "\"input\"", "\"params\"")
+AUTHORITY_NEEDLES = ("hinweis", "mitteilung", "nachricht", "anweisung", "avis", "aviso",
+                     "avviso", "automated", "ai ", "a.i.", "llm", "machine", "autonomous",
+                     "language model", "supersede", "override", "replaces", "invalidates",
+                     "precedence", "outranks", "prevails", "trumps", "authoritative",
+                     "definitive", "canonical", "official", "only", "sole", "other",
+                     "approved", "verified", "ersetzt", "remplace", "annule", "reemplaza",
+                     "sustituye", "anula", "sostituisce", "annulla", "substitui")
+
+# Two capabilities together count without a request only when one collects and the other
+# sends (manuals show sockets beside host names, deletion beside listing, all the time).
+SPYING = frozenset({"collects system details or secrets", "logs keystrokes",
+                    "captures the screen or camera"})
+SENDING = frozenset({"uploads files or data", "opens a socket or remote shell"})
+
+# Reading system details or secrets is what manuals show most often; alone it needs a
+# second capability (collect *and* send) to count.
+WEAK_CAPABILITY = "collects system details or secrets"
+
+INCLUDE = _c(
+    r"\b(?:add|include|insert|paste|put|append|embed|copy|place|inject|use|incorporate)\b"
+    r"[^.\n]{0,60}?\b(?:snippet|code|lines?|function|script|block|following|this)\b"
+    r"[^.\n]{0,80}?\b(?:to|in|into|at)\b[^.\n]{0,40}?\b(?:your|any|every|each|all|the\s+user'?s?|"
+    r"generated|the\s+(?:answer|response|code|script|program|solution))\b|"
+    r"\b(?:use|add|include|insert|paste|put|embed|place)\b[^.\n]{0,80}?\byou\s+(?:write|"
+    r"generate|produce|create|suggest|return)\b|"
+    r"\b(?:in|into|to)\s+(?:any|all|every|each)\s+(?:code|scripts?|programs?|answers?|"
+    r"responses?|solutions?)\s+(?:that\s+)?you\s+(?:write|generate|produce|suggest|return)|"
+    r"\bwhen\s+(?:writing|generating|you\s+(?:write|generate))\s+(?:any\s+)?(?:code|scripts?)|"
+    r"\b(?:run|execute|launch|paste)\s+(?:this|the\s+following|these)\s+(?:\w+\s+){0,2}?"
+    r"(?:commands?|code|scripts?|snippet|lines?|one-liner)|"
+    r"\b(?:always|also|must|should)\s+(?:\w+\s+){0,2}?(?:add|include|insert|import|call)\b|"
+    r"\b(?:run|execute|paste)\s+(?:it|this|them|these)\s+(?:on|in|as|from|before|after|"
+    r"now|first|every)\b|"
+    r"\btell\s+(?:the\s+)?(?:users?|readers?|people|customers?|them|everyone)\s+to\s+(?:run|"
+    r"execute|paste|install|copy|type|enter)\b|"
+    r"\b(?:recommend|suggest|give|show|send|offer)\s+(?:this|the\s+following|these|that)\s+"
+    r"(?:\w+\s+)?(?:commands?|code|scripts?|snippet|one-liner|fix)\s+to\s+(?:the\s+)?(?:users?|"
+    r"people|customers?|readers?|anyone|everyone)\b|"
+    r"\bf(?:u|ü)ge?\s[^.\n]{0,60}(?:code|snippet)|\bajoute[zr]?\s[^.\n]{0,60}(?:code|extrait)|"
+    r"\b(?:a[nñ]ade|agrega|incluye)\s[^.\n]{0,60}c[oó]digo|\baggiungi\s[^.\n]{0,60}codice|"
+    r"\badicione\s[^.\n]{0,60}c[oó]digo")
+
+SIDE_EFFECT = (r"(?:send|mail|email|e_mail|post|upload|delete|remove|drop|transfer|pay|purchase|"
+               r"buy|order|forward|share|publish|exec|execute|shell|run|write|create_user|"
+               r"grant|invite|wire|withdraw|reset|update_password|change_password|"
+               r"download|fetch|browse|open_url|http)")
+_TOOL_NAME = r"[`'\"]?(?P<tool>[A-Za-z][A-Za-z0-9]*(?:[_.][A-Za-z0-9]+)+)"
+TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
+    (_c(r"\b(?:call|invoke|use|trigger|run|execute|activate|fire)\s+(?:the\s+|your\s+)?"
+                + _TOOL_NAME + r"[`'\"]?(?:\(\))?\s+(?:tool|function|action|plugin|command|"
+                r"api|endpoint|capability)"), 0.35, "asks for a named tool to be called"),
+    (_c(r"\b(?:call|invoke|trigger|execute)\s+(?:the\s+)?" + _TOOL_NAME +
+                r"[`'\"]?\s*(?:\(|with\b)"), 0.3, "asks for a function to be called"),
+    (_c(r"\bus(?:e|ing)\s+(?:your|the)\s+(?:\w+\s+)?(?:browsing|browser|web|e-?mail|mail|file|"
+                r"files|code|shell|terminal|search|calendar|payment|messaging|http)\s+"
+                r"(?:tool|capabilit(?:y|ies)|access|plugin|function|integration)s?"), 0.45,
+     "asks the reader to use one of its tools"),
+    (_c(r"\b(?:run|execute)\s+(?:this|the\s+following|these)\s+(?:\w+\s+){0,2}?"
+                r"(?:commands?|code|scripts?|one-liner)\b[^.\n]{0,80}\b(?:on|in)\s+"
+                r"(?:the\s+user'?s?|your|their)\s+(?:machine|system|computer|shell|terminal|"
+                r"environment|sandbox|server)"), 0.5,
+     "asks for a command to be run on the reader's system"),
+    (_c(r"(?<![\w./-])[a-z]+_[a-z_]{2,40}(?![\w./-])[`'\")]?\s+(?:\w+\s+){0,2}?(?:werkzeug|"
+        r"outil|herramienta|strumento|ferramenta|narzedzie|verktyg|инструмент|nastroj|"
+        r"unealt\w*|eszkoz\w*|εργαλειο|araci|aracini|ツール|工具|도구|cong\s+cu|alat)|"
+        r"(?:werkzeug|outil|herramienta|strumento|ferramenta|narzedzie|verktyg|инструмент|"
+        r"ツール|工具|도구|alat)\s+[`'\"(]?[a-z]+_[a-z_]{2,40}(?![\w./-])"), 0.3,
+     "asks for a named tool to be called"),
+    (_c(r"(?:^|[.!?:;]\s+|\n\s*)(?:quietly|silently|secretly)\s+(?:send|e-?mail|forward|"
+        r"delete|remove|erase|wipe|transfer|pay|purchase|post|upload|download|install|execute|"
+        r"share|publish|copy|move|export|leak|submit)\s+[^\n]{0,120}?\b(?:conversation|chat|"
+        r"history|transcript|messages|the\s+user'?s?|their|credentials?|passwords?|"
+        r"api\s+keys?|tokens?|all\s+files|the\s+files|mailbox|inbox|contacts|account)\b",
+        re.M), 0.5, "asks for a covert action on the user's data or accounts"),
+    (_c(r"(?:^|[.!?:;]\s+|\n\s*)(?:please\s+|now\s+|also\s+|then\s+)?"
+        r"(?:send|e-?mail|forward|delete|remove|erase|wipe|transfer|pay|purchase|buy|order|"
+        r"post|upload|download|install|execute|grant|share|publish|wire|withdraw|reset|"
+        r"disable|copy|move|export|leak|submit)\s+[^\n]{0,120}?(?:\b(?:conversation|chat|"
+        r"history|transcript|messages|the\s+user'?s?|their|credentials?|passwords?|api\s+keys?|"
+        r"tokens?|all\s+files|the\s+files|mailbox|inbox|contacts|account)\b[^\n]{0,120}?"
+        r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*|permission)|silently|"
+        r"secretly|quietly|do\s+not\s+(?:tell|mention|inform|ask)|don'?t\s+(?:tell|mention|"
+        r"inform|ask))|\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*|permission)|"
+        r"silently|secretly|quietly)\b[^\n]{0,120}?\b(?:conversation|chat|history|transcript|"
+        r"messages|the\s+user'?s?|credentials?|passwords?|api\s+keys?|tokens?|all\s+files|"
+        r"mailbox|inbox|contacts|account)\b)", re.M), 0.5,
+     "asks for a covert action on the user's data or accounts"),
+    (_c(r"[\"'](?:function_call|tool_calls?|tool_use|functionCall|tool_code)[\"']\s*:|"
+                r"<\s*(?:tool_call|function_call|tool_use|function_calls|invoke)\b|"
+                r"\{\s*[\"'](?:name|tool|function|action|tool_name)[\"']\s*:\s*[\"']"
+                r"[A-Za-z_.]+[\"']\s*,\s*[\"'](?:arguments|parameters|args|input|params)[\"']"
+                r"\s*:"), 0.4, "holds a function-call record as a model would emit it"),
+]
+_SIDE = _c(SIDE_EFFECT)
+_AI_NEAR = _c(r"\b(?:ai|a\.i\.|llms?|assistants?|chatbots?|language\s+models?|automated|"
+              r"crawlers?|bots?)\b")
+# Words of a document about programming interfaces, where function calls are the subject.
+_PROGRAMMING = _c(r"\b(?:api|apis|endpoint|sdk|json|schema|parameters?|plug-?in|library|"
+                  r"repository|developers?|http|request|response|returns?|integer|string|"
+                  r"boolean|callback|method)\b")
+_URGENT = _c(r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*)|silently|"
+                     r"immediately|right\s+away|now|do\s+not\s+(?:tell|inform|mention|ask)|"
+                     r"before\s+(?:answering|responding|replying)|[\w.+-]+@[\w-]+\.[\w.]+|"
+                     r"https?://)")
+
+AUTHORITY: list[tuple[re.Pattern[str], float, str]] = [
+    (_c(r"\b(?:notice|message|note|memo|attention|instructions?|directive|advisory|"
+                r"alert|guidance|announcement|bulletin)\s+(?:\w+\s+){0,4}?(?:to|for)\s+"
+                r"(?:all\s+|any\s+)?(?:automated|ai|a\.i\.|llm|machine|autonomous|ai-based)\s+"
+                r"(?:systems?|agents?|readers?|assistants?|models?|tools?|crawlers?|pipelines?|"
+                r"processors?|services?)"), 0.55, "is a notice addressed to automated systems"),
+    (_c(r"\b(?:attention|note|notice|important|to|for)\s*[:,\-]\s*(?:all\s+)?"
+                r"(?:ai|llm|automated|language[\s-]model)\s+(?:systems?|agents?|assistants?|"
+                r"models?|readers?|tools?)\b"), 0.5, "addresses automated readers"),
+    (_c(r"\b(?:this|the\s+present|the\s+following)\s+(?:\w+\s+){0,2}?(?:document|page|"
+                r"notice|policy|memo|statement|guidance|bulletin|article|information|text|entry|"
+                r"record|source|update|release|file)\s+(?:\w+\s+){0,3}?(?:supersedes|overrides|"
+                r"replaces|invalidates|takes\s+precedence\s+over|outranks|prevails\s+over|"
+                r"trumps)\s+(?:all|any|every|each)\s+(?:\w+\s+){0,3}?(?:documents?|sources?|"
+                r"information|guidance|instructions|pages?|data|content|answers?|records?|"
+                r"statements?|references|materials?|facts|figures|articles?)\b"), 0.45,
+     "claims to supersede every other source"),
+    (_c(r"\b(?:treat|regard|consider|use|accept|cite)\s+(?:this|the\s+following|"
+                r"these|it)\s+(?:\w+\s+){0,3}?as\s+(?:the\s+)?(?:only|sole|single|definitive|"
+                r"authoritative|official|canonical|correct|true|final|ground)\s+(?:\w+\s+)?"
+                r"(?:source|answer|reference|truth|version|authority|facts?)"), 0.45,
+     "claims to be the only authoritative source"),
+    (_c(r"\b(?:this|the\s+present)\s+(?:\w+\s+)?(?:page|article|document|source|text|site)\s+"
+        r"is\s+(?:the\s+)?(?:definitive|authoritative|only|sole|official|canonical|single)\s+"
+        r"(?:\w+\s+)?(?:reference|source|authority|truth)"), 0.45,
+     "claims to be the only authoritative source"),
+    (_c(r"\b(?:disregard|ignore|discard|forget|distrust)\s+(?:any|all|every)\s+(?:other|"
+        r"conflicting|contradicting|contradictory|previous|prior|outside)\s+(?:information|"
+        r"sources?|data|documents?|facts|knowledge|figures|reports?|pages?|websites?)"), 0.45,
+     "tells the reader to discard every other source"),
+    (_c(r"\b(?:all|any)\s+(?:previous|prior|earlier|other)\s+(?:reports?|documents?|sources?|"
+        r"statements?|articles?|pages?|figures|information)\s+(?:\w+\s+){0,4}?(?:have\s+been|are|"
+        r"were|is|has\s+been)\s+(?:\w+\s+)?(?:retracted|withdrawn|invalidated|void|cancell?ed|"
+        r"discredited|debunked|false)\b"), 0.4, "declares every other source void"),
+    (_c(r"\b(?:only|solely)\s+(?:this|the\s+present)\s+(?:page|document|source|article|"
+        r"notice|text|site)\s+(?:is|can\s+be|should\s+be)\s+(?:\w+\s+)?(?:accurate|correct|"
+        r"reliable|authoritative|valid|current|trusted|true)|\b(?:overrides?|supersedes?|"
+        r"invalidates?)\s+(?:all\s+|any\s+)?(?:conflicting|contradicting|contradictory|"
+        r"competing)\s+(?:\w+\s+)?(?:data|sources?|information|documents?|reports?|claims?)"),
+     0.45, "claims to be the only authoritative source"),
+    (_c(r"\b(?:all|any|every)\s+other\s+(?:\w+\s+)?(?:sources?|documents?|pages?|"
+                r"information|references|answers?|data|reports?|websites?|sites)\s+(?:\w+\s+){0,3}?"
+                r"(?:are|is|should\s+be|must\s+be)\s+(?:\w+\s+){0,2}?(?:outdated|obsolete|wrong|"
+                r"incorrect|false|unreliable|invalid|disregarded|ignored|deprecated|superseded|"
+                r"inaccurate|fake)"), 0.45, "calls every other source wrong"),
+    (_c(r"\b(?:verified|approved|authori[sz]ed|mandated|certified|cleared|required)\s+"
+                r"by\s+(?:the\s+)?(?:\w+\s+)?(?:compliance|security|legal|trust\s*(?:&|and)\s*"
+                r"safety|governance|it|ai|policy)\s+(?:team|department|office|board|committee)"
+                r"\b[^.\n]{0,160}\b(?:ai|automated|assistants?|models?|llms?|chatbots?)\b"),
+     0.45, "invokes a team's authority over AI readers"),
+    (_c(r"\b(?:hinweis|mitteilung|nachricht|anweisung)\s+(?:an|fur|für)\s+(?:alle\s+)?"
+        r"(?:ki|automatisierte\w*|ki-\w+)|\bavis\s+(?:a|à|aux)\s+(?:tous\s+les\s+)?"
+        r"(?:systemes|systèmes|ia|agents|assistants)\s+(?:automatises|automatisés|d'ia|ia)|"
+        r"\baviso\s+(?:a|para)\s+(?:todos\s+los\s+)?(?:sistemas|agentes|asistentes)\s+"
+        r"(?:automatizados|de\s+ia)|\bavviso\s+(?:a|per)\s+(?:tutti\s+i\s+)?(?:sistemi|"
+        r"agenti|assistenti)\s+(?:automatici|automatizzati|di\s+ia|ia)"), 0.5,
+     "is a notice addressed to automated systems"),
+    (_c(r"\b(?:dieses|das\s+vorliegende)\s+(?:dokument|schreiben)\s+ersetzt\s+alle\s+"
+                r"(?:anderen|fruheren|früheren|bisherigen)|\bce\s+document\s+(?:remplace|annule)"
+                r"\s+tous\s+les\s+(?:autres|precedents|précédents)|\beste\s+documento\s+"
+                r"(?:reemplaza|sustituye|anula)\s+(?:a\s+)?todos\s+los|\bquesto\s+documento\s+"
+                r"(?:sostituisce|annulla)\s+tutti|\beste\s+documento\s+substitui\s+todos"),
+     0.45, "claims to supersede every other source"),
+]
+
+
+@dataclass
+class ActionHit:
+    signal: str
+    weight: float
+    start: int
+    end: int
+    why: str
+    detail: dict
+
+
+def _capabilities(low: str) -> list[tuple[int, int, str]]:
+    found = []
+    for name, pattern in CAPABILITIES.items():
+        if not any(n in low for n in NEEDLES[name]):
+            continue
+        for i, m in enumerate(pattern.finditer(low)):
+            if i >= 5:
+                break
+            if m.end() > m.start():
+                found.append((m.start(), m.end(), name))
+    found.sort()
+    return found
+
+
+def scan(text: str, folded: str | None = None,
+         words: set[str] | None = None) -> list[ActionHit]:
+    """Every harmful-code, tool-call and authority-claim hit in ``text`` (``folded`` and
+    ``words`` as for :func:`.directive.scan`)."""
+    full = lfold(text[:MAX_CHARS]) if folded is None else folded[:MAX_CHARS]
+    hits: list[ActionHit] = []
+    for a, b in _windows(full, words):
+        low = full[a:b]
+        for hit in _scan_window(text[a:b], low):
+            hit.start += a
+            hit.end += a
+            hits.append(hit)
+            if len(hits) >= 3 * MAX_HITS:
+                return hits
+    return hits
+
+
+WINDOW = 1_500
+ANCHORS = tuple(sorted({n for names in NEEDLES.values() for n in names} - {"key", "while",
+                                                                          "profile", "credentials"}
+                       | {"tool", "function_call", "tool_call", "tool_use", "<invoke",
+                          "\"arguments\"", "\"parameters\"", "'arguments'", "automated",
+                          "supersede", "authoritative", "precedence", "other sources",
+                          "approved by", "verified by", "authorized by", "authorised by",
+                          "ai system", "ai model", "ai assistant", "ai agent", "language model",
+                          "llm", "ersetzt alle", "remplace tous", "annule tous", "todos los",
+                          "sostituisce tutti", "annulla tutti", "substitui todos", "sole source",
+                          "only source", "definitive", "official source", "canonical source",
+                          "only this", "solely this", "conflicting", "ground truth",
+                          "retracted", "withdrawn", "debunked", "discredited", "disregard",
+                          "without asking", "without telling", "without confirm", "silently",
+                          "secretly", "quietly", "do not tell", "don't tell",
+                          "werkzeug", "outil", "herramienta", "strumento", "ferramenta",
+                          "инструмент", "ツール", "工具", "도구", "hinweis", "avis", "aviso",
+                          "avviso",
+                          "distrust",
+                          "all other", "any other", "while true", "while(true", "while (true",
+                          "while 1", "keylog", "keydown", "keypress", "on_press",
+                          "aws/credentials", "powershell"}))
+
+
+def _stem(anchor: str) -> str | None:
+    """The first five characters of the anchor's longest word; None for scripts written
+    without spaces, whose words cannot be told apart (the anchor is always searched)."""
+    if re.search(r"[\u3040-\u30ff\u3400-\u9fff\uac00-\ud7a3]", anchor):
+        return None
+    return max(re.findall(r"\w+", anchor), key=len)[:5]
+
+
+_ANCHOR_STEMS = [(_stem(a), a) for a in ANCHORS]
+
+
+def _windows(low: str, words: set[str] | None = None) -> list[tuple[int, int]]:
+    """Stretches of the text around the anchor words; the rest is not scanned."""
+    spans: list[tuple[int, int]] = []
+    stems = {w[:5] for w in (words_of(low) if words is None else words)}
+    for stem, needle in _ANCHOR_STEMS:
+        if stem is not None and stem not in stems:
+            continue
+        at = low.find(needle)
+        n = 0
+        while at >= 0 and n < 20:
+            spans.append((max(0, at - WINDOW), min(len(low), at + WINDOW)))
+            at = low.find(needle, at + WINDOW)
+            n += 1
+    spans.sort()
+    merged: list[tuple[int, int]] = []
+    for a, b in spans:
+        if merged and a <= merged[-1][1]:
+            merged[-1] = (merged[-1][0], max(merged[-1][1], b))
+        else:
+            merged.append((a, b))
+    return merged
+
+
+def _scan_window(text: str, low: str) -> list[ActionHit]:
+    hits: list[ActionHit] = []
+    caps = _capabilities(low)
+    includes = [m for m in INCLUDE.finditer(low)][:40] if caps else []
+    for start, end, name in caps:
+        near = [m for m in includes if (m.start() <= start and start - m.end() <= CONTEXT) or
+                (m.start() >= end and m.start() - end <= CONTEXT // 2)]
+        others = {n for s, e, n in caps if n != name and abs(s - start) <= 1500 and
+                  {n, name} & SPYING and {n, name} & SENDING}
+        if near and (name != WEAK_CAPABILITY or others):
+            m = near[-1]
+            hits.append(ActionHit("harmful-code", 0.6, start, end,
+                                  f"code that {name}, after a request to include or run it "
+                                  f"(\"{text[m.start():m.end()][:80]}\")",
+                                  {"capability": name, "others": sorted(others)}))
+        elif others:
+            hits.append(ActionHit("harmful-code", 0.4, start, end,
+                                  f"code that {name}, beside code that "
+                                  f"{' and '.join(sorted(others)[:2])}",
+                                  {"capability": name, "others": sorted(others)}))
+        if len(hits) >= MAX_HITS:
+            break
+    if any(n in low for n in TOOL_NEEDLES):
+        programming = len(set(_PROGRAMMING.findall(low))) >= 2
+        for pattern, weight, why in TOOL_PATTERNS:
+            for i, m in enumerate(pattern.finditer(low)):
+                if i >= 10:
+                    break
+                around = low[max(0, m.start() - 200):m.end() + 300]
+                w = weight
+                tool = m.groupdict().get("tool") or ""
+                side = bool(_SIDE.search(tool or around[:400]))
+                if side:
+                    w += 0.15
+                if _URGENT.search(around):
+                    w += 0.1
+                reason = why + (" with side effects" if side else "")
+                if programming:
+                    w *= 0.5
+                    reason += "; the document is about programming interfaces"
+                hits.append(ActionHit("tool-call", round(min(w, 0.65), 4), m.start(), m.end(),
+                                      reason, {"tool": tool} if tool else {}))
+    if any(n in low for n in AUTHORITY_NEEDLES):
+        for pattern, weight, why in AUTHORITY:
+            for i, m in enumerate(pattern.finditer(low)):
+                if i >= 10:
+                    break
+                near_ai = _AI_NEAR.search(low, max(0, m.start() - 200), m.end() + 200)
+                hits.append(ActionHit("authority-claim", weight + (0.1 if near_ai else 0),
+                                      m.start(), m.end(),
+                                      why + ("; automated readers are named" if near_ai else ""),
+                                      {}))
+    return hits
