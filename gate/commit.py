@@ -18,7 +18,7 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Any, Protocol
 
-from gate import __version__, brake, report
+from gate import __version__, brake, containers, report
 from gate.corpus import CorpusResult
 from gate.errors import OutputError
 from gate.findings import Finding
@@ -140,7 +140,8 @@ def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
             for slim in chunk:
                 reporter.advance(slim.path)
         removed_report, rows = _removals(run, corpus)
-        unmatched = sorted(set(manifest.records) - set(seen_ids.values()))
+        unmatched = sorted(set(manifest.records) - set(seen_ids.values()) -
+                           {containers.container_of(p) for p in seen_ids.values()})
         summary = tally.summary(removed_report)
         brake.check(mode=run.mode, accepted_before=len(stored), inbox_documents=len(slims),
                     removing=sum(summary["changes"].get(k, 0) for k in ("remove", "superseded")),

@@ -22,6 +22,7 @@ from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
+from gate import containers
 from gate.checks.base import Document, RunContext
 from gate.cluster import executor
 from gate.commit import Output, Reporter
@@ -30,7 +31,7 @@ from gate.evaluation import Releases, evaluate_document, extraction_of
 from gate.extract.model import Extracted
 from gate.extract.pool import Failure
 from gate.intake import Intake, read_entry
-from gate.manifest import Manifest
+from gate.manifest import Manifest, ManifestRecord
 from gate.policy import LoadedPolicy
 from gate.record import Slim, doc_record, slim
 from gate.templates import Page, learn, removal, removal_key, site_of
@@ -60,6 +61,7 @@ class _Item:
     index: int
     entry: Entry
     intake: Intake
+    record: ManifestRecord | None = None
     cache_key: str | None = None
     extracted: Extracted | None = None
     measures: dict[str, Any] = field(default_factory=dict)
@@ -78,7 +80,7 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
     the workers' seconds per stage (for benchmarks)."""
     state = output.state
     params = params_of(loaded)
-    entries = list(walk(inbox))
+    entries = list(containers.expand(inbox, walk(inbox), manifest))  # WARC, mbox: records
     reporter.stage("extracting", len(entries))
     cache_print = params.fingerprint()
     known = state.entries()
@@ -100,7 +102,7 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
 
     def evaluated(item: _Item) -> None:
         assert item.extracted is not None
-        record = manifest.get(item.entry.path)
+        record = item.record
         document = Document(path=item.entry.path, kind=item.entry.kind,
                             size=item.intake.size, sha256=item.intake.sha256,
                             manifest=record, extracted=item.extracted,
@@ -148,9 +150,12 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
 
     def tasks():
         for index, entry in enumerate(entries):
-            intake = read_entry(inbox, entry, loaded.policy.limits.max_bytes)
-            record = manifest.get(entry.path)
-            item = _Item(index=index, entry=entry, intake=intake,
+            max_bytes = loaded.policy.limits.max_bytes
+            if isinstance(entry, containers.Member):
+                intake, record = containers.read(inbox, entry, max_bytes, manifest)
+            else:
+                intake, record = read_entry(inbox, entry, max_bytes), manifest.get(entry.path)
+            item = _Item(index=index, entry=entry, intake=intake, record=record,
                          site=site_of(record.source_url if record else None))
             if intake.problem is not None:
                 item.extracted = Extracted(type=None, problem=intake.problem,

@@ -19,7 +19,7 @@ from datetime import datetime
 from pathlib import Path
 from typing import Any
 
-from gate import checks
+from gate import checks, containers
 from gate.checks.base import Document, RunContext
 from gate.corpus import run_corpus_checks
 from gate.discovery import Entry, display_name
@@ -71,12 +71,18 @@ def explain(file: Path, loaded: LoadedPolicy, *, record: ManifestRecord | None,
             against: Path | None = None) -> Explanation:
     """Extract, measure and evaluate one file under ``loaded``."""
     file = Path(file)
-    if not file.exists() and not file.is_symlink():
-        raise InboxError(f"{file} does not exist.")
     limits = loaded.policy.limits
     rel = inbox_path or display_name(file.name)
-    entry = _entry(file)
-    intake = read_entry(file.parent, entry, limits.max_bytes)
+    # a record of a WARC archive or an mbox (ARCHIVE#record-NNNNN): ``record`` is then the
+    # container's manifest line, as in a run
+    found = None if os.path.lexists(file) else containers.find(file, record)
+    entry: Entry
+    if found is not None:
+        folder, entry, manifest = found
+        intake, record = containers.read(folder, entry, limits.max_bytes, manifest)
+    else:
+        entry = _entry(file)
+        intake = read_entry(file.parent, entry, limits.max_bytes)
     params = params_of(loaded)
     measures: dict[str, Any] = {}
     errors: dict[str, str] = {}

@@ -27,7 +27,7 @@ from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
-from gate import redact
+from gate import redact, signing
 from gate.bounded import InputFileProblem, lines
 from gate.errors import ManifestError
 
@@ -50,6 +50,10 @@ class ManifestRecord:
     retrieved_at: str | None = None
     published_at: str | None = None
     extra: dict[str, Any] = field(default_factory=dict, compare=False)
+    signature: dict[str, Any] | None = field(default=None, compare=False)  # gate.signing
+    # digests checked when a container was read (gate.containers): the container file
+    # against this line's sha256, a WARC record's payload against WARC-Payload-Digest
+    digests: tuple[dict[str, Any], ...] = field(default=(), compare=False)
 
     def to_json(self) -> dict[str, Any]:
         out: dict[str, Any] = {"line": self.line}
@@ -59,6 +63,10 @@ class ManifestRecord:
                 out[name] = redact.url(value) if name == "source_url" else value
         if self.extra:
             out["extra"] = self.extra
+        if self.signature is not None:
+            out["signature"] = self.signature
+        if self.digests:
+            out["digests"] = list(self.digests)
         return out
 
 
@@ -93,9 +101,13 @@ def parse(text: str, source: str) -> Manifest:
     return _parse(enumerate(data.split(b"\n"), 1), source, hashlib.sha256(data))
 
 
-def _parse(numbered: Any, source: str, digest: Any) -> Manifest:
+def _parse(numbered: Any, source: str, digest: Any,
+           detached: tuple[Any, ...] | None = None) -> Manifest:
+    """``detached``: a detached signature over the whole file and its name (gate.signing)."""
     records: dict[str, ManifestRecord] = {}
+    batches = signing.Batches()
     for number, raw in numbered:
+        batches.take(raw, number)
         if digest is not None and number > 1:
             digest.update(b"\n")
         if digest is not None:
@@ -108,6 +120,13 @@ def _parse(numbered: Any, source: str, digest: Any) -> Manifest:
                                 "write the manifest as UTF-8 JSON lines.") from None
         if number == 1:
             line = line.lstrip("\ufeff")
+        if '"signature"' in line:  # closes a signed batch of the lines above it
+            problem = batches.seal(line, number)
+            if problem == "":
+                continue
+            if problem is not None:
+                raise ManifestError(f"{where}: {problem}.")
+        batches.add(raw)
         if not line.strip():
             continue
         record = _record(line, number, where)
@@ -115,6 +134,10 @@ def _parse(numbered: Any, source: str, digest: Any) -> Manifest:
             raise ManifestError(f"{where}: path {record.path!r} is listed twice (first at "
                                 f"line {records[record.path].line}).")
         records[record.path] = record
+        batches.member(record.path)
+    if detached is not None:
+        batches.detached(*detached)
+    records = batches.apply(records)
     return Manifest(source=source, records=records,
                     sha256=digest.hexdigest() if digest is not None else None)
 
@@ -177,7 +200,8 @@ def load(path: Path, default: bool = False) -> Manifest:
     what = f"the inbox's {DEFAULT_NAME}" if default else "--manifest"
     digest = hashlib.sha256()
     try:
-        return _parse(lines(path, MAX_BYTES, MAX_LINE_BYTES), str(path), digest)
+        return _parse(lines(path, MAX_BYTES, MAX_LINE_BYTES), str(path), digest,
+                      signing.detached_signature(path))
     except InputFileProblem as err:
         raise ManifestError(f"cannot read the manifest {path} ({what}): {err}. The manifest "
                             "must be a regular file of JSON lines.") from None

@@ -22,6 +22,7 @@ import shutil
 from pathlib import Path
 from typing import Any
 
+from gate import provjson
 from gate.state import State
 
 FOLDERS = ("accepted", "quarantine")
@@ -162,6 +163,11 @@ class Placer:
         record = json.dumps(payload["record"], indent=2, sort_keys=True, ensure_ascii=False)
         write_file(build / record_name, record.encode("utf-8", "surrogatepass") + b"\n",
                    sync=False)
+        if target == "accepted":  # the same facts in W3C PROV-JSON (gate.provjson)
+            prov = json.dumps(provjson.from_record(payload["record"]), indent=2, sort_keys=True,
+                              ensure_ascii=False)
+            write_file(build / provjson.FILE_NAME, prov.encode("utf-8", "surrogatepass") + b"\n",
+                       sync=False)
         return build
 
     def install(self, doc_id: str, target: str, build: Path | None) -> None:

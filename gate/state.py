@@ -432,6 +432,11 @@ def open_state(path: Path) -> State:
         conn.execute("PRAGMA synchronous=FULL")
         conn.execute("PRAGMA foreign_keys=ON")
         app_id = conn.execute("PRAGMA application_id").fetchone()[0]
+        # a run killed while it created the file leaves an SQLite file with no tables and
+        # no application id yet: that is an unfinished start, not someone else's database
+        if existed and app_id == 0 and \
+                conn.execute("SELECT count(*) FROM sqlite_master").fetchone()[0] == 0:
+            existed = False
     except sqlite3.DatabaseError as err:
         raise StateError(
             f"{path} is not a gate state database ({err}). It may be damaged or belong to "

@@ -16,7 +16,7 @@ from typing import Any
 
 from gate import __version__
 from gate import checks
-from gate.extract import extract
+from gate.extract import EXTRACT_VERSION, extract
 from gate.templates import TEMPLATES_VERSION, block_summary, compose
 
 
@@ -31,7 +31,7 @@ class Params:
 
     def fingerprint(self) -> str:
         """Identifies gate's version, the measurements' versions and these limits."""
-        material = {"gate": __version__, "params": self.__dict__,
+        material = {"gate": __version__, "extract": EXTRACT_VERSION, "params": self.__dict__,
                     "templates": TEMPLATES_VERSION,
                     "measures": {c.id: c.measure_version for c in checks.all_checks()
                                  if c.measure is not None}}
@@ -89,5 +89,7 @@ def warm_up() -> None:
 
     langid.profiles()  # about 20 MB of arrays, shared with the forked workers
     import gate.extract.html
+    import gate.extract.mail
+    import gate.extract.office
     import gate.extract.pdf
     import gate.extract.text  # noqa: F401

@@ -27,7 +27,9 @@ import json
 import os
 import shutil
 import struct
+import sys
 import zlib
+import dataclasses
 from dataclasses import dataclass, field
 from datetime import UTC, datetime
 from email.utils import format_datetime
@@ -37,6 +39,8 @@ import fpdf
 from fpdf import FPDF
 
 ROOT = Path(__file__).resolve().parent
+sys.path.insert(0, str(ROOT.parent))
+from sample_docs import formats_demo  # noqa: E402  (signed batches, office, mail, WARC)
 INBOX = ROOT / "inbox"
 AS_OF = "2026-12-01T00:00:00Z"
 POLICY = "policies/demo.yaml"
@@ -305,6 +309,15 @@ class Doc:
     decision: str = "accepted"
     reasons: list[str] = field(default_factory=list)
     warnings: list[str] = field(default_factory=list)
+    batch: str | None = None  # the signed manifest batch holding its line (formats_demo)
+    tamper: tuple[str, str] | None = None  # (old, new) applied to its line after signing
+    parts: list[Doc] | None = None  # a container's records: Doc(path suffix, None, note...)
+
+    def outcomes(self) -> list[Doc]:
+        """The report's documents this entry stands for: itself, or a container's records."""
+        if self.parts is None:
+            return [self]
+        return [dataclasses.replace(part, path=self.path + part.path) for part in self.parts]
 
     def record(self) -> dict[str, str] | None:
         if not self.in_manifest:
@@ -745,7 +758,7 @@ def documents() -> list[Doc]:
             source_url=f"{PORTAL}/exports/stops.txt", published_at="2026-11-20",
             **q("format.too-large")),
     ]
-    return docs
+    return docs + formats_demo.documents(Doc, q)
 
 
 # A manifest record whose file is not in the inbox (the report lists it as unmatched).
@@ -769,10 +782,16 @@ def write_inbox(docs: list[Doc]) -> None:
         else:
             assert doc.data is not None
             target.write_bytes(doc.data)
-    records = [r for r in (d.record() for d in docs) if r is not None] + [UNMATCHED]
-    records.sort(key=lambda r: r["path"])
-    (INBOX / "manifest.jsonl").write_text(
-        "".join(json.dumps(r, ensure_ascii=False) + "\n" for r in records), encoding="utf-8")
+    (INBOX / "manifest.jsonl").write_text(manifest_text(docs), encoding="utf-8")
+
+
+def manifest_text(docs: list[Doc]) -> str:
+    """Signed batches first (formats_demo.BATCHES, each closed by its signature line), then
+    every other record sorted by path: those lines are unsigned."""
+    signed = formats_demo.signed_batches(docs, lambda r: json.dumps(r, ensure_ascii=False))
+    records = [r for r in (d.record() for d in docs if d.batch is None) if r is not None]
+    records = sorted(records + [UNMATCHED], key=lambda r: r["path"])
+    return signed + "".join(json.dumps(r, ensure_ascii=False) + "\n" for r in records)
 
 
 def expected(docs: list[Doc]) -> dict:
@@ -785,7 +804,7 @@ def expected(docs: list[Doc]) -> dict:
         "documents": {
             d.path: {"decision": d.decision, "reasons": sorted(d.reasons),
                      "warnings": sorted(d.warnings), "lang": d.lang, "note": d.note}
-            for d in sorted(docs, key=lambda d: d.path)},
+            for d in sorted(outcomes(docs), key=lambda d: d.path)},
     }
 
 
@@ -811,6 +830,8 @@ saying where each came from. The demo policy (`policies/demo.yaml`) trusts:
 | the partner operator's timetable site `fahrplan.example.net` | `domain` | 2 |
 | the public part of the staff wiki, `https://wiki.example.org/public/` (documents older than 180 days are stale) | `url_prefix`, `max_age_days: 180` | 1 |
 | files staff drop into `local/` without a URL | `path` | 2 |
+| service notices from `notices.example.org`, whose manifest lines must be signed by the notice desk's key (`policies/keys/notice-desk.allowed_signers`) | `domain`, `signers` | 2 |
+| the partner's notice relay `depot-feed.example.net`, with its own key written in the policy | `domain`, `signers` | 1 |
 
 and denies `paste.example.net` (and everything below it) and the unreviewed
 `drafts.docs.example.org`.
@@ -834,10 +855,18 @@ Then look at `demo-out/report.json`, and at `demo-out/accepted/<id>/` and
   `expected.json` sit outside it so they are not documents themselves).
   `inbox/format/link-outside.html` is a symbolic link pointing out of the inbox.
   The manifest also holds one record, `portal/withdrawn-notice.html`, with no file: the
-  report lists it under `manifest_unmatched`.
+  report lists it under `manifest_unmatched`. It begins with three signed batches, each
+  closed by a `{"signature": ...}` line made with `ssh-keygen -Y sign -n gate-manifest`
+  (the demo keys are derived from published seeds in `formats_demo.py`: demo keys, not
+  secrets); every line after the last signature line is unsigned.
+  `inbox/crawl/portal-crawl.warc.gz` (a web archive) and `inbox/mail/desk-archive.mbox`
+  are containers: the report lists their records as `...warc.gz#record-00001` and
+  `...mbox#message-00001`, not the files themselves.
 - `expected.json`: the intended outcome of every document (decision, reason codes,
   warning codes, a note). `tests/test_demo.py` runs the real pipeline and checks every row.
-- `make_samples.py`: generates all of the above, deterministically
+- `make_samples.py` (with `formats_demo.py` for the signed batches, office files, mails
+  and the web archive; it needs OpenSSH's `ssh-keygen` to sign): generates all of the
+  above and `policies/keys/notice-desk.allowed_signers`, deterministically
   (`.venv/bin/python sample_docs/make_samples.py`). The generated files are committed, so
   the demo runs from a fresh clone without it. Do not edit the inbox, the manifest,
   `expected.json` or this README by hand: change the generator and re-run it.
@@ -853,7 +882,7 @@ README_TAIL = """
 ## Outcomes not shown here
 
 Some codes need hostile or huge inputs, or a broken environment, and are exercised by
-unit tests rather than by the demo: `format.bomb`, `format.timeout`, `format.memory`,
+unit tests rather than by the demo: `format.timeout`, `format.memory`,
 `format.crashed`, `format.unreadable`, `format.undecodable`, `integrity.unhashable` and
 the `*.internal-error` codes. `format.type-not-allowed` needs a policy that narrows
 `format.allowed_types` (see `policies/regulated-archive.yaml`), and
@@ -862,9 +891,14 @@ one.
 """
 
 
+def outcomes(docs: list[Doc]) -> list[Doc]:
+    return [outcome for doc in docs for outcome in doc.outcomes()]
+
+
 def readme(docs: list[Doc]) -> str:
     rows = ["| document | lang | decision | reasons | warnings | what it shows |",
             "|---|---|---|---|---|---|"]
+    docs = outcomes(docs)
     for d in sorted(docs, key=lambda d: d.path):
         reasons = ", ".join(f"`{c}`" for c in sorted(d.reasons)) or "-"
         warnings = ", ".join(f"`{c}`" for c in sorted(d.warnings)) or "-"
@@ -886,6 +920,7 @@ def main() -> None:
         json.dumps(expected(docs), indent=2, ensure_ascii=False, sort_keys=True) + "\n",
         encoding="utf-8")
     (ROOT / "README.md").write_text(readme(docs), encoding="utf-8")
+    formats_demo.write_signers(ROOT.parent / "policies")
     print(f"wrote {len(docs)} documents to {INBOX.relative_to(ROOT.parent)}/")
 
 

@@ -148,7 +148,8 @@ def test_every_document_ends_in_exactly_one_place(tmp_path):
     assert before == after  # the inbox is never modified
     first = next(d for d in report(tmp_path / "out")["documents"] if d["decision"] == "accepted")
     entry = tmp_path / "out" / "accepted" / first["id"]
-    assert sorted(os.listdir(entry)) == ["original", "provenance.json", "text.txt"]
+    assert sorted(os.listdir(entry)) == ["original", "provenance.json", "provenance.prov.json",
+                                         "text.txt"]
     prov = json.loads((entry / "provenance.json").read_text())
     assert prov["policy"]["name"] == "pipeline-test" and prov["run"]["as_of"] == \
         "2026-12-01T00:00:00Z"
@@ -238,6 +239,28 @@ def test_foreign_state_file_is_refused_not_overwritten(tmp_path):
     with pytest.raises(StateError, match="not a gate state database"):
         go(tmp_path, inbox, tmp_path / "out")
     assert (state / "gate.sqlite").read_bytes().startswith(b"this is not")
+
+
+def test_a_state_file_left_empty_by_a_killed_start_is_initialised(tmp_path):
+    """Killed between creating gate.sqlite (WAL mode set) and writing its schema."""
+    import sqlite3
+    inbox = make_inbox(tmp_path)
+    state = tmp_path / "out" / "state"
+    state.mkdir(parents=True)
+    conn = sqlite3.connect(state / "gate.sqlite")
+    conn.execute("PRAGMA journal_mode=WAL")
+    conn.close()
+    assert (state / "gate.sqlite").stat().st_size > 0
+    go(tmp_path, inbox, tmp_path / "out")
+    assert report(tmp_path / "out")["summary"]["documents"] == 20
+    foreign = tmp_path / "other" / "state"
+    foreign.mkdir(parents=True)
+    conn = sqlite3.connect(foreign / "gate.sqlite")
+    conn.execute("CREATE TABLE notes (line TEXT)")  # someone's database: still refused
+    conn.commit()
+    conn.close()
+    with pytest.raises(StateError, match="not a gate state database"):
+        go(tmp_path, inbox, tmp_path / "other")
 
 
 def test_second_concurrent_run_is_refused(tmp_path):

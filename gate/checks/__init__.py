@@ -12,13 +12,15 @@ here; add one row to docs/checks.md. See DEVELOPERS.md.
 from __future__ import annotations
 
 from gate.checks import format as format_check
-from gate.checks import duplicate, freshness, injection, integrity, language, quality, source
+from gate.checks import duplicate, freshness, injection, integrity, language, quality, \
+    signature, source
 from gate.checks.base import CorpusCheck, DocumentCheck
 
 DOCUMENT_CHECKS: tuple[DocumentCheck, ...] = (
     format_check.CHECK,
     source.CHECK,
     integrity.CHECK,
+    signature.CHECK,
     freshness.CHECK,
     language.CHECK,
     quality.CHECK,

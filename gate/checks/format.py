@@ -4,11 +4,12 @@ Always on. Holds entries that are not regular files (links are never followed), 
 cannot be read, empty files, content gate does not read (images, archives, executables,
 other XML), text in no detectable encoding, broken or encrypted PDFs, PDFs over
 ``limits.max_pages``, files over ``limits.max_bytes``, HTML nested deeper than
-``limits.max_nesting``, decompression bombs, documents whose extraction ran out of CPU time
-(``limits.timeout_s``; CPU time, so the load of the machine does not matter) or memory
-(``limits.memory_mb``) or crashed its worker, and documents with no text after extraction.
-Those mean the document could not be evaluated, so they always quarantine, whatever
-``format.action`` says.
+``limits.max_nesting`` (or office, e-book and mail documents nested beyond their parsers'
+bounds), decompression bombs (a PDF stream or a ZIP container inflating past its caps),
+documents whose extraction ran out of CPU time (``limits.timeout_s``; CPU time, so the load
+of the machine does not matter) or memory (``limits.memory_mb``) or crashed its worker, and
+documents with no text after extraction. Those mean the document could not be evaluated,
+so they always quarantine, whatever ``format.action`` says.
 
 Two findings are softer and follow ``format.action``: the file name's extension promising
 another type than the content (``report.pdf`` that is HTML), and an HTML page whose declared
@@ -32,6 +33,7 @@ from typing import Any, Literal
 from pydantic import Field
 
 from gate.checks.base import Document, DocumentCheck, RunContext
+from gate.extract import TYPES
 from gate.extract.sniff import expected_type
 from gate.findings import Finding, define
 from gate.settings import Section, Strict
@@ -49,7 +51,8 @@ UNDECODABLE = define("format.undecodable", "text in no detectable character enco
                      "{detail}", fail_closed=True)
 BROKEN = define("format.broken", "the file is damaged or malformed", "{detail}",
                 fail_closed=True)
-ENCRYPTED = define("format.encrypted", "an encrypted PDF that cannot be opened", "{detail}",
+ENCRYPTED = define("format.encrypted", "an encrypted document that cannot be opened",
+                   "{detail}",
                    fail_closed=True)
 TOO_LARGE = define("format.too-large", "larger than limits.max_bytes",
                    "the file has {size} bytes, more than limits.max_bytes {max_bytes}",
@@ -107,8 +110,8 @@ class LimitsSettings(Strict):
 class FormatSettings(Section):
     """Which document types are accepted; the action for the softer findings."""
 
-    allowed_types: tuple[Literal["html", "pdf", "text"], ...] = Field(
-        ("html", "pdf", "text"), min_length=1, description="Document types accepted.")
+    allowed_types: tuple[Literal[TYPES], ...] = Field(  # type: ignore[valid-type]
+        TYPES, min_length=1, description="Document types accepted.")
 
 
 def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding]:

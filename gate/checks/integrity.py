@@ -7,6 +7,12 @@ manifest entry carries no digest is held. A digest that is not 64 hex digits is 
 malformed rather than ignored. A mismatch means the file changed after it was recorded:
 tampering, a truncated download or a stale manifest.
 
+Records of a container (a WARC archive's responses, an mbox's messages; see
+gate/containers.py) are checked against the digests that vouch for them: a WARC record's
+payload against its ``WARC-Payload-Digest`` (``integrity.digest-mismatch``), and the
+container file against the ``sha256`` of its own manifest line. A record with a matching
+digest counts as checksummed for ``require_checksum``.
+
 Example::
 
     integrity:
@@ -32,6 +38,9 @@ MISSING = define("integrity.missing", "no sha256 in the manifest, but one is req
                  "this document")
 MALFORMED = define("integrity.malformed", "the manifest's sha256 is not 64 hex digits",
                    "the manifest's sha256 {value!r} is not a SHA-256 digest (64 hex digits)")
+DIGEST_MISMATCH = define("integrity.digest-mismatch", "a container's digest does not match",
+                         "the {algorithm} digest of {over} is {actual} but {claimed_by} says "
+                         "{claimed}; the bytes changed after they were recorded")
 UNHASHED = define("integrity.unhashable", "the document's bytes could not be read to hash",
                   "the document's bytes could not be read, so its SHA-256 is unknown",
                   fail_closed=True)
@@ -49,6 +58,9 @@ class IntegritySettings(Section):
 def evaluate(document: Document, policy: Any, run: RunContext) -> list[Finding] | None:
     settings: IntegritySettings = policy.integrity
     expected = document.manifest.sha256 if document.manifest else None
+    digests = document.manifest.digests if document.manifest else ()
+    if digests:  # a container's record: its digests were checked when it was read
+        return [DIGEST_MISMATCH(**d) for d in digests if not d.get("valid")]
     if expected is None:
         return [MISSING()] if settings.require_checksum else []
     if not _HEX64.match(expected):

@@ -39,7 +39,7 @@ from typing import Annotated, Any, Union
 
 from pydantic import Discriminator, Field, Tag, field_validator
 
-from gate import redact, urls
+from gate import redact, signing, urls
 from gate.checks.base import Document, DocumentCheck, RunContext, once_per_document
 from gate.findings import Finding, define
 from gate.manifest import normalize_path
@@ -107,6 +107,16 @@ class _AllowRule(_Rule):
         None, description="Policy sections of the per-document checks (every one but "
         "sources) that apply differently to the documents this rule admits; merged onto "
         "the policy.", examples=[{"language": {"allowed": ["en", "fr"]}}])
+    signers: tuple[str, ...] = Field(
+        (), description="Keys trusted to sign the manifest lines of the documents this rule "
+        "admits (the signature check): OpenSSH allowed-signers or public-key lines, or "
+        "paths of allowed_signers files relative to the policy file.",
+        examples=[["collector@example.org ssh-ed25519 AAAAC3NzaC1lZDI1NTE5AAAA..."]])
+
+    @field_validator("signers")
+    @classmethod
+    def _signers(cls, value: tuple[str, ...]) -> tuple[str, ...]:
+        return signing.validate_signers(value)
 
 
 class DomainAllow(_AllowRule):

@@ -1,6 +1,7 @@
 """Extraction: bytes in, text and metadata out, by content type.
 
-:func:`extract` sniffs the bytes and dispatches to the HTML, PDF or text extractor. It is
+:func:`extract` sniffs the bytes and dispatches to the HTML, PDF, text, office/e-book
+(:mod:`.office`) or e-mail (:mod:`.mail`) extractor. It is
 meant to run inside a worker process (see :mod:`gate.extract.pool`): parsers of untrusted
 bytes may hang or exhaust memory, and only a process boundary can stop them.
 """
@@ -8,10 +9,16 @@ bytes may hang or exhaust memory, and only a process boundary can stop them.
 from __future__ import annotations
 
 from gate.extract.model import Block, Extracted, Extraction, failed
+from gate.extract.office import TYPES as OFFICE_TYPES
 from gate.extract.sniff import sniff
 from gate.tokens import block_hash
 
-__all__ = ["Extracted", "Extraction", "extract"]
+__all__ = ["EXTRACT_VERSION", "TYPES", "Extracted", "Extraction", "extract"]
+
+# Every type extraction produces, in the order the policy reference lists them.
+TYPES = ("html", "pdf", "text", *OFFICE_TYPES, "email", "mbox")
+# Part of the cache key: bump when an extractor's output changes for the same bytes.
+EXTRACT_VERSION = 4
 
 
 def extract(data: bytes, *, max_pages: int, max_nesting: int,
@@ -32,9 +39,21 @@ def extract(data: bytes, *, max_pages: int, max_nesting: int,
     elif sniffed.type == "text":
         from gate.extract.text import extract_text
         result = extract_text(data, sniffed.encoding)
+    elif sniffed.type in OFFICE_TYPES:
+        from gate.extract.office import extract_office
+        result = extract_office(data, sniffed.type, max_pages)
+    elif sniffed.type in ("email", "mbox"):
+        from gate.extract.mail import extract_mail
+        result = extract_mail(data, sniffed.type)
+    elif sniffed.type == "encrypted-office":
+        return failed(None, "encrypted", "the file is a password-protected office document "
+                                         "(an OLE2 container holding an encrypted package), so "
+                                         "its text cannot be read", encrypted=True)
     else:
         return failed(None, "unsupported", f"the content is {sniffed.detail}; gate reads "
-                                           "PDF, HTML and plain text", sniffed=sniffed.detail)
+                                           "PDF, HTML, plain text, office documents (DOCX, "
+                                           "PPTX, XLSX, ODT), EPUB and e-mail",
+                      sniffed=sniffed.detail)
     summary = result.summary
     if summary.ok and not result.text.strip():
         return failed(summary.type, "empty-text", "extraction found no text in the document",

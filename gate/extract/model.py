@@ -98,6 +98,16 @@ class Extraction:
     blocks: tuple[Block, ...] = ()
 
 
+class Refused(Exception):
+    """Raised inside an extractor for input it will not read; ``problem`` is in PROBLEMS."""
+
+    def __init__(self, problem: str, detail: str):
+        super().__init__(detail)
+        assert problem in PROBLEMS, problem
+        self.problem = problem
+        self.detail = detail
+
+
 def failed(type_: str | None, problem: str, detail: str, sniffed: str = "",
            **more: Any) -> Extraction:
     """An extraction that did not produce usable text."""

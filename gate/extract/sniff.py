@@ -53,7 +53,8 @@ BOMS = (
 
 @dataclass(frozen=True)
 class Sniffed:
-    """The result of sniffing: ``type`` is pdf, html, text, xml, binary or empty."""
+    """The result of sniffing: ``type`` is pdf, html, text, xml, binary or empty, or one of
+    the office, e-book and mail types (docx, pptx, xlsx, odt, epub, email, mbox)."""
 
     type: str
     detail: str = ""
@@ -115,6 +116,9 @@ def sniff(data: bytes) -> Sniffed:
             return _xml(head, encoding)
         return Sniffed("text", encoding=encoding)
     head = data[:HEADER]
+    container = _container(data)
+    if container is not None:
+        return container
     for magic, name in _MAGIC:
         if head.startswith(magic):
             return Sniffed("binary", name)
@@ -125,7 +129,22 @@ def sniff(data: bytes) -> Sniffed:
         return Sniffed("html")
     if head.lstrip(_WHITESPACE).startswith(b"<?xml"):
         return _xml(head, None)
+    from gate.extract.mail import sniff_mail
+    mail = sniff_mail(data[:65536])
+    if mail is not None:
+        return Sniffed(mail)
     return Sniffed("text")
+
+
+def _container(data: bytes) -> Sniffed | None:
+    """Office documents and e-books (ZIP), password-protected OOXML (OLE2)."""
+    from gate.extract import office
+    if data.startswith(b"PK\x03\x04"):
+        kind = office.kind_of(data)
+        return Sniffed(kind) if kind is not None else None
+    if data.startswith(b"\xd0\xcf\x11\xe0\xa1\xb1\x1a\xe1") and office.ole_encrypted(data):
+        return Sniffed("encrypted-office", "a password-protected office document")
+    return None
 
 
 def _xml(head: bytes, encoding: str | None) -> Sniffed:
@@ -140,6 +159,8 @@ EXTENSION_TYPES = {
     ".html": "html", ".htm": "html", ".xhtml": "html", ".shtml": "html",
     ".pdf": "pdf",
     ".txt": "text", ".text": "text", ".md": "text", ".markdown": "text", ".rst": "text",
+    ".docx": "docx", ".pptx": "pptx", ".xlsx": "xlsx", ".odt": "odt", ".epub": "epub",
+    ".eml": "email", ".mbox": "mbox",
 }
 
 

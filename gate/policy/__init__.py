@@ -27,7 +27,7 @@ from typing import Any
 
 from pydantic import BaseModel, ValidationError
 
-from gate import checks
+from gate import checks, signing
 from gate.bounded import InputFileProblem, read_regular
 from gate.errors import PolicyError
 from gate.policy import yamlload
@@ -230,7 +230,11 @@ def _read_layers(path: Path, chain: tuple[Path, ...] = ()) -> tuple[dict, dict, 
         raise PolicyError(str(path), [f"the file is not UTF-8 (byte {err.start})"]) from None
     data, lines = _parse_text(text, str(path))
     where = {key: (str(path), line) for key, line in lines.items()}
-    files = [(str(path), raw)]
+    signer_files, problems = signing.expand_signer_files(data, path.parent)
+    if problems:
+        raise PolicyError(str(path), [f"line {lines.get(loc, 1)}: {_dotted(loc)}: {message}"
+                                      for loc, message in problems])
+    files = [(str(path), raw), *signer_files]
     base_ref = data.get("extends")
     if base_ref is None:
         return data, where, files

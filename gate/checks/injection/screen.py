@@ -420,6 +420,10 @@ def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]
                 if m.group(1).strip():
                     sources.append(Source(m.group(1), "an HTML comment in the text", "comment",
                                           "text"))
+    # Office documents, e-books and mail: their extractors list the hidden pieces
+    # (gate.extract.hidden), scanned as concealed markup.
+    for piece in extraction.extras.get("hidden", ()):
+        sources.append(Source(piece["text"], piece["where"], piece["technique"], "html"))
     return sources, links, stats
 
 
