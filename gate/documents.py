@@ -1,8 +1,17 @@
 """The per-document stage of a run: every inbox document read once (:mod:`gate.intake`),
 staged, extracted and measured in a worker or found in the digest-keyed cache, then
-evaluated (:mod:`gate.evaluation`) as its result arrives, in whatever order the workers
-finish. Each document's :class:`~gate.record.DocRecord` goes to the state at once; only
-its :class:`~gate.record.Slim` stays in memory for the corpus checks.
+evaluated (:mod:`gate.evaluation`). Each document's :class:`~gate.record.DocRecord` goes
+to the state at once; only its :class:`~gate.record.Slim` stays in memory for the corpus
+checks.
+
+Site templates (:mod:`gate.templates`) sit between extraction and the checks. A document
+without a site (no usable ``source_url``) is evaluated as its result arrives. A page of a
+site waits, as its block hashes only, until every page of the batch is extracted; then
+each site's template is learnt from the batch (and, in an incremental run, the stored
+corpus), and a page holding template blocks is extracted again with them removed, so the
+checks measure, and the indexer receives, the page's own text. That result is cached
+under the digest key plus the name of the removed set, so a resumed run, or a run whose
+batch teaches the same template, reuses it, and a different template never does.
 """
 
 from __future__ import annotations
@@ -25,6 +34,7 @@ from gate.intake import Intake, read_entry
 from gate.manifest import Manifest, ManifestRecord
 from gate.policy import LoadedPolicy
 from gate.record import Slim, doc_record, slim
+from gate.templates import Page, learn, removal, removal_key, site_of
 from gate.work import Params, warm_up
 
 CACHE_BATCH = 64  # results written to the cache and the state per transaction, at least
@@ -56,15 +66,18 @@ class _Item:
     extracted: Extracted | None = None
     measures: dict[str, Any] = field(default_factory=dict)
     measure_errors: dict[str, str] = field(default_factory=dict)
+    site: str | None = None  # the host whose template it may carry (gate.templates)
+    page: Page | None = None  # the page's blocks, while it waits for its site's template
 
 
 def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, output: Output,
                     reporter: Reporter, ctx: RunContext, run_id: str, releases: Releases,
                     timings: dict[str, float], *, workers: int = 1,
-                    cluster: str | None = None) -> list[Slim]:
-    """Read, extract, measure and evaluate every document, streaming: each one's record
-    goes to the state as soon as it is evaluated, and only its Slim stays in memory.
-    ``timings`` gathers the workers' seconds per stage (for benchmarks)."""
+                    cluster: str | None = None, incremental: bool = False) -> list[Slim]:
+    """Read, extract, measure and evaluate every document: each one's record goes to the
+    state as soon as it is evaluated, and only its Slim stays in memory (pages of a site
+    wait for its template as block hashes, see the module docstring). ``timings`` gathers
+    the workers' seconds per stage (for benchmarks)."""
     state = output.state
     params = params_of(loaded)
     entries = list(containers.expand(inbox, walk(inbox), manifest))  # WARC, mbox: records
@@ -103,7 +116,37 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
         if len(doc_rows) >= CACHE_BATCH and (time.monotonic() - flushed[0] >= CACHE_PAUSE_S
                                              or len(doc_rows) >= 16 * CACHE_BATCH):
             flush()
+
+    waiting: list[_Item] = []
+
+    def arrived(item: _Item, blocks: dict[str, list[int]] | None) -> None:
+        """A document's extraction is known: evaluate it, or let it wait for its site."""
+        assert item.extracted is not None
         reporter.advance(item.entry.path)
+        if item.site is None or not blocks or item.measure_errors or not item.extracted.ok:
+            evaluated(item)
+            return
+        item.page = Page.of(f"{item.site} {item.extracted.type}", blocks)
+        item.measures = {}  # measured after learning, on the page's own text
+        waiting.append(item)
+
+    def received(item: _Item, result: Any) -> dict[str, list[int]]:
+        """A worker's result, into the cache unless a bug in gate; returns its blocks."""
+        item.extracted, item.measures, item.measure_errors = \
+            extraction_of(result, item.intake.data)
+        item.intake.data = None
+        if isinstance(result, dict):
+            for stage, seconds in result.get("timings", {}).items():
+                timings[stage] = timings.get(stage, 0.0) + seconds
+        bug = item.measure_errors or (isinstance(result, Failure) and result.kind == "error")
+        blocks = result.get("blocks", {}) if isinstance(result, dict) else {}
+        if not bug:  # a bug in gate is retried on the next run, not remembered
+            measured = not isinstance(result, dict) or result.get("measured", True)
+            cache_rows.append((item.cache_key, item.intake.sha256, item.extracted.to_json(),
+                               {"measures": item.measures, "errors": {}, "blocks": blocks,
+                                "measured": measured},
+                               result.get("text", "") if isinstance(result, dict) else ""))
+        return blocks
 
     def tasks():
         for index, entry in enumerate(entries):
@@ -112,7 +155,8 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
                 intake, record = containers.read(inbox, entry, max_bytes, manifest)
             else:
                 intake, record = read_entry(inbox, entry, max_bytes), manifest.get(entry.path)
-            item = _Item(index=index, entry=entry, intake=intake, record=record)
+            item = _Item(index=index, entry=entry, intake=intake, record=record,
+                         site=site_of(record.source_url if record else None))
             if intake.problem is not None:
                 item.extracted = Extracted(type=None, problem=intake.problem,
                                            problem_detail=intake.detail)
@@ -126,31 +170,77 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
                     not output.placer.has_original(placed[0], doc_id(entry.path)):
                 output.blobs.put(intake.sha256, intake.data)
             cached = state.cache_meta(item.cache_key)
-            if cached is not None:
+            # a page of a site is first extracted for its blocks only (measured once its
+            # own text is known); such an entry serves no document without a site
+            if cached is not None and (item.site is not None or
+                                       cached[1].get("measured", True)):
                 item.extracted = Extracted.from_json(cached[0])
                 item.measures = cached[1].get("measures", {})
                 intake.data = None
-                evaluated(item)
+                arrived(item, cached[1].get("blocks"))
                 continue
             yield item
+
+    def cleaning(learnt: dict) -> Any:
+        """Pages holding template blocks, with their bytes, to be extracted again."""
+        for item in waiting:
+            drop = removal(item.page, learnt) if item.page is not None else ()
+            cached = state.cache_meta(item.cache_key) if not drop else None
+            if cached is not None and cached[1].get("measured", True):
+                item.measures = cached[1].get("measures", {})
+                evaluated(item)
+                continue
+            earlier = state.cache_text(item.cache_key)
+            key = f"{item.cache_key}:t{removal_key(drop)}" if drop else item.cache_key
+            cached = state.cache_meta(key) if drop else None
+            if cached is not None:
+                item.cache_key = key
+                item.extracted = Extracted.from_json(cached[0])
+                item.measures = cached[1].get("measures", {})
+                evaluated(item)
+                continue
+            item.cache_key = key
+            item.intake.data = output.placer.original(doc_id(item.entry.path),
+                                                      item.intake.sha256)
+            if item.intake.data is None:  # the staged copy vanished: fail closed
+                item.extracted = Extracted(type=item.extracted.type if item.extracted
+                                           else None, problem="unreadable",
+                                           problem_detail="its staged copy is missing")
+                evaluated(item)
+                continue
+            yield item, (item.entry.path, item.intake.data, params, drop, earlier)
 
     if not cluster:
         warm_up()
     with executor(cluster, workers, params) as pool:
         for item, result in pool.run(
-                (item, (item.entry.path, item.intake.data, params)) for item in tasks()):
-            item.extracted, item.measures, item.measure_errors = \
-                extraction_of(result, item.intake.data)
-            item.intake.data = None
-            if isinstance(result, dict):
-                for stage, seconds in result.get("timings", {}).items():
-                    timings[stage] = timings.get(stage, 0.0) + seconds
-            bug = item.measure_errors or (isinstance(result, Failure) and result.kind == "error")
-            if not bug:  # a bug in gate is retried on the next run, not remembered
-                cache_rows.append((item.cache_key, item.intake.sha256,
-                                   item.extracted.to_json(),
-                                   {"measures": item.measures, "errors": {}},
-                                   result.get("text", "") if isinstance(result, dict) else ""))
-            evaluated(item)
+                (item, (item.entry.path, item.intake.data, params) if item.site is None
+                 else (item.entry.path, item.intake.data, params, None))
+                for item in tasks()):
+            arrived(item, received(item, result))
+        flush()
+        if waiting:
+            learnt = learn([item.page for item in waiting if item.page is not None] +
+                           (_stored_pages(state, {doc_id(e.path) for e in entries})
+                            if incremental else []))
+            reporter.stage("removing site templates", None)
+            for item, result in pool.run(cleaning(learnt)):
+                item.page = None
+                received(item, result)
+                evaluated(item)
     flush()
     return [s for s in slims if s is not None]
+
+
+def _stored_pages(state: Any, batch: set[str]) -> list[Page]:
+    """The pages of the stored corpus (not in this batch) that can teach a site's
+    template: their blocks come from the cache entry of their text."""
+    pages = []
+    for row in state.corpus(sketches=False):
+        site = site_of(row["source_url"])
+        if site is None or row["doc_id"] in batch or not row["cache_key"]:
+            continue
+        cached = state.cache_meta(row["cache_key"])
+        if cached is not None and cached[1].get("blocks"):
+            pages.append(Page.of(f"{site} {cached[0].get('type')}", cached[1]["blocks"]))
+    return pages

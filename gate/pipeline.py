@@ -196,7 +196,8 @@ def _run(opts: RunOptions, inbox: Path, manifest: manifest_mod.Manifest, output:
     timings: dict[str, float] = {}
     releases = state.releases()
     slims = check_documents(inbox, manifest, loaded, output, reporter, ctx, run_id,
-                            releases, timings, workers=opts.workers, cluster=opts.cluster)
+                            releases, timings, workers=opts.workers, cluster=opts.cluster,
+                            incremental=opts.incremental)
     reporter.stage("comparing", None)
     stored = state.corpus(sketches=opts.incremental and output.index is None)
     corpus = run_corpus_checks(slims, stored, loaded.policy, seq=seq,

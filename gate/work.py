@@ -7,6 +7,7 @@ scheduler, needs to run; it never touches the file system.
 
 from __future__ import annotations
 
+import dataclasses
 import hashlib
 import json
 import time
@@ -16,6 +17,7 @@ from typing import Any
 from gate import __version__
 from gate import checks
 from gate.extract import EXTRACT_VERSION, extract
+from gate.templates import TEMPLATES_VERSION, block_summary, compose
 
 
 @dataclass(frozen=True)
@@ -30,21 +32,40 @@ class Params:
     def fingerprint(self) -> str:
         """Identifies gate's version, the measurements' versions and these limits."""
         material = {"gate": __version__, "extract": EXTRACT_VERSION, "params": self.__dict__,
+                    "templates": TEMPLATES_VERSION,
                     "measures": {c.id: c.measure_version for c in checks.all_checks()
                                  if c.measure is not None}}
         blob = json.dumps(material, sort_keys=True).encode("utf-8")
         return hashlib.sha256(blob).hexdigest()[:16]
 
 
-def process(task: tuple[str, bytes, Params]) -> dict[str, Any]:
-    """Extract and measure one document. Bad input is reported, never raised."""
-    _path, data, params = task
+def process(task: tuple[Any, ...]) -> dict[str, Any]:
+    """Extract and measure one document. Bad input is reported, never raised.
+
+    A fourth element names the page's site-template blocks (:mod:`gate.templates`): they
+    are removed from the text before it is measured, and the result is that text's. When
+    it is None, the page is only extracted for its blocks (its site's template is not
+    known yet) and nothing is measured. A fifth is the text that extraction gave before
+    (an HTML page's trafilatura text is then not computed again)."""
+    _path, data, params = task[:3]
+    template = task[3] if len(task) > 3 else ()
+    earlier = task[4] if len(task) > 4 else None
+    measure = template is not None
     started = time.perf_counter()
-    extraction = extract(data, max_pages=params.max_pages, max_nesting=params.max_nesting)
+    extraction = extract(data, max_pages=params.max_pages, max_nesting=params.max_nesting,
+                         main_text=earlier)
+    blocks = block_summary(extraction.blocks) if extraction.summary.ok else {}
+    removed: dict[str, Any] = {}
     timings = {"extract": time.perf_counter() - started}
+    if extraction.summary.ok and measure and template:
+        started = time.perf_counter()
+        extraction.text, removed = compose(extraction.text, extraction.blocks, template)
+        extraction.summary = dataclasses.replace(extraction.summary, template=removed,
+                                                 text_chars=len(extraction.text))
+        timings["templates"] = time.perf_counter() - started
     measures: dict[str, Any] = {}
     errors: dict[str, str] = {}
-    if extraction.summary.ok:
+    if extraction.summary.ok and measure:
         for check in checks.all_checks():
             if check.measure is None:
                 continue
@@ -58,7 +79,8 @@ def process(task: tuple[str, bytes, Params]) -> dict[str, Any]:
             timings[check.id] = time.perf_counter() - started
     # timings are for benchmarks only: they never reach the cache, decisions or the report
     return {"extracted": extraction.summary.to_json(), "text": extraction.text,
-            "measures": measures, "measure_errors": errors, "timings": timings}
+            "measures": measures, "measure_errors": errors, "timings": timings,
+            "blocks": blocks, "measured": measure}
 
 
 def warm_up() -> None:

@@ -5,15 +5,22 @@ earlier runs. Only documents that pass every other check compete to be kept, so 
 or denied copy never knocks out a good one; documents already held for other reasons are
 still compared with the keepers, so their reasons say they are duplicates too.
 
-How similarity is measured (in the worker): the text is normalised (NFKC, case-folded,
-punctuation to spaces), split into words, and turned into the set of word 5-grams (the
+How similarity is measured (in the worker): the text is the document's own (a site's
+template is removed first, see ``gate/templates.py``); it is normalised (Markdown link
+targets and inline tags dropped, NFKC, case-folded, punctuation to spaces, so headings,
+list items and table cells give the same words from HTML, PDF, text and Markdown), split
+into words, and turned into the set of word 5-grams (the
 shingles of Broder 1997, with w = 5 as in published corpus pipelines, for example FineWeb
 and RefinedWeb). A MinHash sketch of 256 permutations (datasketch, ``affine32`` scheme,
 seed 1; each shingle hashed to 32 bits from the CRC-32 of its words) estimates the Jaccard
 similarity of two shingle sets with a standard error of
 ``sqrt(J(1-J)/256)``, 0.025 at J = 0.8. Exact copies (same bytes, or same normalised text,
-whatever the format) are caught first by hash. Documents with fewer than ``min_shingles``
-shingles are compared only exactly, because sketches of tiny sets collide.
+whatever the format) are caught first by hash; only they are called exact copies, and
+when the text is the same but the bytes differ the finding says that it is the extracted
+text that is identical, how long it is, and that a shared text on different pages may be
+a site template. Everything else is a near-duplicate with its estimated Jaccard.
+Documents with fewer than ``min_shingles`` shingles are compared only exactly, because
+sketches of tiny sets collide.
 
 Candidates come from MinHash LSH with ``b`` bands of ``r`` rows chosen so that a pair at
 the threshold becomes a candidate with probability at least 0.9 and a pair 0.05 above it
@@ -38,7 +45,6 @@ from __future__ import annotations
 import difflib
 import hashlib
 import re
-import unicodedata
 import zlib
 from collections.abc import Callable, Sequence
 from dataclasses import dataclass, field
@@ -54,6 +60,9 @@ from gate.checks.base import CorpusCheck, CorpusOutcome, CorpusView
 from gate.extract.model import Extraction
 from gate.findings import Finding, define
 from gate.settings import Section
+from gate.tokens import words
+
+__all__ = ["CHECK", "words"]
 
 NUM_PERM = 256
 SEED = 1
@@ -62,7 +71,7 @@ SHINGLE = 5
 MIN_CANDIDATE_PROBABILITY = 0.995
 
 EXACT = define("duplicate.exact", "an exact copy of a kept document",
-               "this is an exact copy ({how}) of {keeper}, which is kept{why}")
+               "this is an exact copy ({how}) of {keeper}, which is kept{why}{caveat}")
 NEAR = define("duplicate.near", "a near-duplicate of a kept document",
               "this is a near-duplicate of {keeper} (estimated Jaccard {similarity:.2f}, "
               "threshold {threshold:.2f}), which is kept{why}{diverging}")
@@ -80,13 +89,6 @@ class DuplicatesSettings(Section):
     min_shingles: int = Field(20, ge=1, le=1_000_000, description="Documents with fewer "
                               "word 5-grams are only compared exactly.")
 
-
-_WORD = re.compile(r"[^\W_]+", re.UNICODE)
-
-
-def words(text: str) -> list[str]:
-    """The normalised words of a text: NFKC, case-folded, punctuation removed."""
-    return _WORD.findall(unicodedata.normalize("NFKC", text).casefold())
 
 
 @lru_cache(maxsize=1)
@@ -147,7 +149,7 @@ def measure(extraction: Extraction) -> dict[str, Any]:
     grams = shingle_hashes(tokens)
     values = sketch_hashes(grams).hashvalues.astype("<u4").tobytes()
     return {"text_sha256": hashlib.sha256(normal.encode("utf-8")).hexdigest(),
-            "shingles": len(grams), "minhash": values}
+            "shingles": len(grams), "words": len(tokens), "minhash": values}
 
 
 def _curve(s: float, bands: int, rows: int) -> float:
@@ -199,6 +201,7 @@ class Item:
     accepted_before: bool = False  # accepted in an earlier run (in this inbox or not)
     candidate: bool = True  # False: already held by another check
     fixed: bool = False  # accepted by another output folder sharing the index: always kept
+    words: int | None = None  # words of its normalised text, when known
 
 
 @dataclass
@@ -314,9 +317,19 @@ def _finding(item: Item, keeper: Item, how: str, similarity: float,
     if item.accepted_before and not keeper.accepted_before:
         return SUPERSEDED(**details)
     if how != "near":
-        return EXACT(how=how, **{k: v for k, v in details.items()
-                                 if k not in ("diverging", "differences", "threshold",
-                                              "similarity")})
+        same = {k: v for k, v in details.items()
+                if k not in ("diverging", "differences", "threshold", "similarity")}
+        caveat, extra = "", {}
+        if how == "same text":
+            excerpt = " ".join((text_of(item.key) or "").split()[:12]) if text_of else ""
+            size = f"{item.words} words" if item.words is not None else "the whole text"
+            caveat = (f"; the files differ, only their extracted text is identical ({size}"
+                      + (f", beginning {excerpt!r}" if excerpt else "") + "): if these are "
+                      "different documents, the shared text may be a site template")
+            extra = {"identical": "extracted text", "words": item.words, "excerpt": excerpt}
+        else:
+            extra = {"identical": "bytes"}
+        return EXACT(how=how, caveat=caveat, **same, **extra)
     return NEAR(**details)
 
 
@@ -327,7 +340,7 @@ def compare(view: CorpusView, settings: DuplicatesSettings) -> Outcome:
     items = [Item(key=m.key, path=m.path, sha256=m.sha256 or "",
                   text_sha256=m.measured["text_sha256"],
                   minhash=None if m.measured["shingles"] < settings.min_shingles
-                  else m.measured["minhash"],
+                  else m.measured["minhash"], words=m.measured.get("words"),
                   trust=m.trust, date=m.date, seen=m.seen, in_batch=True,
                   accepted_before=m.accepted_before, candidate=m.candidate)
              for m in view.members]
@@ -345,5 +358,5 @@ def compare(view: CorpusView, settings: DuplicatesSettings) -> Outcome:
 
 
 CHECK = CorpusCheck(id="duplicate", section="duplicates", settings=DuplicatesSettings,
-                    measure=measure, evaluate=compare, measure_version=3,
+                    measure=measure, evaluate=compare, measure_version=4,
                     doc=__doc__ or "")

@@ -8,9 +8,10 @@ bytes may hang or exhaust memory, and only a process boundary can stop them.
 
 from __future__ import annotations
 
-from gate.extract.model import Extracted, Extraction, failed
+from gate.extract.model import Block, Extracted, Extraction, failed
 from gate.extract.office import TYPES as OFFICE_TYPES
 from gate.extract.sniff import sniff
+from gate.tokens import block_hash
 
 __all__ = ["EXTRACT_VERSION", "TYPES", "Extracted", "Extraction", "extract"]
 
@@ -20,8 +21,12 @@ TYPES = ("html", "pdf", "text", *OFFICE_TYPES, "email", "mbox")
 EXTRACT_VERSION = 4
 
 
-def extract(data: bytes, *, max_pages: int, max_nesting: int) -> Extraction:
-    """Extract one document's bytes. Never raises for bad input: problems are reported."""
+def extract(data: bytes, *, max_pages: int, max_nesting: int,
+            main_text: str | None = None) -> Extraction:
+    """Extract one document's bytes. Never raises for bad input: problems are reported.
+
+    ``main_text``: an HTML page's main text from an earlier extraction of the same bytes
+    (trafilatura is then not run again)."""
     sniffed = sniff(data)
     if sniffed.type == "empty":
         return failed(None, "empty-file", sniffed.detail)
@@ -30,7 +35,7 @@ def extract(data: bytes, *, max_pages: int, max_nesting: int) -> Extraction:
         result = extract_pdf(data, max_pages)
     elif sniffed.type == "html":
         from gate.extract.html import extract_html
-        result = extract_html(data, sniffed.encoding, max_nesting)
+        result = extract_html(data, sniffed.encoding, max_nesting, main_text)
     elif sniffed.type == "text":
         from gate.extract.text import extract_text
         result = extract_text(data, sniffed.encoding)
@@ -54,4 +59,17 @@ def extract(data: bytes, *, max_pages: int, max_nesting: int) -> Extraction:
         return failed(summary.type, "empty-text", "extraction found no text in the document",
                       **{k: getattr(summary, k) for k in ("pages", "encrypted", "title",
                                                           "encoding", "nesting_depth")})
+    if summary.ok and not result.blocks:
+        result.blocks = line_blocks(result.text)
     return result
+
+
+def line_blocks(text: str) -> tuple[Block, ...]:
+    """A text's lines as blocks (PDF, plain text, Markdown: a line is the unit a running
+    header, a footer or a repeated notice occupies)."""
+    blocks = []
+    for line in text.split("\n"):
+        digest = block_hash(line)
+        if digest is not None:
+            blocks.append(Block(text=line.strip(), hash=digest))
+    return tuple(blocks)

@@ -14,14 +14,17 @@ the deep part, so extracted text would not be the page.
 from __future__ import annotations
 
 import codecs
+import dataclasses
 import re
 
 import lxml.etree
 import lxml.html
 import trafilatura
 
-from gate.extract.model import DateClaim, Extracted, Extraction, failed
+from gate.extract.model import (Block, DateClaim, Extracted, Extraction, failed,
+                                line_hashes, row_cells)
 from gate.extract.text import clean_text, decode
+from gate.tokens import block_hash
 
 _META_CHARSET = re.compile(
     rb"""<meta[^>]+?charset\s*=\s*["']?\s*([A-Za-z0-9_.:-]+)""", re.I)
@@ -151,8 +154,144 @@ def fallback_text(root: lxml.etree._Element) -> str:
     return re.sub(r"[ \t]+", " ", "".join(parts))
 
 
-def extract_html(data: bytes, encoding: str | None, max_nesting: int) -> Extraction:
-    """Extract an HTML page (``encoding`` comes from a byte-order mark, if any)."""
+# Elements that start a new block of their own (HTML's block-level and sectioning content,
+# list items, table cells, headings).
+_PAGE_BLOCKS = _BLOCKS | {"td", "th", "dt", "dd", "li", "nav", "aside", "header", "footer",
+                          "main", "figure", "figcaption", "form", "fieldset", "details",
+                          "summary", "dl", "address", "hr", "caption", "legend", "option",
+                          "label", "button", "menu"}
+
+
+_KINDS = {"h1": "heading", "h2": "heading", "h3": "heading", "h4": "heading",
+          "h5": "heading", "h6": "heading", "li": "item", "dt": "item", "dd": "item",
+          "td": "cell", "th": "cell", "caption": "cell"}
+
+
+def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
+    """Every block of the page's body in document order, the template included.
+
+    A block is the inline text between block boundaries (paragraph, heading, list item,
+    table cell, ...); ``links`` is the share of its characters inside ``<a>``, ``kind``
+    what holds it, and ``main`` says whether trafilatura kept a line with the same words
+    in ``main_text``.
+    """
+    body = root.find("body")
+    start = body if body is not None else root
+    blocks: list[Block] = []
+    parts: list[str] = []
+    holders: list[str] = ["body"]
+    linked = 0
+    in_link = 0
+    skip = 0
+
+    def flush() -> None:
+        nonlocal linked
+        raw = "".join(parts)
+        parts.clear()
+        # preformatted text is a block per line, as trafilatura writes it
+        pieces = raw.split("\n") if "pre" in holders else [raw]
+        for piece in pieces:
+            text = re.sub(r"\s+", " ", piece).strip()
+            digest = block_hash(text) if text else None
+            if digest is not None:
+                blocks.append(Block(text=text, hash=digest, main=False,
+                                    links=round(min(1.0, linked / len(text)), 3),
+                                    kind=_KINDS.get(holders[-1], "text")))
+        linked = 0
+
+    def add(text: str | None) -> None:
+        nonlocal linked
+        if text:
+            parts.append(text)
+            if in_link:
+                linked += len(text.strip())
+
+    for event, node in lxml.etree.iterwalk(start, events=("start", "end")):
+        tag = node.tag if isinstance(node.tag, str) else None
+        if tag is None or tag in _SKIP_TEXT:
+            if event == "start":
+                skip += 1
+            else:
+                skip -= 1
+                if skip == 0 and node is not start:
+                    add(node.tail)
+            continue
+        if skip:
+            continue
+        if event == "start":
+            if tag in _PAGE_BLOCKS:
+                flush()
+                holders.append(tag)
+            if tag == "a":
+                in_link += 1
+            add(node.text)
+            continue
+        if tag == "a":
+            in_link -= 1
+        if tag in _PAGE_BLOCKS:
+            flush()
+            holders.pop()
+        if node is not start:
+            add(node.tail)
+    flush()
+    main = set(line_hashes(main_text, blocks))
+    return tuple(Block(text=b.text, hash=b.hash, main=True, links=b.links, kind=b.kind)
+                 if b.hash in main else b for b in blocks)
+
+
+def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Block, ...]]:
+    """trafilatura's text with the headings, list items and table cells it dropped inside
+    the stretch of the page it chose (and those right before and after it: a title, a
+    closing list or table), so a heading, a list or a table counts in HTML as it does in
+    PDF, text and Markdown.
+
+    Only when every line trafilatura wrote is one of the page's blocks, or a table row of
+    them (so each line has a place in the page); otherwise its text is kept as it is.
+    """
+    where: dict[int, list[int]] = {}
+    for i, block in enumerate(blocks):
+        where.setdefault(block.hash, []).append(i)
+    placed: list[tuple[int, int, str]] = []
+    covered: set[int] = set()
+    cursor = -1
+    for order, (line, digest) in enumerate(zip(text.split("\n"), line_hashes(text, blocks))):
+        if digest is None:
+            continue
+        parts = [digest] if digest in where else row_cells(line)
+        if not parts or any(part not in where for part in parts):
+            return text, blocks
+        position = next((i for i in where[parts[0]] if i > cursor), where[parts[0]][0])
+        cursor = max(cursor, position)
+        placed.append((position, order, line))
+        covered.update(parts)
+    if not placed:
+        return text, blocks
+    first = min(p for p, _o, _l in placed)
+    last = max(p for p, _o, _l in placed)
+    while first > 0 and blocks[first - 1].kind == "heading" and \
+            blocks[first - 1].links < 0.5:
+        first -= 1
+    while last + 1 < len(blocks) and blocks[last + 1].kind != "text" and \
+            blocks[last + 1].links < 0.5:
+        last += 1
+    added = [i for i in range(first, last + 1) if blocks[i].hash not in covered and
+             blocks[i].kind != "text" and blocks[i].links < 0.5]
+    if not added:
+        return text, blocks
+    main = covered | {blocks[i].hash for i in added}
+    kept = tuple(b if b.main == (b.hash in main) else
+                 Block(text=b.text, hash=b.hash, main=b.hash in main, links=b.links,
+                       kind=b.kind) for b in blocks)
+    lines = sorted(placed + [(i, -1, blocks[i].text) for i in added])
+    return "\n".join(line for _p, _o, line in lines), kept
+
+
+def extract_html(data: bytes, encoding: str | None, max_nesting: int,
+                 main_text: str | None = None) -> Extraction:
+    """Extract an HTML page (``encoding`` comes from a byte-order mark, if any).
+
+    ``main_text`` is this page's text from an earlier extraction of the same bytes: the
+    same result, without running trafilatura again."""
     decoded = decode_html(data, encoding)
     if decoded is None:
         return failed("html", "undecodable",
@@ -176,11 +315,14 @@ def extract_html(data: bytes, encoding: str | None, max_nesting: int) -> Extract
                              f"{max_nesting}); HTML parsers silently drop content past "
                              "about 255 levels, so the extracted text would not be the page",
                       type_="html", **{k: v for k, v in common.items() if k != "type"})
-    text = trafilatura.extract(root, include_comments=False, include_tables=True,
-                               deduplicate=False, with_metadata=False) or ""
-    if not text.strip():
-        text = fallback_text(root)
-    text = clean_text(text)
+    if main_text is not None:
+        text = main_text
+    else:
+        text = trafilatura.extract(root, include_comments=False, include_tables=True,
+                                   deduplicate=False, with_metadata=False) or ""
+        if not text.strip():
+            text = fallback_text(root)
+        text = clean_text(text)
     title = _first(root, "//meta[@property='og:title']/@content") or \
         _first(root, "//title/text()")
     canonical = _first(root, "//link[translate(@rel,'CANONICAL','canonical')='canonical']/@href") \
@@ -188,4 +330,7 @@ def extract_html(data: bytes, encoding: str | None, max_nesting: int) -> Extract
     lang = _first(root, "/html/@lang")
     summary = Extracted(title=title, canonical_url=canonical, declared_lang=lang,
                         text_chars=len(text), dates=_meta_dates(root), **common)
-    return Extraction(summary=summary, text=text, raw=data, decoded=markup, tree=root)
+    text, blocks = complete_main(text, page_blocks(root, text))
+    summary = dataclasses.replace(summary, text_chars=len(text))
+    return Extraction(summary=summary, text=text, raw=data, decoded=markup, tree=root,
+                      blocks=blocks)

@@ -8,8 +8,11 @@ travel back to the parent process.
 
 from __future__ import annotations
 
+from collections.abc import Sequence
 from dataclasses import asdict, dataclass, field
 from typing import Any
+
+from gate.tokens import block_hash
 
 # Extraction problems. Each one becomes a ``format`` finding in the parent.
 PROBLEMS = {
@@ -48,6 +51,7 @@ class Extracted:
     nesting_depth: int | None = None
     dates: tuple[DateClaim, ...] = ()
     metadata: dict[str, str] = field(default_factory=dict)
+    template: dict[str, Any] = field(default_factory=dict)  # site-template removal done
 
     @property
     def ok(self) -> bool:
@@ -66,6 +70,18 @@ class Extracted:
         return cls(**data)
 
 
+@dataclass(frozen=True)
+class Block:
+    """One block of a document (a paragraph, heading, list item, table cell, link list or
+    line) with the hash of its words (:func:`gate.tokens.block_hash`)."""
+
+    text: str
+    hash: int
+    main: bool = True  # in the main text the extractor chose (HTML: trafilatura's)
+    links: float = 0.0  # share of its characters inside links (HTML)
+    kind: str = "text"  # heading | item (list item, term) | cell (table) | text
+
+
 @dataclass
 class Extraction:
     """Worker-side result: the summary, the text and the raw material measurements use."""
@@ -77,6 +93,9 @@ class Extraction:
     tree: Any = None  # lxml root element, for HTML
     reader: Any = None  # pypdf.PdfReader, for PDF
     extras: dict[str, Any] = field(default_factory=dict)  # e.g. PDF annotations, XMP text
+    # the whole page in blocks, in document order (HTML: every block of the body, the
+    # template included; other formats: the text's lines), for template removal
+    blocks: tuple[Block, ...] = ()
 
 
 class Refused(Exception):
@@ -95,3 +114,17 @@ def failed(type_: str | None, problem: str, detail: str, sniffed: str = "",
     assert problem in PROBLEMS, problem
     return Extraction(Extracted(type=type_, problem=problem, problem_detail=detail,
                                 sniffed=sniffed, **more))
+
+
+def line_hashes(text: str, blocks: Sequence[Block]) -> list[int | None]:
+    """The block hash of each line of ``text`` (a line that is a block's text verbatim
+    takes its hash without normalising it again)."""
+    known = {b.text: b.hash for b in blocks}
+    return [known.get(line.strip()) or block_hash(line) for line in text.split("\n")]
+
+
+def row_cells(line: str) -> list[int]:
+    """The cell hashes of a table row written as ``| a | b |`` (trafilatura's tables)."""
+    if not line.lstrip().startswith("|"):
+        return []
+    return [h for h in map(block_hash, line.strip().strip("|").split("|")) if h is not None]

@@ -1,0 +1,218 @@
+"""Site templates: blocks that recur across many pages of one host are not the pages' text.
+
+A page on a heavy site template (a mega-menu, a column of teasers, a long legal footer)
+can hold far more template than text of its own; shingled whole, every page of the site
+looks like every other, and an extractor that picks the template as the main text makes
+distinct pages "identical". This module learns each site's template from the pages the
+run can see and removes it before the text is checked, shingled or indexed.
+
+Learning (parent process, pure and deterministic): every extraction comes with the page's
+blocks (paragraphs, headings, list items, table cells, link lists; for PDF and text, the
+lines), each with a hash of its words (:func:`gate.tokens.block_hash`). Pages are grouped
+by the host of their ``source_url`` and their type (an HTML template is learnt from the
+host's HTML pages, a PDF running header from its PDFs); the pages of a host are the
+batch's plus, in an
+incremental run, the stored corpus's (their blocks come from the digest-keyed cache). Pages
+with identical block sets count once. On a host with ``n`` distinct pages, a block is
+template when it occurs
+
+* on at least ``SHARE_ANY`` of them (and at least ``MIN_PAGES``) wherever it stands, or
+* on at least ``SHARE_ASIDE`` of them (and at least ``ASIDE_MIN_PAGES``) and outside
+  trafilatura's main text on at least half of those (menus, teasers and footers that vary
+  by section, teasers that rotate) -- removed from a page only where it sits next to a
+  link-dominated or an everywhere-template block, so a stock paragraph that several
+  notices of a site share (and that trafilatura missed) is not taken for a teaser.
+
+A host with fewer than ``MIN_PAGES`` distinct pages teaches nothing: its pages keep
+trafilatura's text, as before. On the first run of a new site with three or four pages,
+only what is on every page is template. A body shared by a few versions of one page
+stays, because a version cluster is much smaller than a site; the exception is a site
+whose every page is a version of one document, whose shared body is taken for template
+(the versions then keep their own differences only).
+
+Removal (worker, :func:`compose`): the page's template blocks are dropped from
+trafilatura's text; when what remains is less than ``MAIN_RATIO`` of the page's own
+(non-template, not link-dominated) blocks, trafilatura chose the template as the main
+text, and the page's own blocks are used instead. So they are when trafilatura's text
+cannot be laid onto the page's blocks line by line (a layout table's cell written as one
+line), because the template cannot then be taken out of it, and template blocks make up
+at least ``TEMPLATE_SHARE`` of it (otherwise it is kept as it is). Either happens only when the
+page's own blocks hold at least ``MIN_OWN_WORDS`` words (more than trafilatura's
+remainder, in the first case): a table of contents or a page of links keeps its text.
+When nothing would remain, the page is kept as extracted.
+"""
+
+from __future__ import annotations
+
+import hashlib
+import math
+from collections.abc import Iterable, Sequence
+from dataclasses import dataclass
+
+import numpy as np
+
+from gate import urls
+from gate.extract.model import Block, line_hashes, row_cells
+
+TEMPLATES_VERSION = 7  # part of the cache key: bump when blocks or composition change
+MIN_PAGES = 3
+ASIDE_MIN_PAGES = 5
+SHARE_ANY = 0.8
+SHARE_ASIDE = 0.2
+MAIN_RATIO = 0.5
+TEMPLATE_SHARE = 0.3  # template share of an unplaceable text that makes it give way
+MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilatura's text
+LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
+
+
+def site_of(source_url: str | None) -> str | None:
+    """The host pages are grouped by (None without a usable ``source_url``: such a
+    document keeps trafilatura's text)."""
+    if not source_url:
+        return None
+    try:
+        return urls.parse(source_url).host or None
+    except ValueError:
+        return None
+
+
+def block_summary(blocks: Sequence[Block]) -> dict[str, list[int]]:
+    """The page's distinct block hashes, in trafilatura's main text or not (for the cache
+    and the parent's learning; a few hundred bytes a page)."""
+    main = sorted({b.hash for b in blocks if b.main})
+    taken = set(main)
+    other = sorted({b.hash for b in blocks if b.hash not in taken})
+    return {"main": main, "other": other}
+
+
+@dataclass(frozen=True)
+class Page:
+    """One page taking part in learning: its host and its block hashes."""
+
+    site: str
+    main: np.ndarray  # uint64, sorted, distinct
+    other: np.ndarray  # uint64, sorted, distinct, none of them in main
+
+    @classmethod
+    def of(cls, site: str, summary: dict[str, list[int]]) -> Page:
+        return cls(site, np.array(summary.get("main", ()), dtype=np.uint64),
+                   np.array(summary.get("other", ()), dtype=np.uint64))
+
+    @property
+    def hashes(self) -> np.ndarray:
+        return np.union1d(self.main, self.other)
+
+    def signature(self) -> bytes:
+        return hashlib.sha256(self.main.tobytes() + b"|" + self.other.tobytes()).digest()
+
+
+def learn(pages: Iterable[Page]) -> dict[str, tuple[np.ndarray, np.ndarray]]:
+    """Each host's template blocks, for hosts that teach any: (on most pages, by the
+    aside rule only), as sorted uint64 hashes."""
+    by_site: dict[str, dict[bytes, Page]] = {}
+    for page in pages:
+        by_site.setdefault(page.site, {}).setdefault(page.signature(), page)
+    learnt: dict[str, tuple[np.ndarray, np.ndarray]] = {}
+    for site in sorted(by_site):
+        distinct = list(by_site[site].values())
+        n = len(distinct)
+        if n < MIN_PAGES:
+            continue
+        every, total = np.unique(np.concatenate([p.hashes for p in distinct]),
+                                 return_counts=True)
+        in_main, main_count = np.unique(np.concatenate([p.main for p in distinct]),
+                                        return_counts=True)
+        mains = np.zeros(len(every), dtype=np.int64)
+        mains[np.searchsorted(every, in_main)] = main_count
+        anywhere = total >= max(MIN_PAGES, math.ceil(SHARE_ANY * n))
+        aside = (total >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n))) & \
+            (2 * mains <= total)
+        strong, weak = every[anywhere], every[aside & ~anywhere]
+        if len(strong) or len(weak):
+            learnt[site] = (strong, weak)
+    return learnt
+
+
+Removal = tuple[tuple[int, ...], tuple[int, ...]]  # (everywhere, aside-only), or ()
+
+
+def removal(page: Page, learnt: dict[str, tuple[np.ndarray, np.ndarray]]
+            ) -> Removal | tuple[()]:
+    """The template blocks of ``page``: those on most of the site's pages, and those only
+    the aside rule names (sorted hashes each); ``()`` when none."""
+    template = learnt.get(page.site)
+    if template is None:
+        return ()
+    mine = page.hashes
+    found = tuple(tuple(int(h) for h in np.intersect1d(mine, part, assume_unique=True))
+                  for part in template)
+    return (found[0], found[1]) if found[0] or found[1] else ()
+
+
+def removal_key(template: Removal) -> str:
+    """A short stable name for a removal (part of the cache key of the cleaned text)."""
+    blob = b"|".join(b"".join(int(h).to_bytes(8, "little") for h in sorted(part))
+                     for part in template)
+    return hashlib.sha256(blob).hexdigest()[:16]
+
+
+def _dropped(blocks: Sequence[Block], strong: set[int], weak: set[int]) -> set[int]:
+    """The blocks removed from this page: every strong one, and a weak one (recurring on
+    a fifth of the pages, outside the main text) only where it sits beside a link-dominated
+    or a strong block, or in a run of weak blocks that does, as teasers and section menus
+    do; a stock paragraph that several notices share sits among their own text and stays."""
+    drop = set(strong)
+    anchored = [b.links >= LINK_DOMINATED or b.hash in strong for b in blocks]
+    changed = True
+    while changed:  # a run of weak blocks goes when one end of it touches an anchor
+        changed = False
+        for i, block in enumerate(blocks):
+            if block.hash in weak and not anchored[i] and (
+                    (i > 0 and anchored[i - 1]) or (i + 1 < len(blocks) and anchored[i + 1])):
+                anchored[i] = changed = True
+                drop.add(block.hash)
+    return drop
+
+
+def _word_count(lines: Iterable[str]) -> int:
+    """Words by white space: enough to compare two amounts of text, and cheap."""
+    return sum(len(line.split()) for line in lines)
+
+
+def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
+            ) -> tuple[str, dict[str, int | str]]:
+    """The page's own text: ``text`` (trafilatura's) without the template blocks, or the
+    page's own blocks when trafilatura had chosen the template (see the module
+    docstring). Returns the text and what was done, for the record."""
+    if not template:
+        return text, {}
+    blocks = tuple(blocks)
+    drop = _dropped(blocks, set(template[0]), set(template[1]))
+    if not drop:
+        return text, {}
+    page = {b.hash for b in blocks}
+    main_rest: list[str] = []
+    placed = True  # every line of trafilatura's text is a block, or a table row of blocks
+    for line, digest in zip(text.split("\n"), line_hashes(text, blocks)):
+        parts = [digest] if digest is None or digest in page else row_cells(line)
+        if not parts or any(part is not None and part not in page for part in parts):
+            placed = False  # e.g. a layout table's whole cell in one line
+            break
+        if any(part is None or part not in drop for part in parts):
+            main_rest.append(line)
+    own = [b.text for b in blocks if b.hash not in drop and b.links < LINK_DOMINATED]
+    main_words, own_words = _word_count(main_rest), _word_count(own)
+    if not placed:
+        # how much of trafilatura's text is template: the template blocks found in it
+        found = {b.hash: b.text for b in blocks if b.hash in drop and b.text in text}
+        if _word_count(found.values()) < TEMPLATE_SHARE * _word_count(text.split("\n")):
+            return text, {"template_blocks": len(drop), "kept": "all (little template in it)"}
+    if placed and main_words and (main_words >= MAIN_RATIO * own_words or
+                                  own_words - main_words < MIN_OWN_WORDS):
+        cleaned, source = "\n".join(main_rest).strip("\n"), "main"
+    elif own_words >= MIN_OWN_WORDS:
+        cleaned, source = "\n".join(own), "page"
+    else:
+        return text, {"template_blocks": len(drop), "kept": "all (nothing of its own)"}
+    return cleaned, {"template_blocks": len(drop), "kept": source,
+                     "chars_before": len(text), "chars_after": len(cleaned)}

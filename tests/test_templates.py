@@ -1,0 +1,256 @@
+"""Site templates and the one token stream (invented fixture pages and sites)."""
+
+from __future__ import annotations
+
+import json
+import random
+from datetime import UTC, datetime
+
+import numpy as np
+
+from gate import templates
+from gate.checks import duplicate as dup
+from gate.extract import extract
+from gate.extract.html import complete_main
+from gate.extract.model import Block
+from gate.pipeline import RunOptions, run
+from gate.policy import load_policy
+from gate.tokens import block_hash, words
+
+from .helpers import policy
+
+AS_OF = datetime(2026, 12, 1, tzinfo=UTC)
+_VOCAB = ("valve meter street closure crew notice supply bin permit parking zone library "
+          "hours festival market stall grant lighting footpath bridge river hall fee "
+          "refund glass paper garden clinic survey tenant advice ledger").split()
+
+
+def prose(seed: int, count: int) -> str:
+    rng = random.Random(seed)
+    return " ".join(rng.choice(_VOCAB) for _ in range(count)) + "."
+
+
+# -- the token stream --------------------------------------------------------------------
+
+def test_markdown_html_and_plain_text_give_the_same_words():
+    # CommonMark syntax for headings, emphasis, bullet lists, links and a GFM table
+    # (from memory); the HTML is what a renderer makes of it
+    markdown = ("# Water notice\n\nThe *supply* stops at [nine](https://x.example.org/a).\n\n"
+                "* Fill a kettle\n\n| Street | Time |\n|---|---|\n| Elm | 9-12 |\n")
+    html = ("<h1>Water notice</h1><p>The <em>supply</em> stops at <a href='/a'>nine</a>.</p>"
+            "<ul><li>Fill a kettle</li></ul><table><tr><th>Street</th><th>Time</th></tr>"
+            "<tr><td>Elm</td><td>9-12</td></tr></table>")
+    plain = "Water notice\nThe supply stops at nine.\n- Fill a kettle\nStreet Time\nElm 9-12"
+    expected = "water notice the supply stops at nine fill a kettle street time elm 9 12"
+    assert " ".join(words(markdown)) == expected
+    assert " ".join(words(html)) == expected
+    assert " ".join(words(plain)) == expected
+
+
+def test_block_hash_ignores_markup_case_and_spacing_only():
+    assert block_hash("## Opening  Hours") == block_hash("opening hours")
+    assert block_hash("Opening hours") != block_hash("Opening hour")
+    assert block_hash(" -- | --- ") is None
+
+
+# -- blocks of an HTML page --------------------------------------------------------------
+
+PAGE = ("<html><body><nav><ul><li><a href='/a'>Home</a></li><li><a href='/b'>Bins</a></li>"
+        "</ul></nav><main><h1>Elm Street water notice</h1><p>{body}</p><ul><li>Fill a "
+        "kettle before nine.</li></ul><table><tr><td>Elm</td><td>9-12</td></tr></table>"
+        "</main><footer><p>Invented Borough Council, all rights reserved.</p></footer>"
+        "</body></html>")
+
+
+def test_page_blocks_cover_the_whole_page_with_kinds_and_link_shares():
+    extraction = extract(PAGE.format(body=prose(1, 60)).encode(), max_pages=10,
+                         max_nesting=100)
+    kinds = {b.text: (b.kind, b.links) for b in extraction.blocks}
+    assert kinds["Home"] == ("item", 1.0)
+    assert kinds["Elm Street water notice"] == ("heading", 0.0)
+    assert kinds["Fill a kettle before nine."] == ("item", 0.0)
+    assert kinds["Elm"] == ("cell", 0.0)
+    assert kinds["Invented Borough Council, all rights reserved."][0] == "text"
+
+
+def test_complete_main_adds_the_headings_and_items_trafilatura_dropped():
+    blocks = (Block("Home", block_hash("Home"), main=False, links=1.0, kind="item"),
+              Block("Notice title", block_hash("Notice title"), main=False, kind="heading"),
+              Block("First paragraph here.", block_hash("First paragraph here."), main=True),
+              Block("A list item", block_hash("A list item"), main=False, kind="item"),
+              Block("Second paragraph here.", block_hash("Second paragraph here."),
+                    main=True),
+              Block("Footer text", block_hash("Footer text"), main=False))
+    text, kept = complete_main("First paragraph here.\nSecond paragraph here.", blocks)
+    assert text.split("\n") == ["Notice title", "First paragraph here.", "A list item",
+                                "Second paragraph here."]
+    assert [b.main for b in kept] == [False, True, True, True, True, False]
+    # a line trafilatura wrote that is no block of the page: its text is kept as it is
+    assert complete_main("Something else", blocks)[0] == "Something else"
+
+
+# -- learning ----------------------------------------------------------------------------
+
+def page(site: str, main: list[int], other: list[int]) -> templates.Page:
+    return templates.Page(site, np.array(sorted(set(main)), dtype=np.uint64),
+                          np.array(sorted(set(other) - set(main)), dtype=np.uint64))
+
+
+def test_blocks_on_most_pages_of_a_host_are_template():
+    menu, footer = [1, 2, 3], [4]
+    pages = [page("a.example.org", [100 + i, 200 + i], menu + footer) for i in range(6)]
+    learnt = templates.learn(pages)
+    assert set(learnt["a.example.org"][0].tolist()) == {1, 2, 3, 4}
+    assert templates.removal(pages[0], learnt) == ((1, 2, 3, 4), ())
+
+
+def test_a_new_site_with_few_pages_learns_only_what_is_on_every_page():
+    pages = [page("new.example.org", [100 + i], [1, 2, 3]) for i in range(2)]
+    assert templates.learn(pages) == {}
+    pages.append(page("new.example.org", [102], [1, 2, 4]))
+    assert set(templates.learn(pages)["new.example.org"][0].tolist()) == {1, 2}
+    # identical pages count once: five copies of one page are one page
+    copies = [page("copy.example.org", [7], [1, 2])] * 5
+    assert templates.learn(copies) == {}
+
+
+def test_a_version_cluster_in_the_main_text_is_not_template():
+    # six versions of one notice on a site of twenty pages: its paragraphs are in the main
+    # text on 6 of 20 pages, below SHARE_ANY; an aside outside it on 6 of 20 is template
+    pages = [page("b.example.org", [50, 51, 60 + i], [1, 90]) for i in range(6)]
+    pages += [page("b.example.org", [300 + i], [1, 91]) for i in range(14)]
+    everywhere, aside = templates.learn(pages)["b.example.org"]
+    assert everywhere.tolist() == [1] and aside.tolist() == [90, 91]  # not 50, 51
+
+
+def test_compose_uses_the_pages_own_blocks_when_the_main_text_was_template():
+    teaser = [Block(f"Teaser {i} " + prose(i, 20), block_hash(f"Teaser {i} " + prose(i, 20)))
+              for i in range(5)]
+    notice = [Block(prose(50 + i, 30), block_hash(prose(50 + i, 30)), main=False)
+              for i in range(3)]
+    menu = Block("Home Bins Roads", block_hash("Home Bins Roads"), main=False, links=1.0)
+    blocks = [menu] + teaser + notice
+    text = "\n".join(b.text for b in teaser)
+    cleaned, info = templates.compose(text, blocks, ((menu.hash,), tuple(b.hash for b in teaser)))
+    assert cleaned == "\n".join(b.text for b in notice)
+    assert info["kept"] == "page" and info["template_blocks"] == 6
+    # nothing learnt: the text as extracted
+    assert templates.compose(text, blocks, ()) == (text, {})
+    # a block named by the aside rule only, with no link or everywhere-template block
+    # beside it, is a paragraph the page shares with others: it stays
+    stock = ((), (notice[1].hash,))
+    assert templates.compose(text, blocks, stock) == (text, {})
+
+
+# -- duplicate claims --------------------------------------------------------------------
+
+def test_same_text_other_bytes_is_exact_with_a_template_caveat():
+    text = prose(3, 200)
+    measured = [dup.measure(type("E", (), {"text": text})()) for _ in range(2)]
+    items = [dup.Item(key=k, path=f"{k}.html", sha256=f"sha-{k}",
+                      text_sha256=m["text_sha256"], minhash=m["minhash"], trust=1,
+                      date=None, seen=(1, i), words=m["words"])
+             for i, (k, m) in enumerate(zip("ab", measured))]
+    found = dup.evaluate(items, policy("duplicates: {threshold: 0.8}").duplicates,
+                         text_of=lambda key: text).findings["b"][0]
+    assert found.code == "duplicate.exact"
+    assert found.details["identical"] == "extracted text"
+    assert found.details["words"] == 200  # prose(3, 200) is 200 words
+    assert "may be a site template" in found.message
+
+
+# -- a run -------------------------------------------------------------------------------
+
+TEASERS = "".join(f"<div class='t'><h3>Teaser {i}</h3><p>{prose(5000 + i, 26)}</p></div>"
+                  for i in range(24))
+
+
+def portal_page(n: int) -> bytes:
+    """A thin notice typed into a box beside two dozen teasers (invented portal); on
+    such pages trafilatura takes the teasers for the main text."""
+    notice = "<br>".join(prose(100 * n + k, 40) for k in range(4))
+    return (f"<html><head><title>Notice {n}</title></head><body><div class='top'><ul>"
+            + "".join(f"<li><a href='/m{i}'>Menu {i}</a></li>" for i in range(30))
+            + f"</ul></div><div class='side'>{TEASERS}</div><div class='box'>"
+            f"<b>Notice {n}</b><br>{notice}</div><div class='legal'><p>{prose(7, 80)}</p>"
+            "</div></body></html>").encode()
+
+
+def make_portal(root, pages: int):
+    inbox = root / "inbox"
+    inbox.mkdir(parents=True)
+    lines = []
+    for n in range(pages):
+        (inbox / f"notice-{n}.html").write_bytes(portal_page(n))
+        lines.append(json.dumps({"path": f"notice-{n}.html",
+                                 "source_url": f"https://portal.example.org/n/{n}"}))
+    (inbox / "manifest.jsonl").write_text("\n".join(lines) + "\n")
+    policy_file = root / "policy.yaml"
+    policy_file.write_text("version: 1\nname: portal\nduplicates:\n  threshold: 0.8\n")
+    return inbox, load_policy(policy_file)
+
+
+def test_thin_pages_on_a_heavy_template_are_told_apart(tmp_path):
+    inbox, loaded = make_portal(tmp_path, 6)
+    result = run(RunOptions(inbox=inbox, policy=loaded, out=tmp_path / "out", as_of=AS_OF,
+                            workers=2))
+    report = json.loads(result.report_path.read_text())
+    assert [d["decision"] for d in report["documents"]] == ["accepted"] * 6
+    text = (tmp_path / "out" / report["documents"][0]["location"] / "text.txt").read_text()
+    assert prose(0, 40) in text and "Teaser" not in text and "Menu" not in text
+    # the same inbox with one worker: the same report
+    again = run(RunOptions(inbox=inbox, policy=loaded, out=tmp_path / "one", as_of=AS_OF,
+                           workers=1))
+    assert again.report_path.read_bytes() == result.report_path.read_bytes()
+
+
+def test_a_new_site_of_two_pages_keeps_trafilaturas_text_and_says_so(tmp_path):
+    inbox, loaded = make_portal(tmp_path, 2)
+    result = run(RunOptions(inbox=inbox, policy=loaded, out=tmp_path / "out", as_of=AS_OF))
+    report = json.loads(result.report_path.read_text())
+    held = [r for d in report["documents"] for r in d["reasons"]]
+    # two pages teach no template: the teasers are each page's text, and the claim says
+    # that only the extracted text is the same and that it may be a template
+    assert {r["code"] for r in held} == {"duplicate.exact"}
+    assert all(r["details"]["identical"] == "extracted text" for r in held)
+
+
+def test_an_incremental_run_learns_from_the_stored_corpus(tmp_path):
+    inbox, loaded = make_portal(tmp_path, 6)
+    out = tmp_path / "out"
+    run(RunOptions(inbox=inbox, policy=loaded, out=out, as_of=AS_OF))
+    later = tmp_path / "later"
+    later.mkdir()
+    (later / "notice-9.html").write_bytes(portal_page(9))
+    (later / "manifest.jsonl").write_text(json.dumps(
+        {"path": "notice-9.html", "source_url": "https://portal.example.org/n/9"}) + "\n")
+    result = run(RunOptions(inbox=later, policy=loaded, out=out, as_of=AS_OF,
+                            incremental=True))
+    report = json.loads(result.report_path.read_text())
+    assert report["documents"][0]["decision"] == "accepted"
+    text = (out / report["documents"][0]["location"] / "text.txt").read_text()
+    assert prose(5000, 26) not in text and prose(900, 40) in text
+
+
+def test_a_layout_cell_written_as_one_line_gives_way_to_the_pages_own_blocks():
+    # trafilatura writes a layout table's cell (template and body together) as one row
+    # line; it cannot be laid onto the page's blocks, so the page's own blocks are used
+    notice = [Block(prose(70 + i, 20), block_hash(prose(70 + i, 20)), main=False)
+              for i in range(3)]
+    teaser = Block("Teaser " + prose(80, 40), block_hash("Teaser " + prose(80, 40)),
+                   main=False)
+    blocks = [teaser] + notice
+    text = "| " + " ".join(b.text for b in blocks) + " |"
+    cleaned, info = templates.compose(text, blocks, ((teaser.hash,), ()))
+    assert cleaned == "\n".join(b.text for b in notice) and info["kept"] == "page"
+    # when the template is a small part of such a text (here 3 of 63 words), it is kept
+    small = Block("Home and contact", block_hash("Home and contact"), main=False)
+    text = "| " + " ".join(b.text for b in [small] + notice) + " |"
+    assert templates.compose(text, [small] + notice, ((small.hash,), ()))[0] == text
+
+
+def test_preformatted_text_is_a_block_per_line():
+    page = (b"<html><body><p>Run these two commands in the shell of the invented depot:</p>"
+            b"<pre>make demo\nmake test</pre></body></html>")
+    texts = [b.text for b in extract(page, max_pages=10, max_nesting=100).blocks]
+    assert texts[-2:] == ["make demo", "make test"]
