@@ -11,6 +11,11 @@ from external sources, such as websites or files"). The screen looks for:
   reader's answer, summary or conversation, in the directive mood (``model-address``,
   ``answer-steering``, ``override``, ``prompt-leak``), and a bare request for work that
   has nothing to do with the document (``task-hijack``);
+* **a learnt instruction model** (``instruction``): a logistic regression over hashed
+  words, word prefixes and word pairs of every sentence and every two or three consecutive
+  sentences, trained on hand-written attack and benign text in 28 languages and on real
+  Debian documentation (``benchmarks/train_injection_model.py``), scored with numpy from
+  the shipped ``data/instruction_model.npz``;
 * **requests to act**: harmful code to include or run (``harmful-code``: uploads, sockets,
   key logging, screen capture, deletion, encryption, floods), calls of the reader's tools
   and forged tool calls (``tool-call``), and claims of authority over automated readers

@@ -47,6 +47,8 @@ SIGNALS: dict[str, tuple[str, str]] = {
                   "the text asks the model to call a tool or forges a tool call"),
     "authority-claim": ("a claim of authority over automated readers or other sources",
                         "the text claims authority over automated readers or other sources"),
+    "instruction": ("a sentence that reads as an instruction to the AI reader (learnt model)",
+                    "a sentence reads as an instruction to the AI model that reads it"),
     "html-hidden": ("model-directed text concealed in the page markup",
                     "model-directed text is hidden from readers"),
     "pdf-hidden": ("model-directed text concealed in the PDF",
@@ -67,7 +69,8 @@ SIGNALS: dict[str, tuple[str, str]] = {
 }
 CONTENT = frozenset({"override", "prompt-leak", "role-change", "model-address", "fake-notice",
                      "chat-markup", "answer-steering", "exfil-request", "exfil-url",
-                     "task-hijack", "harmful-code", "tool-call", "authority-claim"})
+                     "task-hijack", "harmful-code", "tool-call", "authority-claim",
+                     "instruction"})
 CONCEALMENT = frozenset({"html-hidden", "pdf-hidden", "encoded-payload", "obfuscated"})
 CONCEAL_WEIGHT = 0.4
 OBFUSCATION_WEIGHT = 0.35

@@ -22,7 +22,7 @@ import re
 from dataclasses import dataclass
 from typing import Any
 
-from gate.checks.injection import actions, directive, encoded, exfil, html_hidden, \
+from gate.checks.injection import actions, directive, encoded, exfil, html_hidden, model, \
     pdf_hidden, score, unicode, wording
 from gate.checks.injection.lexicon import lfold, words_of
 from gate.checks.injection.normalize import View, fold, visible
@@ -35,9 +35,18 @@ MAX_DEPTH = 2
 MAX_HITS = 60
 TOPIC_DAMPING = 0.5
 TOPIC_MIN = 2
-MEASURE_VERSION = 3  # bump when measure() returns something different
+MEASURE_VERSION = 4  # bump when measure() returns something different
 
 ACTION_SIGNALS = frozenset({"harmful-code", "tool-call"})
+# A chat log's speaker labels and event lines ("[system] Agent joined", "**Assistant:** ...")
+# are its format, not counterfeit notices: those signals weigh less in a chat log (what a
+# line *says* is still read by the other signals and the model).
+CHAT_LOG_SIGNALS = frozenset({"fake-notice", "model-address", "chat-markup"})
+CHAT_LOG_DAMPING = 0.4
+CHAT_LOG_NOTE = "a speaker or event line of a chat log"
+_CHAT_LINE = re.compile(r"(?m)^[ \t>*_]*([\[(<]?)[ \t]*(system|assistant|agent|user|customer|bot|"
+                        r"support|moderator|operator|visitor|client)[ \t]*[\])>]?[*_]*[ \t]*"
+                        r"(?:\(\d{1,2}:\d{2}(?::\d{2})?\))?[*_ \t]*[:\]]?")
 _CODE_CHARS = re.compile(r"[(){};=<>\[\]$]|\b(?:def|import|return|function|var|let)\b")
 _MD_COMMENT = re.compile(r"<!--(.{0,20000}?)-->", re.S)
 
@@ -72,6 +81,7 @@ class Screen:
         self.view: View = fold(text)
         self.tokens = wording.tokens_of(self.view.text)
         self.topic = wording.topic_count(self.view.text, tokens=self.tokens) >= TOPIC_MIN
+        self.chat_log = _is_chat_log(self.view.text)
         self.hits: list[dict[str, Any]] = []
         self.budget = [encoded.MAX_DECODED]
         self.sources = 0
@@ -133,6 +143,9 @@ class Screen:
             if visible_text and self.topic:
                 weight = round(weight * TOPIC_DAMPING, 4)
                 note = "; ".join(x for x in (note, "the document discusses the topic") if x)
+            if visible_text and self.chat_log and m.signal in CHAT_LOG_SIGNALS:
+                weight = round(weight * CHAT_LOG_DAMPING, 4)
+                note = "; ".join(x for x in (note, CHAT_LOG_NOTE) if x)
             content.append(self._hit(source, m.signal, weight, m.start, m.end, text,
                                      lang=m.lang, note=note, obfuscation=m.obfuscation))
         content.extend(self._sentences(source, text, visible_text, content))
@@ -213,6 +226,12 @@ class Screen:
             found.append((d.signal, d.weight, d.start, d.end, d.why, d.lang or None, None))
         for a in actions.scan(text, folded, words):
             found.append((a.signal, a.weight, a.start, a.end, a.why, None, a.detail or None))
+        learnt = model.model()
+        for r in learnt.read(folded):
+            what = "sentence reads" if r.sentences == 1 else f"{r.sentences} sentences read"
+            found.append(("instruction", learnt.weight(r), r.start, r.end,
+                          f"the {what} as an instruction to the assistant (model score "
+                          f"{r.probability:.2f})", None, {"model_probability": r.probability}))
         if not found:
             return []
         out = []
@@ -230,6 +249,9 @@ class Screen:
             if visible_text and self.topic:
                 weight *= TOPIC_DAMPING * 0.8
                 why = f"{why}; the document discusses the topic"
+            if visible_text and self.chat_log and signal in CHAT_LOG_SIGNALS:
+                weight *= CHAT_LOG_DAMPING
+                why = f"{why}; {CHAT_LOG_NOTE}"
             same = [h for s, e, h in by_span if s < end and start < e and
                     (h["signal"] == signal or h["weight"] >= weight)]
             if same:  # a phrase rule read these words already: its span is tighter
@@ -337,6 +359,22 @@ class Screen:
         for hit in kept:
             hit.pop("segment_span", None)
         return kept
+
+
+def _is_chat_log(folded: str) -> bool:
+    """Two bracketed system event lines, or three speaker lines of two speakers or more."""
+    bracketed, roles, lines = 0, set(), 0
+    for m in _CHAT_LINE.finditer(folded[:MAX_SOURCE]):
+        end = m.end()
+        if end >= len(folded) or folded[end] == "\n" or m.end(2) == end:
+            continue  # a bare word, not a label followed by its line
+        lines += 1
+        roles.add(m.group(2))
+        if m.group(1) and m.group(2) == "system":
+            bracketed += 1
+        if bracketed >= 2 or (lines >= 3 and len(roles) >= 2):
+            return True
+    return False
 
 
 def _snippet(text: str, start: int, end: int) -> str:

@@ -619,7 +619,9 @@ SECRET_STRONG_EN = alt(r"(?:the\W+)?conversation", r"chat\W+(?:history|log|trans
                        r"(?:a\W+)?summary\W+of\W+(?:the|this|our)\W+(?:conversation|chat)")
 SECRET_WEAK_EN = alt(r"secrets?", r"api\W+keys?", r"passwords?", "credentials",
                      r"access\W+tokens?", r"session\W+(?:id|token|cookie)s?", r"cookies?")
-EXFIL_VERB_EN = (r"\b(?:append|add|include|insert|put|encode|embed|attach|replace|substitute|"
+# "Don't add personal data to image URLs" is advice against it, not a request.
+EXFIL_VERB_EN = (r"(?<!don't )(?<!do not )(?<!never )(?<!dont )"
+                 r"\b(?:append|add|include|insert|put|encode|embed|attach|replace|substitute|"
                  r"fill\W+in|concatenate|send|post|transmit|forward|upload|submit|leak|"
                  r"exfiltrate)\W+(?:\w+\W+){0,6}?")
 EXFIL_TAIL_EN = (r"\b(?:\W+\w+){0,8}?\W+(?:url|link|query|parameter|image|endpoint|address|"
@@ -664,11 +666,16 @@ TOPIC = re.compile(r"\b(?:prompt\W?injections?|jailbreak\w*|injection\W+attacks?
                    r"injections?\W+d'invites?|inyecci(?:o|on)(?:es)?\W+de\W+(?:prompts?|"
                    r"instrucciones)|security\W+awareness|attackers?\W+(?:hide|plant|embed|"
                    r"insert|write|use|can|may|could)|(?:hidden|planted|injected|malicious|"
-                   r"embedded)\W+(?:instructions|prompts?|text|commands)|social\W+engineering)\b")
+                   r"embedded)\W+(?:instructions|prompts?|text|commands)|social\W+engineering|phishing|"
+                   r"untrusted\W+(?:data|content|text|input)|(?:hostile|malicious|poisoned|"
+                   r"booby\W?trapped)\W+(?:documents?|pages?|content|websites?|sites?|files?)|"
+                   r"(?:weirdest|this|an?|such)\W+injections?|injection\W+(?:screen|filter|"
+                   r"check|defen[cs]es?|risks?|techniques?))\b")
 
 
 _TOPIC_STEMS = (b"promp", b"jailb", b"injec", b"adver", b"indir", b"red", b"redte", b"inyec",
-                b"secur", b"attac", b"hidde", b"plant", b"malic", b"embed", b"socia")
+                b"secur", b"attac", b"hidde", b"plant", b"malic", b"embed", b"socia",
+                b"phish", b"untru", b"hosti", b"poiso", b"booby")
 
 
 def topic_count(folded: str, limit: int = 20, tokens: set[bytes] | None = None) -> int:

@@ -1,0 +1,452 @@
+"""Train the instruction model of the injection check (gate/checks/injection/model.py).
+
+Gathers labelled units (a sentence, a short passage, or a window of one to three
+consecutive sentences of a benign document), hashes them with the check's own feature
+function, fits an L2-regularised logistic regression (scikit-learn, a development
+dependency: ``pip install -e '.[train]'``), chooses the thresholds on a validation split it
+does not train on, and writes ``gate/checks/injection/data/instruction_model.npz`` and the
+figures into ``benchmarks/data/injection_train/MODEL.md``.
+
+Data (see ``benchmarks/data/injection_train/README.md``):
+
+* ``benchmarks/data/injection_train/*.jsonl``: attack and benign snippets in many
+  languages, written for this project by a session that never saw the detector;
+* ``benchmarks/data/injection_blind/``: the first blind set (654 documents), used as
+  tuning data since it was looked at twice: benign documents give negative windows; the
+  payload of each attack is the lines it does not share with its closest benign host;
+* ``tests/fixtures/injection/``: benign documents give negative windows;
+* real text from Debian documentation packages (manual pages in ten languages, the
+  Python manual and the Debian Reference), installed with apt when missing and never
+  committed: a sample disjoint from the one ``benchmarks/debian_docs.py`` measures.
+
+Every document or snippet goes to the validation split when the first byte of the
+SHA-256 of its identity is below 52 (about 20 %), so the split is fixed and the same on
+every machine. The run is deterministic: the same data gives the same weights file, whose
+digest MODEL.md records.
+
+    python benchmarks/train_injection_model.py [--no-install] [--per-language 100] [--C 16]
+                                                [--pos-weight 5]
+"""
+
+from __future__ import annotations
+
+import argparse
+import gzip
+import hashlib
+import html
+import json
+import os
+import re
+import subprocess
+import sys
+import time
+from collections import Counter, defaultdict
+from pathlib import Path
+
+import numpy as np
+
+ROOT = Path(__file__).resolve().parent.parent
+sys.path.insert(0, str(ROOT))
+
+from benchmarks import debian_docs  # noqa: E402
+from benchmarks.injection_bench import is_val  # noqa: E402
+from gate.checks.injection import model as M  # noqa: E402
+from gate.checks.injection.lexicon import lfold  # noqa: E402
+
+TRAIN_DIR = ROOT / "benchmarks" / "data" / "injection_train"
+BLIND_DIR = ROOT / "benchmarks" / "data" / "injection_blind"
+FIXTURES = ROOT / "tests" / "fixtures" / "injection"
+CACHE = ROOT / "bench-out" / "train-cache"
+OUT = M.WEIGHTS
+REPORT = TRAIN_DIR / "MODEL.md"
+FP_REAL = 0.003  # thresholds: at most this share of validation real documents held
+FP_HARD = 0.02  # ... and of validation hard negatives (blind documents, snippets)
+FP_REAL_LOW = 0.02  # the low mark (hidden text, supporting evidence): at most these shares
+FP_HARD_LOW = 0.08
+PRUNE = 0.005  # weights smaller than this are not shipped
+
+
+# -- units -------------------------------------------------------------------------------------
+
+class Units:
+    """Rows of the design matrix: hashed features of one unit each, with label and group."""
+
+    def __init__(self) -> None:
+        self.rows: list[tuple[np.ndarray, np.ndarray]] = []
+        self.labels: list[int] = []
+        self.groups: list[str] = []  # validation document id (or "" for training rows)
+        self.kinds: list[str] = []
+
+    def add_text(self, text: str, label: int, kind: str, group: str) -> None:
+        b, v = M.unit_vector(lfold(text))
+        if len(b) >= M.MIN_FEATURES:
+            self.rows.append((b, v))
+            self.labels.append(label)
+            self.groups.append(group)
+            self.kinds.append(kind)
+
+    def add_windows(self, text: str, kind: str, group: str, stride: int = 1) -> None:
+        """Every window the check scores in ``text``, as negatives."""
+        buckets, sents, n = M.sentence_features(lfold(text[:M.MAX_CHARS]))
+        if not len(buckets):
+            return
+        order = np.argsort(sents, kind="stable")
+        buckets, sents = buckets[order], sents[order]
+        bounds = np.searchsorted(sents, np.arange(n + 1))
+        counts = np.diff(bounds)
+        for w in M.WINDOWS:
+            for i in range(0, n - w + 1, stride if w > 1 else 1):
+                if counts[i] == 0 or counts[i + w - 1] == 0:
+                    continue
+                a, z = bounds[i], bounds[i + w]
+                if z - a < M.MIN_FEATURES:
+                    continue
+                uniq, c = np.unique(buckets[a:z], return_counts=True)
+                self.rows.append((uniq, c / np.sqrt(z - a)))
+                self.labels.append(0)
+                self.groups.append(group)
+                self.kinds.append(kind)
+
+    def matrix(self, select: np.ndarray):
+        from scipy.sparse import csr_matrix
+        idx = np.nonzero(select)[0]
+        indptr = np.zeros(len(idx) + 1, np.int64)
+        indptr[1:] = np.cumsum([len(self.rows[i][0]) for i in idx])
+        indices = np.concatenate([self.rows[i][0] for i in idx]) if len(idx) else []
+        data = np.concatenate([self.rows[i][1] for i in idx]) if len(idx) else []
+        return csr_matrix((data, indices, indptr), shape=(len(idx), M.DIM))
+
+
+# -- sources -----------------------------------------------------------------------------------
+
+def snippets(units: Units, stats: Counter) -> list[dict]:
+    """The written snippets; returns the validation ones (scored as one-unit documents)."""
+    val = []
+    for path in sorted(TRAIN_DIR.glob("*.jsonl")):
+        for n, line in enumerate(path.read_text(encoding="utf-8").splitlines()):
+            if not line.strip():
+                continue
+            item = json.loads(line)
+            label = 1 if item["label"] == "attack" else 0
+            ident = f"snippet:{item['text']}"
+            if is_val(ident):
+                val.append(dict(item, group=ident))
+                stats[f"snippets val {item['label']}"] += 1
+                continue
+            units.add_text(item["text"], label, f"snippet/{item['class']}", "")
+            stats[f"snippets train {item['label']}"] += 1
+    return val
+
+
+_TAG = re.compile(r"<[^>]*>", re.S)
+# Code lines of a payload (the request to include them is the prose around them).
+_CODE_LINE = re.compile(r"[=(){};]\s*$|^\s*(?:import|def|from|curl|wget|\$|#!|//)|\w\(.*\)|"
+                        r"^[\w.]+\s*=")
+_ATTR = re.compile(r"=\s*\"([^\"]{12,})\"")
+
+
+def _plain_lines(data: bytes) -> list[str]:
+    """Lines of a document with markup dropped (attribute values kept) for diffing."""
+    text = data.decode("utf-8", "replace")
+    text = _TAG.sub(lambda m: "\n" + "\n".join(_ATTR.findall(m.group(0))) + "\n", text)
+    text = html.unescape(text)
+    return [ln.strip() for ln in text.splitlines() if len(ln.split()) >= 3 or
+            (len(ln.strip()) >= 8 and not ln.strip().isascii())]
+
+
+def blind(units: Units, stats: Counter) -> list[dict]:
+    """The first blind set as tuning data; returns its validation documents."""
+    from gate.extract import extract
+    rows = [json.loads(x) for x in (BLIND_DIR / "labels.jsonl").read_text().splitlines() if x]
+    lines = {r["file"]: _plain_lines((BLIND_DIR / r["file"]).read_bytes()) for r in rows}
+    benign_sets = {r["file"]: set(lines[r["file"]]) for r in rows if r["label"] == "benign"}
+    val = []
+    for r in rows:
+        data = (BLIND_DIR / r["file"]).read_bytes()
+        ident = f"blind:{r['file']}"
+        if is_val(ident):
+            val.append(dict(r, group=ident, data=data))
+            continue
+        if r["label"] == "benign":
+            ex = extract(data, max_pages=50, max_nesting=250)
+            units.add_windows(ex.text or "", f"blind/{r['class']}", "")
+            stats["blind benign docs"] += 1
+            continue
+        if r["class"] == "encoded":
+            continue  # the payload is read after decoding; its encoded form teaches nothing
+        mine = lines[r["file"]]
+        mine_set = set(mine)
+        best, overlap = None, 0
+        for f, s in benign_sets.items():
+            k = len(mine_set & s)
+            if k > overlap:
+                best, overlap = f, k
+        host = benign_sets[best] if best and overlap >= 3 else set()
+        payload = [ln for ln in mine if ln not in host]
+        if not host or not payload or len(payload) > 8:
+            stats["blind attacks without a payload found"] += 1
+            continue
+        prose = [ln for ln in payload if not _CODE_LINE.search(ln)]
+        if not prose:
+            continue
+        units.add_text("\n".join(prose), 1, f"blind/{r['class']}", "")
+        if r["class"] != "split":
+            for ln in prose:
+                units.add_text(ln, 1, f"blind/{r['class']}", "")
+        stats["blind attack docs"] += 1
+    return val
+
+
+def fixtures(units: Units, stats: Counter) -> None:
+    """Benign fixture documents: negative windows (their attacks are test fixtures)."""
+    from benchmarks.injection_bench import load_corpus
+    from gate.extract import extract
+    for row in load_corpus("all"):
+        if row["label"] != "benign":
+            continue
+        ex = extract(row["data"], max_pages=50, max_nesting=250)
+        units.add_windows(ex.text or "", "fixtures/benign", "")
+        stats["fixture benign docs"] += 1
+
+
+def real_documents(per_language: int, install: bool) -> list[tuple[str, str, str]]:
+    """Debian manual pages and HTML manuals not in the benchmark's samples: (group, id, text)."""
+    from gate.extract import extract
+    if install:
+        debian_docs.install(debian_docs.PACKAGES)
+    CACHE.mkdir(parents=True, exist_ok=True)
+    measured = set()
+    for offset in (0, 1, 2):  # what benchmarks/debian_docs.py samples (--offset 0, 1, 2)
+        debian_docs.OFFSET[0] = offset
+        for lang in debian_docs.MAN_LANGUAGES:
+            base = debian_docs.MAN_ROOT / lang if lang else debian_docs.MAN_ROOT
+            pages = [p for s in ("man1", "man5", "man7", "man8") for p in (base / s).glob("*.gz")]
+            measured.update(str(p) for p in debian_docs.sample(pages, 100))
+        for root in debian_docs.HTML_ROOTS:
+            files = [p for p in root.rglob("*.html") if p.is_file()] if root.is_dir() else []
+            n = 150 * 2 // 3 if "python" in str(root) else 150 // 3
+            measured.update(str(p) for p in debian_docs.sample(files, n))
+    out = []
+    for lang in debian_docs.MAN_LANGUAGES:
+        base = debian_docs.MAN_ROOT / lang if lang else debian_docs.MAN_ROOT
+        pages = sorted(p for s in ("man1", "man5", "man7", "man8") for p in (base / s).glob("*.gz")
+                       if str(p) not in measured)
+        step = max(1, len(pages) // per_language)
+        for page in pages[3::step][:per_language]:
+            text = _render(page)
+            if text:
+                out.append((f"man/{lang or 'en'}", str(page), text))
+    for root in debian_docs.HTML_ROOTS:
+        files = sorted(p for p in root.rglob("*.html") if p.is_file() and str(p) not in measured) \
+            if root.is_dir() else []
+        step = max(1, len(files) // 60)
+        for page in files[5::step][:60]:
+            ex = extract(page.read_bytes(), max_pages=50, max_nesting=250)
+            if ex.text:
+                out.append((f"html/{root.name}", str(page), ex.text))
+    return out
+
+
+def _render(page: Path) -> str:
+    key = CACHE / (hashlib.sha256(str(page).encode()).hexdigest()[:24] + ".txt")
+    if key.is_file():
+        return key.read_text(encoding="utf-8")
+    try:
+        with gzip.open(page) as raw:
+            if raw.read(200).startswith(b".so "):
+                key.write_text("", encoding="utf-8")
+                return ""
+        text = subprocess.run(["man", "-l", "-E", "UTF-8", str(page)], capture_output=True,
+                              timeout=30, env=dict(os.environ, MANWIDTH="80", MANPAGER="cat",
+                                                   LANG="C.UTF-8")).stdout
+    except (OSError, subprocess.SubprocessError, EOFError, gzip.BadGzipFile):
+        return ""
+    text = re.sub(".\x08", "", text.decode("utf-8", "replace"))
+    text = text if len(text) > 200 else ""
+    key.write_text(text, encoding="utf-8")
+    return text
+
+
+# -- fitting and choosing thresholds -------------------------------------------------------------
+
+def doc_probability(mdl: M.Model, text: str) -> float:
+    return mdl.probability(lfold(text))
+
+
+def choose(negatives: dict[str, tuple[list[float], float]]) -> float:
+    """The lowest threshold holding at most the given share of each group of negatives."""
+    for t in np.arange(0.50, 0.996, 0.005):
+        if all((np.mean(np.array(p) >= t) if p else 0.0) <= rate
+               for p, rate in negatives.values()):
+            return float(round(t, 3))
+    return 0.995
+
+
+def main(argv: list[str] | None = None) -> int:
+    parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
+    parser.add_argument("--no-install", action="store_true")
+    parser.add_argument("--per-language", type=int, default=100)
+    parser.add_argument("--C", type=float, default=16.0, help="inverse regularisation")
+    parser.add_argument("--pos-weight", type=float, default=5.0)
+    parser.add_argument("--out", default=str(OUT))
+    args = parser.parse_args(argv)
+    from sklearn.linear_model import LogisticRegression
+
+    t0 = time.time()
+    units = Units()
+    stats: Counter = Counter()
+    val_snippets = snippets(units, stats)
+    val_blind = blind(units, stats)
+    fixtures(units, stats)
+    real = real_documents(args.per_language, not args.no_install)
+    val_real = []
+    for group, ident, text in real:
+        if is_val(f"real:{ident}"):
+            val_real.append((group, ident, text))
+            continue
+        units.add_windows(text, f"real/{group}", "", stride=2)
+        stats["real docs train"] += 1
+    stats["real docs val"] = len(val_real)
+    labels = np.array(units.labels)
+    train = np.ones(len(labels), bool)
+    X = units.matrix(train)
+    y = labels[train]
+    weights = np.where(y == 1, args.pos_weight, 1.0)
+    print(f"units: {len(y)} ({int(y.sum())} positive); data in {time.time() - t0:.0f} s",
+          flush=True)
+    clf = LogisticRegression(C=args.C, solver="liblinear", max_iter=300, random_state=0)
+    clf.fit(X, y, sample_weight=weights)
+    coef = clf.coef_[0].astype(np.float32)
+    index = np.nonzero(np.abs(coef) >= PRUNE)[0].astype(np.int32)
+    value = coef[index].astype(np.float16)
+    bias = np.float32(clf.intercept_[0])
+    digest = hashlib.sha256(index.tobytes() + value.tobytes() + bias.tobytes()).hexdigest()
+    tmp = Path(args.out).with_suffix(".tmp.npz")
+    np.savez_compressed(tmp, index=index, value=value, bias=bias, threshold=np.float32(0.9),
+                        low=np.float32(0.5), addressed=np.float32(0.5), digest=np.str_(digest))
+    mdl = M.Model(tmp)
+
+    # validation: documents and snippets never trained on
+    pos: list = []
+    hard: list = []
+    hard_by: dict = defaultdict(list)
+    lang_by: dict = defaultdict(list)
+    pos_by: dict = defaultdict(list)
+    val_texts: dict[str, list[str]] = defaultdict(list)
+    for item in val_snippets:
+        p = doc_probability(mdl, item["text"])
+        val_texts["attack" if item["label"] == "attack" else "snippet benign"].append(
+            lfold(item["text"]))
+        if item["label"] == "attack":
+            pos.append(p)
+            pos_by[f"snippet {item['class']}"].append(p)
+            pos_by[f"snippet language {item['language']}"].append(p)
+        else:
+            hard.append(p)
+            hard_by[f"snippet {item['class']}"].append(p)
+            lang_by[item["language"]].append(p)
+    from gate.extract import extract
+    for item in val_blind:
+        ex = extract(item["data"], max_pages=50, max_nesting=250)
+        whole = "\n".join([ex.text or ""] + _plain_lines(item["data"]))
+        p = doc_probability(mdl, whole)
+        if item["label"] != "attack":
+            val_texts["blind benign"].append(lfold(whole))
+        elif item["class"] != "encoded":
+            val_texts["attack"].append(lfold(whole))
+        if item["label"] == "attack":
+            if item["class"] != "encoded":
+                pos.append(p)
+                pos_by[f"blind {item['class']}"].append(p)
+        else:
+            hard.append(p)
+            hard_by[f"blind {item['class']}"].append(p)
+    real_p = [doc_probability(mdl, text) for _, _, text in val_real]
+    blind_hard = [p for k, v in hard_by.items() if k.startswith("blind") for p in v]
+    snippet_hard = [p for k, v in hard_by.items() if k.startswith("snippet") for p in v]
+    threshold = choose({"real": (real_p, FP_REAL), "blind": (blind_hard, FP_HARD),
+                        "snippets": (snippet_hard, FP_HARD)})
+    low = choose({"real": (real_p, FP_REAL_LOW), "blind": (blind_hard, FP_HARD_LOW),
+                  "snippets": (snippet_hard, FP_HARD_LOW)})
+    low = min(low, threshold)
+    # the addressed mark: a window that names an AI reader holds from here on
+    mdl.threshold, mdl.low = threshold, low
+    texts_pos = [t for t in val_texts["attack"]]
+    addressed, neg = threshold, {"real": ([lfold(t) for _, _, t in val_real], FP_REAL),
+                                 "blind": (val_texts["blind benign"], FP_HARD),
+                                 "snippets": (val_texts["snippet benign"], FP_HARD)}
+    for mark in np.arange(0.5, threshold, 0.01):
+        mdl.addressed = float(mark)
+        if all(np.mean([mdl.holds(t) for t in texts]) <= rate if texts else True
+               for texts, rate in neg.values()):
+            addressed = float(round(mark, 3))
+            break
+    mdl.addressed = addressed
+    held_pos = [mdl.holds(t) for t in texts_pos]
+    hard = blind_hard + snippet_hard
+    at = {"recall": float(np.mean(np.array(pos) >= threshold)),
+          "fp_hard": float(np.mean(np.array(hard) >= threshold)),
+          "fp_real": float(np.mean(np.array(real_p) >= threshold)) if real_p else 0.0}
+    np.savez_compressed(tmp, index=index, value=value, bias=bias,
+                        threshold=np.float32(threshold), low=np.float32(low),
+                        addressed=np.float32(addressed), digest=np.str_(digest))
+    os.replace(tmp, args.out)
+    file_digest = hashlib.sha256(Path(args.out).read_bytes()).hexdigest()
+    lines = [
+        "# The instruction model: how it was trained (written by the training script)",
+        "",
+        "`python benchmarks/train_injection_model.py` "
+        f"(C={args.C}, positive weight {args.pos_weight}); scikit-learn "
+        f"{__import__('sklearn').__version__}, liblinear.",
+        "",
+        f"* units trained on: {len(y)} ({int(y.sum())} attack units)",
+        *[f"* {k}: {v}" for k, v in sorted(stats.items())],
+        f"* real documents used: {len(real)} (manual pages and HTML manuals; validation "
+        f"{len(val_real)})",
+        f"* weights shipped: {len(index)} of {M.DIM} buckets (|w| >= {PRUNE}), "
+        f"float16; bias {float(bias):.4f}",
+        f"* weights digest (index, value, bias): `{digest}`",
+        f"* file SHA-256: `{file_digest}`",
+        "",
+        "## Thresholds, chosen on the validation split",
+        "",
+        f"The lowest probability holding at most {FP_REAL:.1%} of validation real documents "
+        f"and {FP_HARD:.0%} of validation hard negatives: **threshold {threshold}** "
+        f"(a window at or above it is an instruction on its own); low {low} (supporting "
+        "evidence, and enough in hidden or encoded text).",
+        "",
+        f"Addressed mark **{addressed}**: a window naming an AI reader (or the reader's "
+        "answer with its user) at or above it is an instruction on its own; the lowest mark "
+        "within the same limits.",
+        "",
+        f"* validation attacks: {len(pos)}, recall at the threshold {at['recall']:.3f}, "
+        f"with the addressed mark {np.mean(held_pos):.3f}, at low "
+        f"{np.mean(np.array(pos) >= low):.3f}",
+        f"* validation hard negatives: {len(hard)}, held {at['fp_hard']:.3f} (blind documents "
+        f"{np.mean(np.array(blind_hard) >= threshold):.3f}, snippets "
+        f"{np.mean(np.array(snippet_hard) >= threshold):.3f})",
+        f"* validation real documents: {len(real_p)}, held {at['fp_real']:.4f}",
+        "",
+        "| validation group | n | at threshold | at low |",
+        "|---|---|---|---|",
+    ]
+    for key in sorted(pos_by):
+        v = np.array(pos_by[key])
+        lines.append(f"| attack: {key} | {len(v)} | {np.mean(v >= threshold):.2f} | "
+                     f"{np.mean(v >= low):.2f} |")
+    for key in sorted(hard_by):
+        v = np.array(hard_by[key])
+        lines.append(f"| benign: {key} | {len(v)} | {np.mean(v >= threshold):.2f} | "
+                     f"{np.mean(v >= low):.2f} |")
+    for key in sorted(lang_by):
+        v = np.array(lang_by[key])
+        lines.append(f"| benign: snippet language {key} | {len(v)} | "
+                     f"{np.mean(v >= threshold):.2f} | {np.mean(v >= low):.2f} |")
+    REPORT.write_text("\n".join(lines) + "\n", encoding="utf-8")
+    print("\n".join(lines))
+    print(f"\ntotal {time.time() - t0:.0f} s")
+    return 0
+
+
+if __name__ == "__main__":
+    raise SystemExit(main())
