@@ -32,7 +32,7 @@ WEIGHTS = Path(__file__).resolve().parent / "data" / "instruction_model.npz"
 DIM = 1 << 19
 PREFIX = 5
 WINDOWS = (1, 2, 3)
-MIN_FEATURES = 4  # units with fewer feature occurrences are not scored
+MIN_FEATURES = 10  # units with fewer feature occurrences (about four words) are not scored
 MAX_CHARS = 150_000
 MAX_REPORTED = 4
 _PAIR_MULT = np.uint64(0x9E3779B1)
@@ -111,6 +111,18 @@ def _words(folded: str) -> tuple[np.ndarray, np.ndarray, np.ndarray, np.ndarray,
     next_letter = np.concatenate([letter[1:], [False]])
     starts = np.nonzero((letter & ~prev_letter) | cjk)[0]
     ends = np.nonzero((letter & ~next_letter) | cjk)[0] + 1
+    # Words of addresses (a run without spaces holding "://", "@" or a dot between
+    # letters: links, e-mail addresses, host and file names) are left out: which host a
+    # link names says nothing about the sentence around it.
+    space = (cps == 32) | (cps == 10) | (cps == 9) | (cps == 13)
+    dot = cps == 46
+    glue = (cps == 64) | ((cps == 47) & np.concatenate([cps[1:] == 47, [False]])) | \
+        (dot & prev_letter & next_letter)
+    if glue.any():
+        run = np.cumsum(space)
+        address = np.bincount(run, weights=glue, minlength=int(run[-1]) + 1) > 0
+        inside = address[run[starts]]
+        starts, ends = starts[~inside], ends[~inside]
     with np.errstate(over="ignore"):
         vals = (cps.astype(np.uint64) + np.uint64(1)) * _UP[:n]
         prefix_sum = np.concatenate([[np.uint64(0)], np.cumsum(vals, dtype=np.uint64)])

@@ -143,7 +143,8 @@ class Screen:
             if visible_text and self.topic:
                 weight = round(weight * TOPIC_DAMPING, 4)
                 note = "; ".join(x for x in (note, "the document discusses the topic") if x)
-            if visible_text and self.chat_log and m.signal in CHAT_LOG_SIGNALS:
+            if visible_text and self.chat_log and m.signal in CHAT_LOG_SIGNALS and \
+                    _speaker(text, m.start):
                 weight = round(weight * CHAT_LOG_DAMPING, 4)
                 note = "; ".join(x for x in (note, CHAT_LOG_NOTE) if x)
             content.append(self._hit(source, m.signal, weight, m.start, m.end, text,
@@ -249,7 +250,8 @@ class Screen:
             if visible_text and self.topic:
                 weight *= TOPIC_DAMPING * 0.8
                 why = f"{why}; the document discusses the topic"
-            if visible_text and self.chat_log and signal in CHAT_LOG_SIGNALS:
+            if visible_text and self.chat_log and signal in CHAT_LOG_SIGNALS and \
+                    _speaker(folded, start):
                 weight *= CHAT_LOG_DAMPING
                 why = f"{why}; {CHAT_LOG_NOTE}"
             same = [h for s, e, h in by_span if s < end and start < e and
@@ -359,6 +361,18 @@ class Screen:
         for hit in kept:
             hit.pop("segment_span", None)
         return kept
+
+
+_SYSTEM_SPEAKERS = frozenset({"system", "assistant", "agent", "bot", "support", "moderator",
+                              "operator"})
+
+
+def _speaker(text: str, pos: int) -> bool:
+    """Is ``pos`` on a chat line of the system or the assistant (its label or its words)?
+    A planted line spoken by a customer that addresses the assistant is not."""
+    line = text.rfind("\n", 0, max(0, pos)) + 1
+    m = _CHAT_LINE.match(text[line:line + 80].lower())
+    return bool(m and m.group(2) in _SYSTEM_SPEAKERS and m.end() > m.end(2))
 
 
 def _is_chat_log(folded: str) -> bool:
