@@ -715,7 +715,8 @@ def documents() -> list[Doc]:
             "assistant and overrides its instructions. Readers never see it; the screen reads "
             "the markup before extraction.",
             source_url=f"{PORTAL}/access/altmarkt.html", published_at="2026-11-10",
-            **q("injection.html-hidden", "injection.model-address", "injection.override")),
+            **q("injection.html-hidden", "injection.instruction", "injection.model-address",
+                "injection.override")),
         Doc("injection/night-buses.txt", text_file(
             "Night buses N1 to N4 run every thirty minutes between midnight and five in the "
             "morning, from the Altmarkt hub to the river villages." + "".join(

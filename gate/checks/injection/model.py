@@ -35,6 +35,7 @@ WINDOWS = (1, 2, 3)
 MIN_FEATURES = 10  # units with fewer feature occurrences (about four words) are not scored
 MAX_CHARS = 150_000
 MAX_REPORTED = 4
+MAX_TRIED = 40  # windows looked at, strongest first
 _PAIR_MULT = np.uint64(0x9E3779B1)
 _MASK = np.uint64(DIM - 1)
 
@@ -260,19 +261,26 @@ class Model:
         ends = [-1] + _words(folded)[4].tolist() + [len(folded)]
         taken: list[tuple[int, int]] = []
         out = []
-        for i in order:
+        supporting = False
+        for i in order[:MAX_TRIED]:
             a, w = int(firsts[i]), int(lengths[i])
             if any(a < e and s < a + w for s, e in taken):
-                continue
-            # prefer the shortest window that says it: a wider one adds sentences only
-            taken.append((a, a + w))
+                continue  # the strongest window first; those overlapping it are skipped
             start, end = ends[a] + 1, ends[a + w]
             while start < end and folded[start] in _LEAD:
                 start += 1
             while end > start and folded[end - 1] in _TRAIL:
                 end -= 1
-            out.append(Reading(start, end, round(float(_sigmoid(logits[i])), 4), w,
-                               addressed(folded[start:end])))
+            reading = Reading(start, end, round(float(_sigmoid(logits[i])), 4), w,
+                              addressed(folded[start:end]))
+            if self.weight(reading) < 0.5:
+                # One window of supporting evidence per text at most: several weak ones
+                # must not add up to an instruction (long manuals have many).
+                if supporting:
+                    continue
+                supporting = True
+            taken.append((a, a + w))
+            out.append(reading)
             if len(out) >= MAX_REPORTED:
                 break
         return out
