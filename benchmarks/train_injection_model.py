@@ -133,7 +133,10 @@ def snippets(units: Units, stats: Counter) -> list[dict]:
                 val.append(dict(item, group=ident))
                 stats[f"snippets val {item['label']}"] += 1
                 continue
-            units.add_text(item["text"], label, f"snippet/{item['class']}", "")
+            text = item["text"]
+            if label:  # the request is the instruction; its code would teach "import os"
+                text = "\n".join(ln for ln in text.splitlines() if not _CODE_LINE.search(ln))
+            units.add_text(text, label, f"snippet/{item['class']}", "")
             stats[f"snippets train {item['label']}"] += 1
     return val
 
