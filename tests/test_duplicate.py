@@ -32,6 +32,26 @@ def test_words_normalise_case_punctuation_and_compatibility_forms():
         ["the", "depot", "north", "open", "five", "days"]
 
 
+def test_sketch_values_are_datasketchs_own():
+    # The reference library: datasketch's MinHash (affine32, seed 1, 256 permutations)
+    # fed the same 32-bit item hashes one batch at a time must hold the very values the
+    # vectorised sketch computes, so stored sketches and the LSH stay compatible.
+    import numpy as np
+    from datasketch import MinHash
+
+    rng = np.random.default_rng(5)
+    for size in (0, 1, 7, 511, 512, 513, 3000):
+        hashes = rng.integers(0, 2**32, size=size, dtype=np.uint64).astype(np.uint32)
+        reference = MinHash(num_perm=dup.NUM_PERM, seed=dup.SEED, scheme=dup.SCHEME,
+                            hashfunc=int)
+        reference.update_batch(hashes.tolist())
+        assert np.array_equal(dup.sketch_values(hashes), reference.hashvalues)
+    edge = np.array([0, 1, 2**31, 2**32 - 1], dtype=np.uint32)
+    reference = MinHash(num_perm=dup.NUM_PERM, seed=dup.SEED, scheme=dup.SCHEME, hashfunc=int)
+    reference.update_batch(edge.tolist())
+    assert np.array_equal(dup.sketch_values(edge), reference.hashvalues)
+
+
 def sketch(tokens: set[str]):
     """The production sketch of a set of tokens (1-shingles: one hash per token)."""
     return dup.sketch_hashes(dup.shingle_hashes(sorted(tokens), 1))
