@@ -136,9 +136,14 @@ def _grams(pieces: list[str], prof: _Profiles):
     """langdetect's n-grams of every piece, vectorised: the normalised code points, the
     piece each belongs to, and (keys, end positions) for n = 1, 2, 3, each in text order."""
     joined = SEPARATOR.join(pieces)
-    joined = Detector.URL_RE.sub(" ", joined)
-    joined = Detector.MAIL_RE.sub(" ", joined)
-    joined = NGram.normalize_vi(joined)
+    # each pass only where it can match (a URL needs "http", an address "@", Vietnamese
+    # recomposition a combining mark): the same text, without three scans of it
+    if "http" in joined:
+        joined = Detector.URL_RE.sub(" ", joined)
+    if "@" in joined:
+        joined = Detector.MAIL_RE.sub(" ", joined)
+    if not joined.isascii() and any(mark in joined for mark in NGram.DMARK_CLASS):
+        joined = NGram.normalize_vi(joined)
     cps = np.frombuffer(joined.encode("utf-32-le"), dtype=np.uint32).astype(np.uint64)
     bmp = cps < 0x10000
     cps[bmp] = prof.normal[cps[bmp]]
