@@ -36,7 +36,10 @@ def plain(text: str) -> str:
 def words(text: str) -> list[str]:
     """The normalised words of a text: markup dropped, NFKC, case-folded, punctuation
     removed."""
-    return _WORD.findall(unicodedata.normalize("NFKC", plain(text)).casefold())
+    text = plain(text)
+    if not text.isascii():  # NFKC leaves ASCII as it is
+        text = unicodedata.normalize("NFKC", text)
+    return _WORD.findall(text.casefold())
 
 
 def block_hash(text: str) -> int | None:

@@ -186,12 +186,15 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
 
     def flush() -> None:
         nonlocal linked
+        if not parts:  # nothing since the last boundary (then nothing was linked either)
+            return
         raw = "".join(parts)
         parts.clear()
         # preformatted text is a block per line, as trafilatura writes it
         pieces = raw.split("\n") if "pre" in holders else [raw]
         for piece in pieces:
-            text = re.sub(r"\s+", " ", piece).strip()
+            # runs of white space as one space, trimmed (str.split's white space is re's \s)
+            text = " ".join(piece.split())
             digest = block_hash(text) if text else None
             if digest is not None:
                 blocks.append(Block(text=text, hash=digest, main=False,
