@@ -39,6 +39,7 @@ Example::
 from __future__ import annotations
 
 import re
+from itertools import repeat
 from typing import Any
 
 import numpy as np
@@ -174,8 +175,8 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
     if len(words) < 2:
         return top, dup
     ids = {w: i for i, w in enumerate(dict.fromkeys(words), 1)}
-    seq = np.array(list(map(ids.__getitem__, words)), dtype=np.uint64)
-    lengths = np.array(list(map(len, words)), dtype=np.int64)
+    seq = np.fromiter(map(ids.__getitem__, words), dtype=np.uint64, count=len(words))
+    lengths = np.fromiter(map(len, words), dtype=np.int64, count=len(words))
     total = int(lengths.sum())
     if not total:
         return top, dup
@@ -220,9 +221,9 @@ def measure(extraction: Extraction) -> dict[str, Any]:
     tokens = text.split()
     words = tokens[:MAX_SCANNED_WORDS]
     scanned = " ".join(words)
-    lines = [line.strip() for line in text.split("\n") if line.strip()]
-    paragraphs = [p.strip() for p in _PARAGRAPH.split(text) if p.strip()]
-    lower = [w.strip(_PUNCT) for w in scanned.lower().split()]
+    lines = [line for line in map(str.strip, text.split("\n")) if line]
+    paragraphs = [p for p in map(str.strip, _PARAGRAPH.split(text)) if p]
+    lower = list(map(str.strip, scanned.lower().split(), repeat(_PUNCT)))
     n = len(tokens)
     stats: dict[str, Any] = {
         "words": n,
