@@ -61,6 +61,12 @@ class _Profiles:
         items = sorted((self.key(gram), probs)
                        for gram, probs in factory.word_lang_prob_map.items())
         self.keys = np.array([key for key, _ in items], dtype=np.uint64)
+        # keys of n letters lie in [2^(21(n-1)), 2^(21n)) (a normalised letter is never
+        # NUL): where each length's keys start, and the 1-grams' rows by code point
+        self.starts = [int(np.searchsorted(self.keys, np.uint64(1 << (21 * n))))
+                       for n in range(3)] + [self.keys.size]
+        self.unigram = np.full(0x110000, -1, dtype=np.int32)
+        self.unigram[self.keys[:self.starts[1]].astype(np.int64)] = np.arange(self.starts[1])
         probs = np.array([p for _, p in items], dtype=np.float64)
         self.logp = np.log(probs + _ALPHA / _BASE_FREQ).astype(np.float32)
         # NGram.normalize maps one character to one character: a table over the BMP
@@ -181,10 +187,16 @@ def _grams(pieces: list[str], prof: _Profiles):
     return cps, chunk_of, grams
 
 
-def _lookup(prof: _Profiles, keys: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
-    """Each key's row in the profiles, and whether the profiles have it at all."""
-    found = np.searchsorted(prof.keys, keys)
-    found[found >= prof.keys.size] = 0
+def _lookup(prof: _Profiles, keys: np.ndarray, length: int) -> tuple[np.ndarray, np.ndarray]:
+    """Each key's row in the profiles, and whether the profiles have it at all (the
+    n-grams of one ``length``: 1-grams by table, longer ones among their own length)."""
+    if length == 1:
+        found = prof.unigram[keys.astype(np.int64)]
+        hit = found >= 0
+        return np.where(hit, found, 0), hit
+    lo, hi = prof.starts[length - 1], prof.starts[length]
+    found = np.searchsorted(prof.keys[lo:hi], keys) + lo
+    found[found >= hi] = lo
     return found, prof.keys[found] == keys
 
 
@@ -195,7 +207,7 @@ def profile_ngrams(text: str) -> list[str]:
     _cps, _owner, grams = _grams([text], prof)
     out = []
     for length, (keys, _ends) in enumerate(grams, start=1):
-        _found, hit = _lookup(prof, keys)
+        _found, hit = _lookup(prof, keys, length)
         for key in keys[hit].tolist():
             out.append("".join(chr((key >> (21 * i)) & 0x1FFFFF)
                                for i in reversed(range(length))))
@@ -220,7 +232,7 @@ def identify(text: str) -> Shares:
     weight = np.zeros((2, n_chunks))
     bounds = np.arange(n_chunks + 1)
     for length, (keys, ends) in enumerate(grams, start=1):
-        found, hit = _lookup(prof, keys)
+        found, hit = _lookup(prof, keys, length)
         for part, mask in enumerate((hit & latin_end[ends], hit & ~latin_end[ends])):
             owner = chunk_of[ends[mask]]  # in text order, so grouped by chunk
             counts = sparse.csr_matrix(
