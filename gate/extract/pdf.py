@@ -117,17 +117,21 @@ def _dates(meta: dict[str, str], xmp: str) -> tuple[DateClaim, ...]:
     return tuple(claims)
 
 
-def extract_pdf(data: bytes, max_pages: int) -> Extraction:
-    """Extract a PDF: check encryption and page count first, then pull the text."""
+def extract_pdf(data: bytes, max_pages: int, main_text: str | None = None) -> Extraction:
+    """Extract a PDF: check encryption and page count first, then pull the text.
+
+    ``main_text`` is this PDF's text from an earlier extraction of the same bytes: the same
+    result, without pulling the text out of every page again (the reader, metadata and
+    annotations are still read, for the checks)."""
     try:
         with pypdf.apply_configuration(**_config()):
-            return _extract(data, max_pages)
+            return _extract(data, max_pages, main_text)
     except LimitReachedError as err:
         return failed("pdf", "bomb", "a stream of the PDF decompresses past the "
                                      f"{STREAM_CAP:,}-byte cap ({_why(err)})")
 
 
-def _extract(data: bytes, max_pages: int) -> Extraction:
+def _extract(data: bytes, max_pages: int, main_text: str | None = None) -> Extraction:
     try:
         reader = pypdf.PdfReader(io.BytesIO(data), strict=False)
     except DependencyError as err:
@@ -165,6 +169,12 @@ def _extract(data: bytes, max_pages: int) -> Extraction:
     if pages > max_pages:
         return failed("pdf", "too-many-pages",
                       f"the PDF has {pages} pages (limit {max_pages})", **common)
+    if main_text is not None:
+        summary = Extracted(type="pdf", text_chars=len(main_text), **common)
+        extraction = Extraction(summary=summary, text=main_text, raw=data, reader=reader)
+        extraction.extras["xmp"] = _TAGS.sub(" ", xmp)[:MAX_META_CHARS]
+        extraction.extras["annotations"] = _annotations(reader, pages)
+        return extraction
     texts: list[str] = []
     try:
         for page in reader.pages:
