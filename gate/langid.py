@@ -151,8 +151,11 @@ def _grams(pieces: list[str], prof: _Profiles):
     if not joined.isascii() and any(mark in joined for mark in NGram.DMARK_CLASS):
         joined = NGram.normalize_vi(joined)
     cps = np.frombuffer(joined.encode("utf-32-le"), dtype=np.uint32).astype(np.uint64)
-    bmp = cps < 0x10000
-    cps[bmp] = prof.normal[cps[bmp]]
+    if cps.size and cps.max() < 0x10000:  # the usual case: one gather, no masks
+        cps = prof.normal[cps]
+    else:
+        bmp = cps < 0x10000
+        cps[bmp] = prof.normal[cps[bmp]]
     sep = cps == ord(SEPARATOR)
     chunk_of = np.cumsum(sep)
     # langdetect drops Latin letters from a text whose non-Latin letters are more than twice
@@ -172,9 +175,12 @@ def _grams(pieces: list[str], prof: _Profiles):
     cps = np.concatenate((np.array([32], dtype=np.uint64), cps[keep]))
     space = np.concatenate(([True], space[keep]))
     chunk_of = np.concatenate(([0], chunk_of[keep]))
-    upper = np.zeros(cps.size, dtype=bool)
-    bmp = cps < 0x10000
-    upper[bmp] = prof.upper[cps[bmp]]
+    if cps.max() < 0x10000:
+        upper = prof.upper[cps]
+    else:
+        upper = np.zeros(cps.size, dtype=bool)
+        bmp = cps < 0x10000
+        upper[bmp] = prof.upper[cps[bmp]]
     skip = upper & np.concatenate(([False], upper[:-1]))  # inside a word in capitals
     one = ~space & ~skip
     two = ~(space[:-1] & space[1:]) & ~skip[1:]
@@ -222,12 +228,15 @@ def identify(text: str) -> Shares:
         return Shares(0, 0, ())
     n_chunks = len(pieces)
     cps, chunk_of, grams = _grams(pieces, prof)
-    bmp = cps < 0x10000
     # a chunk is scored twice: its n-grams that end in a Latin letter, and the others, so
     # identifiers in a Japanese page or a Russian quote in a German one are judged apart
     latin_end = (cps < 0x250) | ((cps >= 0x1E00) & (cps < 0x1F00))
-    char_weight = np.ones(cps.size)
-    char_weight[bmp] = prof.weight[cps[bmp]]
+    if cps.max() < 0x10000:
+        char_weight = prof.weight[cps]
+    else:
+        bmp = cps < 0x10000
+        char_weight = np.ones(cps.size)
+        char_weight[bmp] = prof.weight[cps[bmp]]
     scores = np.zeros((2, n_chunks, len(prof.langs)), dtype=np.float32)
     weight = np.zeros((2, n_chunks))
     bounds = np.arange(n_chunks + 1)
