@@ -25,6 +25,7 @@ the reference: the tests compare the two on chunks of real text.
 
 from __future__ import annotations
 
+import itertools
 import re
 from dataclasses import dataclass
 
@@ -58,16 +59,19 @@ class _Profiles:
         detector_factory.init_factory()
         factory = detector_factory._factory
         self.langs = tuple(factory.langlist)
-        items = sorted((self.key(gram), probs)
-                       for gram, probs in factory.word_lang_prob_map.items())
-        self.keys = np.array([key for key, _ in items], dtype=np.uint64)
+        table = factory.word_lang_prob_map
+        keys = np.fromiter(map(self.key, table), dtype=np.uint64, count=len(table))
+        order = np.argsort(keys, kind="stable")  # the keys are distinct: a plain sort
+        self.keys = keys[order]
+        width = len(self.langs)
+        probs = np.fromiter(itertools.chain.from_iterable(table.values()), dtype=np.float64,
+                            count=len(table) * width).reshape(len(table), width)[order]
         # keys of n letters lie in [2^(21(n-1)), 2^(21n)) (a normalised letter is never
         # NUL): where each length's keys start, and the 1-grams' rows by code point
         self.starts = [int(np.searchsorted(self.keys, np.uint64(1 << (21 * n))))
                        for n in range(3)] + [self.keys.size]
         self.unigram = np.full(0x110000, -1, dtype=np.int32)
         self.unigram[self.keys[:self.starts[1]].astype(np.int64)] = np.arange(self.starts[1])
-        probs = np.array([p for _, p in items], dtype=np.float64)
         self.logp = np.log(probs + _ALPHA / _BASE_FREQ).astype(np.float32)
         # NGram.normalize maps one character to one character: a table over the BMP
         self.normal = np.arange(0x10000, dtype=np.uint64)
