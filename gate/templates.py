@@ -48,6 +48,7 @@ import hashlib
 import math
 from collections.abc import Iterable, Sequence
 from dataclasses import dataclass
+from typing import Any
 
 import numpy as np
 
@@ -131,6 +132,21 @@ def learn(pages: Iterable[Page]) -> dict[str, tuple[np.ndarray, np.ndarray]]:
         if len(strong) or len(weak):
             learnt[site] = (strong, weak)
     return learnt
+
+
+def stored_pages(state: Any, batch: set[str]) -> list[Page]:
+    """The pages of the stored corpus (documents not in ``batch``, a set of doc ids) that
+    can teach a site's template: their blocks come from the cache entry of their text.
+    What an incremental run, and ``gate explain --against``, learn from besides the batch."""
+    pages = []
+    for row in state.corpus(sketches=False):
+        site = site_of(row["source_url"])
+        if site is None or row["doc_id"] in batch or not row["cache_key"]:
+            continue
+        cached = state.cache_meta(row["cache_key"])
+        if cached is not None and cached[1].get("blocks"):
+            pages.append(Page.of(f"{site} {cached[0].get('type')}", cached[1]["blocks"]))
+    return pages
 
 
 Removal = tuple[tuple[int, ...], tuple[int, ...]]  # (everywhere, aside-only), or ()

@@ -254,3 +254,75 @@ def test_preformatted_text_is_a_block_per_line():
             b"<pre>make demo\nmake test</pre></body></html>")
     texts = [b.text for b in extract(page, max_pages=10, max_nesting=100).blocks]
     assert texts[-2:] == ["make demo", "make test"]
+
+
+# -- explain learns as a run does --------------------------------------------------------
+
+def test_explain_removes_the_template_a_run_removes(tmp_path):
+    from gate import manifest as manifest_mod
+    from gate.explain import explain
+
+    inbox, loaded = make_portal(tmp_path, 6)
+    result = run(RunOptions(inbox=inbox, policy=loaded, out=tmp_path / "out", as_of=AS_OF))
+    report = json.loads(result.report_path.read_text())
+    manifest = manifest_mod.load(inbox / "manifest.jsonl")
+    for doc in report["documents"][:2]:
+        found = explain(inbox / doc["path"], loaded, record=manifest.get(doc["path"]),
+                        as_of=AS_OF, inbox_path=doc["path"], batch=inbox,
+                        batch_manifest=manifest)
+        assert found.document.extracted.text_chars == doc["text_chars"]
+        assert found.decision == doc["decision"] == "accepted"
+        assert found.site_template == {"site": "portal.example.org", "pages": 6,
+                                       "removed": found.site_template["removed"]}
+        assert found.site_template["removed"] > 24  # the teasers, menu and legal text
+        assert found.document.extracted.template["kept"] == "page"
+    # without the batch, one page teaches nothing: trafilatura's text, the teasers
+    alone = explain(inbox / "notice-0.html", loaded, record=manifest.get("notice-0.html"),
+                    as_of=AS_OF, inbox_path="notice-0.html")
+    assert alone.site_template is None and alone.document.extracted.template == {}
+    assert alone.document.extracted.text_chars != report["documents"][0]["text_chars"]
+
+
+def test_explain_against_a_folder_learns_from_its_stored_pages(tmp_path):
+    from gate.explain import explain
+    from gate.manifest import ManifestRecord
+
+    inbox, loaded = make_portal(tmp_path, 6)
+    out = tmp_path / "out"
+    run(RunOptions(inbox=inbox, policy=loaded, out=out, as_of=AS_OF))
+    later = tmp_path / "later"
+    later.mkdir()
+    (later / "notice-9.html").write_bytes(portal_page(9))
+    (later / "manifest.jsonl").write_text(json.dumps(
+        {"path": "notice-9.html", "source_url": "https://portal.example.org/n/9"}) + "\n")
+    record = ManifestRecord(path="notice-9.html", line=1,
+                            source_url="https://portal.example.org/n/9")
+    found = explain(later / "notice-9.html", loaded, record=record, as_of=AS_OF,
+                    inbox_path="notice-9.html", against=out)
+    # the incremental run into that folder measures the same text
+    result = run(RunOptions(inbox=later, policy=loaded, out=out, as_of=AS_OF,
+                            incremental=True))
+    [doc] = json.loads(result.report_path.read_text())["documents"]
+    assert found.site_template["pages"] == 7 and found.site_template["removed"] > 24
+    assert found.document.extracted.text_chars == doc["text_chars"]
+    assert found.decision == doc["decision"] == "accepted"
+
+
+def test_explain_command_names_the_batch_and_its_template(tmp_path):
+    from typer.testing import CliRunner
+
+    from gate.cli import app
+
+    inbox, _loaded = make_portal(tmp_path, 4)
+    runner = CliRunner()
+    done = runner.invoke(app, ["explain", str(inbox / "notice-1.html"), "--policy",
+                               str(tmp_path / "policy.yaml"), "--batch", str(inbox),
+                               "--as-of", "2026-12-01"])
+    assert done.exit_code == 0, done.output
+    # the manifest line of the batch gave its site; four pages teach the template
+    assert "site template of portal.example.org (learnt from 4 distinct pages)" in done.output
+    assert "checked: the page's own blocks" in done.output
+    missing = runner.invoke(app, ["explain", str(inbox / "notice-1.html"), "--policy",
+                                  str(tmp_path / "policy.yaml"), "--batch",
+                                  str(tmp_path / "nowhere")])
+    assert missing.exit_code != 0 and "--batch" in missing.output
