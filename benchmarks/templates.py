@@ -313,6 +313,67 @@ def cost(n: int, work: Path, workers: int) -> None:
               f"{n / seconds:.1f} documents/s; worker seconds: {stages}", flush=True)
 
 
+def cross_format(n: int, verbose: bool = False) -> None:
+    """The same body as HTML, PDF, text and Markdown (benchmarks/template_corpus.py's
+    renderings, invented bodies with a heading, a list and a table each): the Jaccard of
+    the word 5-grams of gate's text of each format against the body, and between formats."""
+    import random
+    from itertools import combinations
+
+    from benchmarks.template_corpus import make_body, renderings, title
+    from gate.extract import extract
+
+    rng = random.Random(2026)
+    streams: dict[str, list[list[str]]] = {}
+    bodies: list[list[str]] = []
+    for _ in range(n):
+        body = make_body(rng)
+        kinds = {kind for kind, _value in body["parts"]}
+        if "heading" not in kinds:
+            body["parts"].insert(1, ("heading", title(rng)))
+        if "list" not in kinds:
+            body["parts"].insert(2, ("list", [title(rng) + " before noon" for _ in range(3)]))
+        if "table" not in kinds:
+            body["parts"].append(("table", [["Street", "From", "Until"]] + [
+                [title(rng), f"{rng.randint(6, 11)}:00", f"{rng.randint(12, 20)}:30"]
+                for _ in range(3)]))
+        truth = "\n".join([body["title"]] + [
+            "\n".join(" ".join(r) for r in v) if k == "table" else
+            ("\n".join(v) if k == "list" else v) for k, v in body["parts"]])
+        bodies.append(words(truth))
+        for name, data in renderings(body, "Invented Records Office").items():
+            text = extract(data, max_pages=50, max_nesting=100).text
+            streams.setdefault(name, []).append(words(text))
+
+    def jac(a: list[str], b: list[str]) -> float:
+        x = {tuple(a[i:i + 5]) for i in range(len(a) - 4)}
+        y = {tuple(b[i:i + 5]) for i in range(len(b) - 4)}
+        return len(x & y) / max(1, len(x | y))
+
+    def line(label: str, values: list[float], same: int) -> None:
+        values = sorted(values)
+        print(f"  {label:<24} mean {sum(values) / len(values):.3f}  min {values[0]:.3f}  "
+              f">= 0.95: {sum(v >= 0.95 for v in values):>3}/{len(values)}  identical "
+              f"token stream: {same}/{len(values)}")
+
+    print(f"cross-format agreement, {n} invented bodies (heading, list and table in each); "
+          "Jaccard of word 5-grams:")
+    for name, got in streams.items():
+        line(f"{name} vs body", [jac(g, b) for g, b in zip(got, bodies)],
+             sum(g == b for g, b in zip(got, bodies)))
+    for x, y in combinations(streams, 2):
+        line(f"{x} vs {y}", [jac(a, b) for a, b in zip(streams[x], streams[y])],
+             sum(a == b for a, b in zip(streams[x], streams[y])))
+    if verbose:
+        import difflib
+        for name, got in streams.items():
+            for g, b in zip(got, bodies):
+                if g != b:
+                    diff = [d for d in difflib.ndiff(b, g) if d[0] in "+-"]
+                    print(f"  {name}: {' '.join(diff[:16])}")
+                    break
+
+
 def main() -> None:
     parser = argparse.ArgumentParser(description=__doc__.split("\n")[0])
     parser.add_argument("--tuning", action="store_true", help="the invented tuning corpus")
@@ -327,8 +388,14 @@ def main() -> None:
     parser.add_argument("--workers", type=int, default=2)
     parser.add_argument("--work", type=Path, default=ROOT / "bench-out" / "templates")
     parser.add_argument("--cost", type=int, default=0, metavar="N")
+    parser.add_argument("--cross-format", type=int, default=0, metavar="N",
+                        help="the same N bodies as HTML, PDF, text and Markdown: token "
+                             "stream agreement")
     args = parser.parse_args()
     args.work.mkdir(parents=True, exist_ok=True)
+    if args.cross_format:
+        cross_format(args.cross_format, args.verbose)
+        return
     if args.cost:
         cost(args.cost, args.work, args.workers)
         return

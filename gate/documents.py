@@ -146,6 +146,10 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
                                {"measures": item.measures, "errors": {}, "blocks": blocks,
                                 "measured": measured},
                                result.get("text", "") if isinstance(result, dict) else ""))
+            # pages waiting for their site's template are not evaluated yet: their
+            # extractions go to the cache as they arrive, not all at the end of the pass
+            if len(cache_rows) >= 16 * CACHE_BATCH:
+                flush()
         return blocks
 
     def tasks():

@@ -54,8 +54,9 @@ import numpy as np
 
 from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
+from gate.tokens import words
 
-TEMPLATES_VERSION = 7  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 8  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -64,6 +65,7 @@ MAIN_RATIO = 0.5
 TEMPLATE_SHARE = 0.3  # template share of an unplaceable text that makes it give way
 MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilatura's text
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
+MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
 
 
 def site_of(source_url: str | None) -> str | None:
@@ -195,6 +197,23 @@ def _word_count(lines: Iterable[str]) -> int:
     return sum(len(line.split()) for line in lines)
 
 
+def _merged(lines: Sequence[str], blocks: Sequence[Block]) -> bool:
+    """Whether a line holds two or more whole blocks of the page, words for words (a
+    layout table's cell written as one line, which loses the cell's own structure: its
+    list items and table order). Lines that are pieces of one block (a page whose source
+    wraps its paragraphs) are not merged."""
+    def norm(text: str) -> str:
+        return f" {' '.join(words(text))} "
+
+    known = [n for n in {norm(b.text) for b in blocks} if n.count(" ") > MERGED_MIN_WORDS]
+    for line in lines:
+        flat = norm(line)
+        if flat.count(" ") > 2 * MERGED_MIN_WORDS and \
+                sum(1 for n in known if n in flat) >= 2:
+            return True
+    return False
+
+
 def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
             ) -> tuple[str, dict[str, int | str]]:
     """The page's own text: ``text`` (trafilatura's) without the template blocks, or the
@@ -208,20 +227,22 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
         return text, {}
     page = {b.hash for b in blocks}
     main_rest: list[str] = []
-    placed = True  # every line of trafilatura's text is a block, or a table row of blocks
+    unplaced: list[str] = []  # lines that are no block nor a row of blocks
     for line, digest in zip(text.split("\n"), line_hashes(text, blocks)):
         parts = [digest] if digest is None or digest in page else row_cells(line)
         if not parts or any(part is not None and part not in page for part in parts):
-            placed = False  # e.g. a layout table's whole cell in one line
-            break
+            unplaced.append(line)  # a layout cell in one line, or a hard-wrapped piece
+            continue
         if any(part is None or part not in drop for part in parts):
             main_rest.append(line)
+    placed = not unplaced
     own = [b.text for b in blocks if b.hash not in drop and b.links < LINK_DOMINATED]
     main_words, own_words = _word_count(main_rest), _word_count(own)
     if not placed:
         # how much of trafilatura's text is template: the template blocks found in it
         found = {b.hash: b.text for b in blocks if b.hash in drop and b.text in text}
-        if _word_count(found.values()) < TEMPLATE_SHARE * _word_count(text.split("\n")):
+        if _word_count(found.values()) < TEMPLATE_SHARE * _word_count(text.split("\n")) \
+                and not _merged(unplaced, blocks):
             return text, {"template_blocks": len(drop), "kept": "all (little template in it)"}
     if placed and main_words and (main_words >= MAIN_RATIO * own_words or
                                   own_words - main_words < MIN_OWN_WORDS):

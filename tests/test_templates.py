@@ -243,10 +243,17 @@ def test_a_layout_cell_written_as_one_line_gives_way_to_the_pages_own_blocks():
     text = "| " + " ".join(b.text for b in blocks) + " |"
     cleaned, info = templates.compose(text, blocks, ((teaser.hash,), ()))
     assert cleaned == "\n".join(b.text for b in notice) and info["kept"] == "page"
-    # when the template is a small part of such a text (here 3 of 63 words), it is kept
+    # so it is when the template is a small part of such a text (here 3 of 63 words):
+    # the cell holds several whole blocks, whose structure (items, rows) it has lost
     small = Block("Home and contact", block_hash("Home and contact"), main=False)
     text = "| " + " ".join(b.text for b in [small] + notice) + " |"
-    assert templates.compose(text, [small] + notice, ((small.hash,), ()))[0] == text
+    cleaned, info = templates.compose(text, [small] + notice, ((small.hash,), ()))
+    assert cleaned == "\n".join(b.text for b in notice) and info["kept"] == "page"
+    # a text whose lines are pieces of the page's paragraphs (a source that wraps its
+    # lines, as a real manual's pages do) is kept when little of it is template
+    wrapped = "\n".join(" ".join(b.text.split()[:10]) + "\n" + " ".join(b.text.split()[10:])
+                        for b in notice)
+    assert templates.compose(wrapped, [small] + notice, ((small.hash,), ()))[0] == wrapped
 
 
 def test_preformatted_text_is_a_block_per_line():
@@ -326,3 +333,44 @@ def test_explain_command_names_the_batch_and_its_template(tmp_path):
                                   str(tmp_path / "policy.yaml"), "--batch",
                                   str(tmp_path / "nowhere")])
     assert missing.exit_code != 0 and "--batch" in missing.output
+
+
+# -- cross-format agreement ----------------------------------------------------------------
+
+def test_one_body_gives_one_token_stream_in_html_pdf_text_and_markdown():
+    # invented bodies with a heading, a list and a table, rendered by the tuning corpus's
+    # own writers: HTML (paragraph markup and a <br> box), Markdown, three plain-text
+    # exports (tab, pipe and space-aligned tables, underlined headings, 72 columns) and
+    # two PDFs (fpdf2, typeset with a running footer, and one line per text line)
+    import random as _random
+
+    from benchmarks.template_corpus import make_body, renderings, title
+
+    rng = _random.Random(7)
+    for _ in range(3):
+        body = make_body(rng, 500, 900)  # long enough to run over a page break in a PDF
+        body["parts"][1:1] = [("heading", title(rng)), ("list", ["one item", "two items"]),
+                              ("table", [["Street", "From"], ["Elm Row", "9:00"]])]
+        streams = {name: words(extract(data, max_pages=50, max_nesting=100).text)
+                   for name, data in renderings(body, "Invented Records Office").items()}
+        assert len({tuple(s) for s in streams.values()}) == 1, {
+            name: len(s) for name, s in streams.items()}
+
+
+def test_a_pdfs_running_header_footer_and_page_numbers_are_not_its_text():
+    from gate.extract.pdf import without_furniture
+
+    pages = ["Invented Depot annual notice\nFirst page body line.\nMore text here.\n- 1 -",
+             "Invented Depot annual notice\nSecond page body.\nPage 2 of 3",
+             "Invented Depot annual notice\nThird page body.\nSee the table on page 2\n3"]
+    assert without_furniture(pages) == [
+        "First page body line.\nMore text here.", "Second page body.",
+        # a body line that names a page stays: only a page's very last line can be a
+        # page number
+        "Third page body.\nSee the table on page 2"]
+    # one page: only a line that is, or ends in, a page number goes
+    assert without_furniture(["Invented Office\nThe notice text.\nInvented Office - page 1"]) \
+        == ["Invented Office\nThe notice text."]
+    # a line in the middle of a page is never furniture, whatever it says
+    middle = ["Title\nPage 4\nBody one.\nBody two.\nBody three.\nEnd"]
+    assert without_furniture(middle) == middle
