@@ -166,9 +166,10 @@ def score(report: dict, out: Path, pairs: list[dict], bodies: dict[str, str | No
         relations[label][1] += hit
         side = "distinct" if p["relation"] == "distinct" else "duplicate"
         pair = "-".join(sorted((kind_of(p["a"]), kind_of(p["b"]))))
-        formats.setdefault(f"{side} {pair}", [0, 0])
-        formats[f"{side} {pair}"][0] += 1
-        formats[f"{side} {pair}"][1] += hit
+        if counted:  # the pairs recall and the false-duplicate rate count
+            formats.setdefault(f"{side} {pair}", [0, 0])
+            formats[f"{side} {pair}"][0] += 1
+            formats[f"{side} {pair}"][1] += hit
         if counted and side == "duplicate" and not hit:
             missed.append(p)
         elif side == "distinct" and hit:
@@ -235,7 +236,7 @@ def show(name: str, s: dict, seconds: float, timings: dict, documents: int,
     print("  per relation (found / pairs):")
     for label, (n, hit) in sorted(s["relations"].items()):
         print(f"    {label:<44} {hit:>4} / {n:<4} {hit / max(1, n):.3f}")
-    print("  per format pair (found / pairs):")
+    print(f"  per format pair (found / pairs; duplicates with body Jaccard >= {THRESHOLD}):")
     for label, (n, hit) in sorted(s["formats"].items()):
         print(f"    {label:<44} {hit:>4} / {n:<4} {hit / max(1, n):.3f}")
     if timings:

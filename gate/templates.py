@@ -34,18 +34,21 @@ Removal (worker, :func:`compose`): the page's template blocks are dropped from
 trafilatura's text; when what remains is less than ``MAIN_RATIO`` of the page's own
 (non-template, not link-dominated) blocks, trafilatura chose the template as the main
 text, and the page's own blocks are used instead. So they are when trafilatura's text
-cannot be laid onto the page's blocks line by line (a layout table's cell written as one
-line), because the template cannot then be taken out of it, and template blocks make up
-at least ``TEMPLATE_SHARE`` of it (otherwise it is kept as it is). Either happens only when the
-page's own blocks hold at least ``MIN_OWN_WORDS`` words (more than trafilatura's
-remainder, in the first case): a table of contents or a page of links keeps its text.
-When nothing would remain, the page is kept as extracted.
+cannot be laid onto the page's blocks line by line and one of its lines holds two or more
+whole blocks (a layout table's cell written as one line: the template cannot be taken out
+of it, and its list items and rows have lost their order), or template blocks make up at
+least ``TEMPLATE_SHARE`` of it; a text whose lines are pieces of paragraphs (a source that
+wraps its lines) is kept as it is otherwise. Either happens only when the page's own
+blocks hold at least ``MIN_OWN_WORDS`` words (more than trafilatura's remainder, in the
+first case): a table of contents or a page of links keeps its text. When nothing would
+remain, the page is kept as extracted.
 """
 
 from __future__ import annotations
 
 import hashlib
 import math
+import re
 from collections.abc import Iterable, Sequence
 from dataclasses import dataclass
 from typing import Any
@@ -56,7 +59,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import words
 
-TEMPLATES_VERSION = 8  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 9  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -197,6 +200,30 @@ def _word_count(lines: Iterable[str]) -> int:
     return sum(len(line.split()) for line in lines)
 
 
+_CRUMB = re.compile(r"\s+(?:>|/|»|›|→|::)\s+")
+
+
+def _crumb_trails(blocks: Sequence[Block]) -> set[int]:
+    """Breadcrumb trails ("Home > Routes > Service changes > Route N62 ..."): a block of
+    three or more short parts split by one and the same separator whose last part, of two
+    words or more, is another block of the page (its title). Such a trail is navigation,
+    linked or not, and differs from page to page, so learning cannot name it."""
+    others: dict[str, int] = {}
+    for b in blocks:
+        others.setdefault(" ".join(words(b.text)), b.hash)
+    found = set()
+    for b in blocks:
+        text = b.text.strip()
+        parts = _CRUMB.split(text)
+        if len(parts) < 3 or any(len(part.split()) > 6 for part in parts[:-1]) or \
+                len({m.strip() for m in _CRUMB.findall(text)}) != 1:
+            continue  # not three or more short parts split by one and the same separator
+        last = words(parts[-1])
+        if len(last) >= 2 and others.get(" ".join(last), b.hash) != b.hash:
+            found.add(b.hash)
+    return found
+
+
 def _merged(lines: Sequence[str], blocks: Sequence[Block]) -> bool:
     """Whether a line holds two or more whole blocks of the page, words for words (a
     layout table's cell written as one line, which loses the cell's own structure: its
@@ -225,6 +252,7 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
     drop = _dropped(blocks, set(template[0]), set(template[1]))
     if not drop:
         return text, {}
+    drop |= _crumb_trails(blocks)
     page = {b.hash for b in blocks}
     main_rest: list[str] = []
     unplaced: list[str] = []  # lines that are no block nor a row of blocks

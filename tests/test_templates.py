@@ -215,6 +215,18 @@ def test_a_new_site_of_two_pages_keeps_trafilaturas_text_and_says_so(tmp_path):
     assert all(r["details"]["identical"] == "extracted text" for r in held)
 
 
+def test_a_new_site_of_three_pages_learns_what_is_on_every_page(tmp_path):
+    # the first run of a site with three pages: the menu, teasers and legal text are on
+    # all three, so they are template, and the three notices are told apart
+    inbox, loaded = make_portal(tmp_path, 3)
+    result = run(RunOptions(inbox=inbox, policy=loaded, out=tmp_path / "out", as_of=AS_OF))
+    report = json.loads(result.report_path.read_text())
+    assert [d["decision"] for d in report["documents"]] == ["accepted"] * 3
+    for n, doc in enumerate(report["documents"]):
+        text = (tmp_path / "out" / doc["location"] / "text.txt").read_text()
+        assert prose(100 * n, 40) in text and "Teaser" not in text
+
+
 def test_an_incremental_run_learns_from_the_stored_corpus(tmp_path):
     inbox, loaded = make_portal(tmp_path, 6)
     out = tmp_path / "out"
@@ -374,3 +386,23 @@ def test_a_pdfs_running_header_footer_and_page_numbers_are_not_its_text():
     # a line in the middle of a page is never furniture, whatever it says
     middle = ["Title\nPage 4\nBody one.\nBody two.\nBody three.\nEnd"]
     assert without_furniture(middle) == middle
+
+
+def test_a_breadcrumb_trail_ending_in_the_pages_title_is_navigation():
+    title = Block("Route N62 timetable change", block_hash("Route N62 timetable change"),
+                  kind="heading")
+    crumb = "Home > Routes > Service changes > Route N62 timetable change"
+    trail = Block(crumb, block_hash(crumb))
+    notice = [Block(prose(90 + i, 30), block_hash(prose(90 + i, 30)), main=True)
+              for i in range(3)]
+    menu = Block("Home Bins Roads", block_hash("Home Bins Roads"), links=1.0)
+    blocks = [menu, trail, title] + notice
+    text = "\n".join([crumb, title.text] + [b.text for b in notice])
+    cleaned, _info = templates.compose(text, blocks, ((menu.hash,), ()))
+    assert cleaned == "\n".join([title.text] + [b.text for b in notice])
+    # operators and arrows in a manual's examples are no trail: one separator, short
+    # parts, and a last part of two words or more that is another block of the page
+    for line in ("Object > Array > Boolean > null", "f('[1, 2]', '$ ? (@ > 1)') → 3",
+                 "a > b > c > Route N62 timetable change and more"):
+        assert templates._crumb_trails([Block(line, block_hash(line)), title,
+                                        Block("null", block_hash("null"))]) == set()
