@@ -104,6 +104,11 @@ def load_truth(corpus: Path) -> tuple[list[dict], dict[str, str | None]]:
             body = corpus / "bodies" / f"{name}.txt"
             bodies[record["path"]] = body.read_text(encoding="utf-8") if body.exists() \
                 else None
+    for pair in pairs:  # a corpus that does not give it: from the bodies
+        if "body_jaccard" not in pair:
+            x, y = bodies.get(pair["a"]), bodies.get(pair["b"])
+            pair["body_jaccard"] = jaccard(x, y) if x is not None and y is not None else \
+                (0.0 if pair["relation"] == "distinct" else 1.0)
     return pairs, bodies
 
 
