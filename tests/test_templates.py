@@ -157,6 +157,24 @@ def test_same_text_other_bytes_is_exact_with_a_template_caveat():
     assert found.details["identical"] == "extracted text"
     assert found.details["words"] == 200  # prose(3, 200) is 200 words
     assert "may be a site template" in found.message
+    # the same bytes: an exact copy, no caveat
+    same = [dup.Item(key=k, path=f"{k}.html", sha256="sha-same", text_sha256=measured[0][
+        "text_sha256"], minhash=measured[0]["minhash"], trust=1, date=None, seen=(1, i),
+        words=200) for i, k in enumerate("ab")]
+    copy = dup.evaluate(same, policy("duplicates: {threshold: 0.8}").duplicates,
+                        text_of=lambda key: text).findings["b"][0]
+    assert copy.code == "duplicate.exact" and copy.details["identical"] == "bytes"
+    assert "same bytes" in copy.message and "template" not in copy.message
+    # one edited word: a near-duplicate with its estimated Jaccard, never "exact"
+    edited = text.replace(text.split()[100], "hydrant", 1)
+    m2 = dup.measure(type("E", (), {"text": edited})())
+    near = [items[0], dup.Item(key="c", path="c.html", sha256="sha-c",
+                               text_sha256=m2["text_sha256"], minhash=m2["minhash"], trust=1,
+                               date=None, seen=(1, 2), words=m2["words"])]
+    found = dup.evaluate(near, policy("duplicates: {threshold: 0.8}").duplicates,
+                         text_of=lambda key: text).findings["c"][0]
+    assert found.code == "duplicate.near" and 0.8 <= found.details["similarity"] < 1.0
+    assert "estimated Jaccard" in found.message
 
 
 # -- a run -------------------------------------------------------------------------------
