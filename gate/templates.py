@@ -208,16 +208,21 @@ def _crumb_trails(blocks: Sequence[Block]) -> set[int]:
     three or more short parts split by one and the same separator whose last part, of two
     words or more, is another block of the page (its title). Such a trail is navigation,
     linked or not, and differs from page to page, so learning cannot name it."""
-    others: dict[str, int] = {}
-    for b in blocks:
-        others.setdefault(" ".join(words(b.text)), b.hash)
-    found = set()
+    trails = []
     for b in blocks:
         text = b.text.strip()
         parts = _CRUMB.split(text)
         if len(parts) < 3 or any(len(part.split()) > 6 for part in parts[:-1]) or \
                 len({m.strip() for m in _CRUMB.findall(text)}) != 1:
             continue  # not three or more short parts split by one and the same separator
+        trails.append((b, parts))
+    if not trails:
+        return set()
+    others: dict[str, int] = {}
+    for b in blocks:
+        others.setdefault(" ".join(words(b.text)), b.hash)
+    found = set()
+    for b, parts in trails:
         last = words(parts[-1])
         if len(last) >= 2 and others.get(" ".join(last), b.hash) != b.hash:
             found.add(b.hash)
