@@ -34,7 +34,7 @@ from gate.intake import Intake, read_entry
 from gate.manifest import Manifest, ManifestRecord
 from gate.policy import LoadedPolicy
 from gate.record import Slim, doc_record, slim
-from gate.templates import Page, learn, removal, removal_key, site_of
+from gate.templates import Page, learn, removal, removal_key, site_of, stored_pages
 from gate.work import Params, warm_up
 
 CACHE_BATCH = 64  # results written to the cache and the state per transaction, at least
@@ -146,6 +146,10 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
                                {"measures": item.measures, "errors": {}, "blocks": blocks,
                                 "measured": measured},
                                result.get("text", "") if isinstance(result, dict) else ""))
+            # pages waiting for their site's template are not evaluated yet: their
+            # extractions go to the cache as they arrive, not all at the end of the pass
+            if len(cache_rows) >= 16 * CACHE_BATCH:
+                flush()
         return blocks
 
     def tasks():
@@ -221,7 +225,7 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
         flush()
         if waiting:
             learnt = learn([item.page for item in waiting if item.page is not None] +
-                           (_stored_pages(state, {doc_id(e.path) for e in entries})
+                           (stored_pages(state, {doc_id(e.path) for e in entries})
                             if incremental else []))
             reporter.stage("removing site templates", None)
             for item, result in pool.run(cleaning(learnt)):
@@ -231,16 +235,3 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
     flush()
     return [s for s in slims if s is not None]
 
-
-def _stored_pages(state: Any, batch: set[str]) -> list[Page]:
-    """The pages of the stored corpus (not in this batch) that can teach a site's
-    template: their blocks come from the cache entry of their text."""
-    pages = []
-    for row in state.corpus(sketches=False):
-        site = site_of(row["source_url"])
-        if site is None or row["doc_id"] in batch or not row["cache_key"]:
-            continue
-        cached = state.cache_meta(row["cache_key"])
-        if cached is not None and cached[1].get("blocks"):
-            pages.append(Page.of(f"{site} {cached[0].get('type')}", cached[1]["blocks"]))
-    return pages
