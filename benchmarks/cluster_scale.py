@@ -31,6 +31,7 @@ import resource
 import shutil
 import signal
 import socket
+import sqlite3
 import subprocess
 import sys
 import time
@@ -68,8 +69,19 @@ def _wait_port(port: int, seconds: float = 30) -> None:
 
 
 def _start(cmd: list[str], work: Path) -> subprocess.Popen:
+    # Dask's statistical profiler samples every worker thread 100 times a second; gate's
+    # tasks wait on their pool, so it only costs CPU (README: Larger corpora)
+    env = {**os.environ, "DASK_DISTRIBUTED__WORKER__PROFILE__ENABLED": "False"}
     return subprocess.Popen(cmd, stdout=subprocess.DEVNULL, stderr=subprocess.DEVNULL,
-                            start_new_session=True, cwd=work)
+                            start_new_session=True, cwd=work, env=env)
+
+
+def _workers(scheduler: str, count: int, work: Path) -> list[subprocess.Popen]:
+    """``count`` single-threaded Dask workers without nannies (a nanny cannot be left
+    out with --nworkers, so one command each)."""
+    return [_start([str(DASK), "worker", scheduler, "--nthreads", "1", "--no-nanny",
+                    "--no-dashboard", "--local-directory", str(work)], work)
+            for _ in range(count)]
 
 
 def _stop(proc: subprocess.Popen) -> None:
@@ -102,9 +114,32 @@ class Redis:
         return int(self.client.info("memory")["used_memory"])
 
 
-def measured(opts: RunOptions, redis: Redis | None, cores_used: int) -> dict:
-    """One run in this process: elapsed, coordinator CPU by stage, Redis costs."""
+def tree_cpu(procs: list[subprocess.Popen] | None) -> float:
+    """CPU seconds used so far by processes and their descendants (the Dask workers,
+    their pools' processes)."""
+    import psutil
+    total = 0.0
+    for proc in procs or ():
+        try:
+            root = psutil.Process(proc.pid)
+            for p in [root, *root.children(recursive=True)]:
+                try:
+                    times = p.cpu_times()  # with its reaped children's
+                    total += times.user + times.system + times.children_user + \
+                        times.children_system
+                except psutil.Error:
+                    pass
+        except psutil.Error:
+            pass
+    return total
+
+
+def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
+             nodes: list[subprocess.Popen] | None = None) -> dict:
+    """One run in this process: elapsed, coordinator CPU by stage, Redis costs, and the
+    CPU the Dask workers used (``nodes``: their process tree)."""
     clock = StageClock()
+    nodes_cpu = tree_cpu(nodes)
     children = resource.getrusage(resource.RUSAGE_CHILDREN)
     commands = redis.commands() if redis else 0
     memory = redis.memory() if redis else 0
@@ -120,7 +155,14 @@ def measured(opts: RunOptions, redis: Redis | None, cores_used: int) -> dict:
            "per_core": docs / seconds / cores_used, "coordinator_ms": coordinator / docs * 1e3,
            "stages": clock.per_document(docs), "accepted": result.summary["accepted"],
            "local_children_ms": ((after.ru_utime + after.ru_stime) -
-                                 (children.ru_utime + children.ru_stime)) / docs * 1e3}
+                                 (children.ru_utime + children.ru_stime)) / docs * 1e3,
+           "nodes_ms": (tree_cpu(nodes) - nodes_cpu) / docs * 1e3,
+           "work_ms": sum(result.timings.values()) / docs * 1e3}
+    out["total_ms"] = out["coordinator_ms"] + out["local_children_ms"] + out["nodes_ms"]
+    with sqlite3.connect(opts.out / "state" / "gate.sqlite") as conn:
+        out["result_bytes"] = conn.execute(
+            "SELECT AVG(LENGTH(extracted) + LENGTH(measures) + LENGTH(text)) FROM cache"
+        ).fetchone()[0] or 0
     if redis:
         out["redis_ops"] = (redis.commands() - commands - 1) / docs
         out["redis_bytes"] = (redis.memory() - memory) / max(1, result.summary["accepted"])
@@ -131,8 +173,15 @@ def show(name: str, m: dict) -> None:
     print(f"{name}: {m['seconds']:6.1f} s, {m['rate']:5.1f} documents/s, "
           f"{m['per_core']:5.1f} per core; coordinator CPU {m['coordinator_ms']:.2f} ms/doc"
           + (f", local worker processes {m['local_children_ms']:.1f} ms/doc"
-             if m["local_children_ms"] > 0.05 else ""))
+             if m["local_children_ms"] > 0.05 else "")
+          + (f", Dask scheduler and workers (with their pools) {m['nodes_ms']:.1f} ms/doc"
+             if m["nodes_ms"] > 0.05 else ""))
+    print(f"    CPU of every process of the run: {m['total_ms']:.1f} ms/doc, so "
+          f"{1000 / m['total_ms']:.1f} documents per CPU-second")
     print(f"    coordinator CPU by stage: {m['stages']}")
+    print(f"    extraction and checks inside the workers: {m['work_ms']:.1f} ms/doc (time)")
+    print(f"    a worker's answer (the cache row it fills): {m['result_bytes'] / 1024:.1f} KiB"
+          " per document")
     if "redis_ops" in m:
         print(f"    Redis: {m['redis_ops']:.1f} commands/doc, "
               f"{m['redis_bytes'] / 1024:.1f} KiB per indexed document")
@@ -171,7 +220,9 @@ def main() -> None:
     policy_path.write_text(BENCH_POLICY, encoding="utf-8")
     policy = load_policy(policy_path)
     cores = os.cpu_count() or 1
-    print(f"{args.docs} documents (benchmarks/corpus.py), {cores} cores, loopback")
+    size = sum(p.stat().st_size for p in inbox.rglob("*") if p.is_file())
+    print(f"{args.docs} documents (benchmarks/corpus.py, {size / args.docs / 1024:.0f} KiB "
+          f"each on average), {cores} cores, loopback")
     services = []
     try:
         redis_port, sched_port = _port(), _port()
@@ -191,9 +242,7 @@ def main() -> None:
         show(f"local --workers {args.local_workers}", local)
         expected = decisions(out)
         for count in args.dask:
-            worker = _start([str(DASK), "worker", scheduler, "--nworkers", str(count),
-                             "--nthreads", "1", "--no-dashboard", "--local-directory",
-                             str(work)], work)
+            worker = _workers(scheduler, count, work)
             try:
                 from distributed import Client
                 with Client(scheduler, timeout=30) as client:
@@ -203,17 +252,17 @@ def main() -> None:
                 m = measured(RunOptions(inbox=inbox, policy=policy, out=out, as_of=AS_OF,
                                         cluster=scheduler, index=url,
                                         index_name=f"bench-{count}"),
-                             redis, min(count, cores))
+                             redis, min(count, cores), [services[1], *worker])
                 show(f"cluster, {count} Dask worker(s)", m)
                 same = decisions(out) == expected
-                print(f"    per core: {m['per_core'] / local['per_core']:.2f} x local; "
-                      f"decisions identical to local: {same}")
+                print(f"    per core: {m['per_core'] / local['per_core']:.2f} x local by "
+                      f"elapsed time, {local['total_ms'] / m['total_ms']:.2f} x local by CPU "
+                      f"per document; decisions identical to local: {same}")
             finally:
-                _stop(worker)
+                for proc in worker:
+                    _stop(proc)
         if args.growth:
-            worker = _start([str(DASK), "worker", scheduler, "--nworkers", "2",
-                             "--nthreads", "1", "--no-dashboard", "--local-directory",
-                             str(work)], work)
+            worker = _workers(scheduler, 2, work)
             try:
                 for step in range(args.growth):
                     batch = make_corpus(work / f"growth-{step}", args.docs, seed=100 + step)
@@ -228,7 +277,8 @@ def main() -> None:
                           f"{m['coordinator_ms']:.2f} ms/doc, {m['redis_ops']:.1f} "
                           "Redis commands/doc")
             finally:
-                _stop(worker)
+                for proc in worker:
+                    _stop(proc)
         if not args.no_race:
             race(policy_path, inbox, work, url)
     finally:

@@ -11,7 +11,7 @@ class StageClock:
 
     def __init__(self) -> None:
         self.stages: dict[str, float] = {}
-        self.current: str | None = None
+        self.current: str | None = "starting"  # discovery, warming the parsers up
         self.since = time.process_time()
 
     def stage(self, name: str, total: int | None) -> None:
