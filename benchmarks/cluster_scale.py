@@ -8,11 +8,15 @@ PDFs, 10 % text) under bench-out/, starts redis-server and a Dask scheduler on l
 and prints for a local run (``--workers 2``) and for a cluster run with each number of
 single-threaded Dask workers (each with the shared Redis index):
 
-* elapsed time, documents/s, and documents/s per core used (a run cannot use more cores
+* (after a small unmeasured run that warms the Dask workers, as a long-lived cluster is)
+  elapsed time, documents/s, and documents/s per core used (a run cannot use more cores
   than the machine has: with 4 Dask workers on 2 cores, it is divided by 2), with the
   cluster's per-core rate as a share of the local one;
 * the coordinating ``gate run`` process's CPU per document, in total and by stage
-  (all its threads: the Dask client's too);
+  (all its threads: the Dask client's too), and the CPU of every process of the run per
+  document (coordinator, local workers or Dask scheduler and workers with their pools):
+  on a shared, busy machine elapsed times say little, CPU per document is the figure
+  to compare;
 * Redis commands per document and Redis memory per indexed document;
 * whether every decision is the local run's.
 
@@ -211,11 +215,13 @@ def main() -> None:
     parser.add_argument("--growth", type=int, default=0)
     parser.add_argument("--no-race", action="store_true")
     args = parser.parse_args()
+    signal.signal(signal.SIGTERM, lambda *_: sys.exit(1))  # stop the services on the way
     if shutil.which("redis-server") is None or not DASK.exists():
         sys.exit("needs redis-server and the dask command (pip install '.[cluster]')")
     work = ROOT / "bench-out" / f"cluster-{args.docs}"
     work.mkdir(parents=True, exist_ok=True)
     inbox = make_corpus(work / "inbox", args.docs)
+    warm = make_corpus(work / "warm", 4 * (os.cpu_count() or 1) * max(args.dask), seed=3)
     policy_path = work / "policy.yaml"
     policy_path.write_text(BENCH_POLICY, encoding="utf-8")
     policy = load_policy(policy_path)
@@ -247,6 +253,12 @@ def main() -> None:
                 from distributed import Client
                 with Client(scheduler, timeout=30) as client:
                     client.wait_for_workers(count, timeout=120)
+                # a long-lived cluster is warm: its workers imported gate and forked their
+                # pools' fork servers in an earlier run (a small one here, not measured)
+                warm_out = work / "out-warm"
+                shutil.rmtree(warm_out, ignore_errors=True)
+                run(RunOptions(inbox=warm, policy=policy, out=warm_out, as_of=AS_OF,
+                               cluster=scheduler))
                 out = work / f"out-dask-{count}"
                 shutil.rmtree(out, ignore_errors=True)
                 m = measured(RunOptions(inbox=inbox, policy=policy, out=out, as_of=AS_OF,
