@@ -15,7 +15,6 @@ document's existing entry; they are hard-linked where possible and made read-onl
 
 from __future__ import annotations
 
-import hashlib
 import json
 import os
 import re
@@ -127,17 +126,6 @@ class Placer:
     def original_path(self, doc_id: str, sha256: str | None) -> Path | None:
         """Where the staged (or placed) bytes of a document are, unread and unverified."""
         return self._original_source(doc_id, sha256)
-
-    def original(self, doc_id: str, sha256: str | None) -> bytes | None:
-        """The staged (or placed) bytes of a document, verified against ``sha256``."""
-        source = self._original_source(doc_id, sha256)
-        if source is None:
-            return None
-        try:
-            data = source.read_bytes()
-        except OSError:
-            return None
-        return data if hashlib.sha256(data).hexdigest() == sha256 else None
 
     def _aside(self, path: Path) -> None:
         if path.exists() or path.is_symlink():

@@ -211,11 +211,6 @@ class State:
         row = self.conn.execute("SELECT text FROM cache WHERE key = ?", (key,)).fetchone()
         return row[0] if row else None
 
-    def cache_put_many(self, rows: Iterable[tuple[str, str, dict, dict, str]]) -> None:
-        self.cache_put_packed([(key, sha, dumps(ex), dumps(me),
-                                zlib.compress(text.encode("utf-8", "surrogatepass"), 1))
-                               for key, sha, ex, me, text in rows])
-
     def cache_put_packed(self, rows: Iterable[tuple[str, str, str, str, bytes]]) -> None:
         """Cache rows already encoded (by the worker that produced them): key, digest,
         extraction JSON, measures JSON, compressed text."""
