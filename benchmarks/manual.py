@@ -70,6 +70,8 @@ def main() -> None:
     parser.add_argument("--workers", type=int, default=2)
     parser.add_argument("--limit", type=int, default=0, help="pages per version (0: all)")
     parser.add_argument("--work", type=Path, default=ROOT / "bench-out" / "manual")
+    parser.add_argument("--learning-only", action="store_true",
+                        help="skip the run without template learning")
     args = parser.parse_args()
     folders = fetch(args.package, args.versions, args.work)
     names = sorted(set.intersection(*({p.name for p in f.glob("*.html")}
@@ -103,7 +105,7 @@ def main() -> None:
                  for n in names]
     print(f"{args.package} {old} and {new}: {len(names)} pages each; same-page pairs "
           f"with Jaccard >= 0.85: {sum(j >= 0.85 for *_x, j in same_page)}")
-    for learn in (True, False):
+    for learn in (True,) if args.learning_only else (True, False):
         out = args.work / ("out-learn" if learn else "out-plain")
         result, seconds = run_once(inbox, policy, out, args.workers, learn)
         report = json.loads((out / "report.json").read_text(encoding="utf-8"))

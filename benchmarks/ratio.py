@@ -6,7 +6,8 @@
 What ../shared/bench/README.md prescribes: the same inbox, policy and --as-of; gate
 (``--workers 2``) and the baseline alternated (A B A B A B) in one sitting, warm page cache,
 fresh output folders; each command timed by the shared ``measure.py`` (wall time, peak RSS).
-Prints every run and the ratio of the medians gate / baseline, with the corpus mix
+Prints every run (for gate also the checks' share of extraction time, from its workers'
+CPU seconds per stage) and the ratio of the medians gate / baseline, with the corpus mix
 (benchmarks/corpus.py: about 80 % HTML pages of 10-100 KB with boilerplate, 10 % multi-page
 PDFs, 10 % plain text). Run it on an otherwise idle machine: the figure means nothing when
 other work shares the cores.
@@ -16,6 +17,7 @@ from __future__ import annotations
 
 import argparse
 import json
+import os
 import shutil
 import statistics
 import subprocess
@@ -32,13 +34,31 @@ AS_OF = "2026-12-01T00:00:00Z"
 
 
 def measured(bench: Path, cmd: list[str]) -> dict:
-    with tempfile.NamedTemporaryFile(suffix=".json") as result:
+    with tempfile.NamedTemporaryFile(suffix=".json") as result, \
+            tempfile.NamedTemporaryFile(suffix=".err") as err:
+        # GATE_TIMINGS: gate prints its workers' CPU seconds per stage on stderr (the
+        # baseline ignores it)
         subprocess.run([sys.executable, str(bench / "measure.py"), "--json", result.name,
-                        "--", *cmd], check=True, stdout=subprocess.DEVNULL)
+                        "--stderr", err.name, "--", *cmd], check=True,
+                       stdout=subprocess.DEVNULL, env={**os.environ, "GATE_TIMINGS": "1"})
         figures = json.loads(Path(result.name).read_text())
+        stderr = Path(err.name).read_text(errors="replace")
     if figures["rc"] != 0:
-        raise SystemExit(f"{cmd[0]} failed with status {figures['rc']}: {' '.join(cmd)}")
+        raise SystemExit(f"{cmd[0]} failed with status {figures['rc']}: {' '.join(cmd)}\n"
+                         f"{stderr[-2000:]}")
+    for line in stderr.splitlines():
+        if line.startswith("timings: "):
+            figures["timings"] = json.loads(line[len("timings: "):])
     return figures
+
+
+def checks_share(timings: dict) -> str:
+    """All checks' measure() and template composition against extract(), workers' CPU."""
+    extract = timings.get("extract", 0.0)
+    checks = sum(v for k, v in timings.items() if k != "extract")
+    if not extract:
+        return ""
+    return f"  checks {checks / extract:4.0%} of extraction (worker CPU)"
 
 
 def main() -> None:
@@ -75,7 +95,8 @@ def main() -> None:
             figures = measured(bench, command(out))
             walls[name].append(figures["wall_s"])
             print(f"  round {round_no} {name:8s} {figures['wall_s']:7.2f} s  "
-                  f"peak RSS {figures['peak_rss_mb']:7.1f} MB", flush=True)
+                  f"peak RSS {figures['peak_rss_mb']:7.1f} MB"
+                  f"{checks_share(figures.get('timings', {}))}", flush=True)
     medians = {name: statistics.median(values) for name, values in walls.items()}
     print(f"median gate {medians['gate']:.2f} s, baseline {medians['baseline']:.2f} s, "
           f"ratio gate/baseline {medians['gate'] / medians['baseline']:.2f}")

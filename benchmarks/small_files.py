@@ -27,6 +27,7 @@ ROOT = Path(__file__).resolve().parent.parent
 sys.path.insert(0, str(ROOT))
 
 from benchmarks.corpus import BENCH_POLICY  # noqa: E402
+from benchmarks.stages import StageClock  # noqa: E402
 from gate.pipeline import RunOptions, run  # noqa: E402
 from gate.policy import load_policy  # noqa: E402
 
@@ -60,34 +61,16 @@ def make_inbox(root: Path, count: int) -> Path:
     return inbox
 
 
-class StageClock:
-    """A reporter that notes the parent's CPU time per stage of the run."""
-
-    def __init__(self) -> None:
-        self.stages: dict[str, float] = {}
-        self.current: str | None = None
-        self.since = time.process_time()
-
-    def stage(self, name: str, total: int | None) -> None:
-        now = time.process_time()
-        if self.current is not None:
-            self.stages[self.current] = self.stages.get(self.current, 0.0) + now - self.since
-        self.current, self.since = name, now
-
-    def advance(self, path: str | None = None) -> None:
-        pass
-
-    def note(self, message: str) -> None:
-        pass
+PARALLEL = ("extracting", "removing site templates", "placing")  # stages workers share
 
 
 def _idle_seconds(stages: dict[str, float], workers_cpu: float, cores: int) -> float:
-    """Elapsed time the run would take on ``cores`` otherwise idle cores: extraction
-    overlaps the parent's intake and checks with the workers; the later stages run in
-    the parent alone."""
-    extracting = stages.get("extracting", 0.0)
-    rest = sum(spent for name, spent in stages.items() if name != "extracting")
-    return max(extracting, (extracting + workers_cpu) / cores) + rest
+    """Elapsed time the run would take on ``cores`` otherwise idle cores: in the stages
+    the workers share (they read, extract, measure and assemble the entries) the parent
+    overlaps with them; the other stages run in the parent alone."""
+    shared = sum(stages.get(name, 0.0) for name in PARALLEL)
+    rest = sum(spent for name, spent in stages.items() if name not in PARALLEL)
+    return max(shared, (shared + workers_cpu) / cores) + rest
 
 
 def timed(inbox: Path, policy: Path, out: Path, workers: int) -> tuple[float, dict]:
@@ -110,8 +93,7 @@ def timed(inbox: Path, policy: Path, out: Path, workers: int) -> tuple[float, di
     print(f"  {seconds:6.1f} s, {docs / seconds:7.0f} documents/s; CPU per document: parent "
           f"{parent / docs * 1000:.2f} ms, workers {workers_cpu / docs * 1000:.2f} ms "
           f"(so on {workers} idle cores: about {docs / idle:.0f} documents/s)")
-    print("  parent CPU per document by stage: " + ", ".join(
-        f"{name} {spent / docs * 1000:.2f} ms" for name, spent in clock.stages.items()))
+    print("  parent CPU per document by stage: " + clock.per_document(docs))
     return seconds, result.summary
 
 

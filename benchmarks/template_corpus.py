@@ -23,6 +23,7 @@ from __future__ import annotations
 
 import argparse
 import json
+from datetime import UTC, datetime
 import random
 import sys
 from pathlib import Path
@@ -261,6 +262,83 @@ def as_text(body: dict, markdown: bool) -> bytes:
         else:
             out += ["\t".join(r) for r in value] + [""]
     return "\n".join(out).encode("utf-8")
+
+
+# -- one body in every format (for the cross-format measurement) -----------------------
+
+def as_typeset_pdf(body: dict, org: str) -> bytes:
+    """The body typeset with fpdf2 as a word processor would: a bold title and headings,
+    wrapped paragraphs, bulleted items, a ruled table with a header row, a running footer
+    with the page number on every page."""
+    from fpdf import FPDF
+
+    class Notice(FPDF):
+        def footer(self) -> None:
+            self.set_y(-15)
+            self.set_font("helvetica", size=8)
+            self.cell(0, 10, f"{org} - page {self.page_no()}", align="C")
+
+    pdf = Notice()
+    pdf.set_creation_date(datetime(2026, 11, 2, tzinfo=UTC))  # byte-stable output
+    pdf.add_page()
+    pdf.set_font("helvetica", style="B", size=16)
+    pdf.multi_cell(0, 8, body["title"], new_x="LMARGIN", new_y="NEXT")
+    for kind, value in body["parts"]:
+        if kind == "heading":
+            pdf.set_font("helvetica", style="B", size=13)
+            pdf.multi_cell(0, 7, value, new_x="LMARGIN", new_y="NEXT")
+        elif kind == "p":
+            pdf.set_font("helvetica", size=11)
+            pdf.multi_cell(0, 5.5, value, new_x="LMARGIN", new_y="NEXT")
+        elif kind == "list":
+            pdf.set_font("helvetica", size=11)
+            for item in value:
+                pdf.set_x(pdf.l_margin + 4)
+                pdf.multi_cell(0, 5.5, f"\u00b7 {item}", new_x="LMARGIN", new_y="NEXT")
+        else:
+            pdf.set_font("helvetica", size=10)
+            with pdf.table(first_row_as_headings=True) as table:
+                for row in value:
+                    line = table.row()
+                    for cell in row:
+                        line.cell(cell)
+        pdf.ln(2)
+    return bytes(pdf.output())
+
+
+def as_plain_export(body: dict, pipes: bool) -> bytes:
+    """A plain-text export as older tools write it: underlined headings, wrapped at 72
+    columns, ``*`` bullets, tables as ``|``-separated or space-aligned columns."""
+    out = [body["title"], "=" * len(body["title"]), ""]
+    for kind, value in body["parts"]:
+        if kind == "p":
+            out += wrap(value, 72) + [""]
+        elif kind == "heading":
+            out += [value, "-" * len(value), ""]
+        elif kind == "list":
+            out += [f"  * {i}" for i in value] + [""]
+        elif pipes:
+            out += [" | ".join(r) for r in value] + [""]
+        else:
+            widths = [max(len(r[c]) for r in value) + 2 for c in range(len(value[0]))]
+            out += ["".join(cell.ljust(w) for cell, w in zip(r, widths)).rstrip()
+                    for r in value] + [""]
+    return "\n".join(out).encode("utf-8")
+
+
+def renderings(body: dict, org: str) -> dict[str, bytes]:
+    """One body in every format gate reads as text: the same words, different markup."""
+    page = ("<html><head><title>{t}</title></head><body>{b}</body></html>")
+    return {
+        "html": page.format(t=body["title"], b=body_html(body)).encode(),
+        "html-br": page.format(t=body["title"], b=f"<div>{body_br(body)}</div>").encode(),
+        "md": as_text(body, markdown=True),
+        "txt": as_text(body, markdown=False),
+        "txt-export": as_plain_export(body, pipes=False),
+        "txt-pipes": as_plain_export(body, pipes=True),
+        "pdf": as_typeset_pdf(body, org),
+        "pdf-lines": as_pdf(body, org),
+    }
 
 
 SITES = (("portal.example.org", "portal", "Invented Borough Council", 36),

@@ -1,22 +1,32 @@
 """Thin pages on heavy site templates: duplicate decisions and template removal, scored
 against ground truth.
 
-    .venv/bin/python benchmarks/templates.py [--tuning] [--blind] [--baseline] [--workers 2]
+    .venv/bin/python benchmarks/templates.py [--tuning] [--blind] [--corpus DIR]...
+        [--baseline] [--verbose] [--workers 2]
 
 ``--tuning`` generates the invented tuning corpus (benchmarks/template_corpus.py);
-``--blind`` generates the blind corpus (benchmarks/data/template_blind/, written by
-someone who never saw the detector; its README describes it). Each corpus is run
-through ``gate run`` with only the duplicate check on (threshold 0.80) and scored against
-its pairs and bodies:
+``--blind`` generates the first blind corpus (benchmarks/data/template_blind/, written by
+someone who never saw the detector; its README describes it); ``--corpus DIR`` measures
+any corpus in that format: ``DIR/make_corpus.py`` writing ``out/inbox``,
+``out/manifest.jsonl``, ``out/pairs.jsonl`` and ``out/bodies/<path>.txt`` (the folder is
+copied under ``--work`` and the generator run there), or a folder already holding them.
+Each corpus is run through ``gate run`` with only the duplicate check on (threshold
+0.80; the manifest given to gate keeps only the keys gate reads) and scored against its
+pairs and bodies:
 
 * near-duplicate recall: pairs whose ground-truth bodies have Jaccard >= 0.80 (word
   5-grams, exact), found by gate (one kept and the other held as its duplicate, or both
   held as duplicates of the same keeper);
-* false-duplicate rate: pairs labelled distinct that gate calls duplicates;
+* false-duplicate rate: pairs labelled distinct that gate calls duplicates; and findings
+  between documents no label speaks of, false when their bodies are below 0.5;
+* per relation and per format pair (by file ending: html-pdf, txt-md, ...): pairs found;
 * exact-claim precision: ``duplicate.exact`` findings whose two documents have the same
   bytes or the same ground-truth body;
 * template removal: for every document, the share of its ground-truth body's words found
   in text.txt (kept) and the share of text.txt's words not in the body (template left).
+
+No document is named unless ``--verbose`` (then the pairs missed and the false
+duplicates are listed), so a blind set's figures can be shown without showing its pages.
 
 ``--baseline`` also runs with template learning switched off (trafilatura's text only),
 for comparison. ``--cost N`` runs the scale benchmark's generated corpus of N documents
@@ -74,28 +84,54 @@ def run_gate(corpus: Path, out: Path, workers: int, learn: bool) -> tuple[dict, 
     out.parent.mkdir(parents=True, exist_ok=True)
     policy = out.parent / "template-bench.yaml"
     policy.write_text(POLICY, encoding="utf-8")
-    result, seconds = run_once(corpus / "inbox", policy, out, workers, learn,
-                               corpus / "manifest.jsonl")
+    manifest = gate_manifest(corpus, out.parent / f"{out.name}-manifest.jsonl")
+    result, seconds = run_once(corpus / "inbox", policy, out, workers, learn, manifest)
     report = json.loads((out / "report.json").read_text(encoding="utf-8"))
     return report, seconds, result.timings
 
 
-def load_truth(corpus: Path) -> tuple[list[dict], dict[str, str]]:
-    """The labelled pairs and each document's ground-truth body text."""
+def load_truth(corpus: Path) -> tuple[list[dict], dict[str, str | None]]:
+    """The labelled pairs and each document's ground-truth body text (None when the
+    corpus has no body file for it)."""
     pairs = [json.loads(line) for line in (corpus / "pairs.jsonl").read_text().splitlines()
              if line.strip()]
-    bodies = {}
+    bodies: dict[str, str | None] = {}
     for line in (corpus / "manifest.jsonl").read_text().splitlines():
         if line.strip():
             record = json.loads(line)
-            # the tuning corpus names a body by id; the blind one stores it by path
+            # the tuning corpus names a body by id; the blind ones store it by path
             name = record["x_body"] if "x_body" in record else record["path"]
             body = corpus / "bodies" / f"{name}.txt"
-            bodies[record["path"]] = body.read_text(encoding="utf-8")
+            bodies[record["path"]] = body.read_text(encoding="utf-8") if body.exists() \
+                else None
+    for pair in pairs:  # a corpus that does not give it: from the bodies
+        if "body_jaccard" not in pair:
+            x, y = bodies.get(pair["a"]), bodies.get(pair["b"])
+            pair["body_jaccard"] = jaccard(x, y) if x is not None and y is not None else \
+                (0.0 if pair["relation"] == "distinct" else 1.0)
     return pairs, bodies
 
 
-def score(report: dict, out: Path, pairs: list[dict], bodies: dict[str, str]) -> dict:
+def shingles(text: str, w: int = 5) -> set[tuple[str, ...]]:
+    tokens = words(text)
+    if len(tokens) < w:
+        return {tuple(tokens)}
+    return {tuple(tokens[i:i + w]) for i in range(len(tokens) - w + 1)}
+
+
+def jaccard(a: str, b: str) -> float:
+    sa, sb = shingles(a), shingles(b)
+    return len(sa & sb) / max(1, len(sa | sb))
+
+
+def kind_of(path: str) -> str:
+    """A document's format, by its name's ending (for figures per format pair)."""
+    suffix = Path(path).suffix.lower().lstrip(".")
+    return {"htm": "html", "markdown": "md", "text": "txt"}.get(suffix, suffix or "none")
+
+
+def score(report: dict, out: Path, pairs: list[dict], bodies: dict[str, str | None]
+          ) -> dict:
     docs = {d["path"]: d for d in report["documents"]}
     keeper: dict[str, str] = {}
     exact: list[tuple[str, str]] = []
@@ -114,50 +150,159 @@ def score(report: dict, out: Path, pairs: list[dict], bodies: dict[str, str]) ->
     distinct = [p for p in pairs if p["relation"] == "distinct"]
     recall = sum(found(p["a"], p["b"]) for p in near) / max(1, len(near))
     false = sum(found(p["a"], p["b"]) for p in distinct) / max(1, len(distinct))
+
+    def same_body(a: str, b: str) -> bool:
+        x, y = bodies.get(a), bodies.get(b)
+        return x is not None and y is not None and words(x) == words(y)
+
     right = sum(1 for a, b in exact if docs[a]["sha256"] == docs[b]["sha256"] or
-                words(bodies[a]) == words(bodies[b]))
+                same_body(a, b))
+    # per relation and per format pair: (pairs, found)
+    relations: dict[str, list[int]] = {}
+    formats: dict[str, list[int]] = {}
+    missed: list[dict] = []
+    wrong: list[dict] = []
+    for p in pairs:
+        hit = found(p["a"], p["b"])
+        counted = p["relation"] == "distinct" or p["body_jaccard"] >= THRESHOLD
+        label = p["relation"] if counted else f"{p['relation']} (body Jaccard < {THRESHOLD})"
+        relations.setdefault(label, [0, 0])
+        relations[label][0] += 1
+        relations[label][1] += hit
+        side = "distinct" if p["relation"] == "distinct" else "duplicate"
+        pair = "-".join(sorted((kind_of(p["a"]), kind_of(p["b"]))))
+        if counted:  # the pairs recall and the false-duplicate rate count
+            formats.setdefault(f"{side} {pair}", [0, 0])
+            formats[f"{side} {pair}"][0] += 1
+            formats[f"{side} {pair}"][1] += hit
+        if counted and side == "duplicate" and not hit:
+            missed.append(p)
+        elif side == "distinct" and hit:
+            wrong.append(p)
+    # findings between documents no label speaks of (the corpora call such pairs
+    # distinct): counted as false when their true bodies are below 0.5
+    labelled = {frozenset((p["a"], p["b"])) for p in pairs}
+    unlabelled = false_unlabelled = 0
+    for path, other in keeper.items():
+        if frozenset((path, other)) in labelled or other not in docs:
+            continue
+        unlabelled += 1
+        x, y = bodies.get(path), bodies.get(other)
+        if x is not None and y is not None and jaccard(x, y) < 0.5:
+            false_unlabelled += 1
+            wrong.append({"a": path, "b": other, "relation": "unlabelled",
+                          "body_jaccard": round(jaccard(x, y), 4)})
     kept = template = total_body = total_text = 0
+    no_body = 0
     for path, doc in docs.items():
+        if bodies.get(path) is None:
+            no_body += 1
+            continue
         location = doc.get("location")
         text_file = out / location / "text.txt" if location else None
         text = text_file.read_text(encoding="utf-8") if text_file and text_file.exists() else ""
-        body, got = Counter(words(bodies[path])), Counter(words(text))
+        body, got = Counter(words(bodies[path] or "")), Counter(words(text))
         common = sum((body & got).values())
         kept += common
         total_body += sum(body.values())
         template += sum(got.values()) - common
         total_text += sum(got.values())
+    held_other = Counter(r["code"] for d in docs.values() for r in d["reasons"]
+                         if not r["code"].startswith("duplicate."))
     return {"pairs_near": len(near), "recall": recall, "pairs_distinct": len(distinct),
             "false_rate": false, "exact_claims": len(exact),
             "exact_precision": right / len(exact) if exact else 1.0,
             "body_kept": kept / max(1, total_body),
-            "template_left": template / max(1, total_text)}
+            "template_left": template / max(1, total_text),
+            "relations": relations, "formats": formats, "unlabelled": unlabelled,
+            "false_unlabelled": false_unlabelled, "no_body": no_body,
+            "held_other": dict(held_other), "missed": missed, "wrong": wrong,
+            "keeper": keeper}
 
 
-def show(name: str, s: dict, seconds: float, timings: dict, documents: int) -> None:
+def show(name: str, s: dict, seconds: float, timings: dict, documents: int,
+         verbose: bool = False) -> None:
     print(f"{name}: {documents} documents, {seconds:.1f} s")
     print(f"  near-duplicate recall   {s['recall']:.3f}  ({s['pairs_near']} pairs with body "
           f"Jaccard >= {THRESHOLD})")
     print(f"  false-duplicate rate    {s['false_rate']:.4f}  ({s['pairs_distinct']} distinct "
           "pairs)")
+    print(f"  unlabelled findings     {s['unlabelled']} (of them with body Jaccard < 0.5: "
+          f"{s['false_unlabelled']})")
     print(f"  exact-claim precision   {s['exact_precision']:.3f}  ({s['exact_claims']} "
           "duplicate.exact findings)")
     print(f"  body kept in text.txt   {s['body_kept']:.3f}")
     print(f"  template left in text   {s['template_left']:.3f}  (share of text.txt words "
-          "not in the body)")
+          "not in the body)" + (f"; {s['no_body']} documents without a body file"
+                                if s["no_body"] else ""))
+    if s["held_other"]:
+        print("  held for other reasons  " + ", ".join(
+            f"{code} {n}" for code, n in sorted(s["held_other"].items())))
+    print("  per relation (found / pairs):")
+    for label, (n, hit) in sorted(s["relations"].items()):
+        print(f"    {label:<44} {hit:>4} / {n:<4} {hit / max(1, n):.3f}")
+    print(f"  per format pair (found / pairs; duplicates with body Jaccard >= {THRESHOLD}):")
+    for label, (n, hit) in sorted(s["formats"].items()):
+        print(f"    {label:<44} {hit:>4} / {n:<4} {hit / max(1, n):.3f}")
     if timings:
         parts = ", ".join(f"{k} {v:.2f} s" for k, v in sorted(timings.items()))
         print(f"  worker seconds: {parts}")
+    if verbose:
+        for p in s["missed"]:
+            print(f"  missed {p['relation']} ({p['body_jaccard']}): {p['a']} ~ {p['b']}; "
+                  f"gate: {s['keeper'].get(p['a'], 'kept')} / "
+                  f"{s['keeper'].get(p['b'], 'kept')}")
+        for p in s["wrong"]:
+            print(f"  false duplicate {p['relation']} ({p['body_jaccard']}): "
+                  f"{p['a']} ~ {p['b']}")
 
 
-def bench(name: str, corpus: Path, work: Path, workers: int, baseline: bool) -> None:
+def gate_manifest(corpus: Path, target: Path) -> Path:
+    """The corpus's manifest with only the keys gate reads (a generator may add its own)."""
+    from gate.manifest import FIELDS
+    lines = []
+    for line in (corpus / "manifest.jsonl").read_text(encoding="utf-8").splitlines():
+        if line.strip():
+            record = json.loads(line)
+            lines.append(json.dumps({k: v for k, v in record.items() if k in FIELDS}))
+    target.write_text("\n".join(lines) + "\n", encoding="utf-8")
+    return target
+
+
+def bench(name: str, corpus: Path, work: Path, workers: int, baseline: bool,
+          verbose: bool = False) -> None:
     pairs, bodies = load_truth(corpus)
     for learn in ((True, False) if baseline else (True,)):
         label = name if learn else f"{name}, templates not learnt (trafilatura only)"
         out = work / f"{name}-{'learn' if learn else 'plain'}"
         report, seconds, timings = run_gate(corpus, out, workers, learn)
         show(label, score(report, out, pairs, bodies), seconds, timings,
-             len(report["documents"]))
+             len(report["documents"]), verbose)
+
+
+def generated(source: Path, work: Path) -> Path:
+    """A corpus folder in the blind sets' format (inbox/, manifest.jsonl, pairs.jsonl,
+    bodies/): ``source`` itself or its out/ when already generated there, otherwise
+    ``source/make_corpus.py`` run on a copy of ``source`` under ``work`` (a generator
+    writes out/ beside itself)."""
+    source = source.resolve()
+    for candidate in (source, source / "out"):
+        if (candidate / "pairs.jsonl").exists() and (candidate / "inbox").is_dir():
+            return candidate
+    if not (source / "make_corpus.py").exists():
+        raise SystemExit(f"--corpus {source}: neither pairs.jsonl and inbox/ nor "
+                         "make_corpus.py there.")
+    home = work / f"{source.name}-generator"
+    corpus = home / "out"
+    if not (corpus / "pairs.jsonl").exists():
+        shutil.rmtree(home, ignore_errors=True)
+        shutil.copytree(source, home, ignore=shutil.ignore_patterns("out", "__pycache__"))
+        done = subprocess.run([sys.executable, str(home / "make_corpus.py")], cwd=home,
+                              stdout=subprocess.DEVNULL, stderr=subprocess.PIPE, text=True)
+        if done.returncode != 0 or not (corpus / "pairs.jsonl").exists():
+            raise SystemExit(f"{source}/make_corpus.py failed (exit {done.returncode}): "
+                             f"{done.stderr.strip()[-2000:]}")
+    return corpus
 
 
 def cost(n: int, work: Path, workers: int) -> None:
@@ -174,40 +319,107 @@ def cost(n: int, work: Path, workers: int) -> None:
               f"{n / seconds:.1f} documents/s; worker seconds: {stages}", flush=True)
 
 
+def cross_format(n: int, verbose: bool = False) -> None:
+    """The same body as HTML, PDF, text and Markdown (benchmarks/template_corpus.py's
+    renderings, invented bodies with a heading, a list and a table each): the Jaccard of
+    the word 5-grams of gate's text of each format against the body, and between formats."""
+    import random
+    from itertools import combinations
+
+    from benchmarks.template_corpus import make_body, renderings, title
+    from gate.extract import extract
+
+    rng = random.Random(2026)
+    streams: dict[str, list[list[str]]] = {}
+    bodies: list[list[str]] = []
+    for i in range(n):
+        body = make_body(rng, *((150, 470) if i % 2 else (500, 1200)))  # half over a page
+        kinds = {kind for kind, _value in body["parts"]}
+        if "heading" not in kinds:
+            body["parts"].insert(1, ("heading", title(rng)))
+        if "list" not in kinds:
+            body["parts"].insert(2, ("list", [title(rng) + " before noon" for _ in range(3)]))
+        if "table" not in kinds:
+            body["parts"].append(("table", [["Street", "From", "Until"]] + [
+                [title(rng), f"{rng.randint(6, 11)}:00", f"{rng.randint(12, 20)}:30"]
+                for _ in range(3)]))
+        truth = "\n".join([body["title"]] + [
+            "\n".join(" ".join(r) for r in v) if k == "table" else
+            ("\n".join(v) if k == "list" else v) for k, v in body["parts"]])
+        bodies.append(words(truth))
+        for name, data in renderings(body, "Invented Records Office").items():
+            text = extract(data, max_pages=50, max_nesting=100).text
+            streams.setdefault(name, []).append(words(text))
+
+    def jac(a: list[str], b: list[str]) -> float:
+        x = {tuple(a[i:i + 5]) for i in range(len(a) - 4)}
+        y = {tuple(b[i:i + 5]) for i in range(len(b) - 4)}
+        return len(x & y) / max(1, len(x | y))
+
+    def line(label: str, values: list[float], same: int) -> None:
+        values = sorted(values)
+        print(f"  {label:<24} mean {sum(values) / len(values):.3f}  min {values[0]:.3f}  "
+              f">= 0.95: {sum(v >= 0.95 for v in values):>3}/{len(values)}  identical "
+              f"token stream: {same}/{len(values)}")
+
+    print(f"cross-format agreement, {n} invented bodies of 150-1,200 words (heading, list and "
+          "table in each); Jaccard of word 5-grams:")
+    for name, got in streams.items():
+        line(f"{name} vs body", [jac(g, b) for g, b in zip(got, bodies)],
+             sum(g == b for g, b in zip(got, bodies)))
+    for x, y in combinations(streams, 2):
+        line(f"{x} vs {y}", [jac(a, b) for a, b in zip(streams[x], streams[y])],
+             sum(a == b for a, b in zip(streams[x], streams[y])))
+    if verbose:
+        import difflib
+        for name, got in streams.items():
+            for g, b in zip(got, bodies):
+                if g != b:
+                    diff = [d for d in difflib.ndiff(b, g) if d[0] in "+-"]
+                    print(f"  {name}: {' '.join(diff[:16])}")
+                    break
+
+
 def main() -> None:
     parser = argparse.ArgumentParser(description=__doc__.split("\n")[0])
-    parser.add_argument("--tuning", action="store_true")
-    parser.add_argument("--blind", action="store_true")
+    parser.add_argument("--tuning", action="store_true", help="the invented tuning corpus")
+    parser.add_argument("--blind", action="store_true",
+                        help="the first blind corpus (benchmarks/data/template_blind)")
+    parser.add_argument("--corpus", type=Path, action="append", default=[], metavar="DIR",
+                        help="a corpus in the blind sets' format: DIR/make_corpus.py (run on "
+                             "a copy under --work) or an already generated folder")
     parser.add_argument("--baseline", action="store_true")
+    parser.add_argument("--verbose", action="store_true",
+                        help="also name the pairs missed and the false duplicates")
     parser.add_argument("--workers", type=int, default=2)
     parser.add_argument("--work", type=Path, default=ROOT / "bench-out" / "templates")
     parser.add_argument("--cost", type=int, default=0, metavar="N")
+    parser.add_argument("--cross-format", type=int, default=0, metavar="N",
+                        help="the same N bodies as HTML, PDF, text and Markdown: token "
+                             "stream agreement")
     args = parser.parse_args()
+    args.work.mkdir(parents=True, exist_ok=True)
+    if args.cross_format:
+        cross_format(args.cross_format, args.verbose)
+        return
     if args.cost:
-        args.work.mkdir(parents=True, exist_ok=True)
         cost(args.cost, args.work, args.workers)
         return
-    if not (args.tuning or args.blind):
+    if not (args.tuning or args.blind or args.corpus):
         args.tuning = args.blind = True
-    args.work.mkdir(parents=True, exist_ok=True)
     if args.tuning:
         corpus = args.work / "tuning-corpus"
         if not (corpus / "pairs.jsonl").exists():
             from benchmarks.template_corpus import make
             make(corpus)
-        bench("tuning", corpus, args.work, args.workers, args.baseline)
+        bench("tuning", corpus, args.work, args.workers, args.baseline, args.verbose)
     if args.blind:
-        # the generator writes out/ beside itself: run a copy under bench-out/
-        home = args.work / "blind-generator"
-        corpus = home / "out"
-        if not (corpus / "pairs.jsonl").exists():
-            home.mkdir(parents=True, exist_ok=True)
-            source = ROOT / "benchmarks" / "data" / "template_blind"
-            for name in ("make_corpus.py", "validate.py"):
-                shutil.copyfile(source / name, home / name)
-            subprocess.run([sys.executable, str(home / "make_corpus.py")], check=True,
-                           cwd=home, stdout=subprocess.DEVNULL)
-        bench("blind", corpus, args.work, args.workers, args.baseline)
+        args.corpus.insert(0, ROOT / "benchmarks" / "data" / "template_blind")
+    for source in args.corpus:
+        name = source.resolve().name
+        name = "blind" if name == "template_blind" else name
+        bench(name, generated(source, args.work), args.work, args.workers, args.baseline,
+              args.verbose)
 
 
 if __name__ == "__main__":

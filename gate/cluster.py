@@ -1,11 +1,21 @@
 """Scale-out of the per-document stage on a Dask distributed cluster (``--cluster``).
 
-The parent still discovers, reads and hashes every document (so the bytes checked are the
-bytes staged and placed) and still runs every decision; only extraction and measurement,
-the expensive part, are shipped to the cluster in batches. On each Dask worker the batch
-runs through the same isolated worker pool as locally (its own processes, deadline and
-memory cap), so a hostile file costs a ``format`` finding there too, not a Dask worker.
-Results are the same values the local pool returns, so decisions are identical.
+The coordinating ``gate run`` process does bookkeeping, not per-document work: it sends
+each batch of inbox files by name (:class:`~gate.intake.FileTask`), and on the Dask worker
+the files are read, hashed, staged (``state/blobs`` of the output folder) and extracted and
+measured there, from storage every node sees at the same path (a shared file system; the
+inbox and the output folder must be mounted alike on every node). The coordinator receives
+each document's digest with its results (the text already compressed, the cache rows
+already encoded) and files them; decisions and placement stay with it, placing the staged
+bytes the worker checked, so the bytes checked are the bytes placed and decisions are
+identical to a local run.
+
+On each Dask worker a batch runs through the same isolated worker pool as locally (its
+own processes, CPU-time limit and memory cap), so a hostile file costs a ``format``
+finding there too, not a Dask worker. The pool's processes are forked from a fork server
+that loaded the parsers and language profiles once (:mod:`gate.warm`), so a recycled
+worker starts warm. Staged copies are flushed to disk by the node that writes them
+(a coordinator's sync does not reach another machine's cache).
 """
 
 from __future__ import annotations
@@ -17,9 +27,12 @@ from typing import Any
 
 from gate.errors import UsageError
 from gate.extract.pool import Failure, WorkerPool
-from gate.work import Params, process
+from gate.intake import work_on
+from gate.work import Params
 
-BATCH = 16
+BATCH = 32  # tasks per Dask task, at most ...
+BATCH_BYTES = 4 << 20  # ... and bytes read by them (sizes discovery saw)
+RECYCLE_AFTER = 2000  # tasks per pool process on a node (forked warm, so rarely needed)
 
 _POOL: WorkerPool | None = None
 _POOL_KEY: tuple | None = None
@@ -38,25 +51,34 @@ def _pool(params: Params) -> WorkerPool:
     if _POOL is None or _POOL_KEY != key:
         if _POOL is not None:
             _POOL.close()
-        # Dask workers run threads: fork a clean interpreter instead of this process
-        _POOL = WorkerPool(process, workers=1, timeout_s=params.timeout_s,
-                           memory_bytes=params.memory_mb * 1024 * 1024, start_method="spawn")
+        # Dask workers run threads, so this process is not forked: a fork server (a clean
+        # process that has imported gate.warm) forks the pool's processes
+        multiprocessing.get_context("forkserver").set_forkserver_preload(["gate.warm"])
+        _POOL = WorkerPool(work_on, workers=1, timeout_s=params.timeout_s,
+                           memory_bytes=params.memory_mb * 1024 * 1024,
+                           start_method="forkserver", recycle_after=RECYCLE_AFTER,
+                           batch_weight=payload_bytes)
         _POOL_KEY = key
     return _POOL
 
 
-def run_batch(batch: list[tuple[int, tuple[str, bytes, Params]]]) -> list[tuple[int, Any]]:
-    """Run on a Dask worker: extract and measure a batch, returning (index, result)."""
+def run_batch(params: Params, batch: list[tuple[int, Any]]) -> list[tuple[int, Any]]:
+    """Run on a Dask worker: read, extract and measure a batch; (index, result) each."""
     if not batch:
         return []
-    params = batch[0][1][2]
-    return list(_pool(params).run(batch))
+    results = list(_pool(params).run(batch))
+    if any(getattr(payload, "sync", False) for _index, payload in batch):
+        os.sync()  # staged copies and built entries are durable before the answer
+    return results
 
 
 class ClusterExecutor:
     """The WorkerPool interface, backed by a Dask cluster at ``address``."""
 
-    def __init__(self, address: str, *, in_flight: int | None = None):
+    remote = True  # its workers' writes are flushed on their nodes
+
+    def __init__(self, address: str, params: Params, *, in_flight: int | None = None):
+        self.params = params
         try:
             from distributed import Client
         except ImportError:
@@ -91,15 +113,17 @@ class ClusterExecutor:
         def submit() -> bool:
             nonlocal counter
             batch = []
+            weight = 0
             for tag, payload in pending:
                 tags[counter] = tag
                 batch.append((counter, payload))
                 counter += 1
-                if len(batch) >= BATCH:
+                weight += payload_bytes(payload)
+                if len(batch) >= BATCH or weight >= BATCH_BYTES:
                     break
             if not batch:
                 return False
-            future = self.client.submit(run_batch, batch, pure=False)
+            future = self.client.submit(run_batch, self.params, batch, pure=False)
             members[future] = [index for index, _payload in batch]
             futures.add(future)
             return True
@@ -122,15 +146,17 @@ class ClusterExecutor:
 def executor(cluster: str | None, workers: int, params: Params) -> Any:
     """A local isolated pool, or the cluster when an address is given."""
     if cluster:
-        return ClusterExecutor(cluster)
-    return WorkerPool(process, workers=max(1, workers), timeout_s=params.timeout_s,
+        return ClusterExecutor(cluster, params)
+    return WorkerPool(work_on, workers=max(1, workers), timeout_s=params.timeout_s,
                       memory_bytes=params.memory_mb * 1024 * 1024,
-                      batch_weight=_payload_bytes)
+                      batch_weight=payload_bytes)
 
 
-def _payload_bytes(payload: tuple[str, bytes | None, Params]) -> int:
-    """How much a task carries: small documents travel to the workers in batches."""
-    return len(payload[1] or b"")
+def payload_bytes(payload: Any) -> int:
+    """How much a task carries or reads: small documents travel in batches."""
+    if isinstance(payload, tuple):
+        return len(payload[1] or b"")
+    return payload.size
 
 
 def cpu_count() -> int:

@@ -24,7 +24,7 @@ from gate.errors import OutputError
 from gate.findings import Finding
 from gate.folderpage import render_folder
 from gate.manifest import Manifest
-from gate.placement import Blobs, Placer, write_atomic
+from gate.placement import Blobs, Placer, payload_head, write_atomic
 from gate.policy import LoadedPolicy
 from gate.record import DocRecord, Slim
 from gate.state import Rows, State
@@ -101,7 +101,8 @@ class Run:
 
 
 def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
-           manifest: Manifest, loaded: LoadedPolicy, reporter: Reporter) -> None:
+           manifest: Manifest, loaded: LoadedPolicy, reporter: Reporter,
+           pool: Any = None) -> None:
     """Decide every document and record it all in one transaction, then :func:`finish`."""
     state = output.state
     reporter.stage("deciding", len(slims))
@@ -153,7 +154,7 @@ def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
         writer.finish(rest)
         state.put_report_rest(run.id, {**rest, "cautions": cautions})
         state.mark_decided(run.id, summary)
-    finish(output, run.id, reporter)
+    finish(output, run.id, reporter, pool)
 
 
 def _decide_one(record: DocRecord, slim: Slim, run: Run, loaded: LoadedPolicy,
@@ -255,16 +256,17 @@ def _superseded(run: Run, key: str, row: dict[str, Any], finding: Finding, rows:
                            "why": finding.message, "location": f"quarantine/{key}"})
 
 
-def finish(output: Output, run_id: str, reporter: Reporter) -> None:
-    """Apply the run's outstanding placements, then write the report and change set."""
+def finish(output: Output, run_id: str, reporter: Reporter, pool: Any = None) -> None:
+    """Apply the run's outstanding placements (assembled by ``pool``'s workers when
+    given), then write the report and change set."""
     state, placer = output.state, output.placer
     reporter.stage("placing", state.pending_count(run_id))
     after = ""
     while batch := state.pending_batch(run_id, after, PLACE_BATCH):
-        placer.apply_batch(batch)
+        placer.apply_batch(batch, pool)
         state.mark_placed([(run_id, doc) for doc, _target, _payload in batch])
         for _doc, _target, payload in batch:
-            reporter.advance(payload.get("path"))
+            reporter.advance(payload_head(payload)[0])
         after = batch[-1][0]
     if output.index is not None:
         reporter.stage("indexing", None)

@@ -17,25 +17,27 @@ batch teaches the same template, reuses it, and a different template never does.
 from __future__ import annotations
 
 import hashlib
+import os
 import time
+import zlib
 from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
 from gate import containers
 from gate.checks.base import Document, RunContext
-from gate.cluster import executor
 from gate.commit import Output, Reporter
 from gate.discovery import Entry, walk
 from gate.evaluation import Releases, evaluate_document, extraction_of
 from gate.extract.model import Extracted
 from gate.extract.pool import Failure
-from gate.intake import Intake, read_entry
+from gate.intake import FileTask, Intake, StagedTask, read_entry
 from gate.manifest import Manifest, ManifestRecord
 from gate.policy import LoadedPolicy
 from gate.record import Slim, doc_record, slim
-from gate.templates import Page, learn, removal, removal_key, site_of
-from gate.work import Params, warm_up
+from gate.state import dumps
+from gate.templates import Page, learn, removal, removal_key, site_of, stored_pages
+from gate.work import Params
 
 CACHE_BATCH = 64  # results written to the cache and the state per transaction, at least
 CACHE_PAUSE_S = 0.5  # ... and seconds between two writes (each ends in an fsync)
@@ -68,33 +70,46 @@ class _Item:
     measure_errors: dict[str, str] = field(default_factory=dict)
     site: str | None = None  # the host whose template it may carry (gate.templates)
     page: Page | None = None  # the page's blocks, while it waits for its site's template
+    measured: bool = False  # measured at once (no template assumed), while it waits
+    hint: str | None = None  # its digest in the last run
+    cached: tuple[dict, dict] | None = None  # that digest's cache entry, if usable
 
 
 def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, output: Output,
                     reporter: Reporter, ctx: RunContext, run_id: str, releases: Releases,
-                    timings: dict[str, float], *, workers: int = 1,
-                    cluster: str | None = None, incremental: bool = False) -> list[Slim]:
+                    timings: dict[str, float], pool: Any, *, incremental: bool = False,
+                    resumed: bool = False) -> list[Slim]:
     """Read, extract, measure and evaluate every document: each one's record goes to the
     state as soon as it is evaluated, and only its Slim stays in memory (pages of a site
     wait for its template as block hashes, see the module docstring). ``timings`` gathers
-    the workers' seconds per stage (for benchmarks)."""
+    the workers' seconds per stage (for benchmarks). ``pool`` is the run's
+    (:func:`gate.cluster.executor`).
+
+    The workers read, hash and stage the inbox files themselves (:class:`FileTask`); this
+    process only files what they return. A document whose digest in the last run is in
+    the cache is read and hashed by a worker but not extracted while the digest holds. In
+    a resumed run, a document new to the folder is first only read, hashed and staged, so
+    what the killed run extracted is taken from the cache; the rest is extracted from the
+    staged copy."""
     state = output.state
     params = params_of(loaded)
+    max_bytes = loaded.policy.limits.max_bytes
     entries = list(containers.expand(inbox, walk(inbox), manifest))  # WARC, mbox: records
     reporter.stage("extracting", len(entries))
     cache_print = params.fingerprint()
     known = state.entries()
     slims: list[Slim | None] = [None] * len(entries)
-    cache_rows: list[tuple[str, str, dict, dict, str]] = []
+    cache_rows: list[tuple[str, str, str, str, bytes]] = []
     doc_rows: list[tuple[str, int, str]] = []
     state.clear_run_docs(run_id)
+    stage_root = str(output.blobs.root)
 
     flushed = [time.monotonic()]
 
     def flush() -> None:
         flushed[0] = time.monotonic()
         if cache_rows:
-            state.cache_put_many(cache_rows)
+            state.cache_put_packed(cache_rows)
             cache_rows.clear()
         if doc_rows:
             state.put_run_docs(doc_rows)
@@ -117,17 +132,26 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
                                              or len(doc_rows) >= 16 * CACHE_BATCH):
             flush()
 
+    def unread(item: _Item) -> None:
+        """A document intake could not read: evaluated on the problem alone."""
+        item.extracted = Extracted(type=None, problem=item.intake.problem,
+                                   problem_detail=item.intake.detail)
+        evaluated(item)
+
     waiting: list[_Item] = []
 
-    def arrived(item: _Item, blocks: dict[str, list[int]] | None) -> None:
-        """A document's extraction is known: evaluate it, or let it wait for its site."""
+    def arrived(item: _Item, blocks: dict[str, list[int]] | None, measured: bool) -> None:
+        """A document's extraction is known: evaluate it, or let it wait for its site
+        (with its measures when they were taken at once: see :class:`FileTask`)."""
         assert item.extracted is not None
         reporter.advance(item.entry.path)
         if item.site is None or not blocks or item.measure_errors or not item.extracted.ok:
             evaluated(item)
             return
         item.page = Page.of(f"{item.site} {item.extracted.type}", blocks)
-        item.measures = {}  # measured after learning, on the page's own text
+        item.measured = measured
+        if not measured:
+            item.measures = {}  # measured after learning, on the page's own text
         waiting.append(item)
 
     def received(item: _Item, result: Any) -> dict[str, list[int]]:
@@ -141,56 +165,144 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
         bug = item.measure_errors or (isinstance(result, Failure) and result.kind == "error")
         blocks = result.get("blocks", {}) if isinstance(result, dict) else {}
         if not bug:  # a bug in gate is retried on the next run, not remembered
-            measured = not isinstance(result, dict) or result.get("measured", True)
-            cache_rows.append((item.cache_key, item.intake.sha256, item.extracted.to_json(),
-                               {"measures": item.measures, "errors": {}, "blocks": blocks,
-                                "measured": measured},
-                               result.get("text", "") if isinstance(result, dict) else ""))
+            if isinstance(result, dict):
+                cache_rows.append((item.cache_key, item.intake.sha256, *result["cache"]))
+            else:
+                cache_rows.append((item.cache_key, item.intake.sha256,
+                                   dumps(item.extracted.to_json()),
+                                   dumps({"measures": {}, "errors": {}, "blocks": {},
+                                          "measured": True}), zlib.compress(b"", 1)))
+            # pages waiting for their site's template are not evaluated yet: their
+            # extractions go to the cache as they arrive, not all at the end of the pass
+            if len(cache_rows) >= 16 * CACHE_BATCH:
+                flush()
         return blocks
+
+    def from_cache(item: _Item, cached: tuple[dict, dict]) -> None:
+        item.extracted = Extracted.from_json(cached[0])
+        item.measures = cached[1].get("measures", {})
+        arrived(item, cached[1].get("blocks"), cached[1].get("measured", True))
+
+    def usable(key: str, site: str | None) -> tuple[dict, dict] | None:
+        """The cache entry for ``key`` if it serves this document: a page of a site is
+        first extracted for its blocks only, and such an entry serves no other document."""
+        cached = state.cache_meta(key)
+        if cached is not None and (site is not None or cached[1].get("measured", True)):
+            return cached
+        return None
+
+    def staged_task(item: _Item, extra: tuple | None) -> StagedTask | None:
+        source = output.placer.original_path(doc_id(item.entry.path), item.intake.sha256)
+        if source is None:
+            return None
+        return StagedTask(item.entry.path, str(source), item.intake.sha256, params,
+                          site=item.site is not None, extra=extra)
+
+    def missing(item: _Item) -> None:
+        """The staged copy vanished: fail closed."""
+        item.extracted = Extracted(type=item.extracted.type if item.extracted else None,
+                                   problem="unreadable",
+                                   problem_detail="its staged copy is missing")
+        evaluated(item)
+
+    again: list[_Item] = []  # read by a worker, to be extracted from the staged copy
+
+    def answered(item: _Item, answer: Any) -> None:
+        """What a worker did with a file: its intake, then its result or the cache's."""
+        if isinstance(answer, Failure):  # no answer: read it here, to hold it in quarantine
+            item.intake = read_entry(inbox, item.entry, max_bytes)
+            if item.intake.problem is not None:
+                unread(item)
+                return
+            output.blobs.put(item.intake.sha256, item.intake.data)
+            item.cache_key = f"{item.intake.sha256}:{cache_print}"
+            arrived(item, received(item, answer), True)
+            return
+        if answer.get("missing"):
+            missing(item)
+            return
+        if "intake" in answer:
+            item.intake = Intake(**answer["intake"])
+            if item.intake.problem is not None:
+                unread(item)
+                return
+            item.cache_key = f"{item.intake.sha256}:{cache_print}"
+        if "result" in answer:
+            result = answer["result"]
+            arrived(item, received(item, result), result.get("measured", True))
+            return
+        cached = item.cached if item.intake.sha256 == item.hint else \
+            usable(item.cache_key, item.site)
+        item.cached = None
+        if cached is not None:
+            from_cache(item, cached)
+        else:
+            again.append(item)
 
     def tasks():
         for index, entry in enumerate(entries):
-            max_bytes = loaded.policy.limits.max_bytes
             if isinstance(entry, containers.Member):
                 intake, record = containers.read(inbox, entry, max_bytes, manifest)
-            else:
-                intake, record = read_entry(inbox, entry, max_bytes), manifest.get(entry.path)
-            item = _Item(index=index, entry=entry, intake=intake, record=record,
-                         site=site_of(record.source_url if record else None))
-            if intake.problem is not None:
-                item.extracted = Extracted(type=None, problem=intake.problem,
-                                           problem_detail=intake.detail)
-                evaluated(item)
+                item = _Item(index=index, entry=entry, intake=intake, record=record,
+                             site=site_of(record.source_url if record else None))
+                if intake.problem is not None:
+                    unread(item)
+                    continue
+                item.cache_key = f"{intake.sha256}:{cache_print}"
+                output.blobs.put(intake.sha256, intake.data)
+                cached = usable(item.cache_key, item.site)
+                if cached is not None:
+                    intake.data = None
+                    from_cache(item, cached)
+                    continue
+                yield item, ((entry.path, intake.data, params) if item.site is None else
+                             (entry.path, intake.data, params, None))
                 continue
-            item.cache_key = f"{intake.sha256}:{cache_print}"
-            placed = known.get(doc_id(entry.path))
+            record = manifest.get(entry.path)
+            item = _Item(index=index, entry=entry, intake=Intake(), record=record,
+                         site=site_of(record.source_url if record else None))
+            if not entry.regular:
+                item.intake = Intake(problem="not-regular")
+                unread(item)
+                continue
+            did = doc_id(entry.path)
+            placed = known.get(did)
             # the placed entry's original is reused when it holds these bytes; an entry
             # without one (a file once over limits.max_bytes, now within) needs them staged
-            if placed is None or placed[1] != intake.sha256 or \
-                    not output.placer.has_original(placed[0], doc_id(entry.path)):
-                output.blobs.put(intake.sha256, intake.data)
-            cached = state.cache_meta(item.cache_key)
-            # a page of a site is first extracted for its blocks only (measured once its
-            # own text is known); such an entry serves no document without a site
-            if cached is not None and (item.site is not None or
-                                       cached[1].get("measured", True)):
-                item.extracted = Extracted.from_json(cached[0])
-                item.measures = cached[1].get("measures", {})
-                intake.data = None
-                arrived(item, cached[1].get("blocks"))
+            holds = placed[1] if placed is not None and placed[1] is not None and \
+                output.placer.has_original(placed[0], did) else None
+            if placed is not None and placed[1] is not None:
+                item.hint = placed[1]
+                item.cached = usable(f"{placed[1]}:{cache_print}", item.site)
+            yield item, FileTask(
+                path=entry.path, full=os.path.join(os.fspath(inbox), entry.fs_path),
+                max_bytes=max_bytes, params=params, stage_root=stage_root,
+                site=item.site is not None,
+                skip=item.hint if item.cached is not None else None, placed=holds,
+                probe=resumed and placed is None, sync=getattr(pool, "remote", False),
+                size=entry.size or 0)
+
+    def extract_again() -> Any:
+        for item in again:
+            task = staged_task(item, None)
+            if task is None:
+                missing(item)
                 continue
-            yield item
+            yield item, task
 
     def cleaning(learnt: dict) -> Any:
-        """Pages holding template blocks, with their bytes, to be extracted again."""
+        """Pages holding template blocks, to be extracted again from the staged bytes."""
         for item in waiting:
             drop = removal(item.page, learnt) if item.page is not None else ()
-            cached = state.cache_meta(item.cache_key) if not drop else None
-            if cached is not None and cached[1].get("measured", True):
+            if not drop and item.measured:  # measured at once, and nothing to remove
+                evaluated(item)
+                continue
+            cached = usable(item.cache_key, None) if not drop else None
+            if cached is not None:
                 item.measures = cached[1].get("measures", {})
                 evaluated(item)
                 continue
-            earlier = state.cache_text(item.cache_key)
+            earlier = state.cache_text_z(item.cache_key)
             key = f"{item.cache_key}:t{removal_key(drop)}" if drop else item.cache_key
             cached = state.cache_meta(key) if drop else None
             if cached is not None:
@@ -200,47 +312,30 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
                 evaluated(item)
                 continue
             item.cache_key = key
-            item.intake.data = output.placer.original(doc_id(item.entry.path),
-                                                      item.intake.sha256)
-            if item.intake.data is None:  # the staged copy vanished: fail closed
-                item.extracted = Extracted(type=item.extracted.type if item.extracted
-                                           else None, problem="unreadable",
-                                           problem_detail="its staged copy is missing")
-                evaluated(item)
+            task = staged_task(item, (drop, earlier))
+            if task is None:
+                missing(item)
                 continue
-            yield item, (item.entry.path, item.intake.data, params, drop, earlier)
+            yield item, task
 
-    if not cluster:
-        warm_up()
-    with executor(cluster, workers, params) as pool:
-        for item, result in pool.run(
-                (item, (item.entry.path, item.intake.data, params) if item.site is None
-                 else (item.entry.path, item.intake.data, params, None))
-                for item in tasks()):
-            arrived(item, received(item, result))
-        flush()
-        if waiting:
-            learnt = learn([item.page for item in waiting if item.page is not None] +
-                           (_stored_pages(state, {doc_id(e.path) for e in entries})
-                            if incremental else []))
-            reporter.stage("removing site templates", None)
-            for item, result in pool.run(cleaning(learnt)):
-                item.page = None
-                received(item, result)
-                evaluated(item)
+    for item, answer in pool.run(tasks()):
+        answered(item, answer)
+    if again:
+        for item, answer in pool.run(extract_again()):
+            answered(item, answer)
+    flush()
+    if waiting:
+        learnt = learn([item.page for item in waiting if item.page is not None] +
+                       (stored_pages(state, {doc_id(e.path) for e in entries})
+                        if incremental else []))
+        reporter.stage("removing site templates", None)
+        for item, answer in pool.run(cleaning(learnt)):
+            item.page = None
+            if isinstance(answer, dict) and answer.get("missing"):
+                missing(item)
+                continue
+            received(item, answer["result"] if isinstance(answer, dict) else answer)
+            evaluated(item)
     flush()
     return [s for s in slims if s is not None]
 
-
-def _stored_pages(state: Any, batch: set[str]) -> list[Page]:
-    """The pages of the stored corpus (not in this batch) that can teach a site's
-    template: their blocks come from the cache entry of their text."""
-    pages = []
-    for row in state.corpus(sketches=False):
-        site = site_of(row["source_url"])
-        if site is None or row["doc_id"] in batch or not row["cache_key"]:
-            continue
-        cached = state.cache_meta(row["cache_key"])
-        if cached is not None and cached[1].get("blocks"):
-            pages.append(Page.of(f"{site} {cached[0].get('type')}", cached[1]["blocks"]))
-    return pages

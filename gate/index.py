@@ -27,6 +27,7 @@ from __future__ import annotations
 
 import json
 import os
+import pickle
 import socket
 from typing import Any
 from urllib.parse import urlsplit
@@ -36,6 +37,7 @@ from gate.checks import duplicate as dup
 from gate.errors import LockError, UsageError
 
 LOCK_SECONDS = 6 * 3600
+QUERY_CHUNK = 500  # sketches whose LSH buckets are fetched in one pipeline per band
 
 
 def connection_settings(url: str) -> dict[str, Any]:
@@ -141,10 +143,8 @@ class SharedIndex:
                 pipe.smembers(self.prefix + "text:" + item.text_sha256)
         for found in pipe.execute():
             members.update(m.decode() for m in found)
-        for item in batch:
-            if item.minhash is not None:
-                for key in self.lsh.query(dup.lean(item.minhash)):
-                    members.add(key.decode() if isinstance(key, bytes) else key)
+        members.update(self._lsh_candidates([dup.lean(item.minhash) for item in batch
+                                             if item.minhash is not None]))
         out: list[dup.Item] = []
         wanted = sorted(members)
         metas = self.redis.hmget(self.prefix + "meta", wanted) if wanted else []
@@ -166,6 +166,20 @@ class SharedIndex:
                 if meta.get("date") else None, seen=(meta["first_seen"], -1), in_batch=False,
                 accepted_before=True, fixed=not own))
         return out
+
+    def _lsh_candidates(self, sketches: list[Any]) -> set[str]:
+        """The union of ``lsh.query`` over many sketches, with one Redis round trip per
+        band for up to QUERY_CHUNK sketches instead of one per band and sketch (the
+        bucket keys are computed as datasketch's ``query`` does, by its ``_H``)."""
+        lsh, found = self.lsh, set()
+        for start in range(0, len(sketches), QUERY_CHUNK):
+            chunk = sketches[start:start + QUERY_CHUNK]
+            for (lo, hi), table in zip(lsh.hashranges, lsh.hashtables):
+                for keys in table.getmany(*[lsh._H(m.hashvalues[lo:hi]) for m in chunk]):
+                    found.update(keys)
+        if lsh.prepickle:  # keys are stored pickled (datasketch's default with Redis)
+            found = {pickle.loads(key) for key in found}
+        return {k.decode() if isinstance(k, bytes) else k for k in found}
 
     # -- keeping it in line with the folder's corpus -------------------------------------
 
@@ -198,25 +212,29 @@ class SharedIndex:
         present = set(current) - {member for member, _meta in stale}
         missing = sorted(m for m in desired if m not in present)
         added = 0
-        with self.lsh.insertion_session() as session:
-            for start in range(0, len(missing), 500):
-                ids = [m.partition(":")[2] for m in missing[start:start + 500]]
-                for row in state.corpus_rows(ids):
-                    member = self._member(row["doc_id"])
-                    meta = {"path": row["path"], "sha256": row["sha256"],
-                            "text_sha256": row["text_sha256"],
-                            "minhash": row["minhash"].hex() if row["minhash"] else None,
-                            "trust": row["trust"], "date": row["date"],
-                            "first_seen": row["first_seen"]}
-                    pipe = self.redis.pipeline()
-                    pipe.hset(self.prefix + "meta", member, json.dumps(meta, sort_keys=True))
-                    pipe.sadd(owner_key, member)
-                    pipe.sadd(self.prefix + "sha:" + row["sha256"], member)
-                    if row["text_sha256"]:
-                        pipe.sadd(self.prefix + "text:" + row["text_sha256"], member)
-                    pipe.execute()
+        for start in range(0, len(missing), 500):
+            ids = [m.partition(":")[2] for m in missing[start:start + 500]]
+            rows = state.corpus_rows(ids)
+            # the sketches first: a member of the owner set is fully indexed, so a sync
+            # killed in between inserts the chunk again on the next run
+            with self.lsh.insertion_session() as session:
+                for row in rows:
                     if row["minhash"]:
-                        session.insert(member, dup.lean(row["minhash"]),
+                        session.insert(self._member(row["doc_id"]), dup.lean(row["minhash"]),
                                        check_duplication=False)
-                    added += 1
+            pipe = self.redis.pipeline()  # one round trip for the chunk's documents
+            for row in rows:
+                member = self._member(row["doc_id"])
+                meta = {"path": row["path"], "sha256": row["sha256"],
+                        "text_sha256": row["text_sha256"],
+                        "minhash": row["minhash"].hex() if row["minhash"] else None,
+                        "trust": row["trust"], "date": row["date"],
+                        "first_seen": row["first_seen"]}
+                pipe.hset(self.prefix + "meta", member, json.dumps(meta, sort_keys=True))
+                pipe.sadd(owner_key, member)
+                pipe.sadd(self.prefix + "sha:" + row["sha256"], member)
+                if row["text_sha256"]:
+                    pipe.sadd(self.prefix + "text:" + row["text_sha256"], member)
+                added += 1
+            pipe.execute()
         return added, len(stale)

@@ -25,6 +25,7 @@ the reference: the tests compare the two on chunks of real text.
 
 from __future__ import annotations
 
+import itertools
 import re
 from dataclasses import dataclass
 
@@ -58,10 +59,19 @@ class _Profiles:
         detector_factory.init_factory()
         factory = detector_factory._factory
         self.langs = tuple(factory.langlist)
-        items = sorted((self.key(gram), probs)
-                       for gram, probs in factory.word_lang_prob_map.items())
-        self.keys = np.array([key for key, _ in items], dtype=np.uint64)
-        probs = np.array([p for _, p in items], dtype=np.float64)
+        table = factory.word_lang_prob_map
+        keys = np.fromiter(map(self.key, table), dtype=np.uint64, count=len(table))
+        order = np.argsort(keys, kind="stable")  # the keys are distinct: a plain sort
+        self.keys = keys[order]
+        width = len(self.langs)
+        probs = np.fromiter(itertools.chain.from_iterable(table.values()), dtype=np.float64,
+                            count=len(table) * width).reshape(len(table), width)[order]
+        # keys of n letters lie in [2^(21(n-1)), 2^(21n)) (a normalised letter is never
+        # NUL): where each length's keys start, and the 1-grams' rows by code point
+        self.starts = [int(np.searchsorted(self.keys, np.uint64(1 << (21 * n))))
+                       for n in range(3)] + [self.keys.size]
+        self.unigram = np.full(0x110000, -1, dtype=np.int32)
+        self.unigram[self.keys[:self.starts[1]].astype(np.int64)] = np.arange(self.starts[1])
         self.logp = np.log(probs + _ALPHA / _BASE_FREQ).astype(np.float32)
         # NGram.normalize maps one character to one character: a table over the BMP
         self.normal = np.arange(0x10000, dtype=np.uint64)
@@ -136,12 +146,20 @@ def _grams(pieces: list[str], prof: _Profiles):
     """langdetect's n-grams of every piece, vectorised: the normalised code points, the
     piece each belongs to, and (keys, end positions) for n = 1, 2, 3, each in text order."""
     joined = SEPARATOR.join(pieces)
-    joined = Detector.URL_RE.sub(" ", joined)
-    joined = Detector.MAIL_RE.sub(" ", joined)
-    joined = NGram.normalize_vi(joined)
+    # each pass only where it can match (a URL needs "http", an address "@", Vietnamese
+    # recomposition a combining mark): the same text, without three scans of it
+    if "http" in joined:
+        joined = Detector.URL_RE.sub(" ", joined)
+    if "@" in joined:
+        joined = Detector.MAIL_RE.sub(" ", joined)
+    if not joined.isascii() and any(mark in joined for mark in NGram.DMARK_CLASS):
+        joined = NGram.normalize_vi(joined)
     cps = np.frombuffer(joined.encode("utf-32-le"), dtype=np.uint32).astype(np.uint64)
-    bmp = cps < 0x10000
-    cps[bmp] = prof.normal[cps[bmp]]
+    if cps.size and cps.max() < 0x10000:  # the usual case: one gather, no masks
+        cps = prof.normal[cps]
+    else:
+        bmp = cps < 0x10000
+        cps[bmp] = prof.normal[cps[bmp]]
     sep = cps == ord(SEPARATOR)
     chunk_of = np.cumsum(sep)
     # langdetect drops Latin letters from a text whose non-Latin letters are more than twice
@@ -161,9 +179,12 @@ def _grams(pieces: list[str], prof: _Profiles):
     cps = np.concatenate((np.array([32], dtype=np.uint64), cps[keep]))
     space = np.concatenate(([True], space[keep]))
     chunk_of = np.concatenate(([0], chunk_of[keep]))
-    upper = np.zeros(cps.size, dtype=bool)
-    bmp = cps < 0x10000
-    upper[bmp] = prof.upper[cps[bmp]]
+    if cps.max() < 0x10000:
+        upper = prof.upper[cps]
+    else:
+        upper = np.zeros(cps.size, dtype=bool)
+        bmp = cps < 0x10000
+        upper[bmp] = prof.upper[cps[bmp]]
     skip = upper & np.concatenate(([False], upper[:-1]))  # inside a word in capitals
     one = ~space & ~skip
     two = ~(space[:-1] & space[1:]) & ~skip[1:]
@@ -176,10 +197,16 @@ def _grams(pieces: list[str], prof: _Profiles):
     return cps, chunk_of, grams
 
 
-def _lookup(prof: _Profiles, keys: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
-    """Each key's row in the profiles, and whether the profiles have it at all."""
-    found = np.searchsorted(prof.keys, keys)
-    found[found >= prof.keys.size] = 0
+def _lookup(prof: _Profiles, keys: np.ndarray, length: int) -> tuple[np.ndarray, np.ndarray]:
+    """Each key's row in the profiles, and whether the profiles have it at all (the
+    n-grams of one ``length``: 1-grams by table, longer ones among their own length)."""
+    if length == 1:
+        found = prof.unigram[keys.astype(np.int64)]
+        hit = found >= 0
+        return np.where(hit, found, 0), hit
+    lo, hi = prof.starts[length - 1], prof.starts[length]
+    found = np.searchsorted(prof.keys[lo:hi], keys) + lo
+    found[found >= hi] = lo
     return found, prof.keys[found] == keys
 
 
@@ -190,7 +217,7 @@ def profile_ngrams(text: str) -> list[str]:
     _cps, _owner, grams = _grams([text], prof)
     out = []
     for length, (keys, _ends) in enumerate(grams, start=1):
-        _found, hit = _lookup(prof, keys)
+        _found, hit = _lookup(prof, keys, length)
         for key in keys[hit].tolist():
             out.append("".join(chr((key >> (21 * i)) & 0x1FFFFF)
                                for i in reversed(range(length))))
@@ -205,17 +232,20 @@ def identify(text: str) -> Shares:
         return Shares(0, 0, ())
     n_chunks = len(pieces)
     cps, chunk_of, grams = _grams(pieces, prof)
-    bmp = cps < 0x10000
     # a chunk is scored twice: its n-grams that end in a Latin letter, and the others, so
     # identifiers in a Japanese page or a Russian quote in a German one are judged apart
     latin_end = (cps < 0x250) | ((cps >= 0x1E00) & (cps < 0x1F00))
-    char_weight = np.ones(cps.size)
-    char_weight[bmp] = prof.weight[cps[bmp]]
+    if cps.max() < 0x10000:
+        char_weight = prof.weight[cps]
+    else:
+        bmp = cps < 0x10000
+        char_weight = np.ones(cps.size)
+        char_weight[bmp] = prof.weight[cps[bmp]]
     scores = np.zeros((2, n_chunks, len(prof.langs)), dtype=np.float32)
     weight = np.zeros((2, n_chunks))
     bounds = np.arange(n_chunks + 1)
     for length, (keys, ends) in enumerate(grams, start=1):
-        found, hit = _lookup(prof, keys)
+        found, hit = _lookup(prof, keys, length)
         for part, mask in enumerate((hit & latin_end[ends], hit & ~latin_end[ends])):
             owner = chunk_of[ends[mask]]  # in text order, so grouped by chunk
             counts = sparse.csr_matrix(

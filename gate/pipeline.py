@@ -35,11 +35,13 @@ from gate import manifest as manifest_mod
 from gate.checks.base import RunContext
 from gate.commit import Output, Reporter, Run, SilentReporter, commit, finish, fingerprint
 from gate.corpus import run_corpus_checks
-from gate.documents import check_documents
+from gate.cluster import executor
+from gate.documents import check_documents, params_of
 from gate.errors import InboxError, OutputError, StateError
 from gate.lock import RunLock
 from gate.policy import LoadedPolicy
 from gate.state import State, open_state
+from gate.work import warm_up
 
 
 
@@ -195,9 +197,25 @@ def _run(opts: RunOptions, inbox: Path, manifest: manifest_mod.Manifest, output:
     ctx = RunContext(as_of=as_of)
     timings: dict[str, float] = {}
     releases = state.releases()
+    if not opts.cluster:
+        warm_up()  # before the workers are forked
+    with executor(opts.cluster, opts.workers, params_of(loaded)) as pool:
+        _decide(opts, output, reporter, pool, inbox, manifest, run_id, seq, as_of_text,
+                mode, ctx, releases, timings, resumed=resume is not None)
+    return RunResult(run_id, output.out / "report.json", state.run_summary(run_id),
+                     resumed=resume is not None, timings=timings)
+
+
+def _decide(opts: RunOptions, output: Output, reporter: Reporter, pool: Any, inbox: Path,
+            manifest: manifest_mod.Manifest, run_id: str, seq: int, as_of_text: str,
+            mode: str, ctx: RunContext, releases: Any, timings: dict[str, float], *,
+            resumed: bool) -> None:
+    """The stages after the run is begun, with its worker pool (local or the cluster's):
+    every document, the corpus checks, the commit and the placements."""
+    state, loaded = output.state, opts.policy
     slims = check_documents(inbox, manifest, loaded, output, reporter, ctx, run_id,
-                            releases, timings, workers=opts.workers, cluster=opts.cluster,
-                            incremental=opts.incremental)
+                            releases, timings, pool, incremental=opts.incremental,
+                            resumed=resumed)
     reporter.stage("comparing", None)
     stored = state.corpus(sketches=opts.incremental and output.index is None)
     corpus = run_corpus_checks(slims, stored, loaded.policy, seq=seq,
@@ -209,6 +227,4 @@ def _run(opts: RunOptions, inbox: Path, manifest: manifest_mod.Manifest, output:
             "manifest": {"path": manifest.source, "sha256": manifest.sha256,
                          "records": len(manifest.records)}}
     commit(output, Run(run_id, seq, mode, info, opts.allow_removals), slims, corpus, manifest,
-           loaded, reporter)
-    return RunResult(run_id, output.out / "report.json", state.run_summary(run_id),
-                     resumed=resume is not None, timings=timings)
+           loaded, reporter, pool)

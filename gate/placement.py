@@ -15,10 +15,12 @@ document's existing entry; they are hard-linked where possible and made read-onl
 
 from __future__ import annotations
 
-import hashlib
 import json
 import os
+import re
 import shutil
+import zlib
+from dataclasses import dataclass
 from pathlib import Path
 from typing import Any
 
@@ -121,16 +123,9 @@ class Placer:
                 return candidate
         return None
 
-    def original(self, doc_id: str, sha256: str | None) -> bytes | None:
-        """The staged (or placed) bytes of a document, verified against ``sha256``."""
-        source = self._original_source(doc_id, sha256)
-        if source is None:
-            return None
-        try:
-            data = source.read_bytes()
-        except OSError:
-            return None
-        return data if hashlib.sha256(data).hexdigest() == sha256 else None
+    def original_path(self, doc_id: str, sha256: str | None) -> Path | None:
+        """Where the staged (or placed) bytes of a document are, unread and unverified."""
+        return self._original_source(doc_id, sha256)
 
     def _aside(self, path: Path) -> None:
         if path.exists() or path.is_symlink():
@@ -143,32 +138,9 @@ class Placer:
         """Assemble an entry in state/tmp (not yet visible). None for removals."""
         if target == "absent":
             return None
-        build = self.tmp / doc_id
-        shutil.rmtree(build, ignore_errors=True)
-        build.mkdir(parents=True)
-        source = self._original_source(doc_id, payload.get("sha256"))
-        if payload.get("sha256") and source is None and not payload.get("reused"):
-            raise FileNotFoundError(f"the staged copy of {payload['path']!r} is missing")
-        if source is not None:
-            dest = build / "original"
-            try:
-                os.link(source, dest)
-            except OSError:
-                shutil.copyfile(source, dest)
-            os.chmod(dest, 0o444)
-        text = self.state.cache_text(payload["text_key"]) if payload.get("text_key") else None
-        if text is not None:
-            write_file(build / "text.txt", text.encode("utf-8", "surrogatepass"), sync=False)
-        record_name = "provenance.json" if target == "accepted" else "reasons.json"
-        record = json.dumps(payload["record"], indent=2, sort_keys=True, ensure_ascii=False)
-        write_file(build / record_name, record.encode("utf-8", "surrogatepass") + b"\n",
-                   sync=False)
-        if target == "accepted":  # the same facts in W3C PROV-JSON (gate.provjson)
-            prov = json.dumps(provjson.from_record(payload["record"]), indent=2, sort_keys=True,
-                              ensure_ascii=False)
-            write_file(build / provjson.FILE_NAME, prov.encode("utf-8", "surrogatepass") + b"\n",
-                       sync=False)
-        return build
+        text = self.state.cache_text_z(payload["text_key"]) if payload.get("text_key") \
+            else None
+        return build_entry(self.out, doc_id, target, payload, text)
 
     def install(self, doc_id: str, target: str, build: Path | None) -> None:
         """Make an assembled entry visible (one rename) and remove the other folder's."""
@@ -183,14 +155,40 @@ class Placer:
         os.replace(build, final)
         self._aside(self.entry(other, doc_id))
 
-    def apply_batch(self, placements: list[tuple[str, str, dict[str, Any]]]) -> None:
+    def apply_batch(self, placements: list[tuple[str, str, Any]],
+                    pool: Any = None) -> None:
         """Apply placements durably with two syncs for the whole batch, not per file:
         every entry is written in state/tmp, everything is flushed to disk, only then are
         the entries renamed into place, and the renames are flushed before the caller
         marks them done. A crash at any point leaves either the old entry or the complete
-        new one visible, and the placements not yet marked are simply applied again."""
-        built = [(doc_id, target, self.build(doc_id, target, payload))
-                 for doc_id, target, payload in placements]
+        new one visible, and the placements not yet marked are simply applied again.
+
+        A payload may be its JSON text. With a ``pool`` (the run's worker pool, local or
+        on the cluster) the entries are assembled by its workers (:class:`BuildTask`),
+        this process only renames them into place; one a worker could not build is built
+        here."""
+        tmp = self.tmp
+        built: list[tuple[str, str, Path | None]] = []
+        if pool is None:
+            for doc_id, target, payload in placements:
+                payload = json.loads(payload) if isinstance(payload, str) else payload
+                built.append((doc_id, target, self.build(doc_id, target, payload)))
+        else:
+            tasks = []
+            for doc_id, target, payload in placements:
+                if target == "absent":
+                    built.append((doc_id, target, None))
+                    continue
+                raw = payload if isinstance(payload, str) else json.dumps(payload)
+                key = _text_key(raw)
+                tasks.append(((doc_id, target, raw), BuildTask(
+                    str(self.out), doc_id, target, raw,
+                    self.state.cache_text_z(key) if key else None,
+                    sync=getattr(pool, "remote", False))))
+            for (doc_id, target, raw), answer in pool.run(tasks):
+                if answer is not True:  # the worker failed: build it here
+                    self.build(doc_id, target, json.loads(raw))
+                built.append((doc_id, target, tmp / doc_id))
         os.sync()
         for doc_id, target, path in built:
             self.install(doc_id, target, path)
@@ -202,3 +200,92 @@ class Placer:
                 shutil.rmtree(item, ignore_errors=True)
             else:
                 item.unlink(missing_ok=True)
+
+
+# the head of a placement's payload as gate.commit writes it (json.dumps, keys in order)
+_HEAD = re.compile(r'\{"path": ("(?:[^"\\]|\\.)*"), "sha256": (?:null|"[0-9a-f]*"), '
+                   r'"text_key": (null|"[^"\\]*")')
+
+
+def payload_head(raw: str) -> tuple[str | None, str | None]:
+    """(path, text key) of a placement's payload JSON, read from its head alone (the
+    record after it is large); the whole is parsed when the head is not as written."""
+    match = _HEAD.match(raw)
+    if match is None:
+        payload = json.loads(raw)
+        return payload.get("path"), payload.get("text_key")
+    return json.loads(match.group(1)), json.loads(match.group(2))
+
+
+def _text_key(raw: str) -> str | None:
+    return payload_head(raw)[1]
+
+
+def build_entry(out: Path, doc_id: str, target: str, payload: dict[str, Any],
+                text_z: bytes | None) -> Path:
+    """Assemble an entry in ``out/state/tmp/<doc_id>`` (not yet visible): its original
+    (a hard link to the staged bytes, or to the placed entry's), text.txt from the
+    compressed text, and the record files. Runs in the coordinator or in a worker."""
+    tmp = out / "state" / "tmp"
+    build = tmp / doc_id
+    shutil.rmtree(build, ignore_errors=True)
+    build.mkdir(parents=True)
+    source = _source(out, doc_id, payload.get("sha256"))
+    if payload.get("sha256") and source is None and not payload.get("reused"):
+        raise FileNotFoundError(f"the staged copy of {payload['path']!r} is missing")
+    if source is not None:
+        dest = build / "original"
+        try:
+            os.link(source, dest)
+        except OSError:
+            shutil.copyfile(source, dest)
+        os.chmod(dest, 0o444)
+    if text_z is not None:
+        write_file(build / "text.txt", zlib.decompress(text_z), sync=False)
+    record_name = "provenance.json" if target == "accepted" else "reasons.json"
+    record = json.dumps(payload["record"], indent=2, sort_keys=True, ensure_ascii=False)
+    write_file(build / record_name, record.encode("utf-8", "surrogatepass") + b"\n",
+               sync=False)
+    if target == "accepted":  # the same facts in W3C PROV-JSON (gate.provjson)
+        prov = json.dumps(provjson.from_record(payload["record"]), indent=2, sort_keys=True,
+                          ensure_ascii=False)
+        write_file(build / provjson.FILE_NAME, prov.encode("utf-8", "surrogatepass") + b"\n",
+                   sync=False)
+    return build
+
+
+def _source(out: Path, doc_id: str, sha256: str | None) -> Path | None:
+    """The bytes an entry's original is made from: the staged copy, else the copy the
+    document's placed entry holds."""
+    if sha256 is None:
+        return None
+    staged = out / "state" / "blobs" / sha256[:2] / sha256
+    if staged.exists():
+        return staged
+    for folder in FOLDERS:
+        candidate = out / folder / doc_id / "original"
+        if candidate.exists():
+            return candidate
+    return None
+
+
+@dataclass(frozen=True)
+class BuildTask:
+    """One entry assembled by a worker (its payload as JSON text, its text compressed);
+    ``sync``: flush the files where they are written (a cluster node)."""
+
+    out: str
+    doc_id: str
+    target: str
+    payload: str
+    text_z: bytes | None
+    sync: bool = False
+
+    @property
+    def size(self) -> int:
+        return len(self.payload) + len(self.text_z or b"")
+
+    def run(self) -> bool:
+        build_entry(Path(self.out), self.doc_id, self.target, json.loads(self.payload),
+                    self.text_z)
+        return True

@@ -206,14 +206,18 @@ class State:
         row = self.conn.execute("SELECT text FROM cache WHERE key = ?", (key,)).fetchone()
         return zlib.decompress(row[0]).decode("utf-8") if row else None
 
-    def cache_put_many(self, rows: Iterable[tuple[str, str, dict, dict, str]]) -> None:
+    def cache_text_z(self, key: str) -> bytes | None:
+        """A cached text as stored (zlib-compressed UTF-8), for a worker to unpack."""
+        row = self.conn.execute("SELECT text FROM cache WHERE key = ?", (key,)).fetchone()
+        return row[0] if row else None
+
+    def cache_put_packed(self, rows: Iterable[tuple[str, str, str, str, bytes]]) -> None:
+        """Cache rows already encoded (by the worker that produced them): key, digest,
+        extraction JSON, measures JSON, compressed text."""
         with self.transaction() as conn:
             conn.executemany(
                 "INSERT OR REPLACE INTO cache (key, sha256, extracted, measures, text) "
-                "VALUES (?, ?, ?, ?, ?)",
-                [(key, sha, dumps(ex), dumps(me),
-                  zlib.compress(text.encode("utf-8", "surrogatepass"), 1))
-                 for key, sha, ex, me, text in rows])
+                "VALUES (?, ?, ?, ?, ?)", rows)
 
     # -- runs ----------------------------------------------------------------------------
 
@@ -365,13 +369,13 @@ class State:
                                  "done = 0", (run_id,)).fetchone()[0]
 
     def pending_batch(self, run_id: str, after: str, limit: int
-                      ) -> list[tuple[str, str, dict]]:
+                      ) -> list[tuple[str, str, str]]:
         """The next ``limit`` placements of a run not yet done, after doc id ``after``
-        (in batches, so a large run never holds every payload in memory)."""
-        rows = self.conn.execute(
+        (in batches, so a large run never holds every payload in memory); each payload
+        as its JSON text."""
+        return self.conn.execute(
             "SELECT doc_id, target, payload FROM placements WHERE run_id = ? AND done = 0 "
             "AND doc_id > ? ORDER BY doc_id LIMIT ?", (run_id, after, limit)).fetchall()
-        return [(d, t, json.loads(p)) for d, t, p in rows]
 
     def corpus_rows(self, doc_ids: list[str]) -> list[dict[str, Any]]:
         """Full corpus rows (with sketches) for some documents."""

@@ -34,27 +34,32 @@ Removal (worker, :func:`compose`): the page's template blocks are dropped from
 trafilatura's text; when what remains is less than ``MAIN_RATIO`` of the page's own
 (non-template, not link-dominated) blocks, trafilatura chose the template as the main
 text, and the page's own blocks are used instead. So they are when trafilatura's text
-cannot be laid onto the page's blocks line by line (a layout table's cell written as one
-line), because the template cannot then be taken out of it, and template blocks make up
-at least ``TEMPLATE_SHARE`` of it (otherwise it is kept as it is). Either happens only when the
-page's own blocks hold at least ``MIN_OWN_WORDS`` words (more than trafilatura's
-remainder, in the first case): a table of contents or a page of links keeps its text.
-When nothing would remain, the page is kept as extracted.
+cannot be laid onto the page's blocks line by line and one of its lines holds two or more
+whole blocks (a layout table's cell written as one line: the template cannot be taken out
+of it, and its list items and rows have lost their order), or template blocks make up at
+least ``TEMPLATE_SHARE`` of it; a text whose lines are pieces of paragraphs (a source that
+wraps its lines) is kept as it is otherwise. Either happens only when the page's own
+blocks hold at least ``MIN_OWN_WORDS`` words (more than trafilatura's remainder, in the
+first case): a table of contents or a page of links keeps its text. When nothing would
+remain, the page is kept as extracted.
 """
 
 from __future__ import annotations
 
 import hashlib
 import math
+import re
 from collections.abc import Iterable, Sequence
 from dataclasses import dataclass
+from typing import Any
 
 import numpy as np
 
 from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
+from gate.tokens import words
 
-TEMPLATES_VERSION = 7  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 9  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -63,6 +68,7 @@ MAIN_RATIO = 0.5
 TEMPLATE_SHARE = 0.3  # template share of an unplaceable text that makes it give way
 MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilatura's text
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
+MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
 
 
 def site_of(source_url: str | None) -> str | None:
@@ -133,6 +139,21 @@ def learn(pages: Iterable[Page]) -> dict[str, tuple[np.ndarray, np.ndarray]]:
     return learnt
 
 
+def stored_pages(state: Any, batch: set[str]) -> list[Page]:
+    """The pages of the stored corpus (documents not in ``batch``, a set of doc ids) that
+    can teach a site's template: their blocks come from the cache entry of their text.
+    What an incremental run, and ``gate explain --against``, learn from besides the batch."""
+    pages = []
+    for row in state.corpus(sketches=False):
+        site = site_of(row["source_url"])
+        if site is None or row["doc_id"] in batch or not row["cache_key"]:
+            continue
+        cached = state.cache_meta(row["cache_key"])
+        if cached is not None and cached[1].get("blocks"):
+            pages.append(Page.of(f"{site} {cached[0].get('type')}", cached[1]["blocks"]))
+    return pages
+
+
 Removal = tuple[tuple[int, ...], tuple[int, ...]]  # (everywhere, aside-only), or ()
 
 
@@ -179,6 +200,52 @@ def _word_count(lines: Iterable[str]) -> int:
     return sum(len(line.split()) for line in lines)
 
 
+_CRUMB = re.compile(r"\s+(?:>|/|»|›|→|::)\s+")
+
+
+def _crumb_trails(blocks: Sequence[Block]) -> set[int]:
+    """Breadcrumb trails ("Home > Routes > Service changes > Route N62 ..."): a block of
+    three or more short parts split by one and the same separator whose last part, of two
+    words or more, is another block of the page (its title). Such a trail is navigation,
+    linked or not, and differs from page to page, so learning cannot name it."""
+    trails = []
+    for b in blocks:
+        text = b.text.strip()
+        parts = _CRUMB.split(text)
+        if len(parts) < 3 or any(len(part.split()) > 6 for part in parts[:-1]) or \
+                len({m.strip() for m in _CRUMB.findall(text)}) != 1:
+            continue  # not three or more short parts split by one and the same separator
+        trails.append((b, parts))
+    if not trails:
+        return set()
+    others: dict[str, int] = {}
+    for b in blocks:
+        others.setdefault(" ".join(words(b.text)), b.hash)
+    found = set()
+    for b, parts in trails:
+        last = words(parts[-1])
+        if len(last) >= 2 and others.get(" ".join(last), b.hash) != b.hash:
+            found.add(b.hash)
+    return found
+
+
+def _merged(lines: Sequence[str], blocks: Sequence[Block]) -> bool:
+    """Whether a line holds two or more whole blocks of the page, words for words (a
+    layout table's cell written as one line, which loses the cell's own structure: its
+    list items and table order). Lines that are pieces of one block (a page whose source
+    wraps its paragraphs) are not merged."""
+    def norm(text: str) -> str:
+        return f" {' '.join(words(text))} "
+
+    known = [n for n in {norm(b.text) for b in blocks} if n.count(" ") > MERGED_MIN_WORDS]
+    for line in lines:
+        flat = norm(line)
+        if flat.count(" ") > 2 * MERGED_MIN_WORDS and \
+                sum(1 for n in known if n in flat) >= 2:
+            return True
+    return False
+
+
 def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
             ) -> tuple[str, dict[str, int | str]]:
     """The page's own text: ``text`` (trafilatura's) without the template blocks, or the
@@ -190,22 +257,25 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
     drop = _dropped(blocks, set(template[0]), set(template[1]))
     if not drop:
         return text, {}
+    drop |= _crumb_trails(blocks)
     page = {b.hash for b in blocks}
     main_rest: list[str] = []
-    placed = True  # every line of trafilatura's text is a block, or a table row of blocks
+    unplaced: list[str] = []  # lines that are no block nor a row of blocks
     for line, digest in zip(text.split("\n"), line_hashes(text, blocks)):
         parts = [digest] if digest is None or digest in page else row_cells(line)
         if not parts or any(part is not None and part not in page for part in parts):
-            placed = False  # e.g. a layout table's whole cell in one line
-            break
+            unplaced.append(line)  # a layout cell in one line, or a hard-wrapped piece
+            continue
         if any(part is None or part not in drop for part in parts):
             main_rest.append(line)
+    placed = not unplaced
     own = [b.text for b in blocks if b.hash not in drop and b.links < LINK_DOMINATED]
     main_words, own_words = _word_count(main_rest), _word_count(own)
     if not placed:
         # how much of trafilatura's text is template: the template blocks found in it
         found = {b.hash: b.text for b in blocks if b.hash in drop and b.text in text}
-        if _word_count(found.values()) < TEMPLATE_SHARE * _word_count(text.split("\n")):
+        if _word_count(found.values()) < TEMPLATE_SHARE * _word_count(text.split("\n")) \
+                and not _merged(unplaced, blocks):
             return text, {"template_blocks": len(drop), "kept": "all (little template in it)"}
     if placed and main_words and (main_words >= MAIN_RATIO * own_words or
                                   own_words - main_words < MIN_OWN_WORDS):

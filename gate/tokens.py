@@ -12,6 +12,7 @@ from __future__ import annotations
 import hashlib
 import re
 import unicodedata
+from functools import lru_cache
 
 _WORD = re.compile(r"[^\W_]+", re.UNICODE)
 # [text](target "title") and ![alt](source): the target is not text a reader sees
@@ -33,15 +34,49 @@ def plain(text: str) -> str:
     return text
 
 
+def _words(text: str) -> list[str]:
+    text = plain(text)
+    if not text.isascii():  # NFKC leaves ASCII as it is
+        text = unicodedata.normalize("NFKC", text)
+    return _WORD.findall(text.casefold())
+
+
+LINE_CACHE = 2048  # lines whose words are remembered (per process) ...
+LINE_CHARS = 2000  # ... when they are at most this long
+
+
+@lru_cache(maxsize=LINE_CACHE)
+def _line_words(line: str) -> tuple[str, ...]:
+    return tuple(_words(line))
+
+
 def words(text: str) -> list[str]:
     """The normalised words of a text: markup dropped, NFKC, case-folded, punctuation
-    removed."""
-    return _WORD.findall(unicodedata.normalize("NFKC", plain(text)).casefold())
+    removed.
+
+    Tokenised once: a line's words are remembered (the last :data:`LINE_CACHE` lines), so
+    the words of a document whose lines were already hashed as blocks during extraction
+    are put together from them rather than normalised again. A text is the concatenation
+    of its lines' words whenever it has no ``<`` and no ``]:`` (the only markup
+    :func:`plain` removes across a line break or by a line's indentation); NFKC,
+    case-folding and word boundaries never reach across a line break."""
+    if "\n" not in text:
+        return list(_line_words(text)) if len(text) <= LINE_CHARS else _words(text)
+    if "<" in text or "]:" in text:
+        return _words(text)
+    out: list[str] = []
+    for line in text.split("\n"):
+        line = line.strip()
+        if line:
+            out.extend(_line_words(line) if len(line) <= LINE_CHARS else _words(line))
+    return out
 
 
+@lru_cache(maxsize=LINE_CACHE)
 def block_hash(text: str) -> int | None:
     """A stable 63-bit hash of a block's words (None when it has none): equal for the same
-    words in any format, any process, any run."""
+    words in any format, any process, any run (remembered for the last lines, like their
+    words: a site's template blocks recur on every page)."""
     tokens = words(text)
     if not tokens:
         return None

@@ -32,6 +32,44 @@ def test_words_normalise_case_punctuation_and_compatibility_forms():
         ["the", "depot", "north", "open", "five", "days"]
 
 
+def test_words_put_together_from_lines_equal_the_whole_text():
+    # words() assembles a multi-line text from its lines' remembered words; it must give
+    # what normalising the whole text at once gives, also for lines seen before, markup
+    # across lines, combining marks after a line break and compatibility forms (invented
+    # strings, common practice: a property test against the direct computation)
+    from gate import tokens
+
+    rng = random.Random(3)
+    pieces = list("ab XY\n\n\t ,.:!-_[]()<>/=#*|") + [
+        "\u00e9", "e\u0301", "\u0301", "\ufb01", "\uff21", "\u03a3", "\u0130", "\u00df",
+        "\u200b", "\u3000", "\u2028", "\x1c", "\uff1c", "]:", "](x)", "<b\n>", "[a]: x",
+        "    [r]: y", "\u1100\u1161"]
+    for _ in range(20_000):
+        text = "".join(rng.choice(pieces) for _ in range(rng.randint(0, 30)))
+        assert tokens.words(text) == tokens._words(text), repr(text)
+        assert tokens.words(text) == tokens._words(text), repr(text)  # remembered lines
+
+
+def test_sketch_values_are_datasketchs_own():
+    # The reference library: datasketch's MinHash (affine32, seed 1, 256 permutations)
+    # fed the same 32-bit item hashes one batch at a time must hold the very values the
+    # vectorised sketch computes, so stored sketches and the LSH stay compatible.
+    import numpy as np
+    from datasketch import MinHash
+
+    rng = np.random.default_rng(5)
+    for size in (0, 1, 7, 511, 512, 513, 3000):
+        hashes = rng.integers(0, 2**32, size=size, dtype=np.uint64).astype(np.uint32)
+        reference = MinHash(num_perm=dup.NUM_PERM, seed=dup.SEED, scheme=dup.SCHEME,
+                            hashfunc=int)
+        reference.update_batch(hashes.tolist())
+        assert np.array_equal(dup.sketch_values(hashes), reference.hashvalues)
+    edge = np.array([0, 1, 2**31, 2**32 - 1], dtype=np.uint32)
+    reference = MinHash(num_perm=dup.NUM_PERM, seed=dup.SEED, scheme=dup.SCHEME, hashfunc=int)
+    reference.update_batch(edge.tolist())
+    assert np.array_equal(dup.sketch_values(edge), reference.hashvalues)
+
+
 def sketch(tokens: set[str]):
     """The production sketch of a set of tokens (1-shingles: one hash per token)."""
     return dup.sketch_hashes(dup.shingle_hashes(sorted(tokens), 1))

@@ -37,7 +37,9 @@ def _compare(report: dict, loaded, manifest) -> tuple[int, int, list[str]]:
         path = doc["path"]
         # a record of a web archive or an mbox: explain gets the container's manifest line
         record = manifest.get(path) or manifest.get(container_of(path))
-        found = explain(INBOX / path, loaded, record=record, as_of=AS_OF, inbox_path=path)
+        # with the inbox it arrives with: its site's template is learnt as in the run
+        found = explain(INBOX / path, loaded, record=record, as_of=AS_OF, inbox_path=path,
+                        batch=INBOX, batch_manifest=manifest)
         shown = {c["check"]: c for c in found.checks}
         held = doc["reasons"] + doc["warnings"]
         for check in document_ids:

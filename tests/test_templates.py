@@ -157,6 +157,24 @@ def test_same_text_other_bytes_is_exact_with_a_template_caveat():
     assert found.details["identical"] == "extracted text"
     assert found.details["words"] == 200  # prose(3, 200) is 200 words
     assert "may be a site template" in found.message
+    # the same bytes: an exact copy, no caveat
+    same = [dup.Item(key=k, path=f"{k}.html", sha256="sha-same", text_sha256=measured[0][
+        "text_sha256"], minhash=measured[0]["minhash"], trust=1, date=None, seen=(1, i),
+        words=200) for i, k in enumerate("ab")]
+    copy = dup.evaluate(same, policy("duplicates: {threshold: 0.8}").duplicates,
+                        text_of=lambda key: text).findings["b"][0]
+    assert copy.code == "duplicate.exact" and copy.details["identical"] == "bytes"
+    assert "same bytes" in copy.message and "template" not in copy.message
+    # one edited word: a near-duplicate with its estimated Jaccard, never "exact"
+    edited = text.replace(text.split()[100], "hydrant", 1)
+    m2 = dup.measure(type("E", (), {"text": edited})())
+    near = [items[0], dup.Item(key="c", path="c.html", sha256="sha-c",
+                               text_sha256=m2["text_sha256"], minhash=m2["minhash"], trust=1,
+                               date=None, seen=(1, 2), words=m2["words"])]
+    found = dup.evaluate(near, policy("duplicates: {threshold: 0.8}").duplicates,
+                         text_of=lambda key: text).findings["c"][0]
+    assert found.code == "duplicate.near" and 0.8 <= found.details["similarity"] < 1.0
+    assert "estimated Jaccard" in found.message
 
 
 # -- a run -------------------------------------------------------------------------------
@@ -215,6 +233,18 @@ def test_a_new_site_of_two_pages_keeps_trafilaturas_text_and_says_so(tmp_path):
     assert all(r["details"]["identical"] == "extracted text" for r in held)
 
 
+def test_a_new_site_of_three_pages_learns_what_is_on_every_page(tmp_path):
+    # the first run of a site with three pages: the menu, teasers and legal text are on
+    # all three, so they are template, and the three notices are told apart
+    inbox, loaded = make_portal(tmp_path, 3)
+    result = run(RunOptions(inbox=inbox, policy=loaded, out=tmp_path / "out", as_of=AS_OF))
+    report = json.loads(result.report_path.read_text())
+    assert [d["decision"] for d in report["documents"]] == ["accepted"] * 3
+    for n, doc in enumerate(report["documents"]):
+        text = (tmp_path / "out" / doc["location"] / "text.txt").read_text()
+        assert prose(100 * n, 40) in text and "Teaser" not in text
+
+
 def test_an_incremental_run_learns_from_the_stored_corpus(tmp_path):
     inbox, loaded = make_portal(tmp_path, 6)
     out = tmp_path / "out"
@@ -243,10 +273,17 @@ def test_a_layout_cell_written_as_one_line_gives_way_to_the_pages_own_blocks():
     text = "| " + " ".join(b.text for b in blocks) + " |"
     cleaned, info = templates.compose(text, blocks, ((teaser.hash,), ()))
     assert cleaned == "\n".join(b.text for b in notice) and info["kept"] == "page"
-    # when the template is a small part of such a text (here 3 of 63 words), it is kept
+    # so it is when the template is a small part of such a text (here 3 of 63 words):
+    # the cell holds several whole blocks, whose structure (items, rows) it has lost
     small = Block("Home and contact", block_hash("Home and contact"), main=False)
     text = "| " + " ".join(b.text for b in [small] + notice) + " |"
-    assert templates.compose(text, [small] + notice, ((small.hash,), ()))[0] == text
+    cleaned, info = templates.compose(text, [small] + notice, ((small.hash,), ()))
+    assert cleaned == "\n".join(b.text for b in notice) and info["kept"] == "page"
+    # a text whose lines are pieces of the page's paragraphs (a source that wraps its
+    # lines, as a real manual's pages do) is kept when little of it is template
+    wrapped = "\n".join(" ".join(b.text.split()[:10]) + "\n" + " ".join(b.text.split()[10:])
+                        for b in notice)
+    assert templates.compose(wrapped, [small] + notice, ((small.hash,), ()))[0] == wrapped
 
 
 def test_preformatted_text_is_a_block_per_line():
@@ -254,3 +291,136 @@ def test_preformatted_text_is_a_block_per_line():
             b"<pre>make demo\nmake test</pre></body></html>")
     texts = [b.text for b in extract(page, max_pages=10, max_nesting=100).blocks]
     assert texts[-2:] == ["make demo", "make test"]
+
+
+# -- explain learns as a run does --------------------------------------------------------
+
+def test_explain_removes_the_template_a_run_removes(tmp_path):
+    from gate import manifest as manifest_mod
+    from gate.explain import explain
+
+    inbox, loaded = make_portal(tmp_path, 6)
+    result = run(RunOptions(inbox=inbox, policy=loaded, out=tmp_path / "out", as_of=AS_OF))
+    report = json.loads(result.report_path.read_text())
+    manifest = manifest_mod.load(inbox / "manifest.jsonl")
+    for doc in report["documents"][:2]:
+        found = explain(inbox / doc["path"], loaded, record=manifest.get(doc["path"]),
+                        as_of=AS_OF, inbox_path=doc["path"], batch=inbox,
+                        batch_manifest=manifest)
+        assert found.document.extracted.text_chars == doc["text_chars"]
+        assert found.decision == doc["decision"] == "accepted"
+        assert found.site_template == {"site": "portal.example.org", "pages": 6,
+                                       "removed": found.site_template["removed"]}
+        assert found.site_template["removed"] > 24  # the teasers, menu and legal text
+        assert found.document.extracted.template["kept"] == "page"
+    # without the batch, one page teaches nothing: trafilatura's text, the teasers
+    alone = explain(inbox / "notice-0.html", loaded, record=manifest.get("notice-0.html"),
+                    as_of=AS_OF, inbox_path="notice-0.html")
+    assert alone.site_template is None and alone.document.extracted.template == {}
+    assert alone.document.extracted.text_chars != report["documents"][0]["text_chars"]
+
+
+def test_explain_against_a_folder_learns_from_its_stored_pages(tmp_path):
+    from gate.explain import explain
+    from gate.manifest import ManifestRecord
+
+    inbox, loaded = make_portal(tmp_path, 6)
+    out = tmp_path / "out"
+    run(RunOptions(inbox=inbox, policy=loaded, out=out, as_of=AS_OF))
+    later = tmp_path / "later"
+    later.mkdir()
+    (later / "notice-9.html").write_bytes(portal_page(9))
+    (later / "manifest.jsonl").write_text(json.dumps(
+        {"path": "notice-9.html", "source_url": "https://portal.example.org/n/9"}) + "\n")
+    record = ManifestRecord(path="notice-9.html", line=1,
+                            source_url="https://portal.example.org/n/9")
+    found = explain(later / "notice-9.html", loaded, record=record, as_of=AS_OF,
+                    inbox_path="notice-9.html", against=out)
+    # the incremental run into that folder measures the same text
+    result = run(RunOptions(inbox=later, policy=loaded, out=out, as_of=AS_OF,
+                            incremental=True))
+    [doc] = json.loads(result.report_path.read_text())["documents"]
+    assert found.site_template["pages"] == 7 and found.site_template["removed"] > 24
+    assert found.document.extracted.text_chars == doc["text_chars"]
+    assert found.decision == doc["decision"] == "accepted"
+
+
+def test_explain_command_names_the_batch_and_its_template(tmp_path):
+    from typer.testing import CliRunner
+
+    from gate.cli import app
+
+    inbox, _loaded = make_portal(tmp_path, 4)
+    runner = CliRunner()
+    done = runner.invoke(app, ["explain", str(inbox / "notice-1.html"), "--policy",
+                               str(tmp_path / "policy.yaml"), "--batch", str(inbox),
+                               "--as-of", "2026-12-01"])
+    assert done.exit_code == 0, done.output
+    # the manifest line of the batch gave its site; four pages teach the template
+    assert "site template of portal.example.org (learnt from 4 distinct pages)" in done.output
+    assert "checked: the page's own blocks" in done.output
+    missing = runner.invoke(app, ["explain", str(inbox / "notice-1.html"), "--policy",
+                                  str(tmp_path / "policy.yaml"), "--batch",
+                                  str(tmp_path / "nowhere")])
+    assert missing.exit_code != 0 and "--batch" in missing.output
+
+
+# -- cross-format agreement ----------------------------------------------------------------
+
+def test_one_body_gives_one_token_stream_in_html_pdf_text_and_markdown():
+    # invented bodies with a heading, a list and a table, rendered by the tuning corpus's
+    # own writers: HTML (paragraph markup and a <br> box), Markdown, three plain-text
+    # exports (tab, pipe and space-aligned tables, underlined headings, 72 columns) and
+    # two PDFs (fpdf2, typeset with a running footer, and one line per text line)
+    import random as _random
+
+    from benchmarks.template_corpus import make_body, renderings, title
+
+    rng = _random.Random(7)
+    for _ in range(3):
+        body = make_body(rng, 500, 900)  # long enough to run over a page break in a PDF
+        body["parts"][1:1] = [("heading", title(rng)), ("list", ["one item", "two items"]),
+                              ("table", [["Street", "From"], ["Elm Row", "9:00"]])]
+        streams = {name: words(extract(data, max_pages=50, max_nesting=100).text)
+                   for name, data in renderings(body, "Invented Records Office").items()}
+        assert len({tuple(s) for s in streams.values()}) == 1, {
+            name: len(s) for name, s in streams.items()}
+
+
+def test_a_pdfs_running_header_footer_and_page_numbers_are_not_its_text():
+    from gate.extract.pdf import without_furniture
+
+    pages = ["Invented Depot annual notice\nFirst page body line.\nMore text here.\n- 1 -",
+             "Invented Depot annual notice\nSecond page body.\nPage 2 of 3",
+             "Invented Depot annual notice\nThird page body.\nSee the table on page 2\n3"]
+    assert without_furniture(pages) == [
+        "First page body line.\nMore text here.", "Second page body.",
+        # a body line that names a page stays: only a page's very last line can be a
+        # page number
+        "Third page body.\nSee the table on page 2"]
+    # one page: only a line that is, or ends in, a page number goes
+    assert without_furniture(["Invented Office\nThe notice text.\nInvented Office - page 1"]) \
+        == ["Invented Office\nThe notice text."]
+    # a line in the middle of a page is never furniture, whatever it says
+    middle = ["Title\nPage 4\nBody one.\nBody two.\nBody three.\nEnd"]
+    assert without_furniture(middle) == middle
+
+
+def test_a_breadcrumb_trail_ending_in_the_pages_title_is_navigation():
+    title = Block("Route N62 timetable change", block_hash("Route N62 timetable change"),
+                  kind="heading")
+    crumb = "Home > Routes > Service changes > Route N62 timetable change"
+    trail = Block(crumb, block_hash(crumb))
+    notice = [Block(prose(90 + i, 30), block_hash(prose(90 + i, 30)), main=True)
+              for i in range(3)]
+    menu = Block("Home Bins Roads", block_hash("Home Bins Roads"), links=1.0)
+    blocks = [menu, trail, title] + notice
+    text = "\n".join([crumb, title.text] + [b.text for b in notice])
+    cleaned, _info = templates.compose(text, blocks, ((menu.hash,), ()))
+    assert cleaned == "\n".join([title.text] + [b.text for b in notice])
+    # operators and arrows in a manual's examples are no trail: one separator, short
+    # parts, and a last part of two words or more that is another block of the page
+    for line in ("Object > Array > Boolean > null", "f('[1, 2]', '$ ? (@ > 1)') → 3",
+                 "a > b > c > Route N62 timetable change and more"):
+        assert templates._crumb_trails([Block(line, block_hash(line)), title,
+                                        Block("null", block_hash("null"))]) == set()

@@ -115,9 +115,9 @@ def shingle_hashes(tokens: Sequence[str], w: int = SHINGLE) -> np.ndarray:
     """
     if not tokens:
         return np.zeros(0, dtype=np.uint32)
-    table: dict[str, int] = {}
-    values = np.fromiter((table.get(t) or table.setdefault(t, zlib.crc32(t.encode("utf-8")))
-                          for t in tokens), dtype=np.uint64, count=len(tokens))
+    # each distinct word hashed once; the per-token lookup is a C-level map
+    table = {t: zlib.crc32(t.encode("utf-8")) for t in set(tokens)}
+    values = np.fromiter(map(table.__getitem__, tokens), dtype=np.uint64, count=len(tokens))
     if len(tokens) < w:
         folded = np.array([int.from_bytes(hashlib.sha256(" ".join(tokens).encode()).digest()[:4],
                                           "little")], dtype=np.uint64)
@@ -130,16 +130,43 @@ def shingle_hashes(tokens: Sequence[str], w: int = SHINGLE) -> np.ndarray:
     return np.unique(folded).astype(np.uint32)
 
 
+def _fmix32(values: np.ndarray) -> np.ndarray:
+    """MurmurHash3's 32-bit finalizer (fmix32), element-wise, wrapping: the pre-mix
+    datasketch's affine32 scheme applies to every input hash."""
+    h = values.astype(np.uint32)
+    with np.errstate(over="ignore"):
+        h ^= h >> np.uint32(16)
+        h *= np.uint32(0x85EBCA6B)
+        h ^= h >> np.uint32(13)
+        h *= np.uint32(0xC2B2AE35)
+        h ^= h >> np.uint32(16)
+    return h
+
+
+SLICE = 512  # items per block: a block of SLICE x NUM_PERM uint32 stays in cache
+
+
+def sketch_values(hashes: np.ndarray) -> np.ndarray:
+    """The MinHash values (uint32, NUM_PERM of them) of precomputed 32-bit item hashes:
+    exactly what datasketch's ``MinHash(num_perm=256, seed=1, scheme="affine32",
+    hashfunc=int).update_batch(hashes)`` holds (``min_k(a_k * fmix32(h) + b_k mod 2^32)``
+    with datasketch's own ``a``, ``b``; tests/test_duplicate.py compares the two), computed
+    in numpy blocks without datasketch's per-item Python hashing."""
+    a, b = _permutations()
+    a, b = a.astype(np.uint32), b.astype(np.uint32)
+    out = np.full(NUM_PERM, 0xFFFFFFFF, dtype=np.uint32)
+    mixed = _fmix32(hashes)
+    with np.errstate(over="ignore"):
+        for start in range(0, mixed.size, SLICE):
+            block = mixed[start:start + SLICE, None] * a + b
+            np.minimum(out, block.min(axis=0), out=out)
+    return out
+
+
 def sketch_hashes(hashes: np.ndarray) -> MinHash:
-    """A MinHash (datasketch, affine32, seed 1) of precomputed 32-bit item hashes."""
-    m = MinHash(num_perm=NUM_PERM, seed=SEED, permutations=_permutations(), scheme=SCHEME,
-                hashfunc=int)
-    values = hashes.tolist()
-    # in slices: the permuted block (slice x 256) then stays in cache; measured 1.5x faster
-    # than one call on 8k shingles, with identical results
-    for start in range(0, len(values), 512):
-        m.update_batch(values[start:start + 512])
-    return m
+    """A datasketch MinHash (affine32, seed 1) of precomputed 32-bit item hashes."""
+    return MinHash(num_perm=NUM_PERM, seed=SEED, permutations=_permutations(), scheme=SCHEME,
+                   hashvalues=sketch_values(hashes))
 
 
 def measure(extraction: Extraction) -> dict[str, Any]:
@@ -147,7 +174,7 @@ def measure(extraction: Extraction) -> dict[str, Any]:
     tokens = words(extraction.text)
     normal = " ".join(tokens)
     grams = shingle_hashes(tokens)
-    values = sketch_hashes(grams).hashvalues.astype("<u4").tobytes()
+    values = sketch_values(grams).astype("<u4").tobytes()
     return {"text_sha256": hashlib.sha256(normal.encode("utf-8")).hexdigest(),
             "shingles": len(grams), "words": len(tokens), "minhash": values}
 

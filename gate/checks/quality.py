@@ -39,6 +39,7 @@ Example::
 from __future__ import annotations
 
 import re
+from itertools import repeat
 from typing import Any
 
 import numpy as np
@@ -174,37 +175,50 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
     if len(words) < 2:
         return top, dup
     ids = {w: i for i, w in enumerate(dict.fromkeys(words), 1)}
-    seq = np.array(list(map(ids.__getitem__, words)), dtype=np.uint64)
-    lengths = np.array(list(map(len, words)), dtype=np.int64)
+    seq = np.fromiter(map(ids.__getitem__, words), dtype=np.uint64, count=len(words))
+    lengths = np.fromiter(map(len, words), dtype=np.int64, count=len(words))
     total = int(lengths.sum())
     if not total:
         return top, dup
     prefix = np.concatenate(([0], np.cumsum(lengths)))
     prime = np.uint64(1_000_003)
     hashes = seq.copy()
+    # An n-gram can repeat only where the (n-1)-gram starting at the same word repeats,
+    # and every occurrence of a repeated n-gram is such a place: so each n counts only
+    # among the places where the shorter gram repeated (from the words that repeat), with
+    # the same counts, a fraction of the sorting.
+    word_counts = np.bincount(seq.astype(np.int64))
+    places = np.flatnonzero(word_counts[seq.astype(np.int64)] > 1)
     with np.errstate(over="ignore"):
         for n in range(2, 11):
             if len(words) < n:
                 break
             hashes = hashes[:-1] * prime + seq[n - 1:]
-            _, inverse, counts = np.unique(hashes, return_inverse=True, return_counts=True)
-            per_gram = counts[inverse]
-            if n <= 4:
-                best = int(np.argmax(per_gram))
-                if per_gram[best] > 1:
-                    chars = int(prefix[best + n] - prefix[best])
-                    top[str(n)] = round(float(per_gram[best]) * chars / total, 4)
+            places = places[places < hashes.size]
+            if places.size:
+                _, inverse, counts = np.unique(hashes[places], return_inverse=True,
+                                               return_counts=True)
+                per_gram = counts[inverse]
             else:
-                starts = np.flatnonzero(per_gram > 1)
+                per_gram = np.zeros(0, dtype=np.int64)
+            repeated = per_gram > 1
+            if n <= 4:
+                if repeated.any():
+                    at = int(np.argmax(per_gram))  # the first place with the most repeats
+                    best = int(places[at])
+                    chars = int(prefix[best + n] - prefix[best])
+                    top[str(n)] = round(float(per_gram[at]) * chars / total, 4)
+            else:
+                starts = places[repeated]
                 if not starts.size:
                     # no n-gram repeats, so no longer one can: the rest stay 0
                     break
-                if starts.size:
-                    marks = np.zeros(len(words) + 1, dtype=np.int64)
-                    np.add.at(marks, starts, 1)
-                    np.add.at(marks, starts + n, -1)
-                    covered = np.cumsum(marks[:-1]) > 0
-                    dup[str(n)] = round(float(lengths[covered].sum()) / total, 4)
+                marks = np.zeros(len(words) + 1, dtype=np.int64)
+                np.add.at(marks, starts, 1)
+                np.add.at(marks, starts + n, -1)
+                covered = np.cumsum(marks[:-1]) > 0
+                dup[str(n)] = round(float(lengths[covered].sum()) / total, 4)
+            places = places[repeated]
     return top, dup
 
 
@@ -220,9 +234,9 @@ def measure(extraction: Extraction) -> dict[str, Any]:
     tokens = text.split()
     words = tokens[:MAX_SCANNED_WORDS]
     scanned = " ".join(words)
-    lines = [line.strip() for line in text.split("\n") if line.strip()]
-    paragraphs = [p.strip() for p in _PARAGRAPH.split(text) if p.strip()]
-    lower = [w.strip(_PUNCT) for w in scanned.lower().split()]
+    lines = [line for line in map(str.strip, text.split("\n")) if line]
+    paragraphs = [p for p in map(str.strip, _PARAGRAPH.split(text)) if p]
+    lower = list(map(str.strip, scanned.lower().split(), repeat(_PUNCT)))
     n = len(tokens)
     stats: dict[str, Any] = {
         "words": n,

@@ -296,7 +296,8 @@ def explain_command(
     retrieved_at: Annotated[Optional[str], typer.Option(help="When it was gathered.")] = None,  # noqa: UP045
     inbox_path: Annotated[Optional[str], typer.Option(help="The inbox-relative path to use for path rules (default: the file name).")] = None,  # noqa: UP045,E501
     as_of: Annotated[Optional[str], typer.Option("--as-of", help="Clock for freshness (default now).")] = None,  # noqa: UP045,E501
-    against: Annotated[Optional[Path], typer.Option(metavar="DIR", help="An output folder whose accepted corpus to compare with for duplicates.")] = None,  # noqa: UP045,E501
+    against: Annotated[Optional[Path], typer.Option(metavar="DIR", help="An output folder whose accepted corpus to compare with for duplicates (and whose stored pages teach site templates).")] = None,  # noqa: UP045,E501
+    batch: Annotated[Optional[Path], typer.Option(metavar="INBOX", help="The inbox the document arrives with: its other pages of the same site teach the site's template, as in a run; its manifest line is used unless given by the options above.")] = None,  # noqa: UP045,E501
     as_json: Json = False,
 ) -> None:
     """Explain one document under a policy: each check's outcome, findings and values."""
@@ -328,13 +329,22 @@ def explain_command(
                 except dates.DateProblem as err:
                     raise UsageError(f"{name}: {err}; give an ISO 8601 date such as "
                                      "2026-11-01 or 2026-11-01T08:00:00Z.") from None
-        rel = inbox_path or display_name(file.name)
+        listed = None
+        if batch is not None:
+            from gate.manifest import for_inbox
+            if not batch.is_dir():
+                raise UsageError(f"--batch {batch}: not a folder; give the inbox the "
+                                 "document arrives with.")
+            listed = for_inbox(batch, None)
+        rel = inbox_path or _inside(file, batch) or display_name(file.name)
         record = None
         if any((source_url, sha256, published_at, retrieved_at)):
             record = ManifestRecord(path=rel, line=0, source_url=source_url, sha256=sha256,
                                     published_at=published_at, retrieved_at=retrieved_at)
+        elif listed is not None:
+            record = listed.get(rel)
         result = explain(file, loaded, record=record, as_of=when, inbox_path=rel,
-                         against=against)
+                         against=against, batch=batch, batch_manifest=listed)
         if as_json:
             sys.stdout.write(json.dumps(result.to_json(), indent=2, ensure_ascii=True) + "\n")
             return
@@ -343,6 +353,8 @@ def explain_command(
         say(f"{rel}: {kind}, {result.document.size} bytes, "
                f"{ex.text_chars} characters of text")
         say(f"decision under {loaded.name!r}: {result.decision}")
+        if result.site_template is not None:
+            say(_template_line(result.site_template, ex.template))
         say("checks (outcome, measured values; findings below each):")
         for check in result.checks:
             say(f"  {check['check']:<10} {check['outcome']:<5} {_measured(check)}")
@@ -350,6 +362,30 @@ def explain_command(
                 say(f"      {finding['code']}: {finding['message']}")
 
     guard(body)
+
+
+def _inside(file: Path, batch: Path | None) -> str | None:
+    """The file's path inside ``batch`` (as a run names it), when it lies there."""
+    if batch is None:
+        return None
+    from gate.discovery import display_name
+    try:
+        parts = file.resolve().relative_to(batch.resolve()).parts
+    except ValueError:
+        return None
+    return "/".join(display_name(part) for part in parts) or None
+
+
+def _template_line(learnt: dict, done: dict | None) -> str:
+    site, pages = learnt["site"], learnt["pages"]
+    if not learnt["removed"]:
+        return (f"site template of {site}: none on this page (learnt from {pages} distinct "
+                f"page{'s' if pages != 1 else ''}; a site teaches one from 3)")
+    kept = (done or {}).get("kept")
+    how = {"main": "the main text without it", "page": "the page's own blocks"}.get(
+        kept or "", f"the text as extracted ({kept})" if kept else "the text as extracted")
+    return (f"site template of {site} (learnt from {pages} distinct pages): "
+            f"{learnt['removed']} blocks of this page are template; checked: {how}")
 
 
 def _measured(check: dict) -> str:

@@ -18,21 +18,21 @@ __all__ = ["EXTRACT_VERSION", "TYPES", "Extracted", "Extraction", "extract"]
 # Every type extraction produces, in the order the policy reference lists them.
 TYPES = ("html", "pdf", "text", *OFFICE_TYPES, "email", "mbox")
 # Part of the cache key: bump when an extractor's output changes for the same bytes.
-EXTRACT_VERSION = 4
+EXTRACT_VERSION = 5
 
 
 def extract(data: bytes, *, max_pages: int, max_nesting: int,
             main_text: str | None = None) -> Extraction:
     """Extract one document's bytes. Never raises for bad input: problems are reported.
 
-    ``main_text``: an HTML page's main text from an earlier extraction of the same bytes
-    (trafilatura is then not run again)."""
+    ``main_text``: an HTML page's or a PDF's text from an earlier extraction of the same
+    bytes (trafilatura, or pypdf's text extraction, is then not run again)."""
     sniffed = sniff(data)
     if sniffed.type == "empty":
         return failed(None, "empty-file", sniffed.detail)
     if sniffed.type == "pdf":
         from gate.extract.pdf import extract_pdf
-        result = extract_pdf(data, max_pages)
+        result = extract_pdf(data, max_pages, main_text)
     elif sniffed.type == "html":
         from gate.extract.html import extract_html
         result = extract_html(data, sniffed.encoding, max_nesting, main_text)

@@ -186,12 +186,15 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
 
     def flush() -> None:
         nonlocal linked
+        if not parts:  # nothing since the last boundary (then nothing was linked either)
+            return
         raw = "".join(parts)
         parts.clear()
         # preformatted text is a block per line, as trafilatura writes it
         pieces = raw.split("\n") if "pre" in holders else [raw]
         for piece in pieces:
-            text = re.sub(r"\s+", " ", piece).strip()
+            # runs of white space as one space, trimmed (str.split's white space is re's \s)
+            text = " ".join(piece.split())
             digest = block_hash(text) if text else None
             if digest is not None:
                 blocks.append(Block(text=text, hash=digest, main=False,
@@ -199,40 +202,45 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
                                     kind=_KINDS.get(holders[-1], "text")))
         linked = 0
 
-    def add(text: str | None) -> None:
-        nonlocal linked
-        if text:
-            parts.append(text)
-            if in_link:
-                linked += len(text.strip())
-
+    # the walk inlines what it adds (a call per node costs more than the work)
     for event, node in lxml.etree.iterwalk(start, events=("start", "end")):
-        tag = node.tag if isinstance(node.tag, str) else None
-        if tag is None or tag in _SKIP_TEXT:
+        tag = node.tag
+        if tag.__class__ is not str or tag in _SKIP_TEXT:  # comments, scripts, ...
             if event == "start":
                 skip += 1
             else:
                 skip -= 1
                 if skip == 0 and node is not start:
-                    add(node.tail)
+                    text = node.tail
+                    if text:
+                        parts.append(text)
+                        if in_link:
+                            linked += len(text.strip())
             continue
         if skip:
             continue
         if event == "start":
             if tag in _PAGE_BLOCKS:
-                flush()
+                if parts:
+                    flush()
                 holders.append(tag)
             if tag == "a":
                 in_link += 1
-            add(node.text)
-            continue
-        if tag == "a":
-            in_link -= 1
-        if tag in _PAGE_BLOCKS:
-            flush()
-            holders.pop()
-        if node is not start:
-            add(node.tail)
+            text = node.text
+        else:
+            if tag == "a":
+                in_link -= 1
+            if tag in _PAGE_BLOCKS:
+                if parts:
+                    flush()
+                holders.pop()
+            if node is start:
+                continue
+            text = node.tail
+        if text:
+            parts.append(text)
+            if in_link:
+                linked += len(text.strip())
     flush()
     main = set(line_hashes(main_text, blocks))
     return tuple(Block(text=b.text, hash=b.hash, main=True, links=b.links, kind=b.kind)

@@ -117,17 +117,21 @@ def _dates(meta: dict[str, str], xmp: str) -> tuple[DateClaim, ...]:
     return tuple(claims)
 
 
-def extract_pdf(data: bytes, max_pages: int) -> Extraction:
-    """Extract a PDF: check encryption and page count first, then pull the text."""
+def extract_pdf(data: bytes, max_pages: int, main_text: str | None = None) -> Extraction:
+    """Extract a PDF: check encryption and page count first, then pull the text.
+
+    ``main_text`` is this PDF's text from an earlier extraction of the same bytes: the same
+    result, without pulling the text out of every page again (the reader, metadata and
+    annotations are still read, for the checks)."""
     try:
         with pypdf.apply_configuration(**_config()):
-            return _extract(data, max_pages)
+            return _extract(data, max_pages, main_text)
     except LimitReachedError as err:
         return failed("pdf", "bomb", "a stream of the PDF decompresses past the "
                                      f"{STREAM_CAP:,}-byte cap ({_why(err)})")
 
 
-def _extract(data: bytes, max_pages: int) -> Extraction:
+def _extract(data: bytes, max_pages: int, main_text: str | None = None) -> Extraction:
     try:
         reader = pypdf.PdfReader(io.BytesIO(data), strict=False)
     except DependencyError as err:
@@ -165,6 +169,12 @@ def _extract(data: bytes, max_pages: int) -> Extraction:
     if pages > max_pages:
         return failed("pdf", "too-many-pages",
                       f"the PDF has {pages} pages (limit {max_pages})", **common)
+    if main_text is not None:
+        summary = Extracted(type="pdf", text_chars=len(main_text), **common)
+        extraction = Extraction(summary=summary, text=main_text, raw=data, reader=reader)
+        extraction.extras["xmp"] = _TAGS.sub(" ", xmp)[:MAX_META_CHARS]
+        extraction.extras["annotations"] = _annotations(reader, pages)
+        return extraction
     texts: list[str] = []
     try:
         for page in reader.pages:
@@ -178,13 +188,52 @@ def _extract(data: bytes, max_pages: int) -> Extraction:
             RecursionError, AssertionError, ZeroDivisionError, OverflowError) as err:
         return failed("pdf", "broken", f"text extraction failed on page {len(texts) + 1}: "
                                        f"{_why(err)}", **common)
-    text = clean_text("\n\n".join(texts))
+    text = clean_text("\n\n".join(without_furniture(texts)))
     summary = Extracted(type="pdf", text_chars=len(text), **common)
     extraction = Extraction(summary=summary, text=text, raw=data, reader=reader)
     extraction.extras["xmp"] = _TAGS.sub(" ", xmp)[:MAX_META_CHARS]
     extraction.extras["annotations"] = _annotations(reader, pages)
     extraction.extras["page_texts"] = texts
     return extraction
+
+
+_DIGITS = re.compile(r"\d+")
+# a page number alone ("3", "- 3 -", "Page 3 of 7", "3/7"), or a short line ending in one
+# ("Invented Records Office - page 3"): common practice in typesetting
+_PAGE_NUMBER = re.compile(r"^\W*(?:page\s+)?\d{1,4}(?:\s*(?:of|/)\s*\d{1,4})?\W*$"
+                          r"|\bpage\s+\d{1,4}(?:\s+of\s+\d{1,4})?\W*$", re.IGNORECASE)
+FURNITURE_LINES = 2  # lines at the top and at the bottom of a page that may be furniture
+FURNITURE_MAX_WORDS = 8
+
+
+def without_furniture(texts: list[str]) -> list[str]:
+    """Each page's text without its running header and footer: of the first and last
+    ``FURNITURE_LINES`` lines of each page, those that recur (digits aside) at the edges
+    of at least half the pages (two at least); and a page's very first or last line when
+    it is short and is, or ends in, a page number. The same body then gives the same
+    words as a PDF and as HTML or text."""
+    def edges(lines: list[str]) -> list[int]:
+        filled = [i for i, line in enumerate(lines) if line.strip()]
+        return sorted(set(filled[:FURNITURE_LINES] + filled[-FURNITURE_LINES:]))
+
+    def key(line: str) -> str:
+        return " ".join(_DIGITS.sub("#", line.casefold()).split())
+
+    split = [text.split("\n") for text in texts]
+    seen: dict[str, int] = {}
+    for lines in split:
+        for k in {key(lines[i]) for i in edges(lines)}:
+            seen[k] = seen.get(k, 0) + 1
+    recurring = max(2, (len(texts) + 1) // 2)
+    out = []
+    for lines in split:
+        ends = edges(lines)
+        drop = {i for i in ends if len(texts) >= 2 and seen[key(lines[i])] >= recurring}
+        drop |= {i for i in ends[:1] + ends[-1:]  # the very first and last line only
+                 if len(lines[i].split()) <= FURNITURE_MAX_WORDS and
+                 _PAGE_NUMBER.search(lines[i].strip())}
+        out.append("\n".join(line for i, line in enumerate(lines) if i not in drop))
+    return out
 
 
 def _why(err: BaseException) -> str:
