@@ -27,6 +27,7 @@ from pathlib import Path
 from typing import Any
 
 from gate.discovery import Entry
+from gate.placement import write_file
 
 CHUNK = 1 << 20
 
@@ -106,13 +107,7 @@ def stage(root: str, sha256: str, data: bytes) -> None:
         return
     os.makedirs(folder, exist_ok=True)
     tmp = os.path.join(folder, f".{sha256}.tmp-{os.getpid()}")
-    fd = os.open(tmp, os.O_WRONLY | os.O_CREAT | os.O_TRUNC | os.O_CLOEXEC, 0o666)
-    try:
-        view = memoryview(data)
-        while view:
-            view = view[os.write(fd, view):]
-    finally:
-        os.close(fd)
+    write_file(Path(tmp), data, sync=False)
     os.replace(tmp, target)
 
 

@@ -112,20 +112,9 @@ class Placer:
         """Whether the entry placed in ``folder`` holds a copy of its original."""
         return folder in FOLDERS and (self.entry(folder, doc_id) / "original").exists()
 
-    def _original_source(self, doc_id: str, sha256: str | None) -> Path | None:
-        if sha256 is None:
-            return None
-        if self.blobs.has(sha256):
-            return self.blobs.path(sha256)
-        for folder in FOLDERS:
-            candidate = self.entry(folder, doc_id) / "original"
-            if candidate.exists():
-                return candidate
-        return None
-
     def original_path(self, doc_id: str, sha256: str | None) -> Path | None:
         """Where the staged (or placed) bytes of a document are, unread and unverified."""
-        return self._original_source(doc_id, sha256)
+        return _source(self.out, doc_id, sha256)
 
     def _aside(self, path: Path) -> None:
         if path.exists() or path.is_symlink():
