@@ -26,6 +26,8 @@ the reference: the tests compare the two on chunks of real text.
 from __future__ import annotations
 
 import itertools
+import json
+import os
 import re
 from dataclasses import dataclass
 
@@ -56,16 +58,7 @@ class _Profiles:
     """langdetect's profiles as arrays: sorted n-gram keys and log-probabilities."""
 
     def __init__(self) -> None:
-        detector_factory.init_factory()
-        factory = detector_factory._factory
-        self.langs = tuple(factory.langlist)
-        table = factory.word_lang_prob_map
-        keys = np.fromiter(map(self.key, table), dtype=np.uint64, count=len(table))
-        order = np.argsort(keys, kind="stable")  # the keys are distinct: a plain sort
-        self.keys = keys[order]
-        width = len(self.langs)
-        probs = np.fromiter(itertools.chain.from_iterable(table.values()), dtype=np.float64,
-                            count=len(table) * width).reshape(len(table), width)[order]
+        self.langs, self.keys, probs = _read_profiles(detector_factory.PROFILES_DIRECTORY)
         # keys of n letters lie in [2^(21(n-1)), 2^(21n)) (a normalised letter is never
         # NUL): where each length's keys start, and the 1-grams' rows by code point
         self.starts = [int(np.searchsorted(self.keys, np.uint64(1 << (21 * n))))
@@ -74,8 +67,10 @@ class _Profiles:
         self.unigram[self.keys[:self.starts[1]].astype(np.int64)] = np.arange(self.starts[1])
         self.logp = np.log(probs + _ALPHA / _BASE_FREQ).astype(np.float32)
         # NGram.normalize maps one character to one character: a table over the BMP
-        self.normal = np.arange(0x10000, dtype=np.uint64)
-        self.upper = np.zeros(0x10000, dtype=bool)
+        self.normal = np.fromiter(map(ord, map(NGram.normalize, map(chr, range(0x10000)))),
+                                  dtype=np.uint64, count=0x10000)
+        self.upper = np.fromiter(map(str.isupper, map(chr, range(0x10000))), dtype=bool,
+                                 count=0x10000)
         # what a character weighs in a share: about the Latin letters it stands for when
         # romanised (kana 2, Hangul syllables and Han ideographs 3; from memory, rounded)
         self.weight = np.ones(0x10000, dtype=np.float64)
@@ -83,10 +78,6 @@ class _Profiles:
         self.weight[0xAC00:0xD7B0] = 3.0  # Hangul syllables
         self.weight[0x4E00:0xA000] = 3.0  # CJK unified ideographs
         self.weight[0x3400:0x4DC0] = 3.0  # CJK extension A
-        for cp in range(0x10000):
-            ch = chr(cp)
-            self.normal[cp] = ord(NGram.normalize(ch))
-            self.upper[cp] = ch.isupper()
 
     @staticmethod
     def key(gram: str) -> int:
@@ -95,6 +86,45 @@ class _Profiles:
         for ch in gram:
             value = (value << 21) | ord(ch)
         return value
+
+
+def _read_profiles(directory: str) -> tuple[tuple[str, ...], np.ndarray, np.ndarray]:
+    """(languages, sorted n-gram keys, P(n-gram | language) with a row per key): the
+    table langdetect's ``DetectorFactory.load_profile`` builds, read with numpy.
+
+    langdetect's rules, kept: the profile files are read in ``os.listdir`` order (a
+    language's column), dot files and folders skipped; an n-gram of ``n`` letters has the
+    probability ``freq / n_words[n - 1]`` in its language and 0 in the others. Its table
+    is a dict of Python lists (about 90,000 n-grams times 55 languages) that took most of
+    a second to build; here each file's n-grams become keys (:meth:`_Profiles.key`, the
+    n-gram padded on the left with NULs to three code points of 21 bits) at once, and
+    the columns are filled by index. A test compares the result with langdetect's."""
+    langs: list[str] = []
+    all_keys, columns, values = [], [], []
+    for name in os.listdir(directory):
+        path = os.path.join(directory, name)
+        if name.startswith(".") or not os.path.isfile(path):
+            continue
+        with open(path, encoding="utf-8") as fh:
+            profile = json.load(fh)
+        grams = list(profile["freq"])
+        lengths = np.fromiter(map(len, grams), dtype=np.int64, count=len(grams))
+        if grams and not (lengths.min() >= 1 and lengths.max() <= 3):
+            raise ValueError(f"{path}: an n-gram of more than 3 letters")
+        padded = "".join(map(str.rjust, grams, itertools.repeat(3), itertools.repeat("\0")))
+        points = np.frombuffer(padded.encode("utf-32-le"), dtype=np.uint32)
+        points = points.astype(np.uint64).reshape(-1, 3)
+        all_keys.append((points[:, 0] << np.uint64(42)) | (points[:, 1] << np.uint64(21)) |
+                        points[:, 2])
+        freq = np.fromiter(profile["freq"].values(), dtype=np.float64, count=len(grams))
+        n_words = np.asarray(profile["n_words"], dtype=np.float64)
+        values.append(freq / n_words[lengths - 1])
+        columns.append(np.full(len(grams), len(langs)))
+        langs.append(profile["name"])
+    keys, rows = np.unique(np.concatenate(all_keys), return_inverse=True)
+    probs = np.zeros((keys.size, len(langs)), dtype=np.float64)
+    probs[rows, np.concatenate(columns)] = np.concatenate(values)
+    return tuple(langs), keys, probs
 
 
 _profiles: _Profiles | None = None
@@ -210,6 +240,30 @@ def _lookup(prof: _Profiles, keys: np.ndarray, length: int) -> tuple[np.ndarray,
     return found, prof.keys[found] == keys
 
 
+SMALL = 4096  # n-grams of one length and part below which rows are summed directly
+
+
+def _sums(prof: _Profiles, rows: np.ndarray, bounds: np.ndarray) -> np.ndarray:
+    """Each chunk's sum of the profile rows ``rows`` (grouped by chunk; chunk ``c``'s are
+    ``rows[bounds[c]:bounds[c + 1]]``), in float32, added one row after the other in text
+    order. A sparse count matrix times the profiles does exactly that (scipy's CSR product
+    adds ``1 * row`` into a zeroed float32 row, in index order); for a short text, building
+    the matrix costs more than the sum, so its rows are gathered and summed in the same
+    order (a running sum), which gives the same bits."""
+    n_chunks = bounds.size - 1
+    if rows.size > SMALL:
+        counts = sparse.csr_matrix((np.ones(rows.size, dtype=np.float32), rows, bounds),
+                                   shape=(n_chunks, prof.keys.size))
+        return counts @ prof.logp
+    out = np.zeros((n_chunks, prof.logp.shape[1]), dtype=np.float32)
+    if rows.size:
+        gathered = prof.logp[rows]
+        for chunk, (lo, hi) in enumerate(zip(bounds[:-1].tolist(), bounds[1:].tolist())):
+            if hi > lo:
+                out[chunk] = np.cumsum(gathered[lo:hi], axis=0)[-1]
+    return out
+
+
 def profile_ngrams(text: str) -> list[str]:
     """The n-grams of ``text`` (as one piece) that the profiles know, sorted: what
     langdetect's ``Detector._extract_ngrams`` yields, for the tests to compare."""
@@ -248,10 +302,7 @@ def identify(text: str) -> Shares:
         found, hit = _lookup(prof, keys, length)
         for part, mask in enumerate((hit & latin_end[ends], hit & ~latin_end[ends])):
             owner = chunk_of[ends[mask]]  # in text order, so grouped by chunk
-            counts = sparse.csr_matrix(
-                (np.ones(owner.size, dtype=np.float32), found[mask],
-                 np.searchsorted(owner, bounds)), shape=(n_chunks, prof.keys.size))
-            scores[part] += counts @ prof.logp
+            scores[part] += _sums(prof, found[mask], np.searchsorted(owner, bounds))
             if length == 1:  # a part weighs by the letters of it that the profiles know
                 weight[part] = np.bincount(owner, char_weight[ends[mask]], n_chunks)
     total = weight.sum()

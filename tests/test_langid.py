@@ -95,3 +95,39 @@ def test_chunks_cover_the_text_and_stay_bounded():
     pieces = langid.chunks("\n\n".join(paragraphs))
     assert " ".join(pieces).split() == "\n\n".join(paragraphs).split()
     assert all(len(piece) <= 2 * langid.CHUNK + langid.MIN_CHUNK for piece in pieces)
+
+
+def test_profile_table_is_langdetects_own():
+    # the reference is langdetect's DetectorFactory table (language order, n-grams and
+    # P(n-gram | language)); gate reads the same files with numpy
+    import numpy as np
+
+    detector_factory.init_factory()
+    factory = detector_factory._factory
+    prof = langid.profiles()
+    assert prof.langs == tuple(factory.langlist)
+    table = factory.word_lang_prob_map
+    assert prof.keys.size == len(table)
+    rows = np.searchsorted(prof.keys, np.array([langid._Profiles.key(g) for g in table],
+                                                dtype=np.uint64))
+    expected = np.log(np.array(list(table.values())) + 0.5 / 10_000).astype(np.float32)
+    assert np.array_equal(prof.logp[rows], expected)
+
+
+def test_short_text_sums_are_the_sparse_products_bits():
+    # the reference is scipy's CSR product (what identify used for every text before):
+    # the gathered running sum must give the same float32 bits, chunk by chunk
+    import numpy as np
+    from scipy import sparse
+
+    prof = langid.profiles()
+    rng = np.random.default_rng(11)
+    for n, chunks in ((0, 1), (1, 1), (37, 1), (400, 3), (4000, 6), (3000, 2)):
+        rows = rng.integers(0, prof.keys.size, n)
+        bounds = np.concatenate(([0], np.sort(rng.integers(0, n + 1, chunks - 1)), [n]))
+        counts = sparse.csr_matrix((np.ones(n, dtype=np.float32), rows, bounds),
+                                   shape=(chunks, prof.keys.size))
+        expected = counts @ prof.logp
+        got = langid._sums(prof, rows, bounds)
+        assert got.dtype == expected.dtype == np.float32
+        assert np.array_equal(got, expected), (n, chunks)
