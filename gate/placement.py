@@ -24,7 +24,7 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Any
 
-from gate import provjson
+from gate import jsontext, provjson
 from gate.state import State
 
 FOLDERS = ("accepted", "quarantine")
@@ -232,12 +232,11 @@ def build_entry(out: Path, doc_id: str, target: str, payload: dict[str, Any],
     if text_z is not None:
         write_file(build / "text.txt", zlib.decompress(text_z), sync=False)
     record_name = "provenance.json" if target == "accepted" else "reasons.json"
-    record = json.dumps(payload["record"], indent=2, sort_keys=True, ensure_ascii=False)
+    record = jsontext.dumps(payload["record"])
     write_file(build / record_name, record.encode("utf-8", "surrogatepass") + b"\n",
                sync=False)
     if target == "accepted":  # the same facts in W3C PROV-JSON (gate.provjson)
-        prov = json.dumps(provjson.from_record(payload["record"]), indent=2, sort_keys=True,
-                          ensure_ascii=False)
+        prov = jsontext.dumps(provjson.from_record(payload["record"]))
         write_file(build / provjson.FILE_NAME, prov.encode("utf-8", "surrogatepass") + b"\n",
                    sync=False)
     return build

@@ -16,7 +16,7 @@ from urllib.parse import urlsplit
 from pathlib import Path
 from typing import Any
 
-from gate import __version__, checks
+from gate import __version__, checks, jsontext
 from gate.decide import Decision
 from gate.record import DocRecord
 
@@ -218,12 +218,12 @@ class ReportWriter:
 
     @staticmethod
     def _dumps(value: Any, indent: int) -> str:
-        text = json.dumps(value, indent=2, sort_keys=True, ensure_ascii=False)
+        text = jsontext.dumps(value, indent=indent)
         try:
             text.encode("utf-8")
         except UnicodeEncodeError:  # undecodable file names: ASCII escapes
-            text = json.dumps(value, indent=2, sort_keys=True)
-        return text.replace("\n", "\n" + " " * indent)
+            text = jsontext.dumps(value, ensure_ascii=True, indent=indent)
+        return text
 
     def start(self, cautions: list[str]) -> None:
         self.fh.write('{\n  "cautions": ' + self._dumps(cautions, 2) + ',\n  "documents": [')
