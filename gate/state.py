@@ -121,34 +121,31 @@ CREATE TABLE changes (
 """
 
 
-def encode(value: Any) -> Any:
-    """JSON-safe form of measurement values (bytes become ``{"$b64": ...}``)."""
+def _bytes_json(value: Any) -> Any:
+    """json's ``default`` hook: bytes (measured values such as MinHash sketches) are
+    written as ``{"$b64": ...}`` (the encoder calls it for nothing else it can write)."""
     if isinstance(value, bytes):
         return {"$b64": base64.b64encode(value).decode("ascii")}
-    if isinstance(value, dict):
-        return {k: encode(v) for k, v in value.items()}
-    if isinstance(value, (list, tuple)):
-        return [encode(v) for v in value]
-    return value
+    raise TypeError(f"Object of type {type(value).__name__} is not JSON serializable")
 
 
-def decode(value: Any) -> Any:
-    if isinstance(value, dict):
-        if set(value) == {"$b64"}:
-            return base64.b64decode(value["$b64"])
-        return {k: decode(v) for k, v in value.items()}
-    if isinstance(value, list):
-        return [decode(v) for v in value]
+def _bytes_from_json(value: dict[str, Any]) -> Any:
+    """json's ``object_hook``: ``{"$b64": ...}`` back to bytes."""
+    if len(value) == 1 and "$b64" in value:
+        return base64.b64decode(value["$b64"])
     return value
 
 
 def dumps(value: Any) -> str:
-    return json.dumps(encode(value), sort_keys=True, ensure_ascii=False,
-                      separators=(",", ":"))
+    """Compact JSON with sorted keys, bytes as ``{"$b64": ...}`` (written by the C
+    encoder's hook: no walk over the whole value first)."""
+    return json.dumps(value, sort_keys=True, ensure_ascii=False, separators=(",", ":"),
+                      default=_bytes_json)
 
 
 def loads(text: str) -> Any:
-    return decode(json.loads(text))
+    """The value :func:`dumps` wrote, bytes included."""
+    return json.loads(text, object_hook=_bytes_from_json)
 
 
 # the columns of a corpus row, in the order State.corpus and State.corpus_rows read them

@@ -69,3 +69,20 @@ def _nested(depth):
     for _ in range(depth):
         value = [value]
     return value
+
+
+def test_state_json_keeps_bytes():
+    # the cache's and the run rows' JSON (gate.state.dumps): compact, sorted keys, bytes
+    # as {"$b64": base64} (RFC 4648 base64); loads gives the value back
+    import base64
+
+    from gate.state import dumps, loads
+
+    value = {"z": [b"\x00\xff", (1, 2.5)], "a": {"sketch": b"abc", "n": None}, "t": "é"}
+    assert dumps(value) == ('{"a":{"n":null,"sketch":{"$b64":"YWJj"}},"t":"é",'
+                            '"z":[{"$b64":"AP8="},[1,2.5]]}')
+    assert base64.b64decode("YWJj") == b"abc"
+    assert loads(dumps(value)) == {"z": [b"\x00\xff", [1, 2.5]],
+                                   "a": {"sketch": b"abc", "n": None}, "t": "é"}
+    with pytest.raises(TypeError):
+        dumps({"x": bytearray(b"no")})
