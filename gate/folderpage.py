@@ -104,7 +104,8 @@ def _item(out: Path, folder: str, row: dict[str, Any], status: str, diff: bool
     codes = sorted({str(r.get("code")) for r in reasons})
     releasable = not any(CODES.get(c) is None or CODES[c].fail_closed for c in codes)
     diffs = []
-    if diff:
+    if diff and any((r.get("details") or {}).get("keeper_id") and
+                    r.get("code", "").startswith("duplicate") for r in reasons):
         text = _text(out / where / row["doc_id"] / "text.txt")
         diffs = keeper_diffs(out, {"reasons": reasons}, text, row["path"], DIFF_LIMIT)
     source = (record.get("source") or {}).get("url") or \

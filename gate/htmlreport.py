@@ -17,21 +17,28 @@ from __future__ import annotations
 import html
 import json
 import math
+import re
 from collections import Counter
 from dataclasses import dataclass
 from typing import Any
 
 from gate import checks
 from gate.urgency import urgency
-from gate.visible import visible
+from gate.visible import BLANK_LETTERS, visible
 
 CSP = ("default-src 'none'; style-src 'unsafe-inline'; img-src data:; "
        "base-uri 'none'; form-action 'none'")
 
 OUTCOMES = ("pass", "warn", "fail", "n/a", "off")
 
+# what visible() shows or html.escape() replaces, besides non-printable characters
+_SPECIAL = re.compile("[&<>\"'" + "".join(chr(c) for c in sorted(BLANK_LETTERS)) + "]")
+
+
 def text(value: Any) -> str:
     """Any value as HTML-safe text (element content or a quoted attribute value)."""
+    if type(value) is str and value.isprintable() and _SPECIAL.search(value) is None:
+        return value  # nothing to show or escape: what the lines below return
     if value is None:
         s = ""
     elif isinstance(value, str):
@@ -353,6 +360,8 @@ footer{color:var(--muted);font-size:12px;border-top:1px solid var(--line);paddin
 def _esc_json(value: Any) -> str:
     if isinstance(value, str):
         return text(value)
+    if type(value) is int:  # json.dumps writes an int as int.__repr__
+        return int.__repr__(value)
     return text(json.dumps(value, ensure_ascii=False, sort_keys=True))
 
 

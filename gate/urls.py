@@ -10,6 +10,7 @@ because the gate never fetches and must not second-guess what a crawler meant.
 
 from __future__ import annotations
 
+import functools
 import ipaddress
 import re
 from dataclasses import dataclass
@@ -172,6 +173,7 @@ def _percent_decode_utf8(text: str) -> str:
         raise URLProblem("host", "the host contains percent-escapes that are not UTF-8") from err
 
 
+@functools.lru_cache(maxsize=4096)  # a batch's documents come from a few hosts
 def normalize_host(host: str) -> str:
     """Lower-case ASCII host: IDNA 2008 (UTS 46 mapping) for names, canonical IP literals."""
     if host.startswith("["):

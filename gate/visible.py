@@ -17,8 +17,8 @@ import unicodedata
 # and the line/paragraph separators (Zl, Zp)
 SHOWN_CATEGORIES = frozenset({"Cc", "Cf", "Cs", "Zl", "Zp"})
 # letters that draw nothing (Hangul fillers, braille blank): invisible though not Cf
-_BLANK_LETTERS = frozenset({0x115F, 0x1160, 0x2800, 0x3164, 0xFFA0})
-_BLANK = re.compile("[" + "".join(chr(c) for c in sorted(_BLANK_LETTERS)) + "]")
+BLANK_LETTERS = frozenset({0x115F, 0x1160, 0x2800, 0x3164, 0xFFA0})
+_BLANK = re.compile("[" + "".join(chr(c) for c in sorted(BLANK_LETTERS)) + "]")
 
 
 def visible(text: str, keep: str = "") -> str:
@@ -30,7 +30,7 @@ def visible(text: str, keep: str = "") -> str:
     for ch in text:
         code = ord(ch)
         if ch not in keep and (unicodedata.category(ch) in SHOWN_CATEGORIES or
-                               code in _BLANK_LETTERS):
+                               code in BLANK_LETTERS):
             out.append(f"<U+{code:04X}>")
         else:
             out.append(ch)
