@@ -105,9 +105,12 @@ def stage(root: str, sha256: str, data: bytes) -> None:
     target = os.path.join(folder, sha256)
     if os.path.exists(target):
         return
-    os.makedirs(folder, exist_ok=True)
     tmp = os.path.join(folder, f".{sha256}.tmp-{os.getpid()}")
-    write_file(Path(tmp), data, sync=False)
+    try:
+        write_file(tmp, data, sync=False)
+    except FileNotFoundError:  # the folder's first blob (no mkdir call for every file)
+        os.makedirs(folder, exist_ok=True)
+        write_file(tmp, data, sync=False)
     os.replace(tmp, target)
 
 

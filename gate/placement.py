@@ -41,7 +41,7 @@ def _fsync_dir(path: Path) -> None:
         os.close(fd)
 
 
-def write_file(path: Path, data: bytes, *, sync: bool = True) -> None:
+def write_file(path: Path | str, data: bytes, *, sync: bool = True) -> None:
     # os-level calls: a buffered file object costs twice the system time per small file
     fd = os.open(path, os.O_WRONLY | os.O_CREAT | os.O_TRUNC | os.O_CLOEXEC, 0o666)
     try:
@@ -117,11 +117,14 @@ class Placer:
         return _source(self.out, doc_id, sha256)
 
     def _aside(self, path: Path) -> None:
-        if path.exists() or path.is_symlink():
-            target = self.trash / f"{path.parent.name}-{path.name}-{os.getpid()}"
-            if target.exists():
-                shutil.rmtree(target, ignore_errors=True)
-            os.replace(path, target)
+        try:
+            os.lstat(path)  # one call for "exists or is a (dangling) link"
+        except (FileNotFoundError, NotADirectoryError):
+            return
+        target = self.trash / f"{path.parent.name}-{path.name}-{os.getpid()}"
+        if target.exists():
+            shutil.rmtree(target, ignore_errors=True)
+        os.replace(path, target)
 
     def build(self, doc_id: str, target: str, payload: dict[str, Any]) -> Path | None:
         """Assemble an entry in state/tmp (not yet visible). None for removals."""
@@ -217,8 +220,11 @@ def build_entry(out: Path, doc_id: str, target: str, payload: dict[str, Any],
     compressed text, and the record files. Runs in the coordinator or in a worker."""
     tmp = out / "state" / "tmp"
     build = tmp / doc_id
-    shutil.rmtree(build, ignore_errors=True)
-    build.mkdir(parents=True)
+    try:
+        os.mkdir(build)
+    except OSError:  # a killed run's half-built entry, or no state/tmp yet
+        shutil.rmtree(build, ignore_errors=True)
+        build.mkdir(parents=True)
     source = _source(out, doc_id, payload.get("sha256"))
     if payload.get("sha256") and source is None and not payload.get("reused"):
         raise FileNotFoundError(f"the staged copy of {payload['path']!r} is missing")

@@ -18,8 +18,9 @@ within its CPU allowance (a starved one on a saturated machine) gets another per
 that used next to no CPU in the period is killed with SIGKILL and replaced. Either way its
 task comes back as a :class:`Failure` instead of a result. Each worker caps its own address space
 (``RLIMIT_AS``) so a decompression bomb ends in a ``MemoryError`` inside the worker rather
-than in the machine's OOM killer. Workers are recycled after a number of tasks so slow leaks
-in a parser cannot accumulate.
+than in the machine's OOM killer. Workers are recycled after a number of messages (a task,
+or a batch of small ones: a batch of tiny documents exercises a parser less than one large
+document) so slow leaks in a parser cannot accumulate.
 
 The parent must not hold threads when it forks (a forked child inherits locks held by
 threads that do not exist in it), so callers refresh progress displays themselves instead
@@ -351,7 +352,7 @@ class WorkerPool:
                     else:
                         yield batch[0][0], Failure("crashed", _death(code))
                     continue
-                worker.done += len(batch)
+                worker.done += 1  # messages: a batch of small tasks counts once
                 statuses = {status for status, _value in replies.values()}
                 if statuses & {"memory", "timeout"} or worker.done >= self.recycle_after:
                     self._retire(worker, kill=bool(statuses & {"memory", "timeout"}))
