@@ -59,7 +59,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import words
 
-TEMPLATES_VERSION = 9  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 10  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -68,7 +68,8 @@ MAIN_RATIO = 0.5
 TEMPLATE_SHARE = 0.3  # template share of an unplaceable text that makes it give way
 MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilatura's text
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
-MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
+MERGED_MIN_WORDS = 3
+SANDWICH_MAX = 3  # template blocks in a row kept between two blocks of the page's own  # blocks this long found whole in one line make it a merged line
 
 
 def site_of(source_url: str | None) -> str | None:
@@ -85,9 +86,11 @@ def site_of(source_url: str | None) -> str | None:
 def block_summary(blocks: Sequence[Block]) -> dict[str, list[int]]:
     """The page's distinct block hashes, in trafilatura's main text or not (for the cache
     and the parent's learning; a few hundred bytes a page)."""
-    main = sorted({b.hash for b in blocks if b.main})
+    main = sorted({b.hash for b in blocks if b.main and not b.nav})
     taken = set(main)
-    other = sorted({b.hash for b in blocks if b.hash not in taken})
+    # a teaser list's blocks quote other pages (their titles, their first words): counted,
+    # they would make a page's own title and opening look like a rotating teaser
+    other = sorted({b.hash for b in blocks if b.hash not in taken and not b.nav})
     return {"main": main, "other": other}
 
 
@@ -195,6 +198,33 @@ def _dropped(blocks: Sequence[Block], strong: set[int], weak: set[int]) -> set[i
     return drop
 
 
+def _sandwiched(blocks: Sequence[Block], drop: set[int]) -> set[int]:
+    """Template blocks that stand inside the page's own text: a run of at most
+    ``SANDWICH_MAX`` unlinked template blocks whose neighbours on both sides are unlinked
+    blocks of the page's own. A table's header row, a cell value such as "Closed" or a
+    stock sentence that most notices of a site share are then kept where they stand in a
+    notice, while the same words in the menu, an aside or the footer still go."""
+    def own(i: int) -> bool:
+        b = blocks[i]
+        return b.hash not in drop and b.links < LINK_DOMINATED and not b.nav
+
+    kept: set[int] = set()
+    i = 0
+    while i < len(blocks):
+        if blocks[i].hash not in drop:
+            i += 1
+            continue
+        j = i
+        while j < len(blocks) and blocks[j].hash in drop:
+            j += 1
+        run = blocks[i:j]
+        if j - i <= SANDWICH_MAX and i > 0 and j < len(blocks) and own(i - 1) and own(j) \
+                and all(b.links < LINK_DOMINATED and not b.nav for b in run):
+            kept.update(b.hash for b in run)
+        i = j
+    return kept
+
+
 def _word_count(lines: Iterable[str]) -> int:
     """Words by white space: enough to compare two amounts of text, and cheap."""
     return sum(len(line.split()) for line in lines)
@@ -255,6 +285,7 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
         return text, {}
     blocks = tuple(blocks)
     drop = _dropped(blocks, set(template[0]), set(template[1]))
+    drop -= _sandwiched(blocks, drop)
     if not drop:
         return text, {}
     drop |= _crumb_trails(blocks)
@@ -269,7 +300,8 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
         if any(part is None or part not in drop for part in parts):
             main_rest.append(line)
     placed = not unplaced
-    own = [b.text for b in blocks if b.hash not in drop and b.links < LINK_DOMINATED]
+    own = [b.text for b in blocks
+           if b.hash not in drop and b.links < LINK_DOMINATED and not b.nav]
     main_words, own_words = _word_count(main_rest), _word_count(own)
     if not placed:
         # how much of trafilatura's text is template: the template blocks found in it

@@ -20,6 +20,10 @@ _MD_LINK = re.compile(r"(!?)\[([^\]\n]*)\]\([^)\n]*\)")
 # <https://...> autolinks are visible text; other tags are markup
 _TAG = re.compile(r"</?[A-Za-z][A-Za-z0-9-]*(?:\s[^<>\n]*)?/?>")
 _REF_DEF = re.compile(r"^\s{0,3}\[[^\]\n]+\]:\s*\S+.*$", re.M)
+# an ordered list's number ("1.", "2)") at the start of a line: HTML's <ol> numbers its
+# items without writing the numbers into the text, so a list gives the same words in
+# every format only without them
+_ORDERED = re.compile(r"^(\s*(?:[-*+>]\s+)?)\d{1,3}[.)](?=\s)", re.M)
 
 
 def plain(text: str) -> str:
@@ -31,6 +35,8 @@ def plain(text: str) -> str:
         text = _REF_DEF.sub("", text)
     if "<" in text:
         text = _TAG.sub(" ", text)
+    if "." in text or ")" in text:
+        text = _ORDERED.sub(r"\1", text)
     return text
 
 
