@@ -68,8 +68,8 @@ MAIN_RATIO = 0.5
 TEMPLATE_SHARE = 0.3  # template share of an unplaceable text that makes it give way
 MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilatura's text
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
-MERGED_MIN_WORDS = 3
-SANDWICH_MAX = 3  # template blocks in a row kept between two blocks of the page's own  # blocks this long found whole in one line make it a merged line
+MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
+SANDWICH_MAX = 3  # template blocks in a row kept between two blocks of the page's own
 
 
 def site_of(source_url: str | None) -> str | None:

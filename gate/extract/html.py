@@ -339,8 +339,9 @@ def teaser_lists(blocks: Sequence[Block]) -> set[int]:
     (see :func:`_card`) one after the other -- "related articles", "see also", "more things
     to do", "other notices", "similar threads" -- with the short heading right before a
     run; a shorter run only between a short heading of its own and another short block,
-    a link or the end of the page. Each card quotes another page, so the list is navigation whatever its words are,
-    and it differs from page to page, so learning a site's template cannot name it."""
+    a link or the end of the page. Each card quotes another page, so the list is
+    navigation whatever its words are, and it differs from page to page, so learning a
+    site's template cannot name it."""
     found: set[int] = set()
     i = 0
     while i < len(blocks):
