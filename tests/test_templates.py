@@ -424,3 +424,104 @@ def test_a_breadcrumb_trail_ending_in_the_pages_title_is_navigation():
                  "a > b > c > Route N62 timetable change and more"):
         assert templates._crumb_trails([Block(line, block_hash(line)), title,
                                         Block("null", block_hash("null"))]) == set()
+
+
+# -- teaser lists, titles, export headers, stock template inside a notice (invented) --------
+
+TEASERS = ("<div class='rel'><div>Related articles</div>" + "".join(
+    f"<div><a href='/n/{i}'><strong>Other notice {i} title</strong></a><p>{prose(200 + i, 14)}"
+    " ...</p></div>" for i in range(4)) + "</div>")
+NOTICE = ("<html><body><nav><a href='/'>Home</a> <a href='/b'>Bins</a></nav><main>"
+          "<h1>Lamp repairs on Elm Street</h1><p>{body}</p><p>{more}</p></main>{aside}"
+          "<footer>Invented Borough Council</footer></body></html>")
+
+
+def test_a_teaser_list_is_navigation_and_leaves_the_text():
+    body, more = prose(1, 40), prose(2, 30)
+    page = NOTICE.format(body=body, more=more, aside=TEASERS).encode()
+    got = extract(page, max_pages=10, max_nesting=100)
+    assert body in got.text and more in got.text
+    assert "Other notice" not in got.text and prose(200, 14) not in got.text
+    nav = [b.text for b in got.blocks if b.nav]
+    assert nav[0] == "Related articles" and len(nav) == 9  # heading, 4 titles, 4 snippets
+    # nor is it counted when a site's template is learnt
+    summary = templates.block_summary(got.blocks)
+    assert block_hash("Other notice 1 title") not in summary["main"] + summary["other"]
+    # one card under a heading of its own counts too; a single linked line in a notice
+    # followed by its own paragraphs does not
+    one = ("<div><div>Trending questions</div><div><a href='/q'>Where is my refund?</a>"
+           "</div><p>Refunds usually reach your account within five working days.</p></div>")
+    got = extract(NOTICE.format(body=body, more=more, aside=one).encode(), max_pages=10,
+                  max_nesting=100)
+    assert "Where is my refund" not in got.text and "Refunds usually" not in got.text
+    inline = NOTICE.format(body=body, more=more, aside="").replace(
+        f"<p>{more}</p>", f"<p><a href='/x'>Read the bin rules</a></p><p>{more}</p>")
+    got = extract(inline.encode(), max_pages=10, max_nesting=100)
+    assert more in got.text and not any(b.nav for b in got.blocks)
+
+
+def test_title_kept_item_teasers_and_fragment_links():
+    # a thread title in a header apart from the text trafilatura takes comes back on top
+    posts = "".join(f"<p>{prose(5 + i, 60)}</p>" for i in range(3))
+    head = ("<html><body><div class='thread'><h1>Kettle lid does not close</h1>"
+            f"<div>1849 views</div></div><div class='post'>{posts}</div></body></html>")
+    got = extract(head.encode(), max_pages=10, max_nesting=100)
+    assert got.text.split("\n")[0] == "Kettle lid does not close"
+    # "Title - snippet" list items, the title a link: a teaser list
+    items = "".join(f"<li><a href='/n/{i}'>Notice {i}</a> - {prose(300 + i, 12)}</li>"
+                    for i in range(3))
+    got = extract(NOTICE.format(body=prose(1, 40), more=prose(2, 30),
+                                aside=f"<ul>{items}</ul>").encode(),
+                  max_pages=10, max_nesting=100)
+    assert prose(300, 12) not in got.text and prose(1, 40) in got.text
+    # a link to a place on the same page is not a link to another page
+    blocks = extract(b"<html><body><h2><a href='#s1'>Section one</a></h2><p>x y z</p>"
+                     b"</body></html>", max_pages=10, max_nesting=100).blocks
+    assert blocks[0].lead == 0.0 and blocks[0].links == 1.0
+
+
+def test_export_headers_front_matter_and_end_markers_are_not_text():
+    from gate.extract.text import without_export_header
+
+    body = "Lamp repairs\n\nThe lamps on Elm Street are repaired on Monday."
+    front = '---\ntitle: "Lamp repairs"\nsource: https://x.example.org/a\ntags:\n  - lamps\n---\n'
+    assert without_export_header(front + body) == body
+    header = "Invented Records export\nSource: https://x.example.org/a\nExported: 2026-03-01\n\n"
+    assert without_export_header(header + body + "\n\n-- end of export --\n") == body
+    # one "Key: value" line is a document's own first line, not a header
+    own = "Date: Monday 3 March.\n\nThe lamps are repaired."
+    assert without_export_header(own) == own
+    # a rule line in Markdown, or an unclosed fence, is not front matter
+    assert without_export_header("---\nNot front matter here.\n---\nText") == \
+        "---\nNot front matter here.\n---\nText"
+    got = extract((front + body).encode(), max_pages=10, max_nesting=100)
+    assert words(got.text) == words(body)
+    # a PDF footer of a page number beside the page's address (single page: no repetition)
+    from gate.extract.pdf import without_furniture
+    assert without_furniture(["Notice\nBody line.\nPage 1 of 1  |  https://x.example.org/a"]) \
+        == ["Notice\nBody line."]
+    # ordered-list numbers are markup: HTML's <ol> does not write them (CommonMark, from
+    # memory: "1." and "1)" both start an ordered item)
+    assert words("1. Check the card\n2) Approve it") == words("Check the card\nApprove it")
+    assert words("In 2024 we said 3. things") == ["in", "2024", "we", "said", "3", "things"]
+
+
+def test_stock_template_inside_a_notice_stays_where_it_stands():
+    # "Closed" and a table header row are on every page of a clinic's site (template by
+    # the counts) but stand between the notice's own cells
+    def b(text, **kw):
+        return Block(text, block_hash(text), **kw)
+
+    menu = b("Home Notices Contact", links=1.0)
+    head = [b("Day", kind="cell"), b("Hours", kind="cell")]
+    own = [b("Opening hours over Easter", kind="heading"), b(prose(11, 20)),
+           b("Good Friday", kind="cell"), b("Closed", kind="cell"), b("Easter Monday", kind="cell"),
+           b("9:00 to 12:00", kind="cell")]
+    footer = b("Invented Clinic Partnership, Harbour Road")
+    blocks = [menu, own[0], own[1], *head, own[2], own[3], own[4], own[5], footer]
+    strong = tuple(x.hash for x in (menu, *head, own[3], footer))
+    text = "\n".join(x.text for x in blocks[1:-1])
+    cleaned, _info = templates.compose(text, blocks, (strong, ()))
+    assert cleaned == text  # nothing of the notice lost, menu and footer never in it
+    cleaned, _info = templates.compose(text + "\n" + footer.text, blocks, (strong, ()))
+    assert cleaned == text

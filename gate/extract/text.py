@@ -31,6 +31,7 @@ def clean_text(text: str) -> str:
 _FRONT_FENCE = re.compile(r"^(?:---|\+\+\+)\s*$")
 _FRONT_END = re.compile(r"^(?:---|\.\.\.|\+\+\+)\s*$")
 _KEY_LINE = re.compile(r"^\s*[\w][\w .-]{0,30}\s*[:=]\s*\S")  # "title: ...", "Source: ..."
+_YAML_KEY = re.compile(r"^[\w][\w .-]{0,30}\s*[:=](?:\s|$)")  # "tags:" opens a list
 _CONTINUED = re.compile(r"^(?:\s+\S|\s*-\s)")  # a YAML value or list item going on
 _MARKER = re.compile(r"^\s*[-=*~#_]{2,}\s*[^\W\d_][\w .'-]{0,40}?\s*[-=*~#_]{2,}\s*$")
 FRONT_MAX_LINES = 40  # a front matter block longer than this is not one
@@ -51,8 +52,8 @@ def without_export_header(text: str) -> str:
         for i in range(1, min(len(lines), FRONT_MAX_LINES + 1)):
             if _FRONT_END.match(lines[i]):
                 body = [line for line in lines[1:i] if line.strip()]
-                if body and all(_KEY_LINE.match(line) or _CONTINUED.match(line)
-                                for line in body) and _KEY_LINE.match(body[0]):
+                if body and all(_YAML_KEY.match(line) or _CONTINUED.match(line)
+                                for line in body) and _YAML_KEY.match(body[0]):
                     start = i + 1
                 break
             if not lines[i].strip():
