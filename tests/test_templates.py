@@ -119,7 +119,7 @@ def test_a_version_cluster_in_the_main_text_is_not_template():
     # text on 6 of 20 pages, below SHARE_ANY; an aside outside it on 6 of 20 is template
     pages = [page("b.example.org", [50, 51, 60 + i], [1, 90]) for i in range(6)]
     pages += [page("b.example.org", [300 + i], [1, 91]) for i in range(14)]
-    everywhere, aside = templates.learn(pages)["b.example.org"]
+    everywhere, aside, _shapes = templates.learn(pages)["b.example.org"]
     assert everywhere.tolist() == [1] and aside.tolist() == [90, 91]  # not 50, 51
 
 
@@ -525,3 +525,30 @@ def test_stock_template_inside_a_notice_stays_where_it_stands():
     assert cleaned == text  # nothing of the notice lost, menu and footer never in it
     cleaned, _info = templates.compose(text + "\n" + footer.text, blocks, (strong, ()))
     assert cleaned == text
+
+
+def test_short_lines_whose_numbers_change_from_page_to_page_are_template():
+    # invented help-centre pages: "Updated N days ago" and "N out of M found this
+    # helpful" on every page with other numbers; the notices' own numbered lines differ
+    def page(i):
+        blocks = [Block(f"Updated {3 + i} days ago", block_hash(f"Updated {3 + i} days ago")),
+                  Block(prose(i, 40), block_hash(prose(i, 40)), main=True),
+                  Block(f"Call 0100 555 {1000 + 7 * i} before {i % 9 + 1} pm today",
+                        block_hash(f"Call 0100 555 {1000 + 7 * i} before {i % 9 + 1} pm today"),
+                        main=True) if i % 3 == 0 else
+                  Block(prose(100 + i, 12), block_hash(prose(100 + i, 12)), main=True),
+                  Block(f"{i + 2} out of {i + 9} found this helpful",
+                        block_hash(f"{i + 2} out of {i + 9} found this helpful"))]
+        return blocks, templates.Page.of("help.example.org html", templates.block_summary(blocks))
+    pages = [page(i) for i in range(10)]
+    learnt = templates.learn([p for _b, p in pages])
+    assert len(learnt["help.example.org html"][2]) == 2  # the two lines, not the "Call" one
+    blocks, mine = pages[4]
+    drop = templates.removal(mine, learnt)
+    assert set(drop[0]) == {blocks[0].hash, blocks[3].hash}
+    text = "\n".join(b.text for b in blocks)
+    cleaned, _info = templates.compose(text, blocks, drop)
+    assert cleaned == "\n".join(b.text for b in blocks[1:3])
+    # a line of one wording on every page is the exact rule's, not a shape
+    assert templates.shape_hash("Open 9 to 5") is not None
+    assert templates.shape_hash("2024") is None and templates.shape_hash("Opening hours") is None

@@ -314,19 +314,27 @@ TEASER_MIN_CARDS = 3  # cards in a row that make a teaser list
 TITLE_MAX_WORDS = 20  # a teaser's linked title is short ...
 SNIPPET_MAX_WORDS = 80  # ... and so is the snippet under it
 SNIPPET_MIN_WORDS = 3
+BYLINE_MAX_WORDS = 6  # a date or a byline between a teaser's title and its snippet
 LIST_HEADING_MAX_WORDS = 6  # "Related articles", "More things to do", "See also"
 
 
 def _card(blocks: Sequence[Block], i: int) -> int:
     """The number of blocks of a teaser card starting at ``blocks[i]`` (0: none): a title
-    that is wholly a link to another page followed by a short unlinked snippet, or one
-    block that begins with such a link and goes on unlinked ("Title - snippet ...")."""
+    that is wholly a link to another page followed by a short unlinked snippet (or by a
+    date or a byline and a snippet), or one block that begins
+    with such a link and goes on unlinked ("Title - snippet ...")."""
     block = blocks[i]
     size = len(block.text.split())
-    if block.lead >= 0.9 and size <= TITLE_MAX_WORDS and i + 1 < len(blocks):
-        nxt = blocks[i + 1]
-        if nxt.links < 0.5 and nxt.lead == 0 and nxt.kind != "heading" and \
-                SNIPPET_MIN_WORDS <= len(nxt.text.split()) <= SNIPPET_MAX_WORDS:
+    if block.lead >= 0.9 and size <= TITLE_MAX_WORDS:
+        def snippet(j: int, least: int) -> bool:
+            return j < len(blocks) and blocks[j].links < 0.5 and blocks[j].lead == 0 and \
+                blocks[j].kind != "heading" and \
+                least <= len(blocks[j].text.split()) <= SNIPPET_MAX_WORDS
+
+        if snippet(i + 1, 1) and len(blocks[i + 1].text.split()) <= BYLINE_MAX_WORDS and \
+                snippet(i + 2, SNIPPET_MIN_WORDS):
+            return 3  # a title, a date or a byline, a snippet
+        if snippet(i + 1, SNIPPET_MIN_WORDS):
             return 2
     if 0.05 <= block.lead < 0.9 and block.links < 0.6 and \
             SNIPPET_MIN_WORDS + 1 <= size <= SNIPPET_MAX_WORDS + TITLE_MAX_WORDS:
