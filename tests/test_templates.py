@@ -488,6 +488,8 @@ def test_export_headers_front_matter_and_end_markers_are_not_text():
     assert without_export_header(front + body) == body
     header = "Invented Records export\nSource: https://x.example.org/a\nExported: 2026-03-01\n\n"
     assert without_export_header(header + body + "\n\n-- end of export --\n") == body
+    ruled = "Source: https://x.example.org/a\nExported: 2026-03-01\n==========\n"
+    assert without_export_header(ruled + body) == body
     # one "Key: value" line is a document's own first line, not a header
     own = "Date: Monday 3 March.\n\nThe lamps are repaired."
     assert without_export_header(own) == own

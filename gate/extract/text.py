@@ -33,6 +33,7 @@ _FRONT_END = re.compile(r"^(?:---|\.\.\.|\+\+\+)\s*$")
 _KEY_LINE = re.compile(r"^\s*[\w][\w .-]{0,30}\s*[:=]\s*\S")  # "title: ...", "Source: ..."
 _YAML_KEY = re.compile(r"^[\w][\w .-]{0,30}\s*[:=](?:\s|$)")  # "tags:" opens a list
 _CONTINUED = re.compile(r"^(?:\s+\S|\s*-\s)")  # a YAML value or list item going on
+_RULE = re.compile(r"^\s*([-=*_~#])\1{2,}\s*$")  # a line of one repeated mark
 _MARKER = re.compile(r"^\s*[-=*~#_]{2,}\s*[^\W\d_][\w .'-]{0,40}?\s*[-=*~#_]{2,}\s*$")
 FRONT_MAX_LINES = 40  # a front matter block longer than this is not one
 HEADER_MAX_LINES = 8  # key lines of an export header
@@ -43,7 +44,7 @@ def without_export_header(text: str) -> str:
     """A text without what an exporter or a static-site generator puts around the
     document: YAML (or TOML) front matter at the very start (``---`` ... ``---``), a header
     of two or more ``Key: value`` lines at the very start (after at most one short banner
-    line, such as "Records export") ended by a blank line, and a last line that is only a
+    line, such as "Records export") ended by a blank line or a rule, and a last line that is only a
     marker ("-- end of export --"). None of it is the document's own text, and a copy of
     the document in another format does not carry it. Anything else is left as it is."""
     lines = text.split("\n")
@@ -71,8 +72,9 @@ def without_export_header(text: str) -> str:
                 filled < HEADER_MAX_LINES:
             filled += 1
             i += 1
-        if filled >= 2 and (i >= len(lines) or not lines[i].strip()):
-            start = i
+        if filled >= 2 and (i >= len(lines) or not lines[i].strip() or
+                            _RULE.match(lines[i])):
+            start = i + 1 if i < len(lines) and _RULE.match(lines[i]) else i
     end = len(lines)
     while end > start and not lines[end - 1].strip():
         end -= 1
