@@ -23,7 +23,7 @@ Documents with fewer than ``min_shingles`` shingles are compared only exactly, b
 sketches of tiny sets collide.
 
 Candidates come from MinHash LSH with ``b`` bands of ``r`` rows chosen so that a pair at
-the threshold becomes a candidate with probability at least 0.9 and a pair 0.05 above it
+the threshold becomes a candidate with probability at least 0.99 and a pair 0.05 above it
 with at least 0.995 (1-(1-t^r)^b, Mining of Massive Datasets section 3.4.2); each
 candidate is then confirmed by the estimated Jaccard ``>= duplicates.threshold``; an
 estimate within ``EXACT_MARGIN`` of the threshold (where a 256-permutation estimate errs
@@ -72,6 +72,8 @@ SEED = 1
 SCHEME = "affine32"
 SHINGLE = 5
 MIN_CANDIDATE_PROBABILITY = 0.995
+AT_THRESHOLD = 0.99  # candidate probability of a pair at the threshold
+FAR_BELOW = 0.15  # at most this for a pair 0.3 below it
 # an estimate this close to the threshold is checked against the exact Jaccard of the
 # two texts' shingle sets: 2.4 standard errors of a 256-permutation estimate at J = 0.8
 EXACT_MARGIN = 0.06
@@ -194,18 +196,21 @@ def band_params(threshold: float, num_perm: int = NUM_PERM) -> tuple[int, int]:
     Massive Datasets, section 3.4.2).
 
     The fewest bands (memory and query time grow with them) such that a pair at the
-    threshold is a candidate with P >= 0.9, a pair 0.05 above it with P >= 0.995, and a
-    pair 0.3 below it with P <= 0.05 (pages sharing a template do not all become
-    candidates of each other). Where no choice meets all three, the most rows that still
-    give P >= 0.995 at the threshold. For 0.80 and 256 permutations: 21 bands of 9 rows.
+    threshold is a candidate with P >= ``AT_THRESHOLD`` (0.99), a pair 0.05 above it with
+    P >= 0.995, and a pair 0.3 below it with P <= ``FAR_BELOW`` (0.15: candidates cost an
+    estimate each, and pages sharing a template do not all become candidates of each
+    other). Where no choice meets all three, the most rows that still give P >= 0.995 at
+    the threshold. For 0.80 and 256 permutations: 20 bands of 7 rows (0.991 at 0.80, 0.145
+    at 0.50; the earlier 21 x 9, from P >= 0.9 at the threshold, left a pair at 0.80 out
+    one time in twenty, and copies of a thin page sit there).
     """
     high, low = min(1.0, threshold + 0.05), max(0.0, threshold - 0.3)
     best: tuple[int, int] | None = None
     for rows in range(1, num_perm + 1):
         for bands in range(2, num_perm // rows + 1):
-            if _curve(threshold, bands, rows) >= 0.9 and \
+            if _curve(threshold, bands, rows) >= AT_THRESHOLD and \
                     _curve(high, bands, rows) >= MIN_CANDIDATE_PROBABILITY:
-                if _curve(low, bands, rows) <= 0.05 and (best is None or bands < best[0]):
+                if _curve(low, bands, rows) <= FAR_BELOW and (best is None or bands < best[0]):
                     best = (bands, rows)
                 break
     if best is not None:
