@@ -554,3 +554,25 @@ def test_short_lines_whose_numbers_change_from_page_to_page_are_template():
     # a line of one wording on every page is the exact rule's, not a shape
     assert templates.shape_hash("Open 9 to 5") is not None
     assert templates.shape_hash("2024") is None and templates.shape_hash("Opening hours") is None
+
+
+def test_glossaries_in_page_contents_and_sentences_that_begin_with_a_link_are_text():
+    # shapes seen in a real HTML manual (DocBook output, from memory): a glossary whose
+    # terms link elsewhere, a section's contents linking to #fragments above its first
+    # paragraph, a paragraph that begins with a cross-reference
+    glossary = "<dl>" + "".join(
+        f"<dt><a href='/g{i}.html'>Term{i}</a></dt><dd>{prose(400 + i, 12)}</dd>"
+        for i in range(4)) + "</dl>"
+    contents = ("<h2>Custom plans</h2><dl><dt><a href='p.html#cb'>Plan callbacks</a></dt>"
+                f"</dl><p>{prose(410, 30)}</p><h3>Plan callbacks</h3>")
+    xref = (f"<h3>Operators</h3><p><a href='other.html'>Table 9</a> {prose(420, 20)}</p>"
+            "<p>Table 9. Match operators</p>")
+    for part in (glossary, contents, xref):
+        page = f"<html><body><main><h1>Manual page</h1><p>{prose(430, 40)}</p>{part}</main>" \
+               "</body></html>"
+        got = extract(page.encode(), max_pages=10, max_nesting=100)
+        assert not any(b.nav for b in got.blocks), part
+    # a page that is only a list of teasers keeps them (an index page)
+    index = "<html><body>" + TEASERS + "</body></html>"
+    got = extract(index.encode(), max_pages=10, max_nesting=100)
+    assert prose(201, 14) in got.text and not any(b.nav for b in got.blocks)

@@ -243,7 +243,7 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
             if tag == "a":
                 in_link += 1
                 href = (node.get("href") or "").strip()
-                away.append(bool(href) and not href.startswith("#"))
+                away.append(bool(href) and "#" not in href)  # not to a place in a page
             text = node.text
         else:
             if tag == "a":
@@ -316,19 +316,21 @@ SNIPPET_MAX_WORDS = 80  # ... and so is the snippet under it
 SNIPPET_MIN_WORDS = 3
 BYLINE_MAX_WORDS = 6  # a date or a byline between a teaser's title and its snippet
 LIST_HEADING_MAX_WORDS = 6  # "Related articles", "More things to do", "See also"
+PAGE_MIN_WORDS = 15  # fewer left without the teaser lists: the lists are the page
 
 
 def _card(blocks: Sequence[Block], i: int) -> int:
     """The number of blocks of a teaser card starting at ``blocks[i]`` (0: none): a title
     that is wholly a link to another page followed by a short unlinked snippet (or by a
-    date or a byline and a snippet), or one block that begins
-    with such a link and goes on unlinked ("Title - snippet ...")."""
+    date or a byline and a snippet; a snippet is a paragraph, never a heading nor a term's
+    definition), or a list item that begins with such a link and goes on unlinked ("Title
+    - snippet ...": negative, such cards count only in a run of ``TEASER_MIN_CARDS``)."""
     block = blocks[i]
     size = len(block.text.split())
     if block.lead >= 0.9 and size <= TITLE_MAX_WORDS:
-        def snippet(j: int, least: int) -> bool:
+        def snippet(j: int, least: int) -> bool:  # not a heading, nor a term's definition
             return j < len(blocks) and blocks[j].links < 0.5 and blocks[j].lead == 0 and \
-                blocks[j].kind != "heading" and \
+                blocks[j].kind == "text" and \
                 least <= len(blocks[j].text.split()) <= SNIPPET_MAX_WORDS
 
         if snippet(i + 1, 1) and len(blocks[i + 1].text.split()) <= BYLINE_MAX_WORDS and \
@@ -336,9 +338,9 @@ def _card(blocks: Sequence[Block], i: int) -> int:
             return 3  # a title, a date or a byline, a snippet
         if snippet(i + 1, SNIPPET_MIN_WORDS):
             return 2
-    if 0.05 <= block.lead < 0.9 and block.links < 0.6 and \
+    if block.kind == "item" and 0.05 <= block.lead < 0.9 and block.links < 0.6 and \
             SNIPPET_MIN_WORDS + 1 <= size <= SNIPPET_MAX_WORDS + TITLE_MAX_WORDS:
-        return 1
+        return -1  # a list item: counts in a run of TEASER_MIN_CARDS only
     return 0
 
 
@@ -353,18 +355,21 @@ def teaser_lists(blocks: Sequence[Block]) -> set[int]:
     found: set[int] = set()
     i = 0
     while i < len(blocks):
-        start, cards = i, 0
+        start, cards, items = i, 0, 0
         while i < len(blocks) and (size := _card(blocks, i)):
-            i += size
+            i += abs(size)
             cards += 1
+            items += size < 0
         before = start - 1
         headed = before >= 0 and blocks[before].links < 0.5 and \
             len(blocks[before].text.split()) <= LIST_HEADING_MAX_WORDS
+        if headed and blocks[before].kind == "heading" and blocks[before].main:
+            headed = False  # a heading of the main text (a page's title) is no list's
         # a shorter run counts under a heading of its own ("Related articles") and
         # before another short heading, a link or the end of the page
         closed = i >= len(blocks) or blocks[i].links >= 0.5 or \
             len(blocks[i].text.split()) <= LIST_HEADING_MAX_WORDS
-        if cards >= TEASER_MIN_CARDS or (cards and headed and closed):
+        if cards >= TEASER_MIN_CARDS or (cards and not items and headed and closed):
             found.update(range(start, i))
             if headed:
                 found.add(before)
@@ -375,7 +380,8 @@ def teaser_lists(blocks: Sequence[Block]) -> set[int]:
 def without_teasers(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Block, ...]]:
     """``text`` without the lines of the page's teaser lists (:func:`teaser_lists`), the
     blocks marked ``nav``; a line whose words are also a block outside any teaser list
-    stays."""
+    stays. A page that would keep fewer than ``PAGE_MIN_WORDS`` words keeps its text (the
+    lists are the page: an index, a table of contents) and no block is marked."""
     nav = teaser_lists(blocks)
     if not nav:
         return text, blocks
@@ -388,7 +394,10 @@ def without_teasers(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Bl
         if cells and all(cell in gone for cell in cells):
             continue
         kept.append(line)
-    return "\n".join(kept), marked
+    rest = "\n".join(kept)
+    if len(rest.split()) < PAGE_MIN_WORDS:  # the list is the page (an index, a contents)
+        return text, blocks
+    return rest, marked
 
 
 def with_title(text: str, blocks: tuple[Block, ...], root: lxml.etree._Element
