@@ -70,7 +70,7 @@ MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilat
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
 SHAPE_MAX_WORDS = 12  # a line with numbers this short may be a per-page template line
 MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
-SANDWICH_MAX = 3  # template blocks in a row kept between two blocks of the page's own
+SANDWICH_MAX = 6  # template blocks in a row kept between two blocks of the page's own
 
 
 def site_of(source_url: str | None) -> str | None:
