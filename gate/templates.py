@@ -68,7 +68,8 @@ MAIN_RATIO = 0.5
 TEMPLATE_SHARE = 0.3  # template share of an unplaceable text that makes it give way
 MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilatura's text
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
-SHAPE_MAX_WORDS = 12  # a line with numbers this short may be a per-page template line
+SHAPE_MIN_WORDS = 3  # a line with numbers this short (3-12 words) may be a per-page
+SHAPE_MAX_WORDS = 12  # template line ("Updated 34 days ago"); a title "Notice 2" is not
 MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
 SANDWICH_MAX = 6  # template blocks in a row kept between two blocks of the page's own
 
@@ -87,9 +88,10 @@ def site_of(source_url: str | None) -> str | None:
 def shape_hash(text: str) -> int | None:
     """The hash of a short line's words with every word holding a digit made one and the
     same ("Updated 153 days ago" and "Updated 4 days ago" alike); None for a block that
-    is not such a line (see :data:`SHAPE_MAX_WORDS`)."""
+    is not such a line (3 to 12 words, a digit among them, and not only numbers)."""
     tokens = words(text)
-    if not 2 <= len(tokens) <= SHAPE_MAX_WORDS or not any(c.isdigit() for c in text):
+    if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS or \
+            not any(c.isdigit() for c in text):
         return None
     shape = " ".join("#" if any(c.isdigit() for c in t) else t for t in tokens)
     if shape.count("#") == len(tokens):

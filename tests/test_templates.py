@@ -554,6 +554,7 @@ def test_short_lines_whose_numbers_change_from_page_to_page_are_template():
     # a line of one wording on every page is the exact rule's, not a shape
     assert templates.shape_hash("Open 9 to 5") is not None
     assert templates.shape_hash("2024") is None and templates.shape_hash("Opening hours") is None
+    assert templates.shape_hash("Notice 2") is None  # a numbered title is too short
 
 
 def test_glossaries_in_page_contents_and_sentences_that_begin_with_a_link_are_text():
@@ -576,3 +577,20 @@ def test_glossaries_in_page_contents_and_sentences_that_begin_with_a_link_are_te
     index = "<html><body>" + TEASERS + "</body></html>"
     got = extract(index.encode(), max_pages=10, max_nesting=100)
     assert prose(201, 14) in got.text and not any(b.nav for b in got.blocks)
+
+
+def test_an_export_line_with_the_pages_address_and_date_is_learnt_as_template():
+    # invented text exports of one host: the first line names each page's own address
+    # and export date; written-out addresses are not words, so the line's shape recurs
+    def page(i):
+        text = (f"Exported from https://exports.example.net/n/notice-{i}.htm on "
+                f"2026-0{1 + i % 9}-1{i % 10}\n\nNotice {i}\n{prose(500 + i, 40)}")
+        blocks = extract(text.encode(), max_pages=10, max_nesting=100).blocks
+        return text, blocks, templates.Page.of("exports.example.net text",
+                                               templates.block_summary(blocks))
+    pages = [page(i) for i in range(5)]
+    learnt = templates.learn([p for _t, _b, p in pages])
+    text, blocks, mine = pages[2]
+    cleaned, _info = templates.compose(text, blocks, templates.removal(mine, learnt))
+    assert cleaned.split("\n")[0] == "Notice 2"
+    assert words("Source: https://x.example.org/a-2.htm") == ["source"]
