@@ -237,6 +237,7 @@ class Hit:
     end: int
     lang: str
     why: str
+    distinct: bool = False  # a task request sharing (almost) no content word with its document
 
 
 _SIGNS = {
@@ -560,8 +561,10 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
                 why.append(f"it stands {'alone' if place == 'alone' else 'at the ' + place}")
             if any(f & {"ai", "when", "drop"} for f in feats.values()):
                 weight += 0.1
+            n = len(set(words))
             hits.append(Hit("task-hijack", round(min(weight, 0.6), 4), start, end, "",
-                            "; ".join(why)))
+                            "; ".join(why), (n >= 4 and shared == 0) or
+                            (n >= 8 and overlap <= 0.15)))
     return hits
 
 
@@ -703,8 +706,27 @@ def _scan_folded(text: str, folded: str, words: set[str] | None = None,
             why += f"; it stands {'alone' if place == 'alone' else 'at the ' + place}"
         hits.append(Hit(signal, round(weight, 4), start, end, lang, why))
         seen[start] = end  # read already: not read again as a task request
-    hits.extend(hijack_hits(text, folded, seen, tasks))
+    hits.extend(_alone_or_listed(hijack_hits(text, folded, seen, tasks)))
     return hits
+
+
+HIJACK_ALONE = 0.15  # the only request for unrelated work in a document weighs more
+HIJACK_LISTED = 0.6  # one of many weighs less: the document is a list of tasks
+HIJACK_LIST_MIN = 3
+
+
+def _alone_or_listed(hijacks: list[Hit]) -> list[Hit]:
+    """A planted request stands out as the only one of its kind; a document of writing
+    prompts, exercises or assignments holds many."""
+    if len(hijacks) == 1 and hijacks[0].distinct:
+        h = hijacks[0]
+        h.weight = round(min(h.weight + HIJACK_ALONE, 0.6), 4)
+        h.why += "; the only request for unrelated work in the document"
+    elif len(hijacks) >= HIJACK_LIST_MIN:
+        for h in hijacks:
+            h.weight = round(h.weight * HIJACK_LISTED, 4)
+            h.why += f"; one of {len(hijacks)} such requests (a list of tasks)"
+    return hijacks
 
 
 def _alternate(text: str, found: list[Hit]) -> list[Hit]:

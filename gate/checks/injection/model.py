@@ -36,6 +36,11 @@ MIN_FEATURES = 10  # units with fewer feature occurrences (about four words) are
 MAX_CHARS = 150_000
 MAX_REPORTED = 4
 MAX_TRIED = 40  # windows looked at, strongest first
+# Text a reader never sees (hidden markup, decoded payloads) has no business sounding like a
+# request at all: there a window from this probability on is supporting evidence, which the
+# concealment that carries it turns into a finding.
+HIDDEN_FLOOR = 0.6
+HIDDEN_WEIGHT = 0.3
 _PAIR_MULT = np.uint64(0x9E3779B1)
 _MASK = np.uint64(DIM - 1)
 
@@ -246,13 +251,13 @@ class Model:
         """Would a window of this text be an instruction on its own (validation)?"""
         return any(self.weight(r) >= 0.5 for r in self.read(folded))
 
-    def read(self, folded: str) -> list[Reading]:
-        """The strongest non-overlapping windows at or above ``low``."""
+    def read(self, folded: str, floor: float | None = None) -> list[Reading]:
+        """The strongest non-overlapping windows at or above ``low`` (or ``floor``)."""
         folded = folded[:MAX_CHARS]
         firsts, lengths, logits = self.unit_scores(folded)
         if not len(logits):
             return []
-        floor = min(self.low, self.addressed)
+        floor = min(self.low, self.addressed, floor or 1.0)
         cut = np.log(floor / (1.0 - floor))
         hot = np.nonzero(logits >= cut)[0]
         if not len(hot):
@@ -290,7 +295,11 @@ def addressed(folded_window: str) -> bool:
     """Does a window name an AI reader (any of the 24 languages of the lexicon), or the
     reader's answer together with "you", the user or the reader's activity?"""
     from gate.checks.injection import directive
-    feats, _ = directive.features(folded_window[:directive.MAX_UNIT])
+    unit = folded_window[:directive.MAX_UNIT]
+    feats, _ = directive.features(unit)
+    if directive.REFERENCED.search(unit) and not directive.ADDRESSED.search(unit) and \
+            "vocative" not in feats.get("*", ()):
+        return False  # "Guidelines for using AI assistants": talked about, not talked to
     return any(cats & {"ai", "bot"} or ("out" in cats and cats & {"you", "user", "when"})
                for cats in feats.values())
 

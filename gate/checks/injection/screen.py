@@ -44,9 +44,22 @@ ACTION_SIGNALS = frozenset({"harmful-code", "tool-call"})
 CHAT_LOG_SIGNALS = frozenset({"fake-notice", "model-address", "chat-markup"})
 CHAT_LOG_DAMPING = 0.4
 CHAT_LOG_NOTE = "a speaker or event line of a chat log"
-_CHAT_LINE = re.compile(r"(?m)^[ \t>*_]*([\[(<]?)[ \t]*(system|assistant|agent|user|customer|bot|"
+_CHAT_LINE = re.compile(r"(?m)^[ \t>*_]*(?:[\[(]?\d{1,2}:\d{2}(?::\d{2})?[\])]?[ \t]+)?"
+                        r"([\[(<]?)[ \t]*(system|assistant|agent|user|customer|bot|"
                         r"support|moderator|operator|visitor|client)[ \t]*[\])>]?[*_]*[ \t]*"
                         r"(?:\(\d{1,2}:\d{2}(?::\d{2})?\))?[*_ \t]*[:\]]?")
+# A window whose instruction sits inside quotation marks while the words around the
+# quotation do not read as one ("A datasheet ended with the line \"Note for AI ...\"") reports
+# an instruction, as security training and incident write-ups do.
+QUOTE_REPORT_DAMPING = 0.35
+QUOTE_REPORT_NOTE = "the instruction is quoted; the words around it report it"
+_SENTENCE_END = re.compile("[.!?\u3002\uff01\uff1f\u061f\u0964](?:\\s|$)")
+EXAMPLE_HEAD_DAMPING = 0.5
+QUOTE_REPORT_SHARE = 0.3  # at least this share of the window is inside quotation marks
+QUOTE_REPORT_WORDS = 5  # ... and at least this many words are outside them
+_QUOTATION = re.compile(r'"[^"\n]{6,}?"|\u201c[^\u201d]{6,}?\u201d|\u00ab[^\u00bb]{6,}?\u00bb|'
+                        r'\u201e[^\u201c\u201d]{6,}?[\u201c\u201d]|\u300c[^\u300d]{4,}?\u300d|'
+                        r'(?<!\w)\'[^\'\n]{6,}?\'(?!\w)')
 _CODE_CHARS = re.compile(r"[(){};=<>\[\]$]|\b(?:def|import|return|function|var|let)\b")
 _MD_COMMENT = re.compile(r"<!--(.{0,20000}?)-->", re.S)
 
@@ -228,9 +241,14 @@ class Screen:
         for a in actions.scan(text, folded, words):
             found.append((a.signal, a.weight, a.start, a.end, a.why, None, a.detail or None))
         learnt = model.model()
-        for r in learnt.read(folded):
+        for r in learnt.read(folded, None if visible_text else model.HIDDEN_FLOOR):
             what = "sentence reads" if r.sentences == 1 else f"{r.sentences} sentences read"
-            found.append(("instruction", learnt.weight(r), r.start, r.end,
+            weight = learnt.weight(r)
+            if not visible_text and r.probability < learnt.low:
+                if not _SENTENCE_END.search(folded, r.start, min(len(folded), r.end + 1)):
+                    continue  # a title or label ("Guidance note: ..."), not a request
+                weight = max(weight, model.HIDDEN_WEIGHT)
+            found.append(("instruction", weight, r.start, r.end,
                           f"the {what} as an instruction to the assistant (model score "
                           f"{r.probability:.2f})", None, {"model_probability": r.probability}))
         if not found:
@@ -250,10 +268,21 @@ class Screen:
             if visible_text and self.topic:
                 weight *= TOPIC_DAMPING * 0.8
                 why = f"{why}; the document discusses the topic"
-            if visible_text and self.chat_log and signal in CHAT_LOG_SIGNALS and \
-                    _speaker(folded, start):
+            if visible_text and self.chat_log and _speaker(folded, start) and (
+                    signal in CHAT_LOG_SIGNALS or (signal == "instruction" and detail and
+                                                   detail["model_probability"] <
+                                                   learnt.threshold)):
                 weight *= CHAT_LOG_DAMPING
                 why = f"{why}; {CHAT_LOG_NOTE}"
+            if visible_text and signal == "instruction" and \
+                    EXAMPLE_HEAD.match(folded, start, folded.find("\n", start, end) % (end + 1)):
+                weight *= EXAMPLE_HEAD_DAMPING
+                why = f"{why}; under a heading that presents an example"
+            if visible_text and signal == "instruction":
+                rest = _unquoted_rest(folded, start, end)
+                if rest is not None and learnt.probability(rest) < learnt.low:
+                    weight *= QUOTE_REPORT_DAMPING
+                    why = f"{why}; {QUOTE_REPORT_NOTE}"
             same = [h for s, e, h in by_span if s < end and start < e and
                     (h["signal"] == signal or h["weight"] >= weight)]
             if same:  # a phrase rule read these words already: its span is tighter
@@ -389,6 +418,42 @@ def _is_chat_log(folded: str) -> bool:
         if bracketed >= 2 or (lines >= 3 and len(roles) >= 2):
             return True
     return False
+
+
+def _unquoted_rest(folded: str, start: int, end: int) -> str | None:
+    """The words of ``folded[start:end]`` outside quotation marks, when quotations make up
+    at least :data:`QUOTE_REPORT_SHARE` of it and :data:`QUOTE_REPORT_WORDS` words are left
+    outside; None otherwise. A quotation still open at the end of the window runs to it."""
+    window = folded[start:end]
+    if not any(q in window for q in "\"'\u201c\u201e\u00ab\u300c"):
+        return None
+    parts, inside, at = [], 0, 0
+    for m in _QUOTATION.finditer(window):
+        parts.append(window[at:m.start()])
+        inside += m.end() - m.start()
+        at = m.end()
+    tail = window[at:]
+    if tail.count('"') % 2 == 1:  # an open quotation running past the window
+        cut = tail.index('"')
+        inside += len(tail) - cut
+        tail = tail[:cut]
+    parts.append(tail)
+    rest = " ".join(parts)
+    if inside < QUOTE_REPORT_SHARE * len(window) or (
+            len(rest.split()) < QUOTE_REPORT_WORDS and not _REPORTING.search(rest)):
+        return None
+    return rest
+
+
+# Words that introduce a quotation in a report ("a wiki page stated: ...").
+_REPORTING = re.compile(r"\b(?:stated|said|says|wrote|writes|read|reads|reading|contained|"
+                        r"contains|included|includes|asked|told|claimed|ended\s+with|began\s+with|"
+                        r"like|as\s+follows|schrieb|lautete|stand|disait|decia|diceva|dizia|"
+                        r"luidde|brzmial|gloszac|gl\w+|stod|stand|гласил|написано)\b")
+# A heading that presents what follows as an example or a case ("### Example: ...").
+EXAMPLE_HEAD = re.compile(r"[#*=\-\s]*(?:example|sample|case(?:\s+study)?|scenario|incident|"
+                          r"quiz|question|exercise|beispiel|exemple|ejemplo|esempio|exemplo|"
+                          r"voorbeeld|przyklad|exempel)\b[^\n]{0,80}$")
 
 
 def _snippet(text: str, start: int, end: int) -> str:
