@@ -136,6 +136,8 @@ def snippets(units: Units, stats: Counter) -> list[dict]:
             text = item["text"]
             if label:  # the request is the instruction; its code would teach "import os"
                 text = "\n".join(ln for ln in text.splitlines() if not _CODE_LINE.search(ln))
+                # ... and its inline commands "rm -rf" (harmful code is judged by actions.py)
+                text = _INLINE_CODE.sub(" ", text)
             source = "extra" if path.name.startswith("extra") else "snippet"
             units.add_text(text, label, f"{source}/{item['class']}", "")
             stats[f"snippets train {item['label']}"] += 1
@@ -146,6 +148,7 @@ _TAG = re.compile(r"<[^>]*>", re.S)
 # Code lines of a payload (the request to include them is the prose around them).
 _CODE_LINE = re.compile(r"[=(){};]\s*$|^\s*(?:import|def|from|curl|wget|\$|#!|//)|\w\(.*\)|"
                         r"^[\w.]+\s*=")
+_INLINE_CODE = re.compile(r"`[^`\n]{1,200}`")
 _ATTR = re.compile(r"=\s*\"([^\"]{12,})\"")
 
 

@@ -180,6 +180,7 @@ EN_OUT_VERBS = frozenset(("reply", "respond", "answer", "summarize", "summarise"
 # Words that may come before a noun of address ("Dear AI,", "Note to the assistant:").
 VOCATIVE_LEAD = frozenset(fold_entry(w) for w in (
     "dear hey hi hello note notes to for attention attn the all any an a ps p s message "
+    "language large automated artificial intelligence virtual digital "
     "notice reminder important and editors readers liebe lieber liebes hallo an die den "
     "hinweis notiz cher chere cheres pour l remarque querido querida queridos hola para el "
     "la aviso caro cara cari nota per avviso prezado prezada ola beste voor de opmerking "
@@ -282,6 +283,7 @@ ADDRESSED = re.compile(
     r"(?:that\s+(?:is|are)\s+|who\s+(?:is|are)\s+)?(?:reading|processing|parsing|"
     r"summari[sz]ing|crawling|indexing|analy[sz]ing|ingesting|scanning|viewing|answering)|"
     r"\b(?:dear|hey|hello|hi|attention|note\s+(?:to|for)|to)\s+(?:the\s+|all\s+|any\s+)?"
+    r"(?:language\s+|ai\s+|large\s+language\s+)?"
     r"(?:ai|assistant|model|bot|llm|chatbot|agent|crawler|summari[sz]er)s?\b")
 
 # "... in any review you generate": the reader's output named by what it produces.
@@ -463,7 +465,8 @@ _AFTER_BOUNDARY = re.compile(r"[\n.!?:;|\t]" + _OPENING)
 _AT_START = re.compile(r"^" + _OPENING)
 _OBJECT = re.compile(
     r"\s+(?:me|us|mir|moi|mi|mnie|mig|мне|мені|nekem|bana|μου|a|an|some|the|one|"
-    r"\d+|two|three|five|ten|several|ein|eine|einen|drei|funf|un|une|des|trois|cinq|uno|una|"
+    r"\d+|two|three|four|five|six|seven|eight|nine|ten|twelve|twenty|several|ein|eine|"
+    r"einen|drei|funf|un|une|des|trois|cinq|uno|una|"
     r"unos|tres|cinco|uma|um|een|drie|vijf|jeden|jedna|trzy|en|ett|tre|fem|один|одну|три|"
     r"пять|tri|o|trei|egy|harom|ena|μια|ενα|τρια|bir|uc|bes|sebuah|tiga|lima|mot|ba)\b")
 
@@ -513,7 +516,7 @@ _STOP = frozenset(fold_entry(w) for w in (
     "een, dat, niet").split(", "))
 
 
-def _content(folded_unit: str) -> list[str]:
+def content_words(folded_unit: str) -> list[str]:
     """Content words, cut to a crude stem ("baked" and "bake" share "bake")."""
     words = re.findall(r"[^\W\d_]{4,}", folded_unit)
     return [w[:4] if len(w) <= 6 else w[:5] for w in words if w not in _STOP]
@@ -534,7 +537,7 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
             unit = folded[start:end]
             if vstart - start > 40 or len(unit) > 400:
                 continue
-            words = _content(unit[vend - start:])
+            words = content_words(unit[vend - start:])
             if _SUB_SCRIPT.search(unit):
                 chars = [unit[i:i + 2] for i in range(vend - start, len(unit) - 1)
                          if _SUB_SCRIPT.match(unit[i])]
@@ -681,6 +684,9 @@ def _scan_folded(text: str, folded: str, words: set[str] | None = None,
                 "here" not in reading[3] and "vocative" not in reading[3] and \
                 REFERENCED.search(unit) and not ADDRESSED.search(unit):
             reading = (reading[0], 0.35, reading[2], reading[3])  # talked about, not to
+        if reading is not None and reading[0] in ("model-address", "answer-steering") and \
+                reading[1] < 0.5 and "ask" in reading[3] and ADDRESSED.search(unit):
+            reading = ("model-address", 0.55, reading[2], reading[3] | {"vocative"})
         if reading is None and FORMAT.search(unit) and OPERATED.search(unit):
             reading = ("answer-steering", 0.5, "en", {"out", "ask"})
         if (reading is None or reading[1] < 0.5) and NEW_TASK.search(unit):

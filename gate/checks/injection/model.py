@@ -39,8 +39,12 @@ MAX_TRIED = 40  # windows looked at, strongest first
 # Text a reader never sees (hidden markup, decoded payloads) has no business sounding like a
 # request at all: there a window from this probability on is supporting evidence, which the
 # concealment that carries it turns into a finding.
-HIDDEN_FLOOR = 0.6
+HIDDEN_FLOOR = 0.7
 HIDDEN_WEIGHT = 0.3
+# In visible text a window from this probability on is an instruction when its content
+# words occur nowhere else in the document: a request about something else, planted.
+DISCONTINUITY_FLOOR = 0.6
+DISCONTINUITY_WEIGHT = 0.5
 _PAIR_MULT = np.uint64(0x9E3779B1)
 _MASK = np.uint64(DIM - 1)
 

@@ -241,16 +241,26 @@ class Screen:
         for a in actions.scan(text, folded, words):
             found.append((a.signal, a.weight, a.start, a.end, a.why, None, a.detail or None))
         learnt = model.model()
-        for r in learnt.read(folded, None if visible_text else model.HIDDEN_FLOOR):
+        for r in learnt.read(folded, model.HIDDEN_FLOOR if not visible_text else
+                             model.DISCONTINUITY_FLOOR):
             what = "sentence reads" if r.sentences == 1 else f"{r.sentences} sentences read"
             weight = learnt.weight(r)
-            if not visible_text and r.probability < learnt.low:
+            why = (f"the {what} as an instruction to the assistant (model score "
+                   f"{r.probability:.2f})")
+            if r.probability < learnt.low:
                 if not _SENTENCE_END.search(folded, r.start, min(len(folded), r.end + 1)):
                     continue  # a title or label ("Guidance note: ..."), not a request
-                weight = max(weight, model.HIDDEN_WEIGHT)
-            found.append(("instruction", weight, r.start, r.end,
-                          f"the {what} as an instruction to the assistant (model score "
-                          f"{r.probability:.2f})", None, {"model_probability": r.probability}))
+                if not visible_text:
+                    weight = max(weight, model.HIDDEN_WEIGHT)
+                else:
+                    apart = _discontinuous(folded, r.start, r.end)
+                    if apart is None:
+                        continue
+                    weight = model.DISCONTINUITY_WEIGHT
+                    why += (f"; {apart[0]} of its {apart[1]} content words occur elsewhere in "
+                            "the document")
+            found.append(("instruction", weight, r.start, r.end, why, None,
+                          {"model_probability": r.probability}))
         if not found:
             return []
         out = []
@@ -280,7 +290,8 @@ class Screen:
                 why = f"{why}; under a heading that presents an example"
             if visible_text and signal == "instruction":
                 rest = _unquoted_rest(folded, start, end)
-                if rest is not None and learnt.probability(rest) < learnt.low:
+                if rest is not None and learnt.probability(rest) < learnt.low and \
+                        not model.addressed(rest):  # "Note for AI: say '...'" is no report
                     weight *= QUOTE_REPORT_DAMPING
                     why = f"{why}; {QUOTE_REPORT_NOTE}"
             same = [h for s, e, h in by_span if s < end and start < e and
@@ -418,6 +429,34 @@ def _is_chat_log(folded: str) -> bool:
         if bracketed >= 2 or (lines >= 3 and len(roles) >= 2):
             return True
     return False
+
+
+DISCONTINUITY_WORDS = 5  # content words a window needs to be judged against its document
+DISCONTINUITY_SHARE = 0.2  # at most this share of them may occur elsewhere
+DISCONTINUITY_REST = 300  # characters the rest of the document needs
+_LIST_ITEM = re.compile(r"[ \t]*(?:[*\-\u2022+]|\d{1,2}[.)])[ \t]")
+_CJK_LIKE = re.compile(r"[\u3040-\u30ff\u3400-\u9fff\uac00-\ud7a3\uf900-\ufaff]")
+
+
+def _discontinuous(folded: str, start: int, end: int) -> tuple[int, int] | None:
+    """(shared, total) content words of ``folded[start:end]`` when almost none of them
+    occur in the rest of the document (a sentence about something else); None otherwise."""
+    rest = folded[:start] + " " + folded[end:]
+    if len(rest) < DISCONTINUITY_REST or not folded[:start].strip() or \
+            _LIST_ITEM.match(folded, folded.rfind("\n", 0, start) + 1):
+        return None  # the title and first lines, or an item of a list: their own topic
+    unit = folded[start:end]
+    if _CJK_LIKE.search(unit):
+        words = {unit[i:i + 2] for i in range(len(unit) - 1)
+                 if _CJK_LIKE.match(unit[i]) and _CJK_LIKE.match(unit[i + 1])}
+    else:
+        words = set(directive.content_words(unit))
+    if len(words) < DISCONTINUITY_WORDS:
+        return None
+    shared = sum(1 for w in words if w in rest)
+    if shared > DISCONTINUITY_SHARE * len(words):
+        return None
+    return shared, len(words)
 
 
 def _unquoted_rest(folded: str, start: int, end: int) -> str | None:
