@@ -286,6 +286,15 @@ ADDRESSED = re.compile(
     r"(?:language\s+|ai\s+|large\s+language\s+)?"
     r"(?:ai|assistant|model|bot|llm|chatbot|agent|crawler|summari[sz]er)s?\b")
 
+def _addresses(unit: str) -> bool:
+    """Does the sentence open by addressing an automated reader ("Note to language models:",
+    "If you are a bot summarising this, ...")? Further in, "give instructions to the AI
+    assistant" talks about one."""
+    m = ADDRESSED.search(unit)
+    return bool(m and (m.start() <= 25 or unit.startswith(("if", "when", "since", "as",
+                                                           "because"), m.start())))
+
+
 # "... in any review you generate": the reader's output named by what it produces.
 GENERATED = re.compile(
     r"\b(?:any|every|each|all|the)\s+(?:\w+\s+){0,2}?(?:answers?|responses?|repl(?:y|ies)|"
@@ -313,6 +322,16 @@ NEW_TASK = re.compile(
 
 _STOPS = {lang: frozenset(fold_entry(w) for w in spec.split())
           for lang, spec in lexicon.STOPWORDS.items()}
+
+
+STOPS = _STOPS
+
+
+def spoken(tokens: list[str]) -> set[str]:
+    """The languages with the most function words among ``tokens`` (ties kept)."""
+    counts = {lang: sum(1 for t in tokens if t in stops) for lang, stops in _STOPS.items()}
+    top = max(counts.values(), default=0)
+    return {lang for lang, n in counts.items() if n == top} if top else set()
 
 
 def read_unit(feats: dict[str, set[str]], tokens: list[str] | None = None
@@ -685,7 +704,7 @@ def _scan_folded(text: str, folded: str, words: set[str] | None = None,
                 REFERENCED.search(unit) and not ADDRESSED.search(unit):
             reading = (reading[0], 0.35, reading[2], reading[3])  # talked about, not to
         if reading is not None and reading[0] in ("model-address", "answer-steering") and \
-                reading[1] < 0.5 and "ask" in reading[3] and ADDRESSED.search(unit):
+                reading[1] < 0.5 and "ask" in reading[3] and _addresses(unit):
             reading = ("model-address", 0.55, reading[2], reading[3] | {"vocative"})
         if reading is None and FORMAT.search(unit) and OPERATED.search(unit):
             reading = ("answer-steering", 0.5, "en", {"out", "ask"})

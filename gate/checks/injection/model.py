@@ -300,12 +300,16 @@ def addressed(folded_window: str) -> bool:
     reader's answer together with "you", the user or the reader's activity?"""
     from gate.checks.injection import directive
     unit = folded_window[:directive.MAX_UNIT]
-    feats, _ = directive.features(unit)
+    feats, tokens = directive.features(unit)
     if directive.REFERENCED.search(unit) and not directive.ADDRESSED.search(unit) and \
             "vocative" not in feats.get("*", ()):
         return False  # "Guidelines for using AI assistants": talked about, not talked to
+    # Only the languages the window is written in (by their function words) are read:
+    # Italian "ai" ("to the") and "modelli di shell" name no AI reader.
+    spoken = directive.spoken(tokens)
     return any(cats & {"ai", "bot"} or ("out" in cats and cats & {"you", "user", "when"})
-               for cats in feats.values())
+               for lang, cats in feats.items()
+               if lang == "*" or not spoken or lang in spoken)
 
 
 def _sigmoid(x: float | np.ndarray) -> float | np.ndarray:

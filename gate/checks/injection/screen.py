@@ -55,6 +55,18 @@ QUOTE_REPORT_DAMPING = 0.35
 QUOTE_REPORT_NOTE = "the instruction is quoted; the words around it report it"
 _SENTENCE_END = re.compile("[.!?\u3002\uff01\uff1f\u061f\u0964](?:\\s|$)")
 EXAMPLE_HEAD_DAMPING = 0.5
+QUOTED_URL_DAMPING = 0.35
+# Narration of what an instruction did ("it asked the assistant to add ..."): third person
+# and past tense about the reader, as incident reports write; a planted line speaks to it.
+REPORTED = re.compile(r"\b(?:asked|told|instructed|directed|ordered|tricked|convinced|"
+                      r"persuaded|caused|made|got|urged|wanted)\s+(?:the|an?|our|their|any)\s+"
+                      r"(?:\w+\s+)?(?:assistants?|models?|ai|bots?|agents?|chatbots?|llms?|"
+                      r"summari[sz]ers?)\s+(?:to|into)\b")
+REPORTED_DAMPING = 0.5
+REPORTED_NOTE = "it reports what an instruction asked of an assistant"
+# Damped mentions (quoted, reported, given as an example) of one sentence count once.
+_MENTION_NOTES = ("quoted", "given as an example", "presents an example", REPORTED_NOTE,
+                  "the words around it report it")
 QUOTE_REPORT_SHARE = 0.3  # at least this share of the window is inside quotation marks
 QUOTE_REPORT_WORDS = 5  # ... and at least this many words are outside them
 _QUOTATION = re.compile(r'"[^"\n]{6,}?"|\u201c[^\u201d]{6,}?\u201d|\u00ab[^\u00bb]{6,}?\u00bb|'
@@ -165,10 +177,14 @@ class Screen:
         content.extend(self._sentences(source, text, visible_text, content))
         for u in exfil.scan(text, links):
             weight = u.weight * (TOPIC_DAMPING if visible_text and self.topic else 1.0)
+            why = u.why
+            if visible_text and u.start >= 0 and wording._quoted(text, u.start, u.end):
+                weight *= QUOTED_URL_DAMPING  # an address quoted in a report or lesson
+                why = f"{why}; quoted"
             if u.start >= 0:
                 content.append(self._hit(source, "exfil-url", round(weight, 4), u.start, u.end,
-                                         text, note=u.why, detail={"url": visible(u.url, 200),
-                                                                   "kind": u.kind}))
+                                         text, note=why, detail={"url": visible(u.url, 200),
+                                                                 "kind": u.kind}))
             else:
                 hit = self._hit(source, "exfil-url", round(weight, 4), 0, 0, text, note=u.why,
                                 detail={"url": visible(u.url, 200), "kind": u.kind})
@@ -275,6 +291,9 @@ class Screen:
                 if mention:
                     weight *= factor
                     why = f"{why}; {mention}"
+                if signal == "instruction" and REPORTED.search(folded, start, end):
+                    weight *= REPORTED_DAMPING
+                    why = f"{why}; {REPORTED_NOTE}"
             if visible_text and self.topic:
                 weight *= TOPIC_DAMPING * 0.8
                 why = f"{why}; the document discusses the topic"
@@ -397,6 +416,7 @@ class Screen:
                 continue
             seen.add(key)
             kept.append(hit)
+        kept = _mentions_once(kept)
         kept.sort(key=lambda h: (-h["weight"], h["span"][0] if h["span"] else 1 << 60))
         for hit in kept:
             hit.pop("segment_span", None)
@@ -457,6 +477,30 @@ def _discontinuous(folded: str, start: int, end: int) -> tuple[int, int] | None:
     if shared > DISCONTINUITY_SHARE * len(words):
         return None
     return shared, len(words)
+
+
+def _mentions_once(hits: list[dict[str, Any]]) -> list[dict[str, Any]]:
+    """Of the damped mentions in the visible text whose spans overlap, keep the strongest:
+    one quoted sentence read by three detectors is still one quotation."""
+    mentions = [h for h in hits if h["technique"] is None and h["span"] and
+                any(n in (h.get("note") or "") for n in _MENTION_NOTES)]
+    if len(mentions) < 2:
+        return hits
+    mentions.sort(key=lambda h: -h["weight"])
+    dropped: set[int] = set()
+    for i, strong in enumerate(mentions):
+        if id(strong) in dropped:
+            continue
+        also = []
+        for weak in mentions[i + 1:]:
+            if id(weak) not in dropped and weak["span"][0] < strong["span"][1] and \
+                    strong["span"][0] < weak["span"][1]:
+                dropped.add(id(weak))
+                also.append(weak["signal"])
+        if also:
+            strong["note"] = "; ".join(x for x in (strong["note"], "also read as " + ", ".join(
+                sorted(set(also)))) if x)
+    return [h for h in hits if id(h) not in dropped]
 
 
 def _unquoted_rest(folded: str, start: int, end: int) -> str | None:
