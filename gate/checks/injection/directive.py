@@ -320,6 +320,25 @@ NEW_TASK = re.compile(
     r"진짜\s+임무|새로운\s+임무|tugas(?:mu)?\s+(?:sebenarnya|baru)")
 
 
+# The reader's task swapped for another: "ignore the document and instead ...", "forget
+# this page and ...", "disregard any earlier policy documents you have read".
+TASK_SWAP = re.compile(
+    r"\b(?:ignore|disregard|forget|skip|set\s+aside|leave\s+aside|never\s+mind)\s+"
+    r"(?:all\s+of\s+|any\s+of\s+)?(?:the|this|that|these|those|everything|all)\s+"
+    r"(?:\w+\s+){0,2}?(?:document|page|text|article|e-?mail|message|content|file|report|"
+    r"passage|above|material|thread|context)s?\b[^.\n]{0,30}?\b(?:instead|rather)\b|"
+    r"\binstead\s+of\s+(?:summari[sz]ing|answering|describing|translating)\s+(?:this|the)\b|"
+    r"\b(?:ignore|disregard|forget)\s+(?:any|all|the)\s+(?:earlier|previous|prior|other|"
+    r"older)\s+(?:\w+\s+)?(?:documents?|sources?|policies|texts?|guidance|information)\b"
+    r"[^.\n]{0,40}?\b(?:you\s+(?:have\s+)?(?:read|seen|received|been\s+given|found)|"
+    r"this\s+(?:text|document|page|note|file)\s+is)|"
+    r"\bignorier\w*\s+(?:das|dieses|den|diesen)\s+(?:dokument|text|artikel|seite)\w*"
+    r"[^.\n]{0,30}?\bstattdessen|"
+    r"\bignor\w*\s+(?:ce|le|cette|la)\s+(?:document|texte|article|page)[^.\n]{0,30}?"
+    r"\b(?:plutot|a\s+la\s+place)|"
+    r"\bignor\w*\s+(?:este|el|esta|la|este|o|questo|il)\s+(?:documento|texto|articulo|"
+    r"pagina|testo)[^.\n]{0,30}?\b(?:en\s+su\s+lugar|invece|em\s+vez|ao\s+inves)")
+
 _STOPS = {lang: frozenset(fold_entry(w) for w in spec.split())
           for lang, spec in lexicon.STOPWORDS.items()}
 
@@ -327,11 +346,12 @@ _STOPS = {lang: frozenset(fold_entry(w) for w in spec.split())
 STOPS = _STOPS
 
 
-def spoken(tokens: list[str]) -> set[str]:
-    """The languages with the most function words among ``tokens`` (ties kept)."""
+def spoken(tokens: list[str], least: int = 1) -> set[str]:
+    """The languages with the most function words among ``tokens`` (ties kept), when
+    that is at least ``least``."""
     counts = {lang: sum(1 for t in tokens if t in stops) for lang, stops in _STOPS.items()}
     top = max(counts.values(), default=0)
-    return {lang for lang, n in counts.items() if n == top} if top else set()
+    return {lang for lang, n in counts.items() if n == top} if top >= least else set()
 
 
 def read_unit(feats: dict[str, set[str]], tokens: list[str] | None = None
@@ -708,7 +728,8 @@ def _scan_folded(text: str, folded: str, words: set[str] | None = None,
             reading = ("model-address", 0.55, reading[2], reading[3] | {"vocative"})
         if reading is None and FORMAT.search(unit) and OPERATED.search(unit):
             reading = ("answer-steering", 0.5, "en", {"out", "ask"})
-        if (reading is None or reading[1] < 0.5) and NEW_TASK.search(unit):
+        if (reading is None or reading[1] < 0.5) and (NEW_TASK.search(unit) or
+                                                      TASK_SWAP.search(unit)):
             reading = ("override", 0.5, "", {"task"})
         if reading is None:
             continue

@@ -43,7 +43,8 @@ HIDDEN_FLOOR = 0.7
 HIDDEN_WEIGHT = 0.3
 # In visible text a window from this probability on is an instruction when its content
 # words occur nowhere else in the document: a request about something else, planted.
-DISCONTINUITY_FLOOR = 0.6
+DISCONTINUITY_FLOOR = 0.6  # windows read from here (another language counts from here)
+DISCONTINUITY_MIN = 0.7  # words found nowhere else count from here (inflected languages)
 DISCONTINUITY_WEIGHT = 0.5
 _PAIR_MULT = np.uint64(0x9E3779B1)
 _MASK = np.uint64(DIM - 1)

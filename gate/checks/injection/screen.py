@@ -263,18 +263,23 @@ class Screen:
             weight = learnt.weight(r)
             why = (f"the {what} as an instruction to the assistant (model score "
                    f"{r.probability:.2f})")
-            if r.probability < learnt.low:
-                if not _SENTENCE_END.search(folded, r.start, min(len(folded), r.end + 1)):
-                    continue  # a title or label ("Guidance note: ..."), not a request
-                if not visible_text:
-                    weight = max(weight, model.HIDDEN_WEIGHT)
-                else:
-                    apart = _discontinuous(folded, r.start, r.end)
-                    if apart is None:
-                        continue
+            ends = bool(_SENTENCE_END.search(folded, r.start, min(len(folded), r.end + 1)))
+            if visible_text and weight < 0.5:
+                # A supporting window becomes an instruction when it stands apart from its
+                # document: none of its words occur elsewhere, or another language.
+                apart = _discontinuous(folded, r.start, r.end) \
+                    if ends and r.probability >= model.DISCONTINUITY_MIN else None
+                other = None if apart else _other_language(folded, r.start, r.end)
+                if apart or other:
                     weight = model.DISCONTINUITY_WEIGHT
                     why += (f"; {apart[0]} of its {apart[1]} content words occur elsewhere in "
-                            "the document")
+                            "the document" if apart else f"; it is written in {other}")
+                elif r.probability < learnt.low:
+                    continue
+            elif not visible_text and weight < 0.5:
+                if not ends:
+                    continue  # a title or label ("Guidance note: ..."), not a request
+                weight = max(weight, model.HIDDEN_WEIGHT)
             found.append(("instruction", weight, r.start, r.end, why, None,
                           {"model_probability": r.probability}))
         if not found:
@@ -501,6 +506,55 @@ def _mentions_once(hits: list[dict[str, Any]]) -> list[dict[str, Any]]:
             strong["note"] = "; ".join(x for x in (strong["note"], "also read as " + ", ".join(
                 sorted(set(also)))) if x)
     return [h for h in hits if id(h) not in dropped]
+
+
+_SCRIPTS = (("Cyrillic", 0x0400, 0x04FF), ("Greek", 0x0370, 0x03FF), ("Hebrew", 0x0590, 0x05FF),
+            ("Arabic", 0x0600, 0x06FF), ("Devanagari", 0x0900, 0x097F), ("Thai", 0x0E00, 0x0E7F),
+            ("Hangul", 0xAC00, 0xD7AF), ("kana", 0x3040, 0x30FF), ("Han", 0x4E00, 0x9FFF))
+LANGUAGE_SAMPLE = 6000  # characters of the document read for its language
+BILINGUAL_LETTERS = 60  # a document with more letters of the window's script elsewhere
+BILINGUAL_WORDS = 8  # ... or more function words of its language is bilingual
+
+
+def _script(text: str) -> str:
+    """The script most letters of ``text`` are written in ("Latin" for ASCII letters)."""
+    counts: dict[str, int] = {}
+    for ch in text:
+        if not ch.isalpha():
+            continue
+        cp = ord(ch)
+        name = "Latin" if cp < 0x0250 else next(
+            (n for n, lo, hi in _SCRIPTS if lo <= cp <= hi), "other")
+        counts[name] = counts.get(name, 0) + 1
+    return max(counts, key=counts.__getitem__) if counts else ""
+
+
+def _other_language(folded: str, start: int, end: int) -> str | None:
+    """"another script (X) than the document's (Y)" or "another language than the
+    document" when a window is written in a script or language its document is not;
+    None otherwise (or when the document is too short to tell)."""
+    before, after = folded[max(0, start - LANGUAGE_SAMPLE // 2):start], \
+        folded[end:end + LANGUAGE_SAMPLE // 2]
+    rest = before + " " + after
+    if len(rest) < DISCONTINUITY_REST or not folded[:start].strip():
+        return None
+    window = folded[start:end]
+    mine, theirs = _script(window), _script(rest)
+    if mine and theirs and mine != theirs and "other" not in (mine, theirs):
+        # only where the rest holds (almost) none of that script: not a bilingual page
+        if sum(1 for ch in folded if ch.isalpha() and _script(ch) == mine) - \
+                sum(1 for ch in window if ch.isalpha()) > BILINGUAL_LETTERS:
+            return None
+        return f"another script ({mine}) than its document ({theirs})"
+    if mine == theirs == "Latin":
+        own = directive.spoken(directive.features(window[:directive.MAX_UNIT])[1], 3)
+        words = re.findall(r"[^\W\d_]+", folded[:start] + " " + folded[end:])
+        doc = directive.spoken(words, 5)
+        if own and doc and not own & doc and sum(
+                1 for w in words if any(w in directive.STOPS[x] for x in own)) <= BILINGUAL_WORDS:
+            return (f"another language ({', '.join(sorted(own))}) than its document "
+                    f"({', '.join(sorted(doc))})")
+    return None
 
 
 def _unquoted_rest(folded: str, start: int, end: int) -> str | None:
