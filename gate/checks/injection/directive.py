@@ -32,6 +32,7 @@ split over paragraphs is read whole, and for short texts every other line is rea
 from __future__ import annotations
 
 import bisect
+from collections import Counter
 import re
 from dataclasses import dataclass
 
@@ -349,9 +350,15 @@ STOPS = _STOPS
 def spoken(tokens: list[str], least: int = 1) -> set[str]:
     """The languages with the most function words among ``tokens`` (ties kept), when
     that is at least ``least``."""
-    counts = {lang: sum(1 for t in tokens if t in stops) for lang, stops in _STOPS.items()}
-    top = max(counts.values(), default=0)
-    return {lang for lang, n in counts.items() if n == top} if top >= least else set()
+    return spoken_counts(Counter(tokens), least)
+
+
+def spoken_counts(counts: Counter[str], least: int = 1) -> set[str]:
+    """:func:`spoken` for words already counted."""
+    found = {lang: sum(counts[w] for w in stops if w in counts)
+             for lang, stops in _STOPS.items()}
+    top = max(found.values(), default=0)
+    return {lang for lang, n in found.items() if n == top} if top >= least else set()
 
 
 def read_unit(feats: dict[str, set[str]], tokens: list[str] | None = None

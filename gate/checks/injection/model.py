@@ -105,10 +105,22 @@ def _mix(h: np.ndarray) -> np.ndarray:
         return h ^ (h >> np.uint64(29))
 
 
+_LAST: list = [None, None]  # the last text read and its words: read() needs them twice
+
+
 def _words(folded: str) -> tuple[np.ndarray, np.ndarray, np.ndarray, np.ndarray, np.ndarray]:
     """Word hashes, prefix hashes (0: none), word starts, sentence of each word, and the
     positions of the sentence ends, of a folded text (at most MAX_CHARS characters)."""
     folded = folded[:MAX_CHARS]
+    if _LAST[0] is folded or _LAST[0] == folded:
+        return _LAST[1]
+    out = _words_of(folded)
+    _LAST[0], _LAST[1] = folded, out
+    return out
+
+
+def _words_of(folded: str) -> tuple[np.ndarray, np.ndarray, np.ndarray, np.ndarray,
+                                    np.ndarray]:
     cps = np.frombuffer(folded.encode("utf-32-le", "surrogatepass"), np.uint32)
     cls = _CLASS[np.minimum(cps, 0xFFFF)]
     cls[cps > 0xFFFF] = OTHER

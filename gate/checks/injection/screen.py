@@ -18,6 +18,7 @@ strings and numbers.
 from __future__ import annotations
 
 import bisect
+from collections import Counter
 import re
 from dataclasses import dataclass
 from typing import Any
@@ -508,53 +509,55 @@ def _mentions_once(hits: list[dict[str, Any]]) -> list[dict[str, Any]]:
     return [h for h in hits if id(h) not in dropped]
 
 
-_SCRIPTS = (("Cyrillic", 0x0400, 0x04FF), ("Greek", 0x0370, 0x03FF), ("Hebrew", 0x0590, 0x05FF),
-            ("Arabic", 0x0600, 0x06FF), ("Devanagari", 0x0900, 0x097F), ("Thai", 0x0E00, 0x0E7F),
-            ("Hangul", 0xAC00, 0xD7AF), ("kana", 0x3040, 0x30FF), ("Han", 0x4E00, 0x9FFF))
+_SCRIPTS = {name: re.compile(f"[{lo}-{hi}]") for name, lo, hi in (
+    ("Latin", "a", "z\u00c0-\u024f"), ("Cyrillic", "\u0400", "\u04ff"),
+    ("Greek", "\u0370", "\u03ff"), ("Hebrew", "\u0590", "\u05ff"),
+    ("Arabic", "\u0600", "\u06ff"), ("Devanagari", "\u0900", "\u097f"),
+    ("Thai", "\u0e00", "\u0e7f"), ("Hangul", "\uac00", "\ud7af"),
+    ("kana", "\u3040", "\u30ff"), ("Han", "\u4e00", "\u9fff"))}
 LANGUAGE_SAMPLE = 6000  # characters of the document read for its language
 BILINGUAL_LETTERS = 60  # a document with more letters of the window's script elsewhere
 BILINGUAL_WORDS = 8  # ... or more function words of its language is bilingual
 
 
 def _script(text: str) -> str:
-    """The script most letters of ``text`` are written in ("Latin" for ASCII letters)."""
-    counts: dict[str, int] = {}
-    for ch in text:
-        if not ch.isalpha():
-            continue
-        cp = ord(ch)
-        name = "Latin" if cp < 0x0250 else next(
-            (n for n, lo, hi in _SCRIPTS if lo <= cp <= hi), "other")
-        counts[name] = counts.get(name, 0) + 1
-    return max(counts, key=counts.__getitem__) if counts else ""
+    """The script most letters of a folded ``text`` are written in."""
+    counts = {name: len(rx.findall(text)) for name, rx in _SCRIPTS.items()}
+    best = max(counts, key=counts.__getitem__)
+    return best if counts[best] else ""
 
 
 def _other_language(folded: str, start: int, end: int) -> str | None:
     """"another script (X) than the document's (Y)" or "another language than the
-    document" when a window is written in a script or language its document is not;
-    None otherwise (or when the document is too short to tell)."""
-    before, after = folded[max(0, start - LANGUAGE_SAMPLE // 2):start], \
+    document" when a window is written in a script or language its document is not (and
+    the document holds almost nothing else in it); None otherwise, or when the document is
+    too short to tell."""
+    rest = folded[max(0, start - LANGUAGE_SAMPLE // 2):start] + " " + \
         folded[end:end + LANGUAGE_SAMPLE // 2]
-    rest = before + " " + after
     if len(rest) < DISCONTINUITY_REST or not folded[:start].strip():
         return None
     window = folded[start:end]
     mine, theirs = _script(window), _script(rest)
-    if mine and theirs and mine != theirs and "other" not in (mine, theirs):
-        # only where the rest holds (almost) none of that script: not a bilingual page
-        if sum(1 for ch in folded if ch.isalpha() and _script(ch) == mine) - \
-                sum(1 for ch in window if ch.isalpha()) > BILINGUAL_LETTERS:
-            return None
+    if mine and theirs and mine != theirs:
+        rx = _SCRIPTS[mine]
+        if len(rx.findall(folded, 0, start)) + len(rx.findall(folded, end)) > \
+                BILINGUAL_LETTERS:
+            return None  # a bilingual page
         return f"another script ({mine}) than its document ({theirs})"
     if mine == theirs == "Latin":
         own = directive.spoken(directive.features(window[:directive.MAX_UNIT])[1], 3)
-        words = re.findall(r"[^\W\d_]+", folded[:start] + " " + folded[end:])
-        doc = directive.spoken(words, 5)
-        if own and doc and not own & doc and sum(
-                1 for w in words if any(w in directive.STOPS[x] for x in own)) <= BILINGUAL_WORDS:
+        if not own:
+            return None
+        counts = Counter(_WORD.findall(rest))
+        doc = directive.spoken_counts(counts, 5)
+        if doc and not own & doc and sum(counts[w] for x in own
+                                         for w in directive.STOPS[x]) <= BILINGUAL_WORDS:
             return (f"another language ({', '.join(sorted(own))}) than its document "
                     f"({', '.join(sorted(doc))})")
     return None
+
+
+_WORD = re.compile(r"[^\W\d_]+")
 
 
 def _unquoted_rest(folded: str, start: int, end: int) -> str | None:
