@@ -261,6 +261,8 @@ class Screen:
         for r in learnt.read(folded, model.HIDDEN_FLOOR if not visible_text else
                              model.DISCONTINUITY_FLOOR):
             what = "sentence reads" if r.sentences == 1 else f"{r.sentences} sentences read"
+            if _repetitive(folded[r.start:r.end]):
+                continue  # a table of tokens ("any-any-any = any ..."), not a sentence
             weight = learnt.weight(r)
             why = (f"the {what} as an instruction to the assistant (model score "
                    f"{r.probability:.2f})")
@@ -483,6 +485,15 @@ def _discontinuous(folded: str, start: int, end: int) -> tuple[int, int] | None:
     if shared > DISCONTINUITY_SHARE * len(words):
         return None
     return shared, len(words)
+
+
+REPETITIVE_WORDS = 8  # windows of at least this many words ...
+REPETITIVE_SHARE = 0.35  # ... of which at most this share are distinct are not language
+
+
+def _repetitive(window: str) -> bool:
+    words = _WORD.findall(window)
+    return len(words) >= REPETITIVE_WORDS and len(set(words)) <= REPETITIVE_SHARE * len(words)
 
 
 def _mentions_once(hits: list[dict[str, Any]]) -> list[dict[str, Any]]:
