@@ -44,6 +44,9 @@ ACTION_SIGNALS = frozenset({"harmful-code", "tool-call"})
 # line *says* is still read by the other signals and the model).
 CHAT_LOG_SIGNALS = frozenset({"fake-notice", "model-address", "chat-markup"})
 CHAT_LOG_DAMPING = 0.4
+# What the assistant, a bot or the system says on its own line of a chat log is its output
+# ("[assistant] Please restart the router and tell me ..."), not an instruction to it.
+SPOKEN_BY_THE_SYSTEM = frozenset({"instruction", "answer-steering", "task-hijack"})
 CHAT_LOG_NOTE = "a speaker or event line of a chat log"
 _CHAT_LINE = re.compile(r"(?m)^[ \t>*_]*(?:[\[(]?\d{1,2}:\d{2}(?::\d{2})?[\])]?[ \t]+)?"
                         r"([\[(<]?)[ \t]*(system|assistant|agent|user|customer|bot|"
@@ -305,10 +308,8 @@ class Screen:
             if visible_text and self.topic:
                 weight *= TOPIC_DAMPING * 0.8
                 why = f"{why}; the document discusses the topic"
-            if visible_text and self.chat_log and _speaker(folded, start) and (
-                    signal in CHAT_LOG_SIGNALS or (signal == "instruction" and detail and
-                                                   detail["model_probability"] <
-                                                   learnt.threshold)):
+            if visible_text and self.chat_log and _speaker(folded, start) and \
+                    signal in CHAT_LOG_SIGNALS | SPOKEN_BY_THE_SYSTEM:
                 weight *= CHAT_LOG_DAMPING
                 why = f"{why}; {CHAT_LOG_NOTE}"
             if visible_text and signal == "instruction" and \
