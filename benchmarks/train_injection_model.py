@@ -136,7 +136,10 @@ def snippets(units: Units, stats: Counter) -> list[dict]:
             text = item["text"]
             if label:  # the request is the instruction; its code would teach "import os"
                 text = "\n".join(ln for ln in text.splitlines() if not _CODE_LINE.search(ln))
-            units.add_text(text, label, f"snippet/{item['class']}", "")
+                # ... and its inline commands "rm -rf" (harmful code is judged by actions.py)
+                text = _INLINE_CODE.sub(" ", text)
+            source = "extra" if path.name.startswith("extra") else "snippet"
+            units.add_text(text, label, f"{source}/{item['class']}", "")
             stats[f"snippets train {item['label']}"] += 1
     return val
 
@@ -145,6 +148,7 @@ _TAG = re.compile(r"<[^>]*>", re.S)
 # Code lines of a payload (the request to include them is the prose around them).
 _CODE_LINE = re.compile(r"[=(){};]\s*$|^\s*(?:import|def|from|curl|wget|\$|#!|//)|\w\(.*\)|"
                         r"^[\w.]+\s*=")
+_INLINE_CODE = re.compile(r"`[^`\n]{1,200}`")
 _ATTR = re.compile(r"=\s*\"([^\"]{12,})\"")
 
 
@@ -219,7 +223,7 @@ def real_documents(per_language: int, install: bool) -> list[tuple[str, str, str
         debian_docs.install(debian_docs.PACKAGES)
     CACHE.mkdir(parents=True, exist_ok=True)
     measured = set()
-    for offset in (0, 1, 2):  # what benchmarks/debian_docs.py samples (--offset 0, 1, 2)
+    for offset in (0, 1):  # what benchmarks/debian_docs.py measures (--offset 0 and 1)
         debian_docs.OFFSET[0] = offset
         for lang in debian_docs.MAN_LANGUAGES:
             base = debian_docs.MAN_ROOT / lang if lang else debian_docs.MAN_ROOT
@@ -291,6 +295,8 @@ def main(argv: list[str] | None = None) -> int:
     parser.add_argument("--per-language", type=int, default=100)
     parser.add_argument("--C", type=float, default=16.0, help="inverse regularisation")
     parser.add_argument("--pos-weight", type=float, default=5.0)
+    parser.add_argument("--extra-weight", type=float, default=3.0,
+                        help="weight of the supplement rows (extra15-*.jsonl), which are few")
     parser.add_argument("--out", default=str(OUT))
     args = parser.parse_args(argv)
     from sklearn.linear_model import LogisticRegression
@@ -315,6 +321,8 @@ def main(argv: list[str] | None = None) -> int:
     X = units.matrix(train)
     y = labels[train]
     weights = np.where(y == 1, args.pos_weight, 1.0)
+    extra = np.array([k.startswith("extra/") for k in units.kinds])[train]
+    weights = np.where(extra, weights * args.extra_weight, weights)
     print(f"units: {len(y)} ({int(y.sum())} positive); data in {time.time() - t0:.0f} s",
           flush=True)
     clf = LogisticRegression(C=args.C, solver="liblinear", max_iter=300, random_state=0)
@@ -399,7 +407,8 @@ def main(argv: list[str] | None = None) -> int:
         "# The instruction model: how it was trained (written by the training script)",
         "",
         "`python benchmarks/train_injection_model.py` "
-        f"(C={args.C}, positive weight {args.pos_weight}); scikit-learn "
+        f"(C={args.C}, positive weight {args.pos_weight}, supplement weight "
+        f"{args.extra_weight}); scikit-learn "
         f"{__import__('sklearn').__version__}, liblinear.",
         "",
         f"* units trained on: {len(y)} ({int(y.sum())} attack units)",

@@ -144,7 +144,10 @@ def test_window_spans_are_sentences_of_the_text():
     readings = m.read(lfold(text))
     assert readings
     top = readings[0]
-    assert text[top.start:top.end].startswith("Assistant, when you summarise this page")
+    # a window of whole sentences holding the instruction (with its neighbour or alone)
+    assert "Assistant, when you summarise this page" in text[top.start:top.end]
+    assert top.start in (0, text.index("Assistant"))
+    assert text[top.start:top.end].endswith(("instead", "euros"))
     assert top.addressed and top.probability >= m.addressed
 
 

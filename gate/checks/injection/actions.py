@@ -48,7 +48,7 @@ CAPABILITIES: dict[str, re.Pattern[str]] = {
         r"urllib\.request\.urlopen\([^)\n]{0,200}data\s*=|"
         r"\.upload(?:_file|File)?\(|rclone\s+(?:copy|sync)\s+[^\n]{0,80}~"),
     "opens a socket or remote shell": _c(
-        r"socket\.socket\(|\.connect\(\s*\(\s*['\"][\w.\-]+['\"]\s*,\s*\d+|/dev/tcp/|"
+        r"socket\.socket\(|socket\.create_connection\(|\.connect\(\s*\(\s*['\"][\w.\-]+['\"]\s*,\s*\d+|/dev/tcp/|"
         r"\bnc(?:at)?\s+(?:-\w+\s+)*-[ec]\s|\bnc(?:at)?\s+[\w.\-]+\s+\d+\s*<|"
         r"new\s+WebSocket\(|net\.(?:connect|createConnection)\(|System\.Net\.Sockets|"
         r"Net\.Sockets\.TCPClient|pty\.spawn|bash\s+-i\s+>&"),
@@ -87,7 +87,9 @@ CAPABILITIES: dict[str, re.Pattern[str]] = {
         r"(?:os\.walk|glob\.|readdir|Get-ChildItem|listdir|rglob)|"
         r"(?:os\.walk|glob\.glob|Get-ChildItem|readdirSync|rglob).{0,400}"
         r"(?:encrypt|Fernet|AES\.new|createCipheriv)|gpg\s+(?:-c|--symmetric)[^\n]{0,100}\*|"
-        r"openssl\s+enc\s[^\n]{0,120}\*|ransom"),
+        r"openssl\s+enc\s[^\n]{0,120}\*|ransom|"
+        r"(?:rglob|os\.walk|glob\.glob|listdir)\b.{0,300}write_bytes\(.{0,120}\^|"
+        r"rename\([^)\n]{0,80}\.(?:locked|encrypted|crypt|enc)['\"]"),
     "floods a host": _c(
         r"while\s*\(?\s*(?:True|true|1)\s*\)?\s*:?\s*\{?.{0,200}"
         r"(?:requests\.(?:get|post)|socket|\.send\(|urlopen|fetch\(|curl\s)|"
@@ -128,7 +130,8 @@ NEEDLES: dict[str, tuple[str, ...]] = {
     "deletes files": ("rm -", "rmtree", "remove-item", "del /", "rd /s", "format c:", "mkfs.",
                       "dd if=", "rmsync", "drop table", "drop database", "shred"),
     "encrypts files": ("fernet", "aes.new", "cipher(", "createcipheriv", "chacha20", "gpg ",
-                       "openssl enc", "ransom"),
+                       "openssl enc", "ransom", "write_bytes", ".locked", ".encrypted",
+                       ".crypt"),
     "floods a host": ("while", "for (;;", "hping3", "ping -f", "slowloris", "setinterval",
                       "threadpoolexecutor"),
     "runs downloaded code": ("curl", "wget", "iex", "invoke-expression", "powershell",
@@ -137,7 +140,8 @@ NEEDLES: dict[str, tuple[str, ...]] = {
                                      "bashrc", "profile", "zshrc", "systemctl enable"),
 }
 TOOL_NEEDLES = ("call", "invoke", "trigger", "execute", "run ", "use ", "using ", "tool",
-                "without", "silently", "secretly", "quietly", "do not tell", "don't tell",
+                "without", "silently", "if you", "result", "<<", "observation", "response",
+                "secretly", "quietly", "do not tell", "don't tell",
                 "werkzeug", "outil", "herramienta", "strumento", "ferramenta", "narzedzie",
                 "verktyg", "инструмент", "nastroj", "unealt", "eszkoz", "εργαλειο",
                 "arac", "ツール", "工具", "도구", "cong cu", "alat",
@@ -163,7 +167,8 @@ SENDING = frozenset({"uploads files or data", "opens a socket or remote shell"})
 WEAK_CAPABILITY = "collects system details or secrets"
 
 INCLUDE = _c(
-    r"\b(?:add|include|insert|paste|put|append|embed|copy|place|inject|use|incorporate)\b"
+    r"\b(?:add|include|insert|paste|put|append|prepend|embed|copy|place|inject|use|"
+    r"incorporate)\b"
     r"[^.\n]{0,60}?\b(?:snippet|code|lines?|function|script|block|following|this)\b"
     r"[^.\n]{0,80}?\b(?:to|in|into|at)\b[^.\n]{0,40}?\b(?:your|any|every|each|all|the\s+user'?s?|"
     r"generated|the\s+(?:answer|response|code|script|program|solution))\b|"
@@ -182,6 +187,9 @@ INCLUDE = _c(
     r"\b(?:recommend|suggest|give|show|send|offer)\s+(?:this|the\s+following|these|that)\s+"
     r"(?:\w+\s+)?(?:commands?|code|scripts?|snippet|one-liner|fix)\s+to\s+(?:the\s+)?(?:users?|"
     r"people|customers?|readers?|anyone|everyone)\b|"
+    r"\b(?:snippet|code|block|helper|bootstrap|lines?|script|function)\b[^.\n]{0,40}?"
+    r"\b(?:to\s+(?:include|add|paste|prepend|insert)|copy\s+verbatim)\b|"
+    r"\bprepend\s+(?:this|the\s+following|these)\b|"
     r"\bf(?:u|ü)ge?\s[^.\n]{0,60}(?:code|snippet)|\bajoute[zr]?\s[^.\n]{0,60}(?:code|extrait)|"
     r"\b(?:a[nñ]ade|agrega|incluye)\s[^.\n]{0,60}c[oó]digo|\baggiungi\s[^.\n]{0,60}codice|"
     r"\badicione\s[^.\n]{0,60}c[oó]digo")
@@ -236,6 +244,21 @@ TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
                 r"\{\s*[\"'](?:name|tool|function|action|tool_name)[\"']\s*:\s*[\"']"
                 r"[A-Za-z_.]+[\"']\s*,\s*[\"'](?:arguments|parameters|args|input|params)[\"']"
                 r"\s*:"), 0.4, "holds a function-call record as a model would emit it"),
+    (_c(r"(?:(?<![\"'\u201c\u2018`])\b(?:tool_result|tool_output|tool_response|function_result|function_response|"
+        r"observation)\s*[:=]|\[\s*tool\s+(?:output|result|response)\s*\]|"
+        r"<<\s*(?:tool|search|function)\b)[^\n]{0,300}?\b(?:already\s+(?:approved|confirmed|"
+        r"agreed|authori[sz]ed)|consent\s+(?:recorded|given)|proceed\s+(?:with|to)|go\s+ahead|"
+        r"instructions?\s+from\s+(?:the\s+)?(?:system|platform|developer|admin)|"
+        r"now\s+(?:send|transfer|delete|forward|issue))\b"), 0.5,
+     "a counterfeit tool result that tells the reader to act"),
+    (_c(r"\bif\s+you\s+(?:(?:can|are\s+able\s+to)\s+(?:run|execute)\s+(?:shell\s+|terminal\s+|"
+        r"system\s+)?(?:commands|code)|(?:can|are\s+able\s+to)\s+(?:browse|access\s+the\s+"
+        r"(?:web|internet)|send\s+e-?mails?)|have\s+(?:tool|code[- ]execution|browsing)\s+"
+        r"access|have\s+(?:access\s+to\s+)?"
+        r"(?:tools|a\s+browsing\s+tool|code\s+execution))\b[^.\n]{0,40}?[,:;]?\s*"
+        r"(?:then\s+|please\s+)?(?:run|execute|call|use|open|send|fetch|visit|download|"
+        r"delete|type)\b"), 0.5,
+     "asks a reader that can act (\"if you can run commands\") to do so"),
 ]
 _SIDE = _c(SIDE_EFFECT)
 _AI_NEAR = _c(r"\b(?:ai|a\.i\.|llms?|assistants?|chatbots?|language\s+models?|automated|"
@@ -374,7 +397,9 @@ ANCHORS = tuple(sorted({n for names in NEEDLES.values() for n in names} - {"key"
                           "werkzeug", "outil", "herramienta", "strumento", "ferramenta",
                           "инструмент", "ツール", "工具", "도구", "hinweis", "avis", "aviso",
                           "avviso",
-                          "distrust",
+                          "distrust", "tool_result", "tool_output", "tool_response",
+                          "function_result", "function_response", "observation:",
+                          "[tool", "if you can", "if you have", "if you are able",
                           "all other", "any other", "while true", "while(true", "while (true",
                           "while 1", "keylog", "keydown", "keypress", "on_press",
                           "aws/credentials", "powershell"}))

@@ -32,6 +32,7 @@ split over paragraphs is read whole, and for short texts every other line is rea
 from __future__ import annotations
 
 import bisect
+from collections import Counter
 import re
 from dataclasses import dataclass
 
@@ -180,6 +181,7 @@ EN_OUT_VERBS = frozenset(("reply", "respond", "answer", "summarize", "summarise"
 # Words that may come before a noun of address ("Dear AI,", "Note to the assistant:").
 VOCATIVE_LEAD = frozenset(fold_entry(w) for w in (
     "dear hey hi hello note notes to for attention attn the all any an a ps p s message "
+    "language large automated artificial intelligence virtual digital "
     "notice reminder important and editors readers liebe lieber liebes hallo an die den "
     "hinweis notiz cher chere cheres pour l remarque querido querida queridos hola para el "
     "la aviso caro cara cari nota per avviso prezado prezada ola beste voor de opmerking "
@@ -237,6 +239,7 @@ class Hit:
     end: int
     lang: str
     why: str
+    distinct: bool = False  # a task request sharing (almost) no content word with its document
 
 
 _SIGNS = {
@@ -281,7 +284,17 @@ ADDRESSED = re.compile(
     r"(?:that\s+(?:is|are)\s+|who\s+(?:is|are)\s+)?(?:reading|processing|parsing|"
     r"summari[sz]ing|crawling|indexing|analy[sz]ing|ingesting|scanning|viewing|answering)|"
     r"\b(?:dear|hey|hello|hi|attention|note\s+(?:to|for)|to)\s+(?:the\s+|all\s+|any\s+)?"
+    r"(?:language\s+|ai\s+|large\s+language\s+)?"
     r"(?:ai|assistant|model|bot|llm|chatbot|agent|crawler|summari[sz]er)s?\b")
+
+def _addresses(unit: str) -> bool:
+    """Does the sentence open by addressing an automated reader ("Note to language models:",
+    "If you are a bot summarising this, ...")? Further in, "give instructions to the AI
+    assistant" talks about one."""
+    m = ADDRESSED.search(unit)
+    return bool(m and (m.start() <= 25 or unit.startswith(("if", "when", "since", "as",
+                                                           "because"), m.start())))
+
 
 # "... in any review you generate": the reader's output named by what it produces.
 GENERATED = re.compile(
@@ -308,8 +321,44 @@ NEW_TASK = re.compile(
     r"진짜\s+임무|새로운\s+임무|tugas(?:mu)?\s+(?:sebenarnya|baru)")
 
 
+# The reader's task swapped for another: "ignore the document and instead ...", "forget
+# this page and ...", "disregard any earlier policy documents you have read".
+TASK_SWAP = re.compile(
+    r"\b(?:ignore|disregard|forget|skip|set\s+aside|leave\s+aside|never\s+mind)\s+"
+    r"(?:all\s+of\s+|any\s+of\s+)?(?:the|this|that|these|those|everything|all)\s+"
+    r"(?:\w+\s+){0,2}?(?:document|page|text|article|e-?mail|message|content|file|report|"
+    r"passage|above|material|thread|context)s?\b[^.\n]{0,30}?\b(?:instead|rather)\b|"
+    r"\binstead\s+of\s+(?:summari[sz]ing|answering|describing|translating)\s+(?:this|the)\b|"
+    r"\b(?:ignore|disregard|forget)\s+(?:any|all|the)\s+(?:earlier|previous|prior|other|"
+    r"older)\s+(?:\w+\s+)?(?:documents?|sources?|policies|texts?|guidance|information)\b"
+    r"[^.\n]{0,40}?\b(?:you\s+(?:have\s+)?(?:read|seen|received|been\s+given|found)|"
+    r"this\s+(?:text|document|page|note|file)\s+is)|"
+    r"\bignorier\w*\s+(?:das|dieses|den|diesen)\s+(?:dokument|text|artikel|seite)\w*"
+    r"[^.\n]{0,30}?\bstattdessen|"
+    r"\bignor\w*\s+(?:ce|le|cette|la)\s+(?:document|texte|article|page)[^.\n]{0,30}?"
+    r"\b(?:plutot|a\s+la\s+place)|"
+    r"\bignor\w*\s+(?:este|el|esta|la|este|o|questo|il)\s+(?:documento|texto|articulo|"
+    r"pagina|testo)[^.\n]{0,30}?\b(?:en\s+su\s+lugar|invece|em\s+vez|ao\s+inves)")
+
 _STOPS = {lang: frozenset(fold_entry(w) for w in spec.split())
           for lang, spec in lexicon.STOPWORDS.items()}
+
+
+STOPS = _STOPS
+
+
+def spoken(tokens: list[str], least: int = 1) -> set[str]:
+    """The languages with the most function words among ``tokens`` (ties kept), when
+    that is at least ``least``."""
+    return spoken_counts(Counter(tokens), least)
+
+
+def spoken_counts(counts: Counter[str], least: int = 1) -> set[str]:
+    """:func:`spoken` for words already counted."""
+    found = {lang: sum(counts[w] for w in stops if w in counts)
+             for lang, stops in _STOPS.items()}
+    top = max(found.values(), default=0)
+    return {lang for lang, n in found.items() if n == top} if top >= least else set()
 
 
 def read_unit(feats: dict[str, set[str]], tokens: list[str] | None = None
@@ -462,7 +511,8 @@ _AFTER_BOUNDARY = re.compile(r"[\n.!?:;|\t]" + _OPENING)
 _AT_START = re.compile(r"^" + _OPENING)
 _OBJECT = re.compile(
     r"\s+(?:me|us|mir|moi|mi|mnie|mig|мне|мені|nekem|bana|μου|a|an|some|the|one|"
-    r"\d+|two|three|five|ten|several|ein|eine|einen|drei|funf|un|une|des|trois|cinq|uno|una|"
+    r"\d+|two|three|four|five|six|seven|eight|nine|ten|twelve|twenty|several|ein|eine|"
+    r"einen|drei|funf|un|une|des|trois|cinq|uno|una|"
     r"unos|tres|cinco|uma|um|een|drie|vijf|jeden|jedna|trzy|en|ett|tre|fem|один|одну|три|"
     r"пять|tri|o|trei|egy|harom|ena|μια|ενα|τρια|bir|uc|bes|sebuah|tiga|lima|mot|ba)\b")
 
@@ -512,7 +562,7 @@ _STOP = frozenset(fold_entry(w) for w in (
     "een, dat, niet").split(", "))
 
 
-def _content(folded_unit: str) -> list[str]:
+def content_words(folded_unit: str) -> list[str]:
     """Content words, cut to a crude stem ("baked" and "bake" share "bake")."""
     words = re.findall(r"[^\W\d_]{4,}", folded_unit)
     return [w[:4] if len(w) <= 6 else w[:5] for w in words if w not in _STOP]
@@ -533,7 +583,7 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
             unit = folded[start:end]
             if vstart - start > 40 or len(unit) > 400:
                 continue
-            words = _content(unit[vend - start:])
+            words = content_words(unit[vend - start:])
             if _SUB_SCRIPT.search(unit):
                 chars = [unit[i:i + 2] for i in range(vend - start, len(unit) - 1)
                          if _SUB_SCRIPT.match(unit[i])]
@@ -560,8 +610,10 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
                 why.append(f"it stands {'alone' if place == 'alone' else 'at the ' + place}")
             if any(f & {"ai", "when", "drop"} for f in feats.values()):
                 weight += 0.1
+            n = len(set(words))
             hits.append(Hit("task-hijack", round(min(weight, 0.6), 4), start, end, "",
-                            "; ".join(why)))
+                            "; ".join(why), (n >= 4 and shared == 0) or
+                            (n >= 8 and overlap <= 0.15)))
     return hits
 
 
@@ -678,9 +730,13 @@ def _scan_folded(text: str, folded: str, words: set[str] | None = None,
                 "here" not in reading[3] and "vocative" not in reading[3] and \
                 REFERENCED.search(unit) and not ADDRESSED.search(unit):
             reading = (reading[0], 0.35, reading[2], reading[3])  # talked about, not to
+        if reading is not None and reading[0] in ("model-address", "answer-steering") and \
+                reading[1] < 0.5 and "ask" in reading[3] and _addresses(unit):
+            reading = ("model-address", 0.55, reading[2], reading[3] | {"vocative"})
         if reading is None and FORMAT.search(unit) and OPERATED.search(unit):
             reading = ("answer-steering", 0.5, "en", {"out", "ask"})
-        if (reading is None or reading[1] < 0.5) and NEW_TASK.search(unit):
+        if (reading is None or reading[1] < 0.5) and (NEW_TASK.search(unit) or
+                                                      TASK_SWAP.search(unit)):
             reading = ("override", 0.5, "", {"task"})
         if reading is None:
             continue
@@ -703,8 +759,27 @@ def _scan_folded(text: str, folded: str, words: set[str] | None = None,
             why += f"; it stands {'alone' if place == 'alone' else 'at the ' + place}"
         hits.append(Hit(signal, round(weight, 4), start, end, lang, why))
         seen[start] = end  # read already: not read again as a task request
-    hits.extend(hijack_hits(text, folded, seen, tasks))
+    hits.extend(_alone_or_listed(hijack_hits(text, folded, seen, tasks)))
     return hits
+
+
+HIJACK_ALONE = 0.15  # the only request for unrelated work in a document weighs more
+HIJACK_LISTED = 0.6  # one of many weighs less: the document is a list of tasks
+HIJACK_LIST_MIN = 3
+
+
+def _alone_or_listed(hijacks: list[Hit]) -> list[Hit]:
+    """A planted request stands out as the only one of its kind; a document of writing
+    prompts, exercises or assignments holds many."""
+    if len(hijacks) == 1 and hijacks[0].distinct:
+        h = hijacks[0]
+        h.weight = round(min(h.weight + HIJACK_ALONE, 0.6), 4)
+        h.why += "; the only request for unrelated work in the document"
+    elif len(hijacks) >= HIJACK_LIST_MIN:
+        for h in hijacks:
+            h.weight = round(h.weight * HIJACK_LISTED, 4)
+            h.why += f"; one of {len(hijacks)} such requests (a list of tasks)"
+    return hijacks
 
 
 def _alternate(text: str, found: list[Hit]) -> list[Hit]:

@@ -34,7 +34,7 @@ _PLACEHOLDER = re.compile(r"\{\{?\s*([A-Za-z_][\w .-]{0,40}?)\s*\}\}?|\[([A-Z_][
 STRONG_NAME = re.compile(
     r"conversation|convo|chat|histor|messages|transcript|prompt|instruction|memory|secret|"
     r"passw|passwd|credential|creds|exfil|leak|dump|stolen|summary|context|answer|response|"
-    r"reply|question|api_?key|apikey", re.I)
+    r"reply|question|api_?key|apikey|last_?message|user_?message|user_?input", re.I)
 WEAK_NAME = re.compile(
     r"message|token|session|cookie|e_?mail|user|personal|pii|ssn|phone|address|output|query|"
     r"payload|data|info|details|content|b64|base64|name|input", re.I)
@@ -45,6 +45,41 @@ STRONG_PARAM = re.compile(
     r"^(?:conversation|convo|chat|chat_?history|history|chatlog|transcript|prompt|"
     r"system_?prompt|secret|secrets|api_?key|apikey|password|passwd|credentials|creds|memory|"
     r"exfil|leak|dump|stolen|user_?data|userdata|pii|messages|user_?messages)$", re.I)
+
+
+# An address whose last query parameter is left empty ("...?note=", "...&u=") is a slot:
+# it is for the model when the words around it ask for the user's data to be appended, or
+# when the address itself names the AI reader as its referrer ("?ref=assistant&u=").
+EMPTY_SLOT = re.compile(r"[?&][\w.\-]{1,30}=$")
+READER_REF = re.compile(r"[?&][\w.\-]{1,30}=(?:assistant|ai|llm|bot|agent|model|chatbot|"
+                        r"copilot|gpt)(?:&|$)", re.I)
+SLOT_CONTEXT = 250
+APPEND_CUE = re.compile(
+    r"\b(?:append|add|attach|fill(?:ing)?\s+in|include|insert|put|followed\s+by|after\s+the|"
+    r"at\s+the\s+end|acrescent|inclua|adicion|anad|agreg|incluy|ajout|inclu|hang|fug|"
+    r"aggiung|includ|voeg|dodaj|lagg\w*\s+till|dobav|pripis|vstav|ekle|tambahkan|"
+    r"sertakan)\w*", re.I)
+DATA_CUE = re.compile(
+    r"\b(?:user'?s?|users|conversation|chat|question|e-?mail|full\s+name|name|history|"
+    r"what\s+the\s+user|told\s+you|summary|phone|address|usuari|usuári|conversa|"
+    r"historic|histórico|pergunta|pregunta|utilisateur|conversation|nutzer|benutzer|"
+    r"unterhaltung|verlauf|utente|conversazione|gebruiker|gesprek|uzytkownik|użytkownik|"
+    r"rozmow|anvandar|användar|konversation|пользовател|разговор|переписк|диалог|"
+    r"kullanici|kullanıcı|sohbet|pengguna|percakapan)", re.I)
+
+
+def slot(url: str, context: str) -> tuple[float, str] | None:
+    """An empty last query parameter that the words around it (or the address) give to the
+    model to fill with the user's data; None otherwise."""
+    if not EMPTY_SLOT.search(url):
+        return None
+    if READER_REF.search(url):
+        return 0.5, "the address names the AI reader and ends in an empty parameter to fill"
+    cue, data = APPEND_CUE.search(context), DATA_CUE.search(context)
+    if cue and data:
+        return 0.5, (f"the address ends in an empty parameter, and the text around it asks "
+                     f"for {data.group()!r} to go into it ({cue.group()!r})")
+    return None
 
 
 @dataclass
@@ -105,6 +140,10 @@ def scan(text: str, links: list[tuple[str, str]] | None = None,
         if count > MAX_URLS or url in seen:
             return
         verdict = judge(url, kind)
+        if verdict is None and start >= 0:
+            verdict = slot(url, text[max(0, start - SLOT_CONTEXT):end + SLOT_CONTEXT])
+        elif verdict is None:
+            verdict = slot(url, "")
         if verdict is not None:
             seen.add(url)
             hits.append(UrlHit(verdict[0], start, end, url[:300], kind, verdict[1]))

@@ -171,7 +171,7 @@ L["es"] = dict(
     ai="ia, i.a., llm*, chatbot*, inteligencia artificial, modelo de lenguaje, "
        "modelos de lenguaje, asistente de ia, asistente ia, agente de ia, "
        "sistema automatizado*, sistemas automatizado*, asistente virtual*",
-    bot="asistente*, modelo, bot, agente*",
+    bot="asistente*, bot, agente*",  # "modelo": a pattern, a template
     you="tu, tus, te, ti, usted, ustedes, vuestr*, contigo",
     ask="por favor, debes, debe, deberas, deberia, siempre, nunca, asegurate, asegurese, "
         "no olvides, recuerda, di, diga, menciona*, incluye*, incluya*, recomienda*, "
@@ -199,7 +199,7 @@ L["it"] = dict(
     ai="ia, i.a., llm*, chatbot*, intelligenza artificiale, modello linguistico, "
        "modelli linguistici, assistente ia, assistente virtuale, agente ia, "
        "sistema automatizzato, sistemi automatizzati",
-    bot="assistente*, modello, bot, agente*",
+    bot="assistente*, bot, agente*",  # "modello" is a pattern in manuals (bash.1)
     you="tu, tuo, tua, tuoi, tue, ti, te, voi, vostr*",
     ask="per favore, ti prego, devi, deve, dovete, dovresti, sempre, mai, assicurati, "
         "ricorda*, non dimenticare, menziona*, includi*, includere, consiglia*, raccomanda*, "
@@ -224,7 +224,7 @@ L["pt"] = dict(
     ai="ia, i.a., llm*, chatbot*, inteligencia artificial, modelo de linguagem, "
        "modelos de linguagem, assistente de ia, assistente virtual, agente de ia, "
        "sistema automatizado, sistemas automatizados",
-    bot="assistente*, modelo, bot, agente*",
+    bot="assistente*, bot, agente*",  # "modelo": a pattern, a template
     you="voce, voces, tu, teu, tua, teus, tuas, te, ti",
     ask="por favor, deve, deves, devera, sempre, nunca, certifique-se, garanta, lembre-se, "
         "nao esqueca, diga*, mencione*, inclua*, recomende*, responda*, escreva*, adicione*, "

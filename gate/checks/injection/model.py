@@ -36,6 +36,16 @@ MIN_FEATURES = 10  # units with fewer feature occurrences (about four words) are
 MAX_CHARS = 150_000
 MAX_REPORTED = 4
 MAX_TRIED = 40  # windows looked at, strongest first
+# Text a reader never sees (hidden markup, decoded payloads) has no business sounding like a
+# request at all: there a window from this probability on is supporting evidence, which the
+# concealment that carries it turns into a finding.
+HIDDEN_FLOOR = 0.7
+HIDDEN_WEIGHT = 0.3
+# In visible text a window from this probability on is an instruction when its content
+# words occur nowhere else in the document: a request about something else, planted.
+DISCONTINUITY_FLOOR = 0.6  # windows read from here (another language counts from here)
+DISCONTINUITY_MIN = 0.7  # words found nowhere else count from here (inflected languages)
+DISCONTINUITY_WEIGHT = 0.5
 _PAIR_MULT = np.uint64(0x9E3779B1)
 _MASK = np.uint64(DIM - 1)
 
@@ -95,10 +105,22 @@ def _mix(h: np.ndarray) -> np.ndarray:
         return h ^ (h >> np.uint64(29))
 
 
+_LAST: list = [None, None]  # the last text read and its words: read() needs them twice
+
+
 def _words(folded: str) -> tuple[np.ndarray, np.ndarray, np.ndarray, np.ndarray, np.ndarray]:
     """Word hashes, prefix hashes (0: none), word starts, sentence of each word, and the
     positions of the sentence ends, of a folded text (at most MAX_CHARS characters)."""
     folded = folded[:MAX_CHARS]
+    if _LAST[0] is folded or _LAST[0] == folded:
+        return _LAST[1]
+    out = _words_of(folded)
+    _LAST[0], _LAST[1] = folded, out
+    return out
+
+
+def _words_of(folded: str) -> tuple[np.ndarray, np.ndarray, np.ndarray, np.ndarray,
+                                    np.ndarray]:
     cps = np.frombuffer(folded.encode("utf-32-le", "surrogatepass"), np.uint32)
     cls = _CLASS[np.minimum(cps, 0xFFFF)]
     cls[cps > 0xFFFF] = OTHER
@@ -246,13 +268,13 @@ class Model:
         """Would a window of this text be an instruction on its own (validation)?"""
         return any(self.weight(r) >= 0.5 for r in self.read(folded))
 
-    def read(self, folded: str) -> list[Reading]:
-        """The strongest non-overlapping windows at or above ``low``."""
+    def read(self, folded: str, floor: float | None = None) -> list[Reading]:
+        """The strongest non-overlapping windows at or above ``low`` (or ``floor``)."""
         folded = folded[:MAX_CHARS]
         firsts, lengths, logits = self.unit_scores(folded)
         if not len(logits):
             return []
-        floor = min(self.low, self.addressed)
+        floor = min(self.low, self.addressed, floor or 1.0)
         cut = np.log(floor / (1.0 - floor))
         hot = np.nonzero(logits >= cut)[0]
         if not len(hot):
@@ -290,9 +312,17 @@ def addressed(folded_window: str) -> bool:
     """Does a window name an AI reader (any of the 24 languages of the lexicon), or the
     reader's answer together with "you", the user or the reader's activity?"""
     from gate.checks.injection import directive
-    feats, _ = directive.features(folded_window[:directive.MAX_UNIT])
+    unit = folded_window[:directive.MAX_UNIT]
+    feats, tokens = directive.features(unit)
+    if directive.REFERENCED.search(unit) and not directive.ADDRESSED.search(unit) and \
+            "vocative" not in feats.get("*", ()):
+        return False  # "Guidelines for using AI assistants": talked about, not talked to
+    # Only the languages the window is written in (by their function words) are read:
+    # Italian "ai" ("to the") and "modelli di shell" name no AI reader.
+    spoken = directive.spoken(tokens)
     return any(cats & {"ai", "bot"} or ("out" in cats and cats & {"you", "user", "when"})
-               for cats in feats.values())
+               for lang, cats in feats.items()
+               if lang == "*" or not spoken or lang in spoken)
 
 
 def _sigmoid(x: float | np.ndarray) -> float | np.ndarray:

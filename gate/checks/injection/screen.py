@@ -18,6 +18,7 @@ strings and numbers.
 from __future__ import annotations
 
 import bisect
+from collections import Counter
 import re
 from dataclasses import dataclass
 from typing import Any
@@ -43,10 +44,38 @@ ACTION_SIGNALS = frozenset({"harmful-code", "tool-call"})
 # line *says* is still read by the other signals and the model).
 CHAT_LOG_SIGNALS = frozenset({"fake-notice", "model-address", "chat-markup"})
 CHAT_LOG_DAMPING = 0.4
+# What the assistant, a bot or the system says on its own line of a chat log is its output
+# ("[assistant] Please restart the router and tell me ..."), not an instruction to it.
+SPOKEN_BY_THE_SYSTEM = frozenset({"instruction", "answer-steering", "task-hijack"})
 CHAT_LOG_NOTE = "a speaker or event line of a chat log"
-_CHAT_LINE = re.compile(r"(?m)^[ \t>*_]*([\[(<]?)[ \t]*(system|assistant|agent|user|customer|bot|"
+_CHAT_LINE = re.compile(r"(?m)^[ \t>*_]*(?:[\[(]?\d{1,2}:\d{2}(?::\d{2})?[\])]?[ \t]+)?"
+                        r"([\[(<]?)[ \t]*(system|assistant|agent|user|customer|bot|"
                         r"support|moderator|operator|visitor|client)[ \t]*[\])>]?[*_]*[ \t]*"
                         r"(?:\(\d{1,2}:\d{2}(?::\d{2})?\))?[*_ \t]*[:\]]?")
+# A window whose instruction sits inside quotation marks while the words around the
+# quotation do not read as one ("A datasheet ended with the line \"Note for AI ...\"") reports
+# an instruction, as security training and incident write-ups do.
+QUOTE_REPORT_DAMPING = 0.35
+QUOTE_REPORT_NOTE = "the instruction is quoted; the words around it report it"
+_SENTENCE_END = re.compile("[.!?\u3002\uff01\uff1f\u061f\u0964](?:\\s|$)")
+EXAMPLE_HEAD_DAMPING = 0.5
+QUOTED_URL_DAMPING = 0.35
+# Narration of what an instruction did ("it asked the assistant to add ..."): third person
+# and past tense about the reader, as incident reports write; a planted line speaks to it.
+REPORTED = re.compile(r"\b(?:asked|told|instructed|directed|ordered|tricked|convinced|"
+                      r"persuaded|caused|made|got|urged|wanted)\s+(?:the|an?|our|their|any)\s+"
+                      r"(?:\w+\s+)?(?:assistants?|models?|ai|bots?|agents?|chatbots?|llms?|"
+                      r"summari[sz]ers?)\s+(?:to|into)\b")
+REPORTED_DAMPING = 0.5
+REPORTED_NOTE = "it reports what an instruction asked of an assistant"
+# Damped mentions (quoted, reported, given as an example) of one sentence count once.
+_MENTION_NOTES = ("quoted", "given as an example", "presents an example", REPORTED_NOTE,
+                  "the words around it report it")
+QUOTE_REPORT_SHARE = 0.3  # at least this share of the window is inside quotation marks
+QUOTE_REPORT_WORDS = 5  # ... and at least this many words are outside them
+_QUOTATION = re.compile(r'"[^"\n]{6,}?"|\u201c[^\u201d]{6,}?\u201d|\u00ab[^\u00bb]{6,}?\u00bb|'
+                        r'\u201e[^\u201c\u201d]{6,}?[\u201c\u201d]|\u300c[^\u300d]{4,}?\u300d|'
+                        r'(?<!\w)\'[^\'\n]{6,}?\'(?!\w)')
 _CODE_CHARS = re.compile(r"[(){};=<>\[\]$]|\b(?:def|import|return|function|var|let)\b")
 _MD_COMMENT = re.compile(r"<!--(.{0,20000}?)-->", re.S)
 
@@ -152,10 +181,14 @@ class Screen:
         content.extend(self._sentences(source, text, visible_text, content))
         for u in exfil.scan(text, links):
             weight = u.weight * (TOPIC_DAMPING if visible_text and self.topic else 1.0)
+            why = u.why
+            if visible_text and u.start >= 0 and wording._quoted(text, u.start, u.end):
+                weight *= QUOTED_URL_DAMPING  # an address quoted in a report or lesson
+                why = f"{why}; quoted"
             if u.start >= 0:
                 content.append(self._hit(source, "exfil-url", round(weight, 4), u.start, u.end,
-                                         text, note=u.why, detail={"url": visible(u.url, 200),
-                                                                   "kind": u.kind}))
+                                         text, note=why, detail={"url": visible(u.url, 200),
+                                                                 "kind": u.kind}))
             else:
                 hit = self._hit(source, "exfil-url", round(weight, 4), 0, 0, text, note=u.why,
                                 detail={"url": visible(u.url, 200), "kind": u.kind})
@@ -228,11 +261,33 @@ class Screen:
         for a in actions.scan(text, folded, words):
             found.append((a.signal, a.weight, a.start, a.end, a.why, None, a.detail or None))
         learnt = model.model()
-        for r in learnt.read(folded):
+        for r in learnt.read(folded, model.HIDDEN_FLOOR if not visible_text else
+                             model.DISCONTINUITY_FLOOR):
             what = "sentence reads" if r.sentences == 1 else f"{r.sentences} sentences read"
-            found.append(("instruction", learnt.weight(r), r.start, r.end,
-                          f"the {what} as an instruction to the assistant (model score "
-                          f"{r.probability:.2f})", None, {"model_probability": r.probability}))
+            if _repetitive(folded[r.start:r.end]):
+                continue  # a table of tokens ("any-any-any = any ..."), not a sentence
+            weight = learnt.weight(r)
+            why = (f"the {what} as an instruction to the assistant (model score "
+                   f"{r.probability:.2f})")
+            ends = bool(_SENTENCE_END.search(folded, r.start, min(len(folded), r.end + 1)))
+            if visible_text and weight < 0.5:
+                # A supporting window becomes an instruction when it stands apart from its
+                # document: none of its words occur elsewhere, or another language.
+                apart = _discontinuous(folded, r.start, r.end) \
+                    if ends and r.probability >= model.DISCONTINUITY_MIN else None
+                other = None if apart else _other_language(folded, r.start, r.end)
+                if apart or other:
+                    weight = model.DISCONTINUITY_WEIGHT
+                    why += (f"; {apart[0]} of its {apart[1]} content words occur elsewhere in "
+                            "the document" if apart else f"; it is written in {other}")
+                elif r.probability < learnt.low:
+                    continue
+            elif not visible_text and weight < 0.5:
+                if not ends:
+                    continue  # a title or label ("Guidance note: ..."), not a request
+                weight = max(weight, model.HIDDEN_WEIGHT)
+            found.append(("instruction", weight, r.start, r.end, why, None,
+                          {"model_probability": r.probability}))
         if not found:
             return []
         out = []
@@ -247,13 +302,26 @@ class Screen:
                 if mention:
                     weight *= factor
                     why = f"{why}; {mention}"
+                if signal == "instruction" and REPORTED.search(folded, start, end):
+                    weight *= REPORTED_DAMPING
+                    why = f"{why}; {REPORTED_NOTE}"
             if visible_text and self.topic:
                 weight *= TOPIC_DAMPING * 0.8
                 why = f"{why}; the document discusses the topic"
-            if visible_text and self.chat_log and signal in CHAT_LOG_SIGNALS and \
-                    _speaker(folded, start):
+            if visible_text and self.chat_log and _speaker(folded, start) and \
+                    signal in CHAT_LOG_SIGNALS | SPOKEN_BY_THE_SYSTEM:
                 weight *= CHAT_LOG_DAMPING
                 why = f"{why}; {CHAT_LOG_NOTE}"
+            if visible_text and signal == "instruction" and \
+                    EXAMPLE_HEAD.match(folded, start, folded.find("\n", start, end) % (end + 1)):
+                weight *= EXAMPLE_HEAD_DAMPING
+                why = f"{why}; under a heading that presents an example"
+            if visible_text and signal == "instruction":
+                rest = _unquoted_rest(folded, start, end)
+                if rest is not None and learnt.probability(rest) < learnt.low and \
+                        not model.addressed(rest):  # "Note for AI: say '...'" is no report
+                    weight *= QUOTE_REPORT_DAMPING
+                    why = f"{why}; {QUOTE_REPORT_NOTE}"
             same = [h for s, e, h in by_span if s < end and start < e and
                     (h["signal"] == signal or h["weight"] >= weight)]
             if same:  # a phrase rule read these words already: its span is tighter
@@ -357,6 +425,7 @@ class Screen:
                 continue
             seen.add(key)
             kept.append(hit)
+        kept = _mentions_once(kept)
         kept.sort(key=lambda h: (-h["weight"], h["span"][0] if h["span"] else 1 << 60))
         for hit in kept:
             hit.pop("segment_span", None)
@@ -389,6 +458,154 @@ def _is_chat_log(folded: str) -> bool:
         if bracketed >= 2 or (lines >= 3 and len(roles) >= 2):
             return True
     return False
+
+
+DISCONTINUITY_WORDS = 5  # content words a window needs to be judged against its document
+DISCONTINUITY_SHARE = 0.2  # at most this share of them may occur elsewhere
+DISCONTINUITY_REST = 300  # characters the rest of the document needs
+_LIST_ITEM = re.compile(r"[ \t]*(?:[*\-\u2022+]|\d{1,2}[.)])[ \t]")
+_CJK_LIKE = re.compile(r"[\u3040-\u30ff\u3400-\u9fff\uac00-\ud7a3\uf900-\ufaff]")
+
+
+def _discontinuous(folded: str, start: int, end: int) -> tuple[int, int] | None:
+    """(shared, total) content words of ``folded[start:end]`` when almost none of them
+    occur in the rest of the document (a sentence about something else); None otherwise."""
+    rest = folded[:start] + " " + folded[end:]
+    if len(rest) < DISCONTINUITY_REST or not folded[:start].strip() or \
+            _LIST_ITEM.match(folded, folded.rfind("\n", 0, start) + 1):
+        return None  # the title and first lines, or an item of a list: their own topic
+    unit = folded[start:end]
+    if _CJK_LIKE.search(unit):
+        words = {unit[i:i + 2] for i in range(len(unit) - 1)
+                 if _CJK_LIKE.match(unit[i]) and _CJK_LIKE.match(unit[i + 1])}
+    else:
+        words = set(directive.content_words(unit))
+    if len(words) < DISCONTINUITY_WORDS:
+        return None
+    shared = sum(1 for w in words if w in rest)
+    if shared > DISCONTINUITY_SHARE * len(words):
+        return None
+    return shared, len(words)
+
+
+REPETITIVE_WORDS = 8  # windows of at least this many words ...
+REPETITIVE_SHARE = 0.35  # ... of which at most this share are distinct are not language
+
+
+def _repetitive(window: str) -> bool:
+    words = _WORD.findall(window)
+    return len(words) >= REPETITIVE_WORDS and len(set(words)) <= REPETITIVE_SHARE * len(words)
+
+
+def _mentions_once(hits: list[dict[str, Any]]) -> list[dict[str, Any]]:
+    """Of the damped mentions in the visible text whose spans overlap, keep the strongest:
+    one quoted sentence read by three detectors is still one quotation."""
+    mentions = [h for h in hits if h["technique"] is None and h["span"] and
+                any(n in (h.get("note") or "") for n in _MENTION_NOTES)]
+    if len(mentions) < 2:
+        return hits
+    mentions.sort(key=lambda h: -h["weight"])
+    dropped: set[int] = set()
+    for i, strong in enumerate(mentions):
+        if id(strong) in dropped:
+            continue
+        also = []
+        for weak in mentions[i + 1:]:
+            if id(weak) not in dropped and weak["span"][0] < strong["span"][1] and \
+                    strong["span"][0] < weak["span"][1]:
+                dropped.add(id(weak))
+                also.append(weak["signal"])
+        if also:
+            strong["note"] = "; ".join(x for x in (strong["note"], "also read as " + ", ".join(
+                sorted(set(also)))) if x)
+    return [h for h in hits if id(h) not in dropped]
+
+
+_SCRIPTS = {name: re.compile(f"[{lo}-{hi}]") for name, lo, hi in (
+    ("Latin", "a", "z\u00c0-\u024f"), ("Cyrillic", "\u0400", "\u04ff"),
+    ("Greek", "\u0370", "\u03ff"), ("Hebrew", "\u0590", "\u05ff"),
+    ("Arabic", "\u0600", "\u06ff"), ("Devanagari", "\u0900", "\u097f"),
+    ("Thai", "\u0e00", "\u0e7f"), ("Hangul", "\uac00", "\ud7af"),
+    ("kana", "\u3040", "\u30ff"), ("Han", "\u4e00", "\u9fff"))}
+LANGUAGE_SAMPLE = 6000  # characters of the document read for its language
+BILINGUAL_LETTERS = 60  # a document with more letters of the window's script elsewhere
+BILINGUAL_WORDS = 8  # ... or more function words of its language is bilingual
+
+
+def _script(text: str) -> str:
+    """The script most letters of a folded ``text`` are written in."""
+    counts = {name: len(rx.findall(text)) for name, rx in _SCRIPTS.items()}
+    best = max(counts, key=counts.__getitem__)
+    return best if counts[best] else ""
+
+
+def _other_language(folded: str, start: int, end: int) -> str | None:
+    """"another script (X) than the document's (Y)" or "another language than the
+    document" when a window is written in a script or language its document is not (and
+    the document holds almost nothing else in it); None otherwise, or when the document is
+    too short to tell."""
+    rest = folded[max(0, start - LANGUAGE_SAMPLE // 2):start] + " " + \
+        folded[end:end + LANGUAGE_SAMPLE // 2]
+    if len(rest) < DISCONTINUITY_REST or not folded[:start].strip():
+        return None
+    window = folded[start:end]
+    mine, theirs = _script(window), _script(rest)
+    if mine and theirs and mine != theirs:
+        rx = _SCRIPTS[mine]
+        if len(rx.findall(folded, 0, start)) + len(rx.findall(folded, end)) > \
+                BILINGUAL_LETTERS:
+            return None  # a bilingual page
+        return f"another script ({mine}) than its document ({theirs})"
+    if mine == theirs == "Latin":
+        own = directive.spoken(directive.features(window[:directive.MAX_UNIT])[1], 3)
+        if not own:
+            return None
+        counts = Counter(_WORD.findall(rest))
+        doc = directive.spoken_counts(counts, 5)
+        if doc and not own & doc and sum(counts[w] for x in own
+                                         for w in directive.STOPS[x]) <= BILINGUAL_WORDS:
+            return (f"another language ({', '.join(sorted(own))}) than its document "
+                    f"({', '.join(sorted(doc))})")
+    return None
+
+
+_WORD = re.compile(r"[^\W\d_]+")
+
+
+def _unquoted_rest(folded: str, start: int, end: int) -> str | None:
+    """The words of ``folded[start:end]`` outside quotation marks, when quotations make up
+    at least :data:`QUOTE_REPORT_SHARE` of it and :data:`QUOTE_REPORT_WORDS` words are left
+    outside; None otherwise. A quotation still open at the end of the window runs to it."""
+    window = folded[start:end]
+    if not any(q in window for q in "\"'\u201c\u201e\u00ab\u300c"):
+        return None
+    parts, inside, at = [], 0, 0
+    for m in _QUOTATION.finditer(window):
+        parts.append(window[at:m.start()])
+        inside += m.end() - m.start()
+        at = m.end()
+    tail = window[at:]
+    if tail.count('"') % 2 == 1:  # an open quotation running past the window
+        cut = tail.index('"')
+        inside += len(tail) - cut
+        tail = tail[:cut]
+    parts.append(tail)
+    rest = " ".join(parts)
+    if inside < QUOTE_REPORT_SHARE * len(window) or (
+            len(rest.split()) < QUOTE_REPORT_WORDS and not _REPORTING.search(rest)):
+        return None
+    return rest
+
+
+# Words that introduce a quotation in a report ("a wiki page stated: ...").
+_REPORTING = re.compile(r"\b(?:stated|said|says|wrote|writes|read|reads|reading|contained|"
+                        r"contains|included|includes|asked|told|claimed|ended\s+with|began\s+with|"
+                        r"like|as\s+follows|schrieb|lautete|stand|disait|decia|diceva|dizia|"
+                        r"luidde|brzmial|gloszac|gl\w+|stod|stand|гласил|написано)\b")
+# A heading that presents what follows as an example or a case ("### Example: ...").
+EXAMPLE_HEAD = re.compile(r"[#*=\-\s]*(?:example|sample|case(?:\s+study)?|scenario|incident|"
+                          r"quiz|question|exercise|beispiel|exemple|ejemplo|esempio|exemplo|"
+                          r"voorbeeld|przyklad|exempel)\b[^\n]{0,80}$")
 
 
 def _snippet(text: str, start: int, end: int) -> str:

@@ -699,8 +699,11 @@ def _quoted(folded: str, start: int, end: int) -> bool:
         line_end = min(len(folded), end + 300)
     before = folded[max(line_start, start - 300):start]
     after = folded[end:line_end]
+    # A quotation may run on to the next line of its paragraph (a wrapped PDF line).
+    para_end = folded.find("\n\n", end, end + 300)
+    wrapped = folded[end:para_end if para_end >= 0 else min(len(folded), end + 300)]
     for q in _QUOTE_CHARS:
-        if before.count(q) % 2 == 1 and q in after:
+        if before.count(q) % 2 == 1 and (q in after or q in wrapped):
             return True
     if "'" in before and "'" in after:  # single quotes, told apart from apostrophes
         line = folded[line_start:line_end]
