@@ -27,6 +27,31 @@ def test_broder_rose_example():
         assert len(sa & sb) / len(sa | sb) == pytest.approx(value)
 
 
+def test_shingle_hashes_are_the_distinct_sorted_folded_hashes():
+    # the definition in the docstring, computed the plain way (one string per shingle,
+    # CRC-32 per word, polynomial fold, then np.unique) on invented random token lists
+    import zlib
+
+    import numpy as np
+
+    rng = random.Random(11)
+    for _ in range(300):
+        tokens = [rng.choice(["a", "b", "depot", "\u00e9t\u00e9", "7"])
+                  for _ in range(rng.randint(1, 40))]
+        w = rng.randint(1, 6)
+        if len(tokens) < w:
+            continue
+        folded = []
+        for i in range(len(tokens) - w + 1):
+            h = 0
+            for word in tokens[i:i + w]:
+                h = (h * 1_099_511_628_211 + zlib.crc32(word.encode("utf-8"))) % 2**64
+            folded.append((h ^ (h >> 32)) & 0xFFFFFFFF)
+        expected = np.unique(np.array(folded, dtype=np.uint64)).astype(np.uint32)
+        got = dup.shingle_hashes(tokens, w)
+        assert got.dtype == np.uint32 and np.array_equal(got, expected)
+
+
 def test_words_normalise_case_punctuation_and_compatibility_forms():
     assert dup.words("The DEPOT, north—open: ﬁve days!") == \
         ["the", "depot", "north", "open", "five", "days"]
