@@ -75,6 +75,20 @@ def test_words_put_together_from_lines_equal_the_whole_text():
         assert tokens.words(text) == tokens._words(text), repr(text)  # remembered lines
 
 
+def test_ascii_words_are_the_patterns_words():
+    # ASCII text takes a byte-translation path; it must find exactly the words the word
+    # pattern finds in the case-folded text (every ASCII character, invented random
+    # strings; common practice: a property test against the direct computation)
+    from gate import tokens
+
+    rng = random.Random(7)
+    alphabet = [chr(c) for c in range(128)] + ["ab", "Z9", "](x)", "<b>", "[r]: y"]
+    for _ in range(20_000):
+        text = "".join(rng.choice(alphabet) for _ in range(rng.randint(0, 40)))
+        assert tokens._words(text) == \
+            tokens._WORD.findall(tokens.plain(text).casefold()), repr(text)
+
+
 def test_sketch_values_are_datasketchs_own():
     # The reference library: datasketch's MinHash (affine32, seed 1, 256 permutations)
     # fed the same 32-bit item hashes one batch at a time must hold the very values the

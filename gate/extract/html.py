@@ -15,14 +15,18 @@ from __future__ import annotations
 
 import codecs
 import dataclasses
+import hashlib
 import re
+from bisect import bisect_right
+from collections import OrderedDict
+from dataclasses import dataclass
 
 import lxml.etree
 import lxml.html
 import trafilatura
 
 from gate.extract.model import (Block, DateClaim, Extracted, Extraction, failed,
-                                line_hashes, row_cells)
+                                row_cells)
 from gate.extract.text import clean_text, decode
 from gate.tokens import block_hash
 
@@ -175,13 +179,31 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
     what holds it, and ``main`` says whether trafilatura kept a line with the same words
     in ``main_text``.
     """
+    return _marked(_walk(root), main_text)
+
+
+Walked = list[tuple[str, int, float, str]]  # each block's text, hash, links, kind
+
+
+def _marked(found: Walked, main_text: str) -> tuple[Block, ...]:
+    """The walk's blocks, ``main`` where a line of ``main_text`` has the same words."""
+    # a line of the main text that is a block's text verbatim takes its hash
+    known = {text: digest for text, digest, _links, _kind in found}
+    main = {known.get(line.strip()) or block_hash(line) for line in main_text.split("\n")}
+    return tuple(Block(text=text, hash=digest, main=digest in main, links=links, kind=kind)
+                 for text, digest, links, kind in found)
+
+
+def _walk(root: lxml.etree._Element) -> Walked:
+    """The blocks of the page's body in document order (see :func:`page_blocks`)."""
     body = root.find("body")
     start = body if body is not None else root
-    blocks: list[Block] = []
+    found: Walked = []
     parts: list[str] = []
     holders: list[str] = ["body"]
     linked = 0
     in_link = 0
+    in_pre = 0
     skip = 0
 
     def flush() -> None:
@@ -190,16 +212,15 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
             return
         raw = "".join(parts)
         parts.clear()
+        kind = _KINDS.get(holders[-1], "text")
         # preformatted text is a block per line, as trafilatura writes it
-        pieces = raw.split("\n") if "pre" in holders else [raw]
-        for piece in pieces:
+        for piece in raw.split("\n") if in_pre else (raw,):
             # runs of white space as one space, trimmed (str.split's white space is re's \s)
             text = " ".join(piece.split())
-            digest = block_hash(text) if text else None
-            if digest is not None:
-                blocks.append(Block(text=text, hash=digest, main=False,
-                                    links=round(min(1.0, linked / len(text)), 3),
-                                    kind=_KINDS.get(holders[-1], "text")))
+            if text:
+                digest = block_hash(text)
+                if digest is not None:
+                    found.append((text, digest, round(min(1.0, linked / len(text)), 3), kind))
         linked = 0
 
     # the walk inlines what it adds (a call per node costs more than the work)
@@ -224,6 +245,8 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
                 if parts:
                     flush()
                 holders.append(tag)
+                if tag == "pre":
+                    in_pre += 1
             if tag == "a":
                 in_link += 1
             text = node.text
@@ -234,6 +257,8 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
                 if parts:
                     flush()
                 holders.pop()
+                if tag == "pre":
+                    in_pre -= 1
             if node is start:
                 continue
             text = node.tail
@@ -242,9 +267,7 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
             if in_link:
                 linked += len(text.strip())
     flush()
-    main = set(line_hashes(main_text, blocks))
-    return tuple(Block(text=b.text, hash=b.hash, main=True, links=b.links, kind=b.kind)
-                 if b.hash in main else b for b in blocks)
+    return found
 
 
 def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Block, ...]]:
@@ -256,19 +279,25 @@ def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Bloc
     Only when every line trafilatura wrote is one of the page's blocks, or a table row of
     them (so each line has a place in the page); otherwise its text is kept as it is.
     """
-    where: dict[int, list[int]] = {}
+    where: dict[int, list[int]] = {}  # a hash's places among the blocks, ascending
+    known: dict[str, int] = {}  # a block's text: its hash (a line that is one takes it)
     for i, block in enumerate(blocks):
         where.setdefault(block.hash, []).append(i)
+        known[block.text] = block.hash
     placed: list[tuple[int, int, str]] = []
     covered: set[int] = set()
     cursor = -1
-    for order, (line, digest) in enumerate(zip(text.split("\n"), line_hashes(text, blocks))):
+    for order, line in enumerate(text.split("\n")):
+        digest = known.get(line.strip()) or block_hash(line)
         if digest is None:
             continue
         parts = [digest] if digest in where else row_cells(line)
         if not parts or any(part not in where for part in parts):
             return text, blocks
-        position = next((i for i in where[parts[0]] if i > cursor), where[parts[0]][0])
+        # the first place after the cursor, else the first place
+        places = where[parts[0]]
+        after = bisect_right(places, cursor)
+        position = places[after] if after < len(places) else places[0]
         cursor = max(cursor, position)
         placed.append((position, order, line))
         covered.update(parts)
@@ -294,12 +323,72 @@ def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Bloc
     return "\n".join(line for _p, _o, line in lines), kept
 
 
+@dataclass(frozen=True)
+class _Read:
+    """What a page's tree gives besides its text: kept between a page's two passes."""
+
+    depth: int
+    title: str | None
+    canonical: str | None
+    lang: str | None
+    dates: tuple[DateClaim, ...]
+    found: Walked
+    size: int  # about how many bytes it holds
+
+
+# A page of a site is extracted twice in the same run: for its blocks (its site's template
+# is not known yet), then again, with the first pass's text, to have the template removed
+# and be measured. What the first pass read from the tree is kept here (per process, up to
+# about REMEMBERED_BYTES, oldest dropped first) under a digest of the bytes, so the second
+# pass parses the page again (the injection screen reads the tree) but neither walks it,
+# hashes its blocks nor reads its metadata a second time. Same tree, same values: which
+# worker runs the second pass changes nothing but the time it takes.
+_remembered: OrderedDict[tuple[bytes, str | None, int], _Read] = OrderedDict()
+_remembered_bytes = [0]
+BLOCK_OVERHEAD = 200  # bytes of a remembered block besides its text (tuple, int, float)
+
+
+def _key(data: bytes, encoding: str | None, max_nesting: int) -> tuple[bytes, str | None, int]:
+    return hashlib.blake2b(data, digest_size=16).digest(), encoding, max_nesting
+
+
+def _remember(key: tuple[bytes, str | None, int], read: _Read, budget: int) -> None:
+    if read.size > budget:
+        return
+    while _remembered and _remembered_bytes[0] + read.size > budget:
+        _remembered_bytes[0] -= _remembered.popitem(last=False)[1].size
+    _remembered[key] = read
+    _remembered_bytes[0] += read.size
+
+
+def _recall(key: tuple[bytes, str | None, int]) -> _Read | None:
+    read = _remembered.pop(key, None)
+    if read is not None:
+        _remembered_bytes[0] -= read.size
+    return read
+
+
+def _read(root: lxml.etree._Element, depth: int) -> _Read:
+    """The page's metadata and blocks (see :func:`page_blocks`), from its tree."""
+    title = _first(root, "//meta[@property='og:title']/@content") or \
+        _first(root, "//title/text()")
+    canonical = _first(root, "//link[translate(@rel,'CANONICAL','canonical')='canonical']/@href") \
+        or _first(root, "//meta[@property='og:url']/@content")
+    lang = _first(root, "/html/@lang")
+    found = _walk(root)
+    size = sum(len(text) for text, _h, _l, _k in found) + BLOCK_OVERHEAD * len(found)
+    return _Read(depth=depth, title=title, canonical=canonical, lang=lang,
+                 dates=_meta_dates(root), found=found, size=size)
+
+
 def extract_html(data: bytes, encoding: str | None, max_nesting: int,
-                 main_text: str | None = None) -> Extraction:
+                 main_text: str | None = None, remember: int = 0) -> Extraction:
     """Extract an HTML page (``encoding`` comes from a byte-order mark, if any).
 
     ``main_text`` is this page's text from an earlier extraction of the same bytes: the
-    same result, without running trafilatura again."""
+    same result, without running trafilatura again (nor walking the tree again, when the
+    earlier extraction in this process was told to ``remember`` it: a budget in bytes for
+    all pages remembered)."""
     decoded = decode_html(data, encoding)
     if decoded is None:
         return failed("html", "undecodable",
@@ -314,7 +403,10 @@ def extract_html(data: bytes, encoding: str | None, max_nesting: int,
         if not markup.strip():
             return failed("html", "empty-text", "the page holds only white space")
         return failed("html", "broken", f"the HTML could not be parsed ({err})")
-    depth = max_depth(root)
+    key = _key(data, encoding, max_nesting) if remember or \
+        (main_text is not None and _remembered) else None
+    read = _recall(key) if key is not None and main_text is not None else None
+    depth = read.depth if read is not None else max_depth(root)
     common = dict(type="html", encoding=used, declared_charset=declared,
                   charset_mismatch=mismatch, nesting_depth=depth)
     if depth > max_nesting:
@@ -331,14 +423,14 @@ def extract_html(data: bytes, encoding: str | None, max_nesting: int,
         if not text.strip():
             text = fallback_text(root)
         text = clean_text(text)
-    title = _first(root, "//meta[@property='og:title']/@content") or \
-        _first(root, "//title/text()")
-    canonical = _first(root, "//link[translate(@rel,'CANONICAL','canonical')='canonical']/@href") \
-        or _first(root, "//meta[@property='og:url']/@content")
-    lang = _first(root, "/html/@lang")
-    summary = Extracted(title=title, canonical_url=canonical, declared_lang=lang,
-                        text_chars=len(text), dates=_meta_dates(root), **common)
-    text, blocks = complete_main(text, page_blocks(root, text))
+    if read is None:
+        read = _read(root, depth)  # trafilatura copies the tree it is given: unchanged
+        if remember and key is not None:
+            _remember(key, read, remember)
+    summary = Extracted(title=read.title, canonical_url=read.canonical,
+                        declared_lang=read.lang, dates=read.dates, text_chars=len(text),
+                        **common)
+    text, blocks = complete_main(text, _marked(read.found, text))
     summary = dataclasses.replace(summary, text_chars=len(text))
     return Extraction(summary=summary, text=text, raw=data, decoded=markup, tree=root,
                       blocks=blocks)
