@@ -30,6 +30,7 @@ from __future__ import annotations
 
 import argparse
 import functools
+import gc
 import json
 import os
 import pickle
@@ -132,6 +133,8 @@ def _install_worker_probes() -> None:
     _everywhere(html, "_meta_dates", "extract html: metadata")
     _everywhere(html, "_first", "extract html: metadata")
     _everywhere(html, "page_blocks", "blocks: page blocks (html walk)")
+    _everywhere(html, "_walk", "blocks: page blocks (html walk)")
+    _everywhere(html, "_marked", "blocks: marking the main text's blocks")
     _everywhere(html, "complete_main", "blocks: completing main text")
     _everywhere(gate.extract, "line_blocks", "blocks: line blocks (pdf, text)")
     _everywhere(pdf, "_extract", "extract pdf: pypdf")
@@ -139,6 +142,7 @@ def _install_worker_probes() -> None:
     _everywhere(gate.extract.text, "clean_text", "extract: clean_text")
     _everywhere(gate.tokens, "block_hash", "tokenising: block hashes")
     _everywhere(gate.tokens, "words", "tokenising: words()")
+    _everywhere(gate.tokens, "_line_words", "tokenising: words()")
     _everywhere(gate.templates, "block_summary", "blocks: block summary")
     _everywhere(gate.templates, "compose", "templates: composing the page's text")
     _everywhere(duplicate, "shingle_hashes", "measure duplicate: shingle hashes")
@@ -191,6 +195,14 @@ def _install_parent_probes() -> None:
     _everywhere(Connection, "send", "parent: sending tasks (pickling)")
 
 
+def _collecting(phase: str, info: dict[str, Any]) -> None:
+    """Garbage collections, charged to themselves rather than to what triggered them."""
+    if phase == "start":
+        _enter(f"garbage collection (generation {info['generation']})")
+    elif _stack:
+        _leave()
+
+
 def _worker_process(original: Any, task: Any) -> Any:
     """gate.work.process with the probes' figures added to its timings: those since the
     previous result (this task's intake and staging, the previous result's packing)."""
@@ -228,6 +240,7 @@ def run_once(docs: int, workers: int) -> dict[str, Any]:
     out = work / "breakdown-out"
     shutil.rmtree(out, ignore_errors=True)
     gate.work.warm_up()
+    gc.callbacks.append(_collecting)
     _install_worker_probes()
     _install_parent_probes()
     gate.work.process = functools.partial(_worker_process, gate.work.process)
