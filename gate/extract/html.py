@@ -179,17 +179,23 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
     what holds it, and ``main`` says whether trafilatura kept a line with the same words
     in ``main_text``.
     """
-    return _marked(_walk(root), main_text)
+    found = _walk(root)
+    return _marked(found, _line_digests(main_text, found))
 
 
 Walked = list[tuple[str, int, float, str]]  # each block's text, hash, links, kind
 
 
-def _marked(found: Walked, main_text: str) -> tuple[Block, ...]:
-    """The walk's blocks, ``main`` where a line of ``main_text`` has the same words."""
-    # a line of the main text that is a block's text verbatim takes its hash
-    known = {text: digest for text, digest, _links, _kind in found}
-    main = {known.get(line.strip()) or block_hash(line) for line in main_text.split("\n")}
+def _line_digests(text: str, found: Walked) -> list[int | None]:
+    """Each line's block hash (a line that is a block's text verbatim takes its hash)."""
+    known = {block: digest for block, digest, _links, _kind in found}
+    return [known.get(line.strip()) or block_hash(line) for line in text.split("\n")]
+
+
+def _marked(found: Walked, digests: list[int | None]) -> tuple[Block, ...]:
+    """The walk's blocks, ``main`` where a line of the main text (its ``digests``) has
+    the same words."""
+    main = set(digests)
     return tuple(Block(text=text, hash=digest, main=digest in main, links=links, kind=kind)
                  for text, digest, links, kind in found)
 
@@ -270,7 +276,8 @@ def _walk(root: lxml.etree._Element) -> Walked:
     return found
 
 
-def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Block, ...]]:
+def complete_main(text: str, blocks: tuple[Block, ...], digests: list[int | None] | None = None
+                  ) -> tuple[str, tuple[Block, ...]]:
     """trafilatura's text with the headings, list items and table cells it dropped inside
     the stretch of the page it chose (and those right before and after it: a title, a
     closing list or table), so a heading, a list or a table counts in HTML as it does in
@@ -278,6 +285,7 @@ def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Bloc
 
     Only when every line trafilatura wrote is one of the page's blocks, or a table row of
     them (so each line has a place in the page); otherwise its text is kept as it is.
+    ``digests``: the block hash of each line of ``text``, when already known.
     """
     where: dict[int, list[int]] = {}  # a hash's places among the blocks, ascending
     known: dict[str, int] = {}  # a block's text: its hash (a line that is one takes it)
@@ -287,8 +295,10 @@ def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Bloc
     placed: list[tuple[int, int, str]] = []
     covered: set[int] = set()
     cursor = -1
-    for order, line in enumerate(text.split("\n")):
-        digest = known.get(line.strip()) or block_hash(line)
+    lines = text.split("\n")
+    if digests is None:
+        digests = [known.get(line.strip()) or block_hash(line) for line in lines]
+    for order, (line, digest) in enumerate(zip(lines, digests)):
         if digest is None:
             continue
         parts = [digest] if digest in where else row_cells(line)
@@ -430,7 +440,8 @@ def extract_html(data: bytes, encoding: str | None, max_nesting: int,
     summary = Extracted(title=read.title, canonical_url=read.canonical,
                         declared_lang=read.lang, dates=read.dates, text_chars=len(text),
                         **common)
-    text, blocks = complete_main(text, _marked(read.found, text))
+    digests = _line_digests(text, read.found)
+    text, blocks = complete_main(text, _marked(read.found, digests), digests)
     summary = dataclasses.replace(summary, text_chars=len(text))
     return Extraction(summary=summary, text=text, raw=data, decoded=markup, tree=root,
                       blocks=blocks)
