@@ -93,8 +93,11 @@ def _probe(fn: Any, label: str) -> Any:
 
 
 def _everywhere(owner: Any, name: str, label: str) -> None:
-    """Wrap ``owner.name`` and every gate module's attribute bound to the same function."""
-    original = getattr(owner, name)
+    """Wrap ``owner.name`` and every gate module's attribute bound to the same function
+    (a name the code does not have, such as an older version's, is left out)."""
+    original = getattr(owner, name, None)
+    if original is None:
+        return
     if getattr(original, "__probed__", False):
         return
     probed = _probe(original, label)
