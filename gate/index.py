@@ -16,7 +16,8 @@ folder's documents. The index is brought in line with the folder's corpus state 
 of every run and review, as part of committing (a killed run re-syncs when it resumes).
 Runs sharing an index must not overlap; a lock in Redis refuses a second one.
 
-Keys: ``gate:<name>:meta`` (hash: member -> JSON), ``gate:<name>:owner:<folder>`` (set),
+Keys: ``gate:<name>:meta`` (hash: member -> JSON), ``gate:<name>:owner:<bands>x<rows>:<folder>``
+(set; per LSH layout, so a layout that changed is filled again by the next sync),
 ``gate:<name>:sha:<digest>`` and ``gate:<name>:text:<digest>`` (sets, exact copies),
 ``gate:<name>:lock``, and datasketch's bucket keys under a basename that encodes the
 permutations, bands, rows, scheme and seed (an index built with other parameters is never
@@ -100,6 +101,7 @@ class SharedIndex:
                              "start Redis or "
                              "run without --index.") from None
         bands, rows = dup.band_params(threshold)
+        self.layout = f"{bands}x{rows}"
         basename = (f"gate:{name}:lsh:{dup.NUM_PERM}:{bands}x{rows}:{dup.SCHEME}:"
                     f"{dup.SEED}").encode()
         self.lsh = MinHashLSH(num_perm=dup.NUM_PERM, params=(bands, rows),
@@ -188,7 +190,9 @@ class SharedIndex:
 
         Only the documents that changed are read in full, in batches, so syncing a large
         corpus does not load every sketch at once."""
-        owner_key = self.prefix + "owner:" + self.owner
+        # the owner set is kept per LSH layout: an index first built with other bands and
+        # rows holds none of this folder's documents in the buckets read now
+        owner_key = self.prefix + "owner:" + self.layout + ":" + self.owner
         current = sorted(m.decode() for m in self.redis.smembers(owner_key))
         desired = {self._member(doc_id): sha for doc_id, sha in state.corpus_digests()}
         stale: list[tuple[str, dict[str, Any]]] = []

@@ -59,7 +59,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import words
 
-TEMPLATES_VERSION = 9  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 11  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -68,7 +68,10 @@ MAIN_RATIO = 0.5
 TEMPLATE_SHARE = 0.3  # template share of an unplaceable text that makes it give way
 MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilatura's text
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
+SHAPE_MIN_WORDS = 3  # a line with numbers this short (3-12 words) may be a per-page
+SHAPE_MAX_WORDS = 12  # template line ("Updated 34 days ago"); a title "Notice 2" is not
 MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
+SANDWICH_MAX = 6  # template blocks in a row kept between two blocks of the page's own
 
 
 def site_of(source_url: str | None) -> str | None:
@@ -82,13 +85,34 @@ def site_of(source_url: str | None) -> str | None:
         return None
 
 
-def block_summary(blocks: Sequence[Block]) -> dict[str, list[int]]:
-    """The page's distinct block hashes, in trafilatura's main text or not (for the cache
-    and the parent's learning; a few hundred bytes a page)."""
-    main = sorted({b.hash for b in blocks if b.main})
+def shape_hash(text: str) -> int | None:
+    """The hash of a short line's words with every word holding a digit made one and the
+    same ("Updated 153 days ago" and "Updated 4 days ago" alike); None for a block that
+    is not such a line (3 to 12 words, a digit among them, and not only numbers)."""
+    tokens = words(text)
+    if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS or \
+            not any(c.isdigit() for c in text):
+        return None
+    shape = " ".join("#" if any(c.isdigit() for c in t) else t for t in tokens)
+    if shape.count("#") == len(tokens):
+        return None
+    digest = hashlib.blake2b(shape.encode("utf-8"), digest_size=8, person=b"shape").digest()
+    return int.from_bytes(digest, "little") >> 1
+
+
+def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
+    """The page's distinct block hashes, in trafilatura's main text or not, and the shapes
+    of its short lines with numbers (for the cache and the parent's learning; a few
+    hundred bytes a page)."""
+    main = sorted({b.hash for b in blocks if b.main and not b.nav})
     taken = set(main)
-    other = sorted({b.hash for b in blocks if b.hash not in taken})
-    return {"main": main, "other": other}
+    # a teaser list's blocks quote other pages (their titles, their first words): counted,
+    # they would make a page's own title and opening look like a rotating teaser
+    other = sorted({b.hash for b in blocks if b.hash not in taken and not b.nav})
+    shaped = sorted({(shape, b.hash) for b in blocks
+                     if b.kind == "text" and not b.nav and b.links < LINK_DOMINATED and
+                     (shape := shape_hash(b.text)) is not None})
+    return {"main": main, "other": other, "shaped": [list(pair) for pair in shaped]}
 
 
 @dataclass(frozen=True)
@@ -98,11 +122,13 @@ class Page:
     site: str
     main: np.ndarray  # uint64, sorted, distinct
     other: np.ndarray  # uint64, sorted, distinct, none of them in main
+    shaped: tuple[tuple[int, int], ...] = ()  # (shape hash, block hash) of numbered lines
 
     @classmethod
-    def of(cls, site: str, summary: dict[str, list[int]]) -> Page:
+    def of(cls, site: str, summary: dict[str, list]) -> Page:
         return cls(site, np.array(summary.get("main", ()), dtype=np.uint64),
-                   np.array(summary.get("other", ()), dtype=np.uint64))
+                   np.array(summary.get("other", ()), dtype=np.uint64),
+                   tuple((int(s), int(h)) for s, h in summary.get("shaped", ())))
 
     @property
     def hashes(self) -> np.ndarray:
@@ -112,13 +138,17 @@ class Page:
         return hashlib.sha256(self.main.tobytes() + b"|" + self.other.tobytes()).digest()
 
 
-def learn(pages: Iterable[Page]) -> dict[str, tuple[np.ndarray, np.ndarray]]:
-    """Each host's template blocks, for hosts that teach any: (on most pages, by the
-    aside rule only), as sorted uint64 hashes."""
+Learnt = dict[str, tuple[np.ndarray, np.ndarray, frozenset[int]]]
+
+
+def learn(pages: Iterable[Page]) -> Learnt:
+    """Each host's template, for hosts that teach any: (blocks on most pages, blocks by
+    the aside rule only, as sorted uint64 hashes; shapes of numbered lines on most
+    pages)."""
     by_site: dict[str, dict[bytes, Page]] = {}
     for page in pages:
         by_site.setdefault(page.site, {}).setdefault(page.signature(), page)
-    learnt: dict[str, tuple[np.ndarray, np.ndarray]] = {}
+    learnt: Learnt = {}
     for site in sorted(by_site):
         distinct = list(by_site[site].values())
         n = len(distinct)
@@ -134,8 +164,20 @@ def learn(pages: Iterable[Page]) -> dict[str, tuple[np.ndarray, np.ndarray]]:
         aside = (total >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n))) & \
             (2 * mains <= total)
         strong, weak = every[anywhere], every[aside & ~anywhere]
-        if len(strong) or len(weak):
-            learnt[site] = (strong, weak)
+        # short lines with numbers that differ from page to page ("Updated 153 days
+        # ago", "1,849 views"): their shape on most pages, in more than one wording
+        pages_of: dict[int, int] = {}
+        wordings: dict[int, set[int]] = {}
+        for page in distinct:
+            for shape in {shape for shape, _h in page.shaped}:
+                pages_of[shape] = pages_of.get(shape, 0) + 1
+            for shape, digest in page.shaped:
+                wordings.setdefault(shape, set()).add(digest)
+        shapes = frozenset(shape for shape, count in pages_of.items()
+                           if count >= max(MIN_PAGES, math.ceil(SHARE_ANY * n)) and
+                           len(wordings[shape]) > 1)
+        if len(strong) or len(weak) or shapes:
+            learnt[site] = (strong, weak, shapes)
     return learnt
 
 
@@ -157,16 +199,18 @@ def stored_pages(state: Any, batch: set[str]) -> list[Page]:
 Removal = tuple[tuple[int, ...], tuple[int, ...]]  # (everywhere, aside-only), or ()
 
 
-def removal(page: Page, learnt: dict[str, tuple[np.ndarray, np.ndarray]]
-            ) -> Removal | tuple[()]:
+def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     """The template blocks of ``page``: those on most of the site's pages, and those only
     the aside rule names (sorted hashes each); ``()`` when none."""
     template = learnt.get(page.site)
     if template is None:
         return ()
     mine = page.hashes
-    found = tuple(tuple(int(h) for h in np.intersect1d(mine, part, assume_unique=True))
-                  for part in template)
+    found = [tuple(int(h) for h in np.intersect1d(mine, part, assume_unique=True))
+             for part in template[:2]]
+    shaped = {h for shape, h in page.shaped if shape in template[2]} - set(found[0])
+    if shaped:
+        found[0] = tuple(sorted(set(found[0]) | shaped))
     return (found[0], found[1]) if found[0] or found[1] else ()
 
 
@@ -181,18 +225,48 @@ def _dropped(blocks: Sequence[Block], strong: set[int], weak: set[int]) -> set[i
     """The blocks removed from this page: every strong one, and a weak one (recurring on
     a fifth of the pages, outside the main text) only where it sits beside a link-dominated
     or a strong block, or in a run of weak blocks that does, as teasers and section menus
-    do; a stock paragraph that several notices share sits among their own text and stays."""
+    do; a stock paragraph that several notices share sits among their own text and stays,
+    and so does a heading of the main text (a page's title, which other pages of the site
+    list in their asides)."""
     drop = set(strong)
     anchored = [b.links >= LINK_DOMINATED or b.hash in strong for b in blocks]
     changed = True
     while changed:  # a run of weak blocks goes when one end of it touches an anchor
         changed = False
         for i, block in enumerate(blocks):
-            if block.hash in weak and not anchored[i] and (
+            if block.hash in weak and not anchored[i] and \
+                    not (block.kind == "heading" and block.main) and (
                     (i > 0 and anchored[i - 1]) or (i + 1 < len(blocks) and anchored[i + 1])):
                 anchored[i] = changed = True
                 drop.add(block.hash)
     return drop
+
+
+def _sandwiched(blocks: Sequence[Block], drop: set[int]) -> set[int]:
+    """Template blocks that stand inside the page's own text: a run of at most
+    ``SANDWICH_MAX`` unlinked template blocks whose neighbours on both sides are unlinked
+    blocks of the page's own. A table's header row, a cell value such as "Closed" or a
+    stock sentence that most notices of a site share are then kept where they stand in a
+    notice, while the same words in the menu, an aside or the footer still go."""
+    def own(i: int) -> bool:
+        b = blocks[i]
+        return b.hash not in drop and b.links < LINK_DOMINATED and not b.nav
+
+    kept: set[int] = set()
+    i = 0
+    while i < len(blocks):
+        if blocks[i].hash not in drop:
+            i += 1
+            continue
+        j = i
+        while j < len(blocks) and blocks[j].hash in drop:
+            j += 1
+        run = blocks[i:j]
+        if j - i <= SANDWICH_MAX and i > 0 and j < len(blocks) and own(i - 1) and own(j) \
+                and all(b.links < LINK_DOMINATED and not b.nav for b in run):
+            kept.update(b.hash for b in run)
+        i = j
+    return kept
 
 
 def _word_count(lines: Iterable[str]) -> int:
@@ -255,6 +329,7 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
         return text, {}
     blocks = tuple(blocks)
     drop = _dropped(blocks, set(template[0]), set(template[1]))
+    drop -= _sandwiched(blocks, drop)
     if not drop:
         return text, {}
     drop |= _crumb_trails(blocks)
@@ -269,7 +344,8 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
         if any(part is None or part not in drop for part in parts):
             main_rest.append(line)
     placed = not unplaced
-    own = [b.text for b in blocks if b.hash not in drop and b.links < LINK_DOMINATED]
+    own = [b.text for b in blocks
+           if b.hash not in drop and b.links < LINK_DOMINATED and not b.nav]
     main_words, own_words = _word_count(main_rest), _word_count(own)
     if not placed:
         # how much of trafilatura's text is template: the template blocks found in it

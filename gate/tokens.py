@@ -1,10 +1,10 @@
 """The one token stream of a text: what shingles, block hashes and template learning read.
 
 Every format reaches the same words: Markdown markup (heading marks, emphasis, list
-bullets, table pipes and separator rows, link targets and image sources), inline HTML tags
-and punctuation are not words, so a heading, a list item or a table cell gives the same
-tokens whether it came from HTML, PDF, plain text or Markdown. A leaf module: it imports
-nothing of gate.
+bullets, ordered-list numbers, table pipes and separator rows, link targets and image
+sources), inline HTML tags, written-out web addresses and punctuation are not words, so
+a heading, a list item or a table cell gives the same tokens whether it came from HTML,
+PDF, plain text or Markdown. A leaf module: it imports nothing of gate.
 """
 
 from __future__ import annotations
@@ -17,20 +17,32 @@ from functools import lru_cache
 _WORD = re.compile(r"[^\W_]+", re.UNICODE)
 # [text](target "title") and ![alt](source): the target is not text a reader sees
 _MD_LINK = re.compile(r"(!?)\[([^\]\n]*)\]\([^)\n]*\)")
-# <https://...> autolinks are visible text; other tags are markup
+# <https://...> autolinks are text (an address, which plain() then drops); other tags are markup
 _TAG = re.compile(r"</?[A-Za-z][A-Za-z0-9-]*(?:\s[^<>\n]*)?/?>")
 _REF_DEF = re.compile(r"^\s{0,3}\[[^\]\n]+\]:\s*\S+.*$", re.M)
+# a web or mail address written out ("https://x.example.org/a", "www.x.example.org"): an
+# address, not words; HTML shows its link text instead, an export or a PDF footer writes it
+_URL = re.compile(r"(?:\b[A-Za-z][A-Za-z0-9+.-]*://|\bwww\.)[^\s<>()\[\]\"']+")
+# an ordered list's number ("1.", "2)") at the start of a line: HTML's <ol> numbers its
+# items without writing the numbers into the text, so a list gives the same words in
+# every format only without them
+_ORDERED = re.compile(r"^(\s*(?:[-*+>]\s+)?)\d{1,3}[.)](?=\s)", re.M)
 
 
 def plain(text: str) -> str:
-    """``text`` without Markdown link targets, reference definitions and HTML tags (the
-    rest of the markup is punctuation, which :func:`words` drops anyway)."""
+    """``text`` without Markdown link targets, reference definitions, HTML tags, written-out
+    web addresses and ordered-list numbers (the rest of the markup is punctuation, which
+    :func:`words` drops anyway)."""
     if "](" in text:
         text = _MD_LINK.sub(lambda m: m.group(2), text)
     if "]:" in text:
         text = _REF_DEF.sub("", text)
     if "<" in text:
         text = _TAG.sub(" ", text)
+    if "://" in text or "www." in text:
+        text = _URL.sub(" ", text)
+    if "." in text or ")" in text:
+        text = _ORDERED.sub(r"\1", text)
     return text
 
 

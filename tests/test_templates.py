@@ -119,7 +119,7 @@ def test_a_version_cluster_in_the_main_text_is_not_template():
     # text on 6 of 20 pages, below SHARE_ANY; an aside outside it on 6 of 20 is template
     pages = [page("b.example.org", [50, 51, 60 + i], [1, 90]) for i in range(6)]
     pages += [page("b.example.org", [300 + i], [1, 91]) for i in range(14)]
-    everywhere, aside = templates.learn(pages)["b.example.org"]
+    everywhere, aside, _shapes = templates.learn(pages)["b.example.org"]
     assert everywhere.tolist() == [1] and aside.tolist() == [90, 91]  # not 50, 51
 
 
@@ -424,3 +424,173 @@ def test_a_breadcrumb_trail_ending_in_the_pages_title_is_navigation():
                  "a > b > c > Route N62 timetable change and more"):
         assert templates._crumb_trails([Block(line, block_hash(line)), title,
                                         Block("null", block_hash("null"))]) == set()
+
+
+# -- teaser lists, titles, export headers, stock template inside a notice (invented) --------
+
+TEASERS = ("<div class='rel'><div>Related articles</div>" + "".join(
+    f"<div><a href='/n/{i}'><strong>Other notice {i} title</strong></a><p>{prose(200 + i, 14)}"
+    " ...</p></div>" for i in range(4)) + "</div>")
+NOTICE = ("<html><body><nav><a href='/'>Home</a> <a href='/b'>Bins</a></nav><main>"
+          "<h1>Lamp repairs on Elm Street</h1><p>{body}</p><p>{more}</p></main>{aside}"
+          "<footer>Invented Borough Council</footer></body></html>")
+
+
+def test_a_teaser_list_is_navigation_and_leaves_the_text():
+    body, more = prose(1, 40), prose(2, 30)
+    page = NOTICE.format(body=body, more=more, aside=TEASERS).encode()
+    got = extract(page, max_pages=10, max_nesting=100)
+    assert body in got.text and more in got.text
+    assert "Other notice" not in got.text and prose(200, 14) not in got.text
+    nav = [b.text for b in got.blocks if b.nav]
+    assert nav[0] == "Related articles" and len(nav) == 9  # heading, 4 titles, 4 snippets
+    # nor is it counted when a site's template is learnt
+    summary = templates.block_summary(got.blocks)
+    assert block_hash("Other notice 1 title") not in summary["main"] + summary["other"]
+    # one card under a heading of its own counts too; a single linked line in a notice
+    # followed by its own paragraphs does not
+    one = ("<div><div>Trending questions</div><div><a href='/q'>Where is my refund?</a>"
+           "</div><p>Refunds usually reach your account within five working days.</p></div>")
+    got = extract(NOTICE.format(body=body, more=more, aside=one).encode(), max_pages=10,
+                  max_nesting=100)
+    assert "Where is my refund" not in got.text and "Refunds usually" not in got.text
+    inline = NOTICE.format(body=body, more=more, aside="").replace(
+        f"<p>{more}</p>", f"<p><a href='/x'>Read the bin rules</a></p><p>{more}</p>")
+    got = extract(inline.encode(), max_pages=10, max_nesting=100)
+    assert more in got.text and not any(b.nav for b in got.blocks)
+
+
+def test_title_kept_item_teasers_and_fragment_links():
+    # a thread title in a header apart from the text trafilatura takes comes back on top
+    posts = "".join(f"<p>{prose(5 + i, 60)}</p>" for i in range(3))
+    head = ("<html><body><div class='thread'><h1>Kettle lid does not close</h1>"
+            f"<div>1849 views</div></div><div class='post'>{posts}</div></body></html>")
+    got = extract(head.encode(), max_pages=10, max_nesting=100)
+    assert got.text.split("\n")[0] == "Kettle lid does not close"
+    # "Title - snippet" list items, the title a link: a teaser list
+    items = "".join(f"<li><a href='/n/{i}'>Notice {i}</a> - {prose(300 + i, 12)}</li>"
+                    for i in range(3))
+    got = extract(NOTICE.format(body=prose(1, 40), more=prose(2, 30),
+                                aside=f"<ul>{items}</ul>").encode(),
+                  max_pages=10, max_nesting=100)
+    assert prose(300, 12) not in got.text and prose(1, 40) in got.text
+    # a link to a place on the same page is not a link to another page
+    blocks = extract(b"<html><body><h2><a href='#s1'>Section one</a></h2><p>x y z</p>"
+                     b"</body></html>", max_pages=10, max_nesting=100).blocks
+    assert blocks[0].lead == 0.0 and blocks[0].links == 1.0
+
+
+def test_export_headers_front_matter_and_end_markers_are_not_text():
+    from gate.extract.text import without_export_header
+
+    body = "Lamp repairs\n\nThe lamps on Elm Street are repaired on Monday."
+    front = '---\ntitle: "Lamp repairs"\nsource: https://x.example.org/a\ntags:\n  - lamps\n---\n'
+    assert without_export_header(front + body) == body
+    header = "Invented Records export\nSource: https://x.example.org/a\nExported: 2026-03-01\n\n"
+    assert without_export_header(header + body + "\n\n-- end of export --\n") == body
+    ruled = "Source: https://x.example.org/a\nExported: 2026-03-01\n==========\n"
+    assert without_export_header(ruled + body) == body
+    # one "Key: value" line is a document's own first line, not a header
+    own = "Date: Monday 3 March.\n\nThe lamps are repaired."
+    assert without_export_header(own) == own
+    # a rule line in Markdown, or an unclosed fence, is not front matter
+    assert without_export_header("---\nNot front matter here.\n---\nText") == \
+        "---\nNot front matter here.\n---\nText"
+    got = extract((front + body).encode(), max_pages=10, max_nesting=100)
+    assert words(got.text) == words(body)
+    # a PDF footer of a page number beside the page's address (single page: no repetition)
+    from gate.extract.pdf import without_furniture
+    assert without_furniture(["Notice\nBody line.\nPage 1 of 1  |  https://x.example.org/a"]) \
+        == ["Notice\nBody line."]
+    # ordered-list numbers are markup: HTML's <ol> does not write them (CommonMark, from
+    # memory: "1." and "1)" both start an ordered item)
+    assert words("1. Check the card\n2) Approve it") == words("Check the card\nApprove it")
+    assert words("In 2024 we said 3. things") == ["in", "2024", "we", "said", "3", "things"]
+
+
+def test_stock_template_inside_a_notice_stays_where_it_stands():
+    # "Closed" and a table header row are on every page of a clinic's site (template by
+    # the counts) but stand between the notice's own cells
+    def b(text, **kw):
+        return Block(text, block_hash(text), **kw)
+
+    menu = b("Home Notices Contact", links=1.0)
+    head = [b("Day", kind="cell"), b("Hours", kind="cell")]
+    own = [b("Opening hours over Easter", kind="heading"), b(prose(11, 20)),
+           b("Good Friday", kind="cell"), b("Closed", kind="cell"), b("Easter Monday", kind="cell"),
+           b("9:00 to 12:00", kind="cell")]
+    footer = b("Invented Clinic Partnership, Harbour Road")
+    blocks = [menu, own[0], own[1], *head, own[2], own[3], own[4], own[5], footer]
+    strong = tuple(x.hash for x in (menu, *head, own[3], footer))
+    text = "\n".join(x.text for x in blocks[1:-1])
+    cleaned, _info = templates.compose(text, blocks, (strong, ()))
+    assert cleaned == text  # nothing of the notice lost, menu and footer never in it
+    cleaned, _info = templates.compose(text + "\n" + footer.text, blocks, (strong, ()))
+    assert cleaned == text
+
+
+def test_short_lines_whose_numbers_change_from_page_to_page_are_template():
+    # invented help-centre pages: "Updated N days ago" and "N out of M found this
+    # helpful" on every page with other numbers; the notices' own numbered lines differ
+    def page(i):
+        blocks = [Block(f"Updated {3 + i} days ago", block_hash(f"Updated {3 + i} days ago")),
+                  Block(prose(i, 40), block_hash(prose(i, 40)), main=True),
+                  Block(f"Call 0100 555 {1000 + 7 * i} before {i % 9 + 1} pm today",
+                        block_hash(f"Call 0100 555 {1000 + 7 * i} before {i % 9 + 1} pm today"),
+                        main=True) if i % 3 == 0 else
+                  Block(prose(100 + i, 12), block_hash(prose(100 + i, 12)), main=True),
+                  Block(f"{i + 2} out of {i + 9} found this helpful",
+                        block_hash(f"{i + 2} out of {i + 9} found this helpful"))]
+        return blocks, templates.Page.of("help.example.org html", templates.block_summary(blocks))
+    pages = [page(i) for i in range(10)]
+    learnt = templates.learn([p for _b, p in pages])
+    assert len(learnt["help.example.org html"][2]) == 2  # the two lines, not the "Call" one
+    blocks, mine = pages[4]
+    drop = templates.removal(mine, learnt)
+    assert set(drop[0]) == {blocks[0].hash, blocks[3].hash}
+    text = "\n".join(b.text for b in blocks)
+    cleaned, _info = templates.compose(text, blocks, drop)
+    assert cleaned == "\n".join(b.text for b in blocks[1:3])
+    # a line of one wording on every page is the exact rule's, not a shape
+    assert templates.shape_hash("Open 9 to 5") is not None
+    assert templates.shape_hash("2024") is None and templates.shape_hash("Opening hours") is None
+    assert templates.shape_hash("Notice 2") is None  # a numbered title is too short
+
+
+def test_glossaries_in_page_contents_and_sentences_that_begin_with_a_link_are_text():
+    # shapes seen in a real HTML manual (DocBook output, from memory): a glossary whose
+    # terms link elsewhere, a section's contents linking to #fragments above its first
+    # paragraph, a paragraph that begins with a cross-reference
+    glossary = "<dl>" + "".join(
+        f"<dt><a href='/g{i}.html'>Term{i}</a></dt><dd>{prose(400 + i, 12)}</dd>"
+        for i in range(4)) + "</dl>"
+    contents = ("<h2>Custom plans</h2><dl><dt><a href='p.html#cb'>Plan callbacks</a></dt>"
+                f"</dl><p>{prose(410, 30)}</p><h3>Plan callbacks</h3>")
+    xref = (f"<h3>Operators</h3><p><a href='other.html'>Table 9</a> {prose(420, 20)}</p>"
+            "<p>Table 9. Match operators</p>")
+    for part in (glossary, contents, xref):
+        page = f"<html><body><main><h1>Manual page</h1><p>{prose(430, 40)}</p>{part}</main>" \
+               "</body></html>"
+        got = extract(page.encode(), max_pages=10, max_nesting=100)
+        assert not any(b.nav for b in got.blocks), part
+    # a page that is only a list of teasers keeps them (an index page)
+    index = "<html><body>" + TEASERS + "</body></html>"
+    got = extract(index.encode(), max_pages=10, max_nesting=100)
+    assert prose(201, 14) in got.text and not any(b.nav for b in got.blocks)
+
+
+def test_an_export_line_with_the_pages_address_and_date_is_learnt_as_template():
+    # invented text exports of one host: the first line names each page's own address
+    # and export date; written-out addresses are not words, so the line's shape recurs
+    def page(i):
+        text = (f"Exported from https://exports.example.net/n/notice-{i}.htm on "
+                f"2026-0{1 + i % 9}-1{i % 10}\n\nNotice {i}\n{prose(500 + i, 40)}")
+        blocks = extract(text.encode(), max_pages=10, max_nesting=100).blocks
+        return text, blocks, templates.Page.of("exports.example.net text",
+                                               templates.block_summary(blocks))
+    pages = [page(i) for i in range(5)]
+    learnt = templates.learn([p for _t, _b, p in pages])
+    text, blocks, mine = pages[2]
+    cleaned, _info = templates.compose(text, blocks, templates.removal(mine, learnt))
+    assert cleaned.split("\n")[0] == "Notice 2"
+    assert words("Source: https://x.example.org/a-2.htm") == ["source"]

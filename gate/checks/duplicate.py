@@ -23,9 +23,12 @@ Documents with fewer than ``min_shingles`` shingles are compared only exactly, b
 sketches of tiny sets collide.
 
 Candidates come from MinHash LSH with ``b`` bands of ``r`` rows chosen so that a pair at
-the threshold becomes a candidate with probability at least 0.9 and a pair 0.05 above it
+the threshold becomes a candidate with probability at least 0.99 and a pair 0.05 above it
 with at least 0.995 (1-(1-t^r)^b, Mining of Massive Datasets section 3.4.2); each
-candidate is then confirmed by the estimated Jaccard ``>= duplicates.threshold``.
+candidate is then confirmed by the estimated Jaccard ``>= duplicates.threshold``; an
+estimate within ``EXACT_MARGIN`` of the threshold (where a 256-permutation estimate errs
+either way about one time in five) is replaced by the exact Jaccard of the two texts'
+shingle sets when both texts can be read (a finding says which it reports).
 
 Which one is kept: documents are ranked by the ``trust`` of their allow rule (higher
 first), then by date (newer first; undated last), then by first seen (earlier runs first,
@@ -69,15 +72,20 @@ SEED = 1
 SCHEME = "affine32"
 SHINGLE = 5
 MIN_CANDIDATE_PROBABILITY = 0.995
+AT_THRESHOLD = 0.99  # candidate probability of a pair at the threshold
+FAR_BELOW = 0.15  # at most this for a pair 0.3 below it
+# an estimate this close to the threshold is checked against the exact Jaccard of the
+# two texts' shingle sets: 2.4 standard errors of a 256-permutation estimate at J = 0.8
+EXACT_MARGIN = 0.06
 
 EXACT = define("duplicate.exact", "an exact copy of a kept document",
                "this is an exact copy ({how}) of {keeper}, which is kept{why}{caveat}")
 NEAR = define("duplicate.near", "a near-duplicate of a kept document",
-              "this is a near-duplicate of {keeper} (estimated Jaccard {similarity:.2f}, "
+              "this is a near-duplicate of {keeper} ({measure} {similarity:.2f}, "
               "threshold {threshold:.2f}), which is kept{why}{diverging}")
 SUPERSEDED = define("duplicate.superseded", "replaced by a newer or more trusted version",
-                    "accepted in an earlier run, now replaced by {keeper} (estimated "
-                    "Jaccard {similarity:.2f}){why}{diverging}")
+                    "accepted in an earlier run, now replaced by {keeper} ({measure} "
+                    "{similarity:.2f}){why}{diverging}")
 
 
 class DuplicatesSettings(Section):
@@ -203,18 +211,21 @@ def band_params(threshold: float, num_perm: int = NUM_PERM) -> tuple[int, int]:
     Massive Datasets, section 3.4.2).
 
     The fewest bands (memory and query time grow with them) such that a pair at the
-    threshold is a candidate with P >= 0.9, a pair 0.05 above it with P >= 0.995, and a
-    pair 0.3 below it with P <= 0.05 (pages sharing a template do not all become
-    candidates of each other). Where no choice meets all three, the most rows that still
-    give P >= 0.995 at the threshold. For 0.80 and 256 permutations: 21 bands of 9 rows.
+    threshold is a candidate with P >= ``AT_THRESHOLD`` (0.99), a pair 0.05 above it with
+    P >= 0.995, and a pair 0.3 below it with P <= ``FAR_BELOW`` (0.15: candidates cost an
+    estimate each, and pages sharing a template do not all become candidates of each
+    other). Where no choice meets all three, the most rows that still give P >= 0.995 at
+    the threshold. For 0.80 and 256 permutations: 20 bands of 7 rows (0.991 at 0.80, 0.145
+    at 0.50; the earlier 21 x 9, from P >= 0.9 at the threshold, left a pair at 0.80 out
+    one time in twenty, and copies of a thin page sit there).
     """
     high, low = min(1.0, threshold + 0.05), max(0.0, threshold - 0.3)
     best: tuple[int, int] | None = None
     for rows in range(1, num_perm + 1):
         for bands in range(2, num_perm // rows + 1):
-            if _curve(threshold, bands, rows) >= 0.9 and \
+            if _curve(threshold, bands, rows) >= AT_THRESHOLD and \
                     _curve(high, bands, rows) >= MIN_CANDIDATE_PROBABILITY:
-                if _curve(low, bands, rows) <= 0.05 and (best is None or bands < best[0]):
+                if _curve(low, bands, rows) <= FAR_BELOW and (best is None or bands < best[0]):
                     best = (bands, rows)
                 break
     if best is not None:
@@ -297,6 +308,26 @@ def evaluate(items: Sequence[Item], settings: DuplicatesSettings,
     competing = sorted((i for i in items if i.candidate), key=_rank)
     held = [i for i in items if not i.candidate]
 
+    exact_sets: dict[str, np.ndarray | None] = {}
+
+    def shingled(key: str) -> np.ndarray | None:
+        if key not in exact_sets:
+            text = text_of(key) if text_of is not None else None
+            exact_sets[key] = None if text is None else shingle_hashes(words(text))
+        return exact_sets[key]
+
+    def similar(item: Item, key: str, estimate: float) -> tuple[float, str]:
+        """The similarity that decides: the estimate, or the exact Jaccard of the two
+        shingle sets when the estimate is within ``EXACT_MARGIN`` of the threshold and
+        both texts can be read (an estimate there is a coin toss either way)."""
+        if abs(estimate - settings.threshold) >= EXACT_MARGIN:
+            return estimate, "near"
+        mine, theirs = shingled(item.key), shingled(key)
+        if mine is None or theirs is None or not mine.size or not theirs.size:
+            return estimate, "near"
+        common = np.intersect1d(mine, theirs, assume_unique=True).size
+        return common / (mine.size + theirs.size - common), "near exact"
+
     def find(item: Item) -> tuple[Item, str, float] | None:
         if item.sha256 in by_bytes:
             return by_bytes[item.sha256], "same bytes", 1.0
@@ -309,9 +340,9 @@ def evaluate(items: Sequence[Item], settings: DuplicatesSettings,
         for key in sorted(lsh.query(mine)):
             # sketches are rebuilt from their bytes for the few candidates, rather than
             # kept as objects for every kept document (memory grows with the corpus)
-            similarity = float(mine.jaccard(lean(kept[key].minhash)))
+            similarity, how = similar(item, key, float(mine.jaccard(lean(kept[key].minhash))))
             if similarity >= settings.threshold and (best is None or similarity > best[2]):
-                best = (kept[key], "near", similarity)
+                best = (kept[key], how, similarity)
         return best
 
     for item in competing:
@@ -345,7 +376,8 @@ def _finding(item: Item, keeper: Item, how: str, similarity: float,
              ) -> Finding:
     why = _why(keeper, item)
     pairs: list[list[str]] = []
-    if how == "near" and text_of is not None:
+    near = how.startswith("near")
+    if near and text_of is not None:
         left, right = text_of(item.key), text_of(keeper.key)
         if left is not None and right is not None:
             pairs = diverging_tokens(left, right)
@@ -354,13 +386,14 @@ def _finding(item: Item, keeper: Item, how: str, similarity: float,
         diverging = "; the versions disagree: " + ", ".join(
             f"{old!r} here vs {new!r} in the keeper" for old, new in pairs[:3])
     details = dict(keeper=keeper.path, keeper_id=keeper.key, similarity=round(similarity, 4),
+                   measure="exact Jaccard" if how == "near exact" else "estimated Jaccard",
                    threshold=settings.threshold, why=why, diverging=diverging,
                    differences=pairs)
     if item.accepted_before and not keeper.accepted_before:
         return SUPERSEDED(**details)
-    if how != "near":
+    if not near:
         same = {k: v for k, v in details.items()
-                if k not in ("diverging", "differences", "threshold", "similarity")}
+                if k not in ("diverging", "differences", "threshold", "similarity", "measure")}
         caveat, extra = "", {}
         if how == "same text":
             excerpt = " ".join((text_of(item.key) or "").split()[:12]) if text_of else ""
@@ -400,5 +433,5 @@ def compare(view: CorpusView, settings: DuplicatesSettings) -> Outcome:
 
 
 CHECK = CorpusCheck(id="duplicate", section="duplicates", settings=DuplicatesSettings,
-                    measure=measure, evaluate=compare, measure_version=4,
+                    measure=measure, evaluate=compare, measure_version=5,
                     doc=__doc__ or "")

@@ -19,6 +19,7 @@ import hashlib
 import re
 from bisect import bisect_right
 from collections import OrderedDict
+from collections.abc import Sequence
 from dataclasses import dataclass
 
 import lxml.etree
@@ -26,7 +27,7 @@ import lxml.html
 import trafilatura
 
 from gate.extract.model import (Block, DateClaim, Extracted, Extraction, failed,
-                                row_cells)
+                                line_hashes, row_cells)
 from gate.extract.text import clean_text, decode
 from gate.tokens import block_hash
 
@@ -183,12 +184,12 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
     return _marked(found, _line_digests(main_text, found))
 
 
-Walked = list[tuple[str, int, float, str]]  # each block's text, hash, links, kind
+Walked = list[tuple[str, int, float, str, float]]  # each block's text, hash, links, kind, lead
 
 
 def _line_digests(text: str, found: Walked) -> list[int | None]:
     """Each line's block hash (a line that is a block's text verbatim takes its hash)."""
-    known = {block: digest for block, digest, _links, _kind in found}
+    known = {block: digest for block, digest, *_rest in found}
     return [known.get(line.strip()) or block_hash(line) for line in text.split("\n")]
 
 
@@ -196,8 +197,8 @@ def _marked(found: Walked, digests: list[int | None]) -> tuple[Block, ...]:
     """The walk's blocks, ``main`` where a line of the main text (its ``digests``) has
     the same words."""
     main = set(digests)
-    return tuple(Block(text=text, hash=digest, main=digest in main, links=links, kind=kind)
-                 for text, digest, links, kind in found)
+    return tuple(Block(text=text, hash=digest, main=digest in main, links=links, kind=kind,
+                       lead=lead) for text, digest, links, kind, lead in found)
 
 
 def _walk(root: lxml.etree._Element) -> Walked:
@@ -210,24 +211,42 @@ def _walk(root: lxml.etree._Element) -> Walked:
     linked = 0
     in_link = 0
     in_pre = 0
+    away: list[bool] = []  # for each open <a>: does it lead to another page?
+    lead = 0  # characters at the block's start inside links to another page
+    unlinked = False  # whether the block has had text outside such a link yet
     skip = 0
 
     def flush() -> None:
-        nonlocal linked
+        nonlocal linked, lead, unlinked
         if not parts:  # nothing since the last boundary (then nothing was linked either)
             return
         raw = "".join(parts)
         parts.clear()
         kind = _KINDS.get(holders[-1], "text")
         # preformatted text is a block per line, as trafilatura writes it
-        for piece in raw.split("\n") if in_pre else (raw,):
+        pieces = raw.split("\n") if in_pre else (raw,)
+        for piece in pieces:
             # runs of white space as one space, trimmed (str.split's white space is re's \s)
             text = " ".join(piece.split())
             if text:
                 digest = block_hash(text)
                 if digest is not None:
-                    found.append((text, digest, round(min(1.0, linked / len(text)), 3), kind))
-        linked = 0
+                    found.append((text, digest, round(min(1.0, linked / len(text)), 3), kind,
+                                  round(min(1.0, lead / len(text)), 3)
+                                  if len(pieces) == 1 else 0.0))
+        linked = lead = 0
+        unlinked = False
+
+    def add(text: str) -> None:
+        nonlocal linked, lead, unlinked
+        parts.append(text)
+        if in_link:
+            linked += len(text.strip())
+        if not unlinked:
+            if any(away):
+                lead += len(text.strip())
+            elif text.strip():
+                unlinked = True
 
     # the walk inlines what it adds (a call per node costs more than the work)
     for event, node in lxml.etree.iterwalk(start, events=("start", "end")):
@@ -240,9 +259,7 @@ def _walk(root: lxml.etree._Element) -> Walked:
                 if skip == 0 and node is not start:
                     text = node.tail
                     if text:
-                        parts.append(text)
-                        if in_link:
-                            linked += len(text.strip())
+                        add(text)
             continue
         if skip:
             continue
@@ -255,10 +272,14 @@ def _walk(root: lxml.etree._Element) -> Walked:
                     in_pre += 1
             if tag == "a":
                 in_link += 1
+                href = (node.get("href") or "").strip()
+                away.append(bool(href) and "#" not in href)  # not to a place in a page
             text = node.text
         else:
             if tag == "a":
                 in_link -= 1
+                if away:
+                    away.pop()
             if tag in _PAGE_BLOCKS:
                 if parts:
                     flush()
@@ -269,9 +290,7 @@ def _walk(root: lxml.etree._Element) -> Walked:
                 continue
             text = node.tail
         if text:
-            parts.append(text)
-            if in_link:
-                linked += len(text.strip())
+            add(text)
     flush()
     return found
 
@@ -327,10 +346,120 @@ def complete_main(text: str, blocks: tuple[Block, ...], digests: list[int | None
         return text, blocks
     main = covered | {blocks[i].hash for i in added}
     kept = tuple(b if b.main == (b.hash in main) else
-                 Block(text=b.text, hash=b.hash, main=b.hash in main, links=b.links,
-                       kind=b.kind) for b in blocks)
+                 dataclasses.replace(b, main=b.hash in main) for b in blocks)
     lines = sorted(placed + [(i, -1, blocks[i].text) for i in added])
     return "\n".join(line for _p, _o, line in lines), kept
+
+
+TEASER_MIN_CARDS = 3  # cards in a row that make a teaser list
+TITLE_MAX_WORDS = 20  # a teaser's linked title is short ...
+SNIPPET_MAX_WORDS = 80  # ... and so is the snippet under it
+SNIPPET_MIN_WORDS = 3
+BYLINE_MAX_WORDS = 6  # a date or a byline between a teaser's title and its snippet
+LIST_HEADING_MAX_WORDS = 6  # "Related articles", "More things to do", "See also"
+PAGE_MIN_WORDS = 15  # fewer left without the teaser lists: the lists are the page
+
+
+def _card(blocks: Sequence[Block], i: int) -> int:
+    """The number of blocks of a teaser card starting at ``blocks[i]`` (0: none): a title
+    that is wholly a link to another page followed by a short unlinked snippet (or by a
+    date or a byline and a snippet; a snippet is a paragraph, never a heading nor a term's
+    definition), or a list item that begins with such a link and goes on unlinked ("Title
+    - snippet ...": negative, such cards count only in a run of ``TEASER_MIN_CARDS``)."""
+    block = blocks[i]
+    size = len(block.text.split())
+    if block.lead >= 0.9 and size <= TITLE_MAX_WORDS:
+        def snippet(j: int, least: int) -> bool:  # not a heading, nor a term's definition
+            return j < len(blocks) and blocks[j].links < 0.5 and blocks[j].lead == 0 and \
+                blocks[j].kind == "text" and \
+                least <= len(blocks[j].text.split()) <= SNIPPET_MAX_WORDS
+
+        if snippet(i + 1, 1) and len(blocks[i + 1].text.split()) <= BYLINE_MAX_WORDS and \
+                snippet(i + 2, SNIPPET_MIN_WORDS):
+            return 3  # a title, a date or a byline, a snippet
+        if snippet(i + 1, SNIPPET_MIN_WORDS):
+            return 2
+    if block.kind == "item" and 0.05 <= block.lead < 0.9 and block.links < 0.6 and \
+            SNIPPET_MIN_WORDS + 1 <= size <= SNIPPET_MAX_WORDS + TITLE_MAX_WORDS:
+        return -1  # a list item: counts in a run of TEASER_MIN_CARDS only
+    return 0
+
+
+def teaser_lists(blocks: Sequence[Block]) -> set[int]:
+    """Indices of the blocks in teaser lists: runs of at least ``TEASER_MIN_CARDS`` cards
+    (see :func:`_card`) one after the other -- "related articles", "see also", "more things
+    to do", "other notices", "similar threads" -- with the short heading right before a
+    run; a shorter run only between a short heading of its own and another short block,
+    a link or the end of the page. Each card quotes another page, so the list is
+    navigation whatever its words are, and it differs from page to page, so learning a
+    site's template cannot name it."""
+    found: set[int] = set()
+    i = 0
+    while i < len(blocks):
+        start, cards, items = i, 0, 0
+        while i < len(blocks) and (size := _card(blocks, i)):
+            i += abs(size)
+            cards += 1
+            items += size < 0
+        before = start - 1
+        headed = before >= 0 and blocks[before].links < 0.5 and \
+            len(blocks[before].text.split()) <= LIST_HEADING_MAX_WORDS
+        if headed and blocks[before].kind == "heading" and blocks[before].main:
+            headed = False  # a heading of the main text (a page's title) is no list's
+        # a shorter run counts under a heading of its own ("Related articles") and
+        # before another short heading, a link or the end of the page
+        closed = i >= len(blocks) or blocks[i].links >= 0.5 or \
+            len(blocks[i].text.split()) <= LIST_HEADING_MAX_WORDS
+        if cards >= TEASER_MIN_CARDS or (cards and not items and headed and closed):
+            found.update(range(start, i))
+            if headed:
+                found.add(before)
+        i = max(i, start + 1)
+    return found
+
+
+def without_teasers(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Block, ...]]:
+    """``text`` without the lines of the page's teaser lists (:func:`teaser_lists`), the
+    blocks marked ``nav``; a line whose words are also a block outside any teaser list
+    stays. A page that would keep fewer than ``PAGE_MIN_WORDS`` words keeps its text (the
+    lists are the page: an index, a table of contents) and no block is marked."""
+    nav = teaser_lists(blocks)
+    if not nav:
+        return text, blocks
+    marked = tuple(dataclasses.replace(b, nav=True, main=False) if i in nav else b
+                   for i, b in enumerate(blocks))
+    gone = {b.hash for b in marked if b.nav} - {b.hash for b in marked if not b.nav}
+    kept = []
+    for line, digest in zip(text.split("\n"), line_hashes(text, blocks)):
+        cells = [digest] if digest is not None else row_cells(line)
+        if cells and all(cell in gone for cell in cells):
+            continue
+        kept.append(line)
+    rest = "\n".join(kept)
+    if len(rest.split()) < PAGE_MIN_WORDS:  # the list is the page (an index, a contents)
+        return text, blocks
+    return rest, marked
+
+
+def with_title(text: str, blocks: tuple[Block, ...], root: lxml.etree._Element
+               ) -> tuple[str, tuple[Block, ...]]:
+    """``text`` with the page's title on top when trafilatura left it out: the text of
+    the page's one ``<h1>``, when it is a heading block of the page (not a link, not in a
+    teaser list) that is nowhere in ``text`` (a forum thread's or a product page's title
+    stands in a header of its own, apart from the text below it)."""
+    heads = root.xpath("//body//h1")
+    if len(heads) != 1:
+        return text, blocks
+    digest = block_hash(" ".join(heads[0].text_content().split()))
+    if digest is None or digest in line_hashes(text, blocks):
+        return text, blocks
+    for i, block in enumerate(blocks):
+        if block.hash == digest:
+            if block.kind != "heading" or block.links >= 0.5 or block.nav:
+                return text, blocks
+            marked = blocks[:i] + (dataclasses.replace(block, main=True),) + blocks[i + 1:]
+            return f"{block.text}\n{text}" if text else block.text, marked
+    return text, blocks
 
 
 @dataclass(frozen=True)
@@ -386,7 +515,7 @@ def _read(root: lxml.etree._Element, depth: int) -> _Read:
         or _first(root, "//meta[@property='og:url']/@content")
     lang = _first(root, "/html/@lang")
     found = _walk(root)
-    size = sum(len(text) for text, _h, _l, _k in found) + BLOCK_OVERHEAD * len(found)
+    size = sum(len(block[0]) for block in found) + BLOCK_OVERHEAD * len(found)
     return _Read(depth=depth, title=title, canonical=canonical, lang=lang,
                  dates=_meta_dates(root), found=found, size=size)
 
@@ -441,7 +570,8 @@ def extract_html(data: bytes, encoding: str | None, max_nesting: int,
                         declared_lang=read.lang, dates=read.dates, text_chars=len(text),
                         **common)
     digests = _line_digests(text, read.found)
-    text, blocks = complete_main(text, _marked(read.found, digests), digests)
+    text, blocks = without_teasers(*complete_main(text, _marked(read.found, digests), digests))
+    text, blocks = with_title(text, blocks, root)
     summary = dataclasses.replace(summary, text_chars=len(text))
     return Extraction(summary=summary, text=text, raw=data, decoded=markup, tree=root,
                       blocks=blocks)

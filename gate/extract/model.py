@@ -80,6 +80,11 @@ class Block:
     main: bool = True  # in the main text the extractor chose (HTML: trafilatura's)
     links: float = 0.0  # share of its characters inside links (HTML)
     kind: str = "text"  # heading | item (list item, term) | cell (table) | text
+    # share of its characters at its start inside a link to another page (HTML; a link
+    # with a #fragment goes to a place in a page): a teaser's linked title, "Title -
+    # snippet" in one list item
+    lead: float = 0.0
+    nav: bool = False  # navigation by its structure (a run of teasers), never the text
 
 
 @dataclass

@@ -202,6 +202,10 @@ _DIGITS = re.compile(r"\d+")
 # ("Invented Records Office - page 3"): common practice in typesetting
 _PAGE_NUMBER = re.compile(r"^\W*(?:page\s+)?\d{1,4}(?:\s*(?:of|/)\s*\d{1,4})?\W*$"
                           r"|\bpage\s+\d{1,4}(?:\s+of\s+\d{1,4})?\W*$", re.IGNORECASE)
+# the parts of a footer line such as "Page 3 of 7 | https://example.org/a" or "Invented
+# Office  ·  Page 3": split at a bar, a middle dot or a run of spaces
+_FOOTER_PARTS = re.compile(r"\s+[|·•]\s+|\s{2,}")
+_ADDRESS = re.compile(r"^(?:[a-z][a-z0-9+.-]*://|www\.)\S+$|^\S+@\S+\.\S+$", re.IGNORECASE)
 FURNITURE_LINES = 2  # lines at the top and at the bottom of a page that may be furniture
 FURNITURE_MAX_WORDS = 8
 
@@ -230,10 +234,20 @@ def without_furniture(texts: list[str]) -> list[str]:
         ends = edges(lines)
         drop = {i for i in ends if len(texts) >= 2 and seen[key(lines[i])] >= recurring}
         drop |= {i for i in ends[:1] + ends[-1:]  # the very first and last line only
-                 if len(lines[i].split()) <= FURNITURE_MAX_WORDS and
-                 _PAGE_NUMBER.search(lines[i].strip())}
+                 if _page_number_line(lines[i])}
         out.append("\n".join(line for i, line in enumerate(lines) if i not in drop))
     return out
+
+
+def _page_number_line(line: str) -> bool:
+    """Whether a line is a page number, ends in one, or is one beside addresses ("Page 1
+    of 1 | https://..."), and is short apart from the addresses."""
+    parts = [part for part in _FOOTER_PARTS.split(line.strip()) if part]
+    rest = [part for part in parts if not _ADDRESS.match(part)]
+    if not rest or len(" ".join(rest).split()) > FURNITURE_MAX_WORDS:
+        return False
+    return any(_PAGE_NUMBER.search(part) for part in rest) if len(rest) < len(parts) \
+        else bool(_PAGE_NUMBER.search(line.strip()))
 
 
 def _why(err: BaseException) -> str:

@@ -28,6 +28,63 @@ def clean_text(text: str) -> str:
     return "\n".join(lines).strip("\n")
 
 
+_FRONT_FENCE = re.compile(r"^(?:---|\+\+\+)\s*$")
+_FRONT_END = re.compile(r"^(?:---|\.\.\.|\+\+\+)\s*$")
+_KEY_LINE = re.compile(r"^\s*[\w][\w .-]{0,30}\s*[:=]\s*\S")  # "title: ...", "Source: ..."
+_YAML_KEY = re.compile(r"^[\w][\w .-]{0,30}\s*[:=](?:\s|$)")  # "tags:" opens a list
+_CONTINUED = re.compile(r"^(?:\s+\S|\s*-\s)")  # a YAML value or list item going on
+_RULE = re.compile(r"^\s*([-=*_~#])\1{2,}\s*$")  # a line of one repeated mark
+_MARKER = re.compile(r"^\s*[-=*~#_]{2,}\s*[^\W\d_][\w .'-]{0,40}?\s*[-=*~#_]{2,}\s*$")
+FRONT_MAX_LINES = 40  # a front matter block longer than this is not one
+HEADER_MAX_LINES = 8  # key lines of an export header
+BANNER_MAX_WORDS = 6
+
+
+def without_export_header(text: str) -> str:
+    """A text without what an exporter or a static-site generator puts around the
+    document: YAML (or TOML) front matter at the very start (``---`` ... ``---``), a header
+    of two or more ``Key: value`` lines at the very start (after at most one short banner
+    line, such as "Records export") ended by a blank line or a rule, and a last line that is only a
+    marker ("-- end of export --"). None of it is the document's own text, and a copy of
+    the document in another format does not carry it. Anything else is left as it is."""
+    lines = text.split("\n")
+    start = 0
+    if lines and _FRONT_FENCE.match(lines[0]):
+        for i in range(1, min(len(lines), FRONT_MAX_LINES + 1)):
+            if _FRONT_END.match(lines[i]):
+                body = [line for line in lines[1:i] if line.strip()]
+                if body and all(_YAML_KEY.match(line) or _CONTINUED.match(line)
+                                for line in body) and _YAML_KEY.match(body[0]):
+                    start = i + 1
+                break
+            if not lines[i].strip():
+                continue
+    else:
+        filled = 0
+        first = 0
+        while first < len(lines) and not lines[first].strip():
+            first += 1
+        i = first
+        if i < len(lines) and not _KEY_LINE.match(lines[i]) and \
+                len(lines[i].split()) <= BANNER_MAX_WORDS:
+            i += 1  # a banner line
+        while i < len(lines) and lines[i].strip() and _KEY_LINE.match(lines[i]) and \
+                filled < HEADER_MAX_LINES:
+            filled += 1
+            i += 1
+        if filled >= 2 and (i >= len(lines) or not lines[i].strip() or
+                            _RULE.match(lines[i])):
+            start = i + 1 if i < len(lines) and _RULE.match(lines[i]) else i
+    end = len(lines)
+    while end > start and not lines[end - 1].strip():
+        end -= 1
+    if end > start + 1 and _MARKER.match(lines[end - 1]):
+        end -= 1
+    if start == 0 and end == len(lines):
+        return text
+    return "\n".join(lines[start:end]).strip("\n")
+
+
 def decode(data: bytes, encoding: str | None = None) -> tuple[str, str] | None:
     """Decode bytes to text: a known encoding, else strict UTF-8, else detection.
 
@@ -67,5 +124,7 @@ def extract_text(data: bytes, encoding: str | None) -> Extraction:
                       encoding=encoding)
     text, used = decoded
     cleaned = clean_text(text)
+    stripped = without_export_header(cleaned)
+    cleaned = stripped if stripped.strip() else cleaned
     summary = Extracted(type="text", encoding=used, text_chars=len(cleaned))
     return Extraction(summary=summary, text=cleaned, raw=data, decoded=text)
