@@ -30,6 +30,7 @@ from __future__ import annotations
 
 import argparse
 import functools
+import gc
 import json
 import os
 import pickle
@@ -52,6 +53,17 @@ _acc: dict[str, float] = defaultdict(float)  # exclusive CPU seconds per label
 _incl: dict[str, float] = defaultdict(float)  # inclusive CPU seconds (transparent probes)
 _stack: list[str] = []
 _last = [0.0]
+
+
+def _forked() -> None:
+    """A worker starts with nothing charged: the parent's figures stay the parent's."""
+    _acc.clear()
+    _incl.clear()
+    _stack.clear()
+    _last[0] = time.process_time()
+
+
+os.register_at_fork(after_in_child=_forked)
 
 
 def _enter(label: str) -> None:
@@ -81,8 +93,11 @@ def _probe(fn: Any, label: str) -> Any:
 
 
 def _everywhere(owner: Any, name: str, label: str) -> None:
-    """Wrap ``owner.name`` and every gate module's attribute bound to the same function."""
-    original = getattr(owner, name)
+    """Wrap ``owner.name`` and every gate module's attribute bound to the same function
+    (a name the code does not have, such as an older version's, is left out)."""
+    original = getattr(owner, name, None)
+    if original is None:
+        return
     if getattr(original, "__probed__", False):
         return
     probed = _probe(original, label)
@@ -104,7 +119,9 @@ def _install_worker_probes() -> None:
     import gate.extract.html as html
     import gate.extract.pdf as pdf
     import gate.extract.text as text
+    import gate.intake
     import gate.langid
+    import gate.placement
     import gate.templates
     import gate.tokens
     from gate.checks import duplicate
@@ -119,6 +136,8 @@ def _install_worker_probes() -> None:
     _everywhere(html, "_meta_dates", "extract html: metadata")
     _everywhere(html, "_first", "extract html: metadata")
     _everywhere(html, "page_blocks", "blocks: page blocks (html walk)")
+    _everywhere(html, "_walk", "blocks: page blocks (html walk)")
+    _everywhere(html, "_marked", "blocks: marking the main text's blocks")
     _everywhere(html, "complete_main", "blocks: completing main text")
     _everywhere(gate.extract, "line_blocks", "blocks: line blocks (pdf, text)")
     _everywhere(pdf, "_extract", "extract pdf: pypdf")
@@ -126,6 +145,7 @@ def _install_worker_probes() -> None:
     _everywhere(gate.extract.text, "clean_text", "extract: clean_text")
     _everywhere(gate.tokens, "block_hash", "tokenising: block hashes")
     _everywhere(gate.tokens, "words", "tokenising: words()")
+    _everywhere(gate.tokens, "_line_words", "tokenising: words()")
     _everywhere(gate.templates, "block_summary", "blocks: block summary")
     _everywhere(gate.templates, "compose", "templates: composing the page's text")
     _everywhere(duplicate, "shingle_hashes", "measure duplicate: shingle hashes")
@@ -135,6 +155,10 @@ def _install_worker_probes() -> None:
     _everywhere(screen.html_hidden, "collect", "measure injection: hidden HTML (collect)")
     _everywhere(screen, "_raw_text", "measure injection: raw page text")
     _everywhere(screen.Screen, "scan", "measure injection: scanning sources")
+    _everywhere(gate.intake, "read_path", "worker: intake (read, hash)")
+    _everywhere(gate.intake, "stage", "worker: staging the bytes")
+    _everywhere(gate.intake, "packed", "worker: packing the result (compress, JSON)")
+    _everywhere(gate.placement, "build_entry", "worker: building entries (placement)")
     for check in gate.checks.all_checks():
         if check.measure is not None and not getattr(check.measure, "__probed__", False):
             object.__setattr__(check, "measure", _probe(check.measure, f"measure {check.id}"))
@@ -157,7 +181,7 @@ def _install_parent_probes() -> None:
     _everywhere(gate.placement.Blobs, "put", "parent: staging blobs")
     for name in ("cache_meta", "cache_text"):
         _everywhere(gate.state.State, name, "parent: cache look-ups")
-    for name in ("cache_put_many", "put_run_docs"):
+    for name in ("cache_put_packed", "put_run_docs"):
         _everywhere(gate.state.State, name, "parent: state writes (cache, run docs)")
     _everywhere(documents, "extraction_of", "parent: results into records")
     _everywhere(documents, "evaluate_document", "parent: per-document evaluation")
@@ -165,7 +189,7 @@ def _install_parent_probes() -> None:
     _everywhere(documents, "slim", "parent: records (DocRecord, Slim)")
     _everywhere(documents, "learn", "parent: template learning")
     _everywhere(documents, "removal", "parent: template removal sets")
-    _everywhere(documents, "warm_up", "parent: warm-up (profiles, imports)")
+    _everywhere(gate.pipeline, "warm_up", "parent: warm-up (profiles, imports)")
     _everywhere(gate.pipeline, "run_corpus_checks", "parent: corpus checks (duplicates)")
     _everywhere(gate.pipeline, "commit", "parent: commit (decide, record)")
     _everywhere(gate.commit, "_decide_one", "parent: commit: deciding")
@@ -174,11 +198,17 @@ def _install_parent_probes() -> None:
     _everywhere(Connection, "send", "parent: sending tasks (pickling)")
 
 
+def _collecting(phase: str, info: dict[str, Any]) -> None:
+    """Garbage collections, charged to themselves rather than to what triggered them."""
+    if phase == "start":
+        _enter(f"garbage collection (generation {info['generation']})")
+    elif _stack:
+        _leave()
+
+
 def _worker_process(original: Any, task: Any) -> Any:
-    """gate.work.process with the probes' figures added to its timings."""
-    _acc.clear()
-    _incl.clear()
-    _stack.clear()
+    """gate.work.process with the probes' figures added to its timings: those since the
+    previous result (this task's intake and staging, the previous result's packing)."""
     _enter("worker: unprobed in process()")
     started = time.process_time()
     result = original(task)
@@ -192,6 +222,7 @@ def _worker_process(original: Any, task: Any) -> Any:
         timings = result.setdefault("timings", {})
         for label, seconds in _acc.items():
             timings[f"probe|{label}"] = seconds
+        _acc.clear()
         timings[f"whole|{kind}|{'measure' if result.get('measured') else 'blocks'}"] = whole
         timings[f"count|{kind}|{'measure' if result.get('measured') else 'blocks'}"] = 1.0
     return result
@@ -199,7 +230,6 @@ def _worker_process(original: Any, task: Any) -> Any:
 
 def run_once(docs: int, workers: int) -> dict[str, Any]:
     from gate import checks as _checks  # noqa: F401 - the registry, before probes
-    import gate.cluster
     import gate.work
     from gate.pipeline import RunOptions
     from gate.pipeline import run as run_pipeline
@@ -213,9 +243,10 @@ def run_once(docs: int, workers: int) -> dict[str, Any]:
     out = work / "breakdown-out"
     shutil.rmtree(out, ignore_errors=True)
     gate.work.warm_up()
+    gc.callbacks.append(_collecting)
     _install_worker_probes()
     _install_parent_probes()
-    gate.cluster.process = functools.partial(_worker_process, gate.work.process)
+    gate.work.process = functools.partial(_worker_process, gate.work.process)
     loaded = load_policy(policy)
     options = RunOptions(inbox=inbox, policy=loaded, out=out, as_of=parse_as_of(AS_OF),
                          workers=workers)

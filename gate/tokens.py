@@ -46,11 +46,19 @@ def plain(text: str) -> str:
     return text
 
 
+# For ASCII text: letters lower-cased, digits kept, every other byte a space. There the
+# word pattern's words are the runs of [a-z0-9] of the case-folded text (NFKC leaves ASCII
+# as it is, case-folding is lower-casing), which is what splitting the translated bytes
+# gives, four times faster than the pattern.
+_ASCII_FOLD = bytes(c + 32 if 65 <= c <= 90 else c if 48 <= c <= 57 or 97 <= c <= 122
+                    else 32 for c in range(256))
+
+
 def _words(text: str) -> list[str]:
     text = plain(text)
-    if not text.isascii():  # NFKC leaves ASCII as it is
-        text = unicodedata.normalize("NFKC", text)
-    return _WORD.findall(text.casefold())
+    if text.isascii():
+        return text.encode("ascii").translate(_ASCII_FOLD).decode("ascii").split()
+    return _WORD.findall(unicodedata.normalize("NFKC", text).casefold())
 
 
 LINE_CACHE = 2048  # lines whose words are remembered (per process) ...
@@ -89,7 +97,9 @@ def block_hash(text: str) -> int | None:
     """A stable 63-bit hash of a block's words (None when it has none): equal for the same
     words in any format, any process, any run (remembered for the last lines, like their
     words: a site's template blocks recur on every page)."""
-    tokens = words(text)
+    # a line's words straight from the lines remembered (what words() returns for it)
+    tokens = _line_words(text) if len(text) <= LINE_CHARS and "\n" not in text else \
+        words(text)
     if not tokens:
         return None
     digest = hashlib.blake2b(" ".join(tokens).encode("utf-8"), digest_size=8).digest()

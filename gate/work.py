@@ -52,8 +52,11 @@ def process(task: tuple[Any, ...]) -> dict[str, Any]:
     earlier = task[4] if len(task) > 4 else None
     measure = template is not None
     started = time.process_time()
+    # a page extracted for its blocks only comes back to be measured: what its tree gave
+    # is kept for that (a 32nd of the memory a document may use)
     extraction = extract(data, max_pages=params.max_pages, max_nesting=params.max_nesting,
-                         main_text=earlier)
+                         main_text=earlier,
+                         remember=0 if measure else params.memory_mb * 1024 * 1024 // 32)
     blocks = block_summary(extraction.blocks) if extraction.summary.ok else {}
     removed: dict[str, Any] = {}
     timings = {"extract": time.process_time() - started}

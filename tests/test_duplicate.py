@@ -27,6 +27,31 @@ def test_broder_rose_example():
         assert len(sa & sb) / len(sa | sb) == pytest.approx(value)
 
 
+def test_shingle_hashes_are_the_distinct_sorted_folded_hashes():
+    # the definition in the docstring, computed the plain way (one string per shingle,
+    # CRC-32 per word, polynomial fold, then np.unique) on invented random token lists
+    import zlib
+
+    import numpy as np
+
+    rng = random.Random(11)
+    for _ in range(300):
+        tokens = [rng.choice(["a", "b", "depot", "\u00e9t\u00e9", "7"])
+                  for _ in range(rng.randint(1, 40))]
+        w = rng.randint(1, 6)
+        if len(tokens) < w:
+            continue
+        folded = []
+        for i in range(len(tokens) - w + 1):
+            h = 0
+            for word in tokens[i:i + w]:
+                h = (h * 1_099_511_628_211 + zlib.crc32(word.encode("utf-8"))) % 2**64
+            folded.append((h ^ (h >> 32)) & 0xFFFFFFFF)
+        expected = np.unique(np.array(folded, dtype=np.uint64)).astype(np.uint32)
+        got = dup.shingle_hashes(tokens, w)
+        assert got.dtype == np.uint32 and np.array_equal(got, expected)
+
+
 def test_words_normalise_case_punctuation_and_compatibility_forms():
     assert dup.words("The DEPOT, north—open: ﬁve days!") == \
         ["the", "depot", "north", "open", "five", "days"]
@@ -48,6 +73,20 @@ def test_words_put_together_from_lines_equal_the_whole_text():
         text = "".join(rng.choice(pieces) for _ in range(rng.randint(0, 30)))
         assert tokens.words(text) == tokens._words(text), repr(text)
         assert tokens.words(text) == tokens._words(text), repr(text)  # remembered lines
+
+
+def test_ascii_words_are_the_patterns_words():
+    # ASCII text takes a byte-translation path; it must find exactly the words the word
+    # pattern finds in the case-folded text (every ASCII character, invented random
+    # strings; common practice: a property test against the direct computation)
+    from gate import tokens
+
+    rng = random.Random(7)
+    alphabet = [chr(c) for c in range(128)] + ["ab", "Z9", "](x)", "<b>", "[r]: y"]
+    for _ in range(20_000):
+        text = "".join(rng.choice(alphabet) for _ in range(rng.randint(0, 40)))
+        assert tokens._words(text) == \
+            tokens._WORD.findall(tokens.plain(text).casefold()), repr(text)
 
 
 def test_sketch_values_are_datasketchs_own():

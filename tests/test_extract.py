@@ -119,6 +119,46 @@ def test_html_text_title_canonical_and_meta_dates():
         ("modified", "meta article:modified_time", "2026-10-15")}
 
 
+def test_a_pages_second_pass_is_the_same_with_what_its_first_remembered():
+    # a page of a site is extracted for its blocks, then again with that text: what the
+    # first pass kept (blocks, metadata) must give exactly what reading the tree again
+    # gives (invented page: navigation, headings, a list and a table)
+    from gate.extract import html
+
+    page = PAGE.replace(b"</article>", b"<h2>Holidays</h2><ul><li>Closed on 24 December"
+                        b"</li><li>Closed on 1 January</li></ul><table><tr><td>Monday</td>"
+                        b"<td>7-19</td></tr></table><pre>line one\nline two</pre></article>"
+                        b"<footer><a href='/contact'>Contact the depot</a></footer>")
+    html._remembered.clear()
+    html._remembered_bytes[0] = 0
+    first = extract(page, **LIMITS, remember=1 << 20)
+    assert len(html._remembered) == 1
+    kept = extract(page, **LIMITS, main_text=first.text)
+    assert not html._remembered and html._remembered_bytes[0] == 0  # used once, then gone
+    again = extract(page, **LIMITS, main_text=first.text)
+    assert (kept.summary, kept.text, kept.blocks) == (again.summary, again.text, again.blocks)
+    assert (kept.summary, kept.text, kept.blocks) == (first.summary, first.text, first.blocks)
+    assert kept.tree is not None  # the tree is parsed again: the injection screen reads it
+
+
+def test_what_pages_remember_stays_within_its_budget():
+    from gate.extract import html
+
+    html._remembered.clear()
+    html._remembered_bytes[0] = 0
+    pages = [PAGE.replace(b"seven", word) for word in (b"six", b"eight", b"nine")]
+    extract(pages[0], **LIMITS, remember=1 << 20)
+    one = html._remembered_bytes[0]
+    assert one > 0
+    for page in pages[1:]:
+        extract(page, **LIMITS, remember=one + one // 2)  # room for one page only
+    assert len(html._remembered) == 1 and html._remembered_bytes[0] <= one + one // 2
+    extract(pages[0], **LIMITS, remember=10)  # a budget smaller than a page: not kept
+    assert len(html._remembered) == 1
+    html._remembered.clear()
+    html._remembered_bytes[0] = 0
+
+
 def test_html_charset_that_lies_is_detected():
     page = "<html><head><meta charset='utf-8'></head><body><p>Grüße aus Köln, die Lieferung " \
            "kommt später als geplant, voraussichtlich am Donnerstag.</p></body></html>"

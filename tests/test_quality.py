@@ -1,6 +1,7 @@
 """The Gopher quality filters: the paper's values as defaults, and each rule's behaviour."""
 
 import random
+import re
 from collections import Counter
 
 import pytest
@@ -66,6 +67,65 @@ def test_ngram_shares_match_the_plain_definition(seed):
         assert top[n] == pytest.approx(ref_top[n], abs=1e-4)
     for n in dup:
         assert dup[n] == pytest.approx(ref_dup[n], abs=1e-4)
+
+
+def _reference_measure(text):
+    """The statistics by their plain definitions (whitespace words; a word has a letter
+    when it holds a word character that is neither a digit nor an underscore), to check
+    the per-distinct-word implementation against (common practice)."""
+    words = text.split()
+    lower = [w.lower().strip(quality._PUNCT) for w in words]
+    lines = [line.strip() for line in text.split("\n") if line.strip()]
+    paragraphs = [p.strip() for p in re.split(r"\n\s*\n", text) if p.strip()]
+
+    def duplicates(parts):
+        seen, repeated, chars = set(), 0, 0
+        for part in parts:
+            if part in seen:
+                repeated, chars = repeated + 1, chars + len(part)
+            seen.add(part)
+        total = sum(len(p) for p in parts)
+        return (repeated / len(parts) if parts else 0.0,
+                chars / total if parts and total else 0.0)
+
+    n = len(words)
+    top, dup = quality._ngram_shares([w for w in lower if w])
+    stats = {"words": n,
+             "mean_word_length": sum(len(w) for w in words) / n if n else 0.0,
+             "hash_ratio": text.count("#") / n if n else 0.0,
+             "ellipsis_ratio": (text.count("...") + text.count("\u2026")) / n if n else 0.0,
+             "bullet_lines": sum(line.startswith(quality._BULLETS) for line in lines)
+             / len(lines) if lines else 0.0,
+             "ellipsis_lines": sum(line.endswith(("...", "\u2026")) for line in lines)
+             / len(lines) if lines else 0.0,
+             "alphabetic_words": sum(bool(re.search(r"[^\W\d_]", w)) for w in words) / n
+             if n else 0.0,
+             "stop_words": {lang: sorted(set(lower) & set(stop))
+                            for lang, stop in quality.STOP_LISTS.items()},
+             "top_ngram_chars": top, "duplicate_ngram_chars": dup}
+    stats["duplicate_lines"], stats["duplicate_line_chars"] = duplicates(lines)
+    stats["duplicate_paragraphs"], stats["duplicate_paragraph_chars"] = duplicates(paragraphs)
+    return {k: round(v, 4) if isinstance(v, float) else v for k, v in stats.items()}
+
+
+@pytest.mark.parametrize("seed", range(20))
+def test_measure_matches_the_plain_definitions(seed):
+    # invented random texts: words with case, punctuation, digits, non-Latin letters,
+    # bullets, ellipses and repeated lines and paragraphs
+    rng = random.Random(seed)
+    vocab = ["the", "The", "of", "and,", "Quillby", "depot.", "#", "...", "\u2026", "-",
+             "12", "a1", "_", "\u2014", "\u00e9t\u00e9", "\u0130stanbul", "\ufb01le",
+             "\u65e5\u672c", "\u0663", "(x)", "\u201cquoted\u201d", "\u00df"]
+    lines = []
+    for _ in range(rng.randint(0, 40)):
+        line = " ".join(rng.choice(vocab) for _ in range(rng.randint(0, 12)))
+        lines.append(rng.choice(["", "* ", "\u2022 ", "  "]) + line)
+        if rng.random() < 0.2:
+            lines.append(rng.choice(lines))
+        if rng.random() < 0.1:
+            lines.append("")
+    text = "\n".join(lines)
+    assert quality.measure(_Extraction(text)) == _reference_measure(text)
 
 
 PROSE = ("The northern depot of the invented Quillby Freight cooperative schedules "

@@ -124,18 +124,23 @@ def shingle_hashes(tokens: Sequence[str], w: int = SHINGLE) -> np.ndarray:
     if not tokens:
         return np.zeros(0, dtype=np.uint32)
     # each distinct word hashed once; the per-token lookup is a C-level map
-    table = {t: zlib.crc32(t.encode("utf-8")) for t in set(tokens)}
+    distinct = set(tokens)
+    table = dict(zip(distinct, map(zlib.crc32, map(str.encode, distinct))))
     values = np.fromiter(map(table.__getitem__, tokens), dtype=np.uint64, count=len(tokens))
     if len(tokens) < w:
-        folded = np.array([int.from_bytes(hashlib.sha256(" ".join(tokens).encode()).digest()[:4],
-                                          "little")], dtype=np.uint64)
-    else:
-        grams = values[:len(values) - w + 1].copy()
-        with np.errstate(over="ignore"):
-            for k in range(1, w):
-                grams = grams * _PRIME + values[k:len(values) - w + 1 + k]
-        folded = (grams ^ (grams >> np.uint64(32))) & np.uint64(0xFFFFFFFF)
-    return np.unique(folded).astype(np.uint32)
+        return np.array([int.from_bytes(hashlib.sha256(" ".join(tokens).encode()).digest()[:4],
+                                        "little")], dtype=np.uint32)
+    grams = values[:len(values) - w + 1].copy()
+    with np.errstate(over="ignore"):
+        for k in range(1, w):
+            grams = grams * _PRIME + values[k:len(values) - w + 1 + k]
+    folded = ((grams ^ (grams >> np.uint64(32))) & np.uint64(0xFFFFFFFF)).astype(np.uint32)
+    # distinct and sorted, as np.unique gives them; sorting and dropping repeats is several
+    # times faster than np.unique's hash table on numpy 2.x
+    folded.sort()
+    if folded.size < 2:
+        return folded
+    return folded[np.concatenate(([True], folded[1:] != folded[:-1]))]
 
 
 def _fmix32(values: np.ndarray) -> np.ndarray:
@@ -159,16 +164,26 @@ def sketch_values(hashes: np.ndarray) -> np.ndarray:
     exactly what datasketch's ``MinHash(num_perm=256, seed=1, scheme="affine32",
     hashfunc=int).update_batch(hashes)`` holds (``min_k(a_k * fmix32(h) + b_k mod 2^32)``
     with datasketch's own ``a``, ``b``; tests/test_duplicate.py compares the two), computed
-    in numpy blocks without datasketch's per-item Python hashing."""
-    a, b = _permutations()
-    a, b = a.astype(np.uint32), b.astype(np.uint32)
+    in numpy blocks (one buffer, written in place) without datasketch's per-item Python
+    hashing."""
+    a, b = _uint32_permutations()
     out = np.full(NUM_PERM, 0xFFFFFFFF, dtype=np.uint32)
     mixed = _fmix32(hashes)
+    buffer = np.empty((min(SLICE, mixed.size), NUM_PERM), dtype=np.uint32)
     with np.errstate(over="ignore"):
         for start in range(0, mixed.size, SLICE):
-            block = mixed[start:start + SLICE, None] * a + b
+            column = mixed[start:start + SLICE, None]
+            block = buffer[:column.shape[0]]
+            np.multiply(column, a, out=block)
+            np.add(block, b, out=block)
             np.minimum(out, block.min(axis=0), out=out)
     return out
+
+
+@lru_cache(maxsize=1)
+def _uint32_permutations() -> tuple[np.ndarray, np.ndarray]:
+    a, b = _permutations()
+    return a.astype(np.uint32), b.astype(np.uint32)
 
 
 def sketch_hashes(hashes: np.ndarray) -> MinHash:

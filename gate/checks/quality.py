@@ -39,7 +39,7 @@ Example::
 from __future__ import annotations
 
 import re
-from itertools import repeat
+from itertools import count, repeat
 from typing import Any
 
 import numpy as np
@@ -150,33 +150,39 @@ class QualitySettings(Section):
 
 
 def _duplicates(parts: list[str]) -> tuple[float, float]:
-    """Share of parts that repeat an earlier part, and their share of characters."""
+    """Share of parts that repeat an earlier part, and their share of characters (what
+    is not a part's first appearance)."""
     if not parts:
         return 0.0, 0.0
-    seen: set[str] = set()
-    repeated = repeated_chars = 0
-    for part in parts:
-        if part in seen:
-            repeated += 1
-            repeated_chars += len(part)
-        seen.add(part)
-    total = sum(len(p) for p in parts)
-    return repeated / len(parts), repeated_chars / total if total else 0.0
+    distinct = set(parts)
+    total = sum(map(len, parts))
+    repeated_chars = total - sum(map(len, distinct))
+    return (len(parts) - len(distinct)) / len(parts), repeated_chars / total if total else 0.0
 
 
 def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]:
-    """Top 2..4-gram and duplicated 5..10-gram character shares, vectorised.
+    """Top 2..4-gram and duplicated 5..10-gram character shares of ``words``."""
+    ids = {w: i for i, w in enumerate(dict.fromkeys(words), 1)}
+    seq = np.fromiter(map(ids.__getitem__, words), dtype=np.uint64, count=len(words))
+    lengths = np.fromiter(map(len, ids), dtype=np.int64, count=len(ids))
+    return _shares(seq, np.concatenate(([0], lengths)))
+
+
+def _shares(seq: np.ndarray, length_of: np.ndarray) -> tuple[dict[str, float], dict[str, float]]:
+    """Top 2..4-gram and duplicated 5..10-gram character shares, vectorised, of the words
+    ``seq`` (ids numbered from 1 in order of first appearance; ``length_of[id]`` is a
+    word's length in characters).
 
     Each n-gram is identified by a 64-bit polynomial hash of its word ids (a collision
     would need two different n-grams of one document to hash alike: negligible).
     """
     top = {str(n): 0.0 for n in _TOP_N}
     dup = {str(n): 0.0 for n in _DUP_N}
-    if len(words) < 2:
+    size = seq.size
+    if size < 2:
         return top, dup
-    ids = {w: i for i, w in enumerate(dict.fromkeys(words), 1)}
-    seq = np.fromiter(map(ids.__getitem__, words), dtype=np.uint64, count=len(words))
-    lengths = np.fromiter(map(len, words), dtype=np.int64, count=len(words))
+    positions = seq.astype(np.int64)
+    lengths = length_of[positions]
     total = int(lengths.sum())
     if not total:
         return top, dup
@@ -187,11 +193,11 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
     # and every occurrence of a repeated n-gram is such a place: so each n counts only
     # among the places where the shorter gram repeated (from the words that repeat), with
     # the same counts, a fraction of the sorting.
-    word_counts = np.bincount(seq.astype(np.int64))
-    places = np.flatnonzero(word_counts[seq.astype(np.int64)] > 1)
+    word_counts = np.bincount(positions)
+    places = np.flatnonzero(word_counts[positions] > 1)
     with np.errstate(over="ignore"):
         for n in range(2, 11):
-            if len(words) < n:
+            if size < n:
                 break
             hashes = hashes[:-1] * prime + seq[n - 1:]
             places = places[places < hashes.size]
@@ -213,7 +219,7 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
                 if not starts.size:
                     # no n-gram repeats, so no longer one can: the rest stay 0
                     break
-                marks = np.zeros(len(words) + 1, dtype=np.int64)
+                marks = np.zeros(size + 1, dtype=np.int64)
                 np.add.at(marks, starts, 1)
                 np.add.at(marks, starts + n, -1)
                 covered = np.cumsum(marks[:-1]) > 0
@@ -224,39 +230,54 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
 
 _PUNCT = "".join(chr(c) for c in range(0x21, 0x7F) if not chr(c).isalnum()) + \
     "\u2026\u201c\u201d\u2018\u2019\u00ab\u00bb\u2013\u2014"
-# one match per token that contains a letter: from its first letter to the token's end
-_WITH_LETTER = re.compile(r"[^\W\d_]\S*", re.UNICODE)
+# a token counts as a word with a letter when it holds a word character that is neither a
+# digit nor an underscore
+_LETTER = re.compile(r"[^\W\d_]", re.UNICODE)
 
 
 def measure(extraction: Extraction) -> dict[str, Any]:
-    """Text statistics for the Gopher filters (runs in the worker)."""
+    """Text statistics for the Gopher filters (runs in the worker).
+
+    Each distinct word is looked at once (lower-cased, punctuation stripped, whether it
+    has a letter); the words are then numbers in numpy arrays."""
     text = extraction.text
     tokens = text.split()
     words = tokens[:MAX_SCANNED_WORDS]
-    scanned = " ".join(words)
     lines = [line for line in map(str.strip, text.split("\n")) if line]
     paragraphs = [p for p in map(str.strip, _PARAGRAPH.split(text)) if p]
-    lower = list(map(str.strip, scanned.lower().split(), repeat(_PUNCT)))
     n = len(tokens)
+    # the distinct tokens in order of first appearance, and each token's place among them
+    distinct = dict(zip(dict.fromkeys(words), count()))
+    place = np.fromiter(map(distinct.__getitem__, words), dtype=np.int64, count=len(words))
+    # each distinct token lower-cased and stripped of punctuation; the forms numbered from
+    # 1 in order of first appearance (0: nothing left, dropped from the n-grams)
+    forms = list(map(str.strip, map(str.lower, distinct), repeat(_PUNCT)))
+    number = dict(zip(dict.fromkeys(filter(None, forms)), count(1)))
+    ids = np.fromiter(map(number.get, forms, repeat(0)), dtype=np.uint64, count=len(forms))
+    has_letter = np.fromiter(map(bool, map(_LETTER.search, distinct)), dtype=bool,
+                             count=len(distinct))
+    lettered = int(np.count_nonzero(has_letter[place]))
     stats: dict[str, Any] = {
         "words": n,
-        "mean_word_length": (len(scanned) - len(words) + 1) / len(words) if words else 0.0,
+        "mean_word_length": sum(map(len, words)) / len(words) if words else 0.0,
         "hash_ratio": text.count("#") / n if n else 0.0,
         "ellipsis_ratio": (text.count("...") + text.count("\u2026")) / n if n else 0.0,
-        "bullet_lines": sum(line.startswith(_BULLETS) for line in lines) / len(lines)
+        "bullet_lines": sum(map(str.startswith, lines, repeat(_BULLETS))) / len(lines)
         if lines else 0.0,
-        "ellipsis_lines": sum(line.endswith(_ELLIPSES) for line in lines) / len(lines)
+        "ellipsis_lines": sum(map(str.endswith, lines, repeat(_ELLIPSES))) / len(lines)
         if lines else 0.0,
-        "alphabetic_words": len(_WITH_LETTER.findall(scanned)) / len(words)
-        if words else 0.0,
+        "alphabetic_words": lettered / len(words) if words else 0.0,
     }
-    vocabulary = set(lower)
+    vocabulary = set(number)
     stats["stop_words"] = {lang: sorted(vocabulary.intersection(stop))
                            for lang, stop in STOP_LISTS.items()}
     stats["duplicate_lines"], stats["duplicate_line_chars"] = _duplicates(lines)
     stats["duplicate_paragraphs"], stats["duplicate_paragraph_chars"] = _duplicates(paragraphs)
-    stats["top_ngram_chars"], stats["duplicate_ngram_chars"] = \
-        _ngram_shares([w for w in lower if w])
+    seq = ids[place]
+    seq = seq[seq > 0]
+    length_of = np.zeros(len(number) + 1, dtype=np.int64)
+    length_of[1:] = np.fromiter(map(len, number), dtype=np.int64, count=len(number))
+    stats["top_ngram_chars"], stats["duplicate_ngram_chars"] = _shares(seq, length_of)
     return {k: round(v, 4) if isinstance(v, float) else v for k, v in stats.items()}
 
 

@@ -22,11 +22,14 @@ EXTRACT_VERSION = 6
 
 
 def extract(data: bytes, *, max_pages: int, max_nesting: int,
-            main_text: str | None = None) -> Extraction:
+            main_text: str | None = None, remember: int = 0) -> Extraction:
     """Extract one document's bytes. Never raises for bad input: problems are reported.
 
     ``main_text``: an HTML page's or a PDF's text from an earlier extraction of the same
-    bytes (trafilatura, or pypdf's text extraction, is then not run again)."""
+    bytes (trafilatura, or pypdf's text extraction, is then not run again). ``remember``:
+    the document will be extracted again with its ``main_text``; an HTML page's blocks
+    and metadata are kept for that in this process (a budget in bytes, see
+    :mod:`gate.extract.html`)."""
     sniffed = sniff(data)
     if sniffed.type == "empty":
         return failed(None, "empty-file", sniffed.detail)
@@ -35,7 +38,7 @@ def extract(data: bytes, *, max_pages: int, max_nesting: int,
         result = extract_pdf(data, max_pages, main_text)
     elif sniffed.type == "html":
         from gate.extract.html import extract_html
-        result = extract_html(data, sniffed.encoding, max_nesting, main_text)
+        result = extract_html(data, sniffed.encoding, max_nesting, main_text, remember)
     elif sniffed.type == "text":
         from gate.extract.text import extract_text
         result = extract_text(data, sniffed.encoding)

@@ -15,8 +15,12 @@ from __future__ import annotations
 
 import codecs
 import dataclasses
+import hashlib
 import re
+from bisect import bisect_right
+from collections import OrderedDict
 from collections.abc import Sequence
+from dataclasses import dataclass
 
 import lxml.etree
 import lxml.html
@@ -176,13 +180,37 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
     what holds it, and ``main`` says whether trafilatura kept a line with the same words
     in ``main_text``.
     """
+    found = _walk(root)
+    return _marked(found, _line_digests(main_text, found))
+
+
+Walked = list[tuple[str, int, float, str, float]]  # each block's text, hash, links, kind, lead
+
+
+def _line_digests(text: str, found: Walked) -> list[int | None]:
+    """Each line's block hash (a line that is a block's text verbatim takes its hash)."""
+    known = {block: digest for block, digest, *_rest in found}
+    return [known.get(line.strip()) or block_hash(line) for line in text.split("\n")]
+
+
+def _marked(found: Walked, digests: list[int | None]) -> tuple[Block, ...]:
+    """The walk's blocks, ``main`` where a line of the main text (its ``digests``) has
+    the same words."""
+    main = set(digests)
+    return tuple(Block(text=text, hash=digest, main=digest in main, links=links, kind=kind,
+                       lead=lead) for text, digest, links, kind, lead in found)
+
+
+def _walk(root: lxml.etree._Element) -> Walked:
+    """The blocks of the page's body in document order (see :func:`page_blocks`)."""
     body = root.find("body")
     start = body if body is not None else root
-    blocks: list[Block] = []
+    found: Walked = []
     parts: list[str] = []
     holders: list[str] = ["body"]
     linked = 0
     in_link = 0
+    in_pre = 0
     away: list[bool] = []  # for each open <a>: does it lead to another page?
     lead = 0  # characters at the block's start inside links to another page
     unlinked = False  # whether the block has had text outside such a link yet
@@ -194,18 +222,18 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
             return
         raw = "".join(parts)
         parts.clear()
+        kind = _KINDS.get(holders[-1], "text")
         # preformatted text is a block per line, as trafilatura writes it
-        pieces = raw.split("\n") if "pre" in holders else [raw]
+        pieces = raw.split("\n") if in_pre else (raw,)
         for piece in pieces:
             # runs of white space as one space, trimmed (str.split's white space is re's \s)
             text = " ".join(piece.split())
-            digest = block_hash(text) if text else None
-            if digest is not None:
-                blocks.append(Block(text=text, hash=digest, main=False,
-                                    links=round(min(1.0, linked / len(text)), 3),
-                                    kind=_KINDS.get(holders[-1], "text"),
-                                    lead=round(min(1.0, lead / len(text)), 3)
-                                    if len(pieces) == 1 else 0.0))
+            if text:
+                digest = block_hash(text)
+                if digest is not None:
+                    found.append((text, digest, round(min(1.0, linked / len(text)), 3), kind,
+                                  round(min(1.0, lead / len(text)), 3)
+                                  if len(pieces) == 1 else 0.0))
         linked = lead = 0
         unlinked = False
 
@@ -240,6 +268,8 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
                 if parts:
                     flush()
                 holders.append(tag)
+                if tag == "pre":
+                    in_pre += 1
             if tag == "a":
                 in_link += 1
                 href = (node.get("href") or "").strip()
@@ -254,17 +284,19 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
                 if parts:
                     flush()
                 holders.pop()
+                if tag == "pre":
+                    in_pre -= 1
             if node is start:
                 continue
             text = node.tail
         if text:
             add(text)
     flush()
-    main = set(line_hashes(main_text, blocks))
-    return tuple(dataclasses.replace(b, main=True) if b.hash in main else b for b in blocks)
+    return found
 
 
-def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Block, ...]]:
+def complete_main(text: str, blocks: tuple[Block, ...], digests: list[int | None] | None = None
+                  ) -> tuple[str, tuple[Block, ...]]:
     """trafilatura's text with the headings, list items and table cells it dropped inside
     the stretch of the page it chose (and those right before and after it: a title, a
     closing list or table), so a heading, a list or a table counts in HTML as it does in
@@ -272,20 +304,29 @@ def complete_main(text: str, blocks: tuple[Block, ...]) -> tuple[str, tuple[Bloc
 
     Only when every line trafilatura wrote is one of the page's blocks, or a table row of
     them (so each line has a place in the page); otherwise its text is kept as it is.
+    ``digests``: the block hash of each line of ``text``, when already known.
     """
-    where: dict[int, list[int]] = {}
+    where: dict[int, list[int]] = {}  # a hash's places among the blocks, ascending
+    known: dict[str, int] = {}  # a block's text: its hash (a line that is one takes it)
     for i, block in enumerate(blocks):
         where.setdefault(block.hash, []).append(i)
+        known[block.text] = block.hash
     placed: list[tuple[int, int, str]] = []
     covered: set[int] = set()
     cursor = -1
-    for order, (line, digest) in enumerate(zip(text.split("\n"), line_hashes(text, blocks))):
+    lines = text.split("\n")
+    if digests is None:
+        digests = [known.get(line.strip()) or block_hash(line) for line in lines]
+    for order, (line, digest) in enumerate(zip(lines, digests)):
         if digest is None:
             continue
         parts = [digest] if digest in where else row_cells(line)
         if not parts or any(part not in where for part in parts):
             return text, blocks
-        position = next((i for i in where[parts[0]] if i > cursor), where[parts[0]][0])
+        # the first place after the cursor, else the first place
+        places = where[parts[0]]
+        after = bisect_right(places, cursor)
+        position = places[after] if after < len(places) else places[0]
         cursor = max(cursor, position)
         placed.append((position, order, line))
         covered.update(parts)
@@ -421,12 +462,72 @@ def with_title(text: str, blocks: tuple[Block, ...], root: lxml.etree._Element
     return text, blocks
 
 
+@dataclass(frozen=True)
+class _Read:
+    """What a page's tree gives besides its text: kept between a page's two passes."""
+
+    depth: int
+    title: str | None
+    canonical: str | None
+    lang: str | None
+    dates: tuple[DateClaim, ...]
+    found: Walked
+    size: int  # about how many bytes it holds
+
+
+# A page of a site is extracted twice in the same run: for its blocks (its site's template
+# is not known yet), then again, with the first pass's text, to have the template removed
+# and be measured. What the first pass read from the tree is kept here (per process, up to
+# about REMEMBERED_BYTES, oldest dropped first) under a digest of the bytes, so the second
+# pass parses the page again (the injection screen reads the tree) but neither walks it,
+# hashes its blocks nor reads its metadata a second time. Same tree, same values: which
+# worker runs the second pass changes nothing but the time it takes.
+_remembered: OrderedDict[tuple[bytes, str | None, int], _Read] = OrderedDict()
+_remembered_bytes = [0]
+BLOCK_OVERHEAD = 200  # bytes of a remembered block besides its text (tuple, int, float)
+
+
+def _key(data: bytes, encoding: str | None, max_nesting: int) -> tuple[bytes, str | None, int]:
+    return hashlib.blake2b(data, digest_size=16).digest(), encoding, max_nesting
+
+
+def _remember(key: tuple[bytes, str | None, int], read: _Read, budget: int) -> None:
+    if read.size > budget:
+        return
+    while _remembered and _remembered_bytes[0] + read.size > budget:
+        _remembered_bytes[0] -= _remembered.popitem(last=False)[1].size
+    _remembered[key] = read
+    _remembered_bytes[0] += read.size
+
+
+def _recall(key: tuple[bytes, str | None, int]) -> _Read | None:
+    read = _remembered.pop(key, None)
+    if read is not None:
+        _remembered_bytes[0] -= read.size
+    return read
+
+
+def _read(root: lxml.etree._Element, depth: int) -> _Read:
+    """The page's metadata and blocks (see :func:`page_blocks`), from its tree."""
+    title = _first(root, "//meta[@property='og:title']/@content") or \
+        _first(root, "//title/text()")
+    canonical = _first(root, "//link[translate(@rel,'CANONICAL','canonical')='canonical']/@href") \
+        or _first(root, "//meta[@property='og:url']/@content")
+    lang = _first(root, "/html/@lang")
+    found = _walk(root)
+    size = sum(len(block[0]) for block in found) + BLOCK_OVERHEAD * len(found)
+    return _Read(depth=depth, title=title, canonical=canonical, lang=lang,
+                 dates=_meta_dates(root), found=found, size=size)
+
+
 def extract_html(data: bytes, encoding: str | None, max_nesting: int,
-                 main_text: str | None = None) -> Extraction:
+                 main_text: str | None = None, remember: int = 0) -> Extraction:
     """Extract an HTML page (``encoding`` comes from a byte-order mark, if any).
 
     ``main_text`` is this page's text from an earlier extraction of the same bytes: the
-    same result, without running trafilatura again."""
+    same result, without running trafilatura again (nor walking the tree again, when the
+    earlier extraction in this process was told to ``remember`` it: a budget in bytes for
+    all pages remembered)."""
     decoded = decode_html(data, encoding)
     if decoded is None:
         return failed("html", "undecodable",
@@ -441,7 +542,10 @@ def extract_html(data: bytes, encoding: str | None, max_nesting: int,
         if not markup.strip():
             return failed("html", "empty-text", "the page holds only white space")
         return failed("html", "broken", f"the HTML could not be parsed ({err})")
-    depth = max_depth(root)
+    key = _key(data, encoding, max_nesting) if remember or \
+        (main_text is not None and _remembered) else None
+    read = _recall(key) if key is not None and main_text is not None else None
+    depth = read.depth if read is not None else max_depth(root)
     common = dict(type="html", encoding=used, declared_charset=declared,
                   charset_mismatch=mismatch, nesting_depth=depth)
     if depth > max_nesting:
@@ -458,14 +562,15 @@ def extract_html(data: bytes, encoding: str | None, max_nesting: int,
         if not text.strip():
             text = fallback_text(root)
         text = clean_text(text)
-    title = _first(root, "//meta[@property='og:title']/@content") or \
-        _first(root, "//title/text()")
-    canonical = _first(root, "//link[translate(@rel,'CANONICAL','canonical')='canonical']/@href") \
-        or _first(root, "//meta[@property='og:url']/@content")
-    lang = _first(root, "/html/@lang")
-    summary = Extracted(title=title, canonical_url=canonical, declared_lang=lang,
-                        text_chars=len(text), dates=_meta_dates(root), **common)
-    text, blocks = without_teasers(*complete_main(text, page_blocks(root, text)))
+    if read is None:
+        read = _read(root, depth)  # trafilatura copies the tree it is given: unchanged
+        if remember and key is not None:
+            _remember(key, read, remember)
+    summary = Extracted(title=read.title, canonical_url=read.canonical,
+                        declared_lang=read.lang, dates=read.dates, text_chars=len(text),
+                        **common)
+    digests = _line_digests(text, read.found)
+    text, blocks = without_teasers(*complete_main(text, _marked(read.found, digests), digests))
     text, blocks = with_title(text, blocks, root)
     summary = dataclasses.replace(summary, text_chars=len(text))
     return Extraction(summary=summary, text=text, raw=data, decoded=markup, tree=root,
