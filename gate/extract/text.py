@@ -57,8 +57,6 @@ def without_export_header(text: str) -> str:
                                 for line in body) and _YAML_KEY.match(body[0]):
                     start = i + 1
                 break
-            if not lines[i].strip():
-                continue
     else:
         filled = 0
         first = 0

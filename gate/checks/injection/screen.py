@@ -601,7 +601,7 @@ def _unquoted_rest(folded: str, start: int, end: int) -> str | None:
 _REPORTING = re.compile(r"\b(?:stated|said|says|wrote|writes|read|reads|reading|contained|"
                         r"contains|included|includes|asked|told|claimed|ended\s+with|began\s+with|"
                         r"like|as\s+follows|schrieb|lautete|stand|disait|decia|diceva|dizia|"
-                        r"luidde|brzmial|gloszac|gl\w+|stod|stand|гласил|написано)\b")
+                        r"luidde|brzmial|gloszac|gl\w+|stod|гласил|написано)\b")
 # A heading that presents what follows as an example or a case ("### Example: ...").
 EXAMPLE_HEAD = re.compile(r"[#*=\-\s]*(?:example|sample|case(?:\s+study)?|scenario|incident|"
                           r"quiz|question|exercise|beispiel|exemple|ejemplo|esempio|exemplo|"
