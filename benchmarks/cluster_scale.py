@@ -118,24 +118,28 @@ class Redis:
         return int(self.client.info("memory")["used_memory"])
 
 
-def tree_cpu(procs: list[subprocess.Popen] | None) -> float:
-    """CPU seconds used so far by processes and their descendants (the Dask workers,
-    their pools' processes)."""
+def _cpu(p) -> float:
+    times = p.cpu_times()  # with its reaped children's
+    return times.user + times.system + times.children_user + times.children_system
+
+
+def tree_cpu(procs: list[subprocess.Popen] | None) -> dict[str, float]:
+    """CPU seconds used so far by processes (``procs``: the Dask scheduler first, then the
+    workers) and their descendants (the workers' pools and fork servers), by role."""
     import psutil
-    total = 0.0
-    for proc in procs or ():
+    split = {"scheduler": 0.0, "Dask workers": 0.0, "their pools": 0.0}
+    for number, proc in enumerate(procs or ()):
         try:
             root = psutil.Process(proc.pid)
-            for p in [root, *root.children(recursive=True)]:
+            split["scheduler" if number == 0 else "Dask workers"] += _cpu(root)
+            for p in root.children(recursive=True):
                 try:
-                    times = p.cpu_times()  # with its reaped children's
-                    total += times.user + times.system + times.children_user + \
-                        times.children_system
+                    split["their pools"] += _cpu(p)
                 except psutil.Error:
                     pass
         except psutil.Error:
             pass
-    return total
+    return split
 
 
 def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
@@ -144,6 +148,7 @@ def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
     CPU the Dask workers used (``nodes``: their process tree)."""
     clock = StageClock()
     nodes_cpu = tree_cpu(nodes)
+    main_cpu = time.thread_time()  # the run's thread, not the Dask client's
     children = resource.getrusage(resource.RUSAGE_CHILDREN)
     commands = redis.commands() if redis else 0
     memory = redis.memory() if redis else 0
@@ -153,14 +158,18 @@ def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
     clock.stage("end", None)
     seconds = time.perf_counter() - started
     coordinator = time.process_time() - cpu
+    main = time.thread_time() - main_cpu
     after = resource.getrusage(resource.RUSAGE_CHILDREN)
     docs = result.summary["documents"]
-    out = {"docs": docs, "seconds": seconds, "rate": docs / seconds,
+    nodes_split = {role: (spent - nodes_cpu[role]) / docs * 1e3
+                   for role, spent in tree_cpu(nodes).items()} if nodes else {}
+    out = {"docs": docs, "seconds": seconds, "main_ms": main / docs * 1e3,
+           "nodes_split": nodes_split, "rate": docs / seconds,
            "per_core": docs / seconds / cores_used, "coordinator_ms": coordinator / docs * 1e3,
            "stages": clock.per_document(docs), "accepted": result.summary["accepted"],
            "local_children_ms": ((after.ru_utime + after.ru_stime) -
                                  (children.ru_utime + children.ru_stime)) / docs * 1e3,
-           "nodes_ms": (tree_cpu(nodes) - nodes_cpu) / docs * 1e3,
+           "nodes_ms": sum(nodes_split.values()),
            "work_ms": sum(result.timings.values()) / docs * 1e3}
     out["total_ms"] = out["coordinator_ms"] + out["local_children_ms"] + out["nodes_ms"]
     with sqlite3.connect(opts.out / "state" / "gate.sqlite") as conn:
@@ -183,6 +192,11 @@ def show(name: str, m: dict) -> None:
     print(f"    CPU of every process of the run: {m['total_ms']:.1f} ms/doc, so "
           f"{1000 / m['total_ms']:.1f} documents per CPU-second")
     print(f"    coordinator CPU by stage: {m['stages']}")
+    print(f"    coordinator main thread (the run, without the Dask client's threads): "
+          f"{m['main_ms']:.2f} ms/doc")
+    if m["nodes_split"]:
+        print("    Dask CPU by process: " + ", ".join(
+            f"{role} {spent:.1f} ms/doc" for role, spent in m["nodes_split"].items()))
     print(f"    extraction and checks inside the workers: {m['work_ms']:.1f} ms/doc (time)")
     print(f"    a worker's answer (the cache row it fills): {m['result_bytes'] / 1024:.1f} KiB"
           " per document")

@@ -20,8 +20,11 @@ worker starts warm. Staged copies are flushed to disk by the node that writes th
 
 from __future__ import annotations
 
+import ctypes
+import ctypes.util
 import multiprocessing
 import os
+from collections import deque
 from collections.abc import Iterable, Iterator
 from typing import Any
 
@@ -30,8 +33,8 @@ from gate.extract.pool import Failure, WorkerPool
 from gate.intake import work_on
 from gate.work import Params
 
-BATCH = 32  # tasks per Dask task, at most ...
-BATCH_BYTES = 4 << 20  # ... and bytes read by them (sizes discovery saw)
+BATCH = 64  # tasks per Dask task, at most ...
+BATCH_BYTES = 8 << 20  # ... and bytes read by them (sizes discovery saw)
 RECYCLE_AFTER = 2000  # tasks per pool process on a node (forked warm, so rarely needed)
 
 _POOL: WorkerPool | None = None
@@ -67,9 +70,43 @@ def run_batch(params: Params, batch: list[tuple[int, Any]]) -> list[tuple[int, A
     if not batch:
         return []
     results = list(_pool(params).run(batch))
-    if any(getattr(payload, "sync", False) for _index, payload in batch):
-        os.sync()  # staged copies and built entries are durable before the answer
+    # staged copies and built entries are durable before the answer: one flush of each
+    # file system written to, not of every file (nor of the node's other file systems)
+    flush({root for _index, payload in batch if getattr(payload, "sync", False)
+           for root in [getattr(payload, "stage_root", None) or getattr(payload, "out", None)]
+           if root})
     return results
+
+
+_LIBC: Any = None
+
+
+def flush(folders: set[str]) -> None:
+    """Flush to disk the file systems holding ``folders`` (Linux ``syncfs``; elsewhere, or
+    when it fails, every file system with ``os.sync``)."""
+    global _LIBC
+    if not folders:
+        return
+    if _LIBC is None:
+        name = ctypes.util.find_library("c")
+        _LIBC = ctypes.CDLL(name, use_errno=True) if name else False
+    syncfs = getattr(_LIBC, "syncfs", None) if _LIBC else None
+    done: set[int] = set()
+    for folder in sorted(folders):
+        try:
+            fd = os.open(folder, os.O_RDONLY)
+        except OSError:
+            continue  # nothing was written there
+        try:
+            device = os.fstat(fd).st_dev
+            if device in done:
+                continue
+            if syncfs is None or syncfs(fd) != 0:
+                os.sync()
+                return
+            done.add(device)
+        finally:
+            os.close(fd)
 
 
 class ClusterExecutor:
@@ -93,7 +130,8 @@ class ClusterExecutor:
         if workers == 0:
             self.client.close()
             raise UsageError(f"the Dask scheduler at {address} has no workers.")
-        self.in_flight = in_flight or max(2, 3 * workers)
+        self.workers = workers
+        self.in_flight = in_flight or max(2, 2 * workers)
 
     def __enter__(self) -> ClusterExecutor:
         return self
@@ -102,27 +140,45 @@ class ClusterExecutor:
         self.client.close()
 
     def run(self, tasks: Iterable[tuple[Any, Any]]) -> Iterator[tuple[Any, Any]]:
-        """Yield (tag, result) as batches complete; a lost batch fails closed per document."""
+        """Yield (tag, result) as batches complete; a lost batch fails closed per document.
+
+        Tasks travel in batches of up to BATCH tasks and BATCH_BYTES, read ahead by a
+        window of ``in_flight`` batches; once the tasks run out, what is left is split
+        evenly over the workers, so they finish together instead of one worker taking
+        the last full batch while the others wait."""
         from distributed import as_completed
         pending = iter(tasks)
+        ahead: deque[tuple[Any, Any]] = deque()
+        exhausted = False
         tags: dict[int, Any] = {}
         members: dict[Any, list[int]] = {}
         counter = 0
         futures = as_completed()
 
+        def read_ahead() -> None:
+            nonlocal exhausted
+            while not exhausted and len(ahead) < BATCH * self.in_flight:
+                try:
+                    ahead.append(next(pending))
+                except StopIteration:
+                    exhausted = True
+
         def submit() -> bool:
             nonlocal counter
+            read_ahead()
+            if not ahead:
+                return False
+            limit = BATCH
+            if exhausted:  # the tail: an even share for each worker
+                limit = max(1, min(BATCH, -(-len(ahead) // self.workers)))
             batch = []
             weight = 0
-            for tag, payload in pending:
+            while ahead and len(batch) < limit and weight < BATCH_BYTES:
+                tag, payload = ahead.popleft()
                 tags[counter] = tag
                 batch.append((counter, payload))
                 counter += 1
                 weight += payload_bytes(payload)
-                if len(batch) >= BATCH or weight >= BATCH_BYTES:
-                    break
-            if not batch:
-                return False
             future = self.client.submit(run_batch, self.params, batch, pure=False)
             members[future] = [index for index, _payload in batch]
             futures.add(future)

@@ -1,9 +1,8 @@
 """A shared near-duplicate index in Redis (``--index redis://host:port/db``).
 
 By default the duplicate check builds its MinHash LSH in memory from the corpus state of
-the output folder. With ``--index``, the sketches of accepted documents live in Redis
-through datasketch's Redis storage, under a name (``--index-name``, default ``default``),
-so that:
+the output folder. With ``--index``, the sketches of accepted documents live in Redis,
+under a name (``--index-name``, default ``default``), so that:
 
 * a run only fetches the stored documents that are LSH candidates of its batch, instead of
   loading the whole corpus, and
@@ -16,20 +15,32 @@ folder's documents. The index is brought in line with the folder's corpus state 
 of every run and review, as part of committing (a killed run re-syncs when it resumes).
 Runs sharing an index must not overlap; a lock in Redis refuses a second one.
 
-Keys: ``gate:<name>:meta`` (hash: member -> JSON), ``gate:<name>:owner:<bands>x<rows>:<folder>``
-(set; per LSH layout, so a layout that changed is filled again by the next sync),
-``gate:<name>:sha:<digest>`` and ``gate:<name>:text:<digest>`` (sets, exact copies),
-``gate:<name>:lock``, and datasketch's bucket keys under a basename that encodes the
-permutations, bands, rows, scheme and seed (an index built with other parameters is never
-read by mistake).
+The LSH buckets are gate's own layout (the bands of the duplicate check, ``dup.band_params``):
+a bucket is a set of members under ``gate:<name>:lsh<tag>:<band>:<digest>``, where
+``<digest>`` is the first 16 hex digits of the SHA-1 of the band's MinHash values (little-
+endian 32-bit, as stored) and ``<tag>`` a short hash of the layout (permutations, bands,
+rows, scheme, seed), so an index built with other parameters is never read by mistake.
+Candidates of a batch are fetched with one ``SUNION`` per band for up to QUERY_CHUNK
+sketches (one round trip); documents are added and removed by one Lua script per chunk,
+which computes the bucket keys itself (``redis.sha1hex``), so a document costs the
+coordinator a few arguments, not a command per band.
+
+Other keys: ``gate:<name>:meta`` (hash: member -> JSON of path, digests, trust, date,
+first seen), ``gate:<name>:sketch`` (hash: member -> the MinHash values, 1 KiB binary),
+``gate:<name>:owner:<tag>:<folder>`` (set of a folder's members, per layout: an index
+first built with another layout, or by an earlier gate with datasketch's buckets, is
+filled again by the next sync; a member is added to it last, after its buckets),
+``gate:<name>:sha:<digest>`` and ``gate:<name>:text:<digest>`` (sets, exact copies) and
+``gate:<name>:lock``.
 """
 
 from __future__ import annotations
 
+import hashlib
 import json
 import os
-import pickle
 import socket
+from datetime import datetime
 from typing import Any
 from urllib.parse import urlsplit
 
@@ -38,7 +49,54 @@ from gate.checks import duplicate as dup
 from gate.errors import LockError, UsageError
 
 LOCK_SECONDS = 6 * 3600
-QUERY_CHUNK = 500  # sketches whose LSH buckets are fetched in one pipeline per band
+QUERY_CHUNK = 500  # sketches whose LSH buckets are fetched in one round trip
+SYNC_CHUNK = 500  # documents added or removed by one script
+
+# KEYS: meta, sketch, owner set. ARGV: the bucket prefix, rows per band (bytes: 4 x rows),
+# bands, the sha/text prefix, then per document: member, meta JSON, sketch, sha256,
+# text sha256 ('' when none). The buckets, digests and meta first, the owner set last.
+_ADD = """
+local prefix, width, bands, exact = ARGV[1], tonumber(ARGV[2]), tonumber(ARGV[3]), ARGV[4]
+for i = 5, #ARGV, 5 do
+  local member, sketch = ARGV[i], ARGV[i + 2]
+  if #sketch > 0 then
+    for band = 0, bands - 1 do
+      local key = prefix .. band .. ':' ..
+        string.sub(redis.sha1hex(string.sub(sketch, band * width + 1, (band + 1) * width)), 1, 16)
+      redis.call('SADD', key, member)
+    end
+    redis.call('HSET', KEYS[2], member, sketch)
+  end
+  redis.call('HSET', KEYS[1], member, ARGV[i + 1])
+  redis.call('SADD', exact .. 'sha:' .. ARGV[i + 3], member)
+  if #ARGV[i + 4] > 0 then redis.call('SADD', exact .. 'text:' .. ARGV[i + 4], member) end
+end
+for i = 5, #ARGV, 5 do redis.call('SADD', KEYS[3], ARGV[i]) end
+return 0
+"""
+
+# The same KEYS and first ARGV; per document: member, sha256, text sha256 ('' when none).
+# Leaves the owner set first, then its buckets (read from its stored sketch) and the rest.
+_REMOVE = """
+local prefix, width, bands, exact = ARGV[1], tonumber(ARGV[2]), tonumber(ARGV[3]), ARGV[4]
+for i = 5, #ARGV, 3 do redis.call('SREM', KEYS[3], ARGV[i]) end
+for i = 5, #ARGV, 3 do
+  local member = ARGV[i]
+  local sketch = redis.call('HGET', KEYS[2], member)
+  if sketch then
+    for band = 0, bands - 1 do
+      local key = prefix .. band .. ':' ..
+        string.sub(redis.sha1hex(string.sub(sketch, band * width + 1, (band + 1) * width)), 1, 16)
+      redis.call('SREM', key, member)
+    end
+  end
+  redis.call('HDEL', KEYS[2], member)
+  redis.call('HDEL', KEYS[1], member)
+  if #ARGV[i + 1] > 0 then redis.call('SREM', exact .. 'sha:' .. ARGV[i + 1], member) end
+  if #ARGV[i + 2] > 0 then redis.call('SREM', exact .. 'text:' .. ARGV[i + 2], member) end
+end
+return 0
+"""
 
 
 def connection_settings(url: str) -> dict[str, Any]:
@@ -78,6 +136,13 @@ def display_url(url: str) -> str:
     return f"{parts.scheme}://{parts.hostname or ''}{port}{parts.path}"
 
 
+def bucket_digests(sketch: bytes, bands: int, rows: int) -> list[str]:
+    """The bucket of each band for a sketch (as the Lua scripts compute them)."""
+    width = 4 * rows
+    return [hashlib.sha1(sketch[band * width:(band + 1) * width]).hexdigest()[:16]
+            for band in range(bands)]
+
+
 class SharedIndex:
     """The Redis-backed corpus index for one output folder (``owner``)."""
 
@@ -88,7 +153,6 @@ class SharedIndex:
         except ImportError:
             raise UsageError("--index needs the 'redis' package: pip install "
                              "'gate[cluster]'") from None
-        from datasketch import MinHashLSH
         self.url = display_url(url)
         self.name = name
         self.owner = owner
@@ -100,14 +164,13 @@ class SharedIndex:
             raise UsageError(f"cannot reach the index at {self.url} ({redact.text(str(err))}); "
                              "start Redis or "
                              "run without --index.") from None
-        bands, rows = dup.band_params(threshold)
-        self.layout = f"{bands}x{rows}"
-        basename = (f"gate:{name}:lsh:{dup.NUM_PERM}:{bands}x{rows}:{dup.SCHEME}:"
-                    f"{dup.SEED}").encode()
-        self.lsh = MinHashLSH(num_perm=dup.NUM_PERM, params=(bands, rows),
-                              storage_config={"type": "redis", "basename": basename,
-                                              "redis": {k: v for k, v in self.config.items()
-                                                        if v is not None}})
+        self.bands, self.rows = dup.band_params(threshold)
+        layout = f"{dup.NUM_PERM}:{self.bands}x{self.rows}:{dup.SCHEME}:{dup.SEED}"
+        tag = hashlib.sha1(layout.encode()).hexdigest()[:6]
+        self.buckets = f"{self.prefix}lsh{tag}:"
+        self.owner_key = f"{self.prefix}owner:{tag}:{owner}"
+        self._add = self.redis.register_script(_ADD)
+        self._remove = self.redis.register_script(_REMOVE)
         self._token = f"{owner}:{socket.gethostname()}:{os.getpid()}"
 
     # -- one run at a time -------------------------------------------------------------
@@ -145,12 +208,15 @@ class SharedIndex:
                 pipe.smembers(self.prefix + "text:" + item.text_sha256)
         for found in pipe.execute():
             members.update(m.decode() for m in found)
-        members.update(self._lsh_candidates([dup.lean(item.minhash) for item in batch
+        members.update(self._lsh_candidates([item.minhash for item in batch
                                              if item.minhash is not None]))
         out: list[dup.Item] = []
         wanted = sorted(members)
-        metas = self.redis.hmget(self.prefix + "meta", wanted) if wanted else []
-        for member, raw in zip(wanted, metas):
+        pipe = self.redis.pipeline(transaction=False)
+        pipe.hmget(self.prefix + "meta", wanted)
+        pipe.hmget(self.prefix + "sketch", wanted)
+        metas, sketches = pipe.execute() if wanted else ([], [])
+        for member, raw, sketch in zip(wanted, metas, sketches):
             if raw is None:
                 continue
             meta = json.loads(raw)
@@ -158,42 +224,44 @@ class SharedIndex:
             own = owner == self.owner
             if own and (not include_own or doc_id in batch_ids):
                 continue
-            from datetime import datetime
+            if sketch is None and meta.get("minhash"):  # written by an earlier gate
+                sketch = bytes.fromhex(meta["minhash"])
             out.append(dup.Item(
                 key=doc_id if own else member, path=meta["path"] if own else
                 f"{meta['path']} (accepted in {owner})", sha256=meta["sha256"],
-                text_sha256=meta.get("text_sha256"),
-                minhash=bytes.fromhex(meta["minhash"]) if meta.get("minhash") else None,
+                text_sha256=meta.get("text_sha256"), minhash=sketch or None,
                 trust=meta["trust"], date=datetime.fromisoformat(meta["date"])
                 if meta.get("date") else None, seen=(meta["first_seen"], -1), in_batch=False,
                 accepted_before=True, fixed=not own))
         return out
 
-    def _lsh_candidates(self, sketches: list[Any]) -> set[str]:
-        """The union of ``lsh.query`` over many sketches, with one Redis round trip per
-        band for up to QUERY_CHUNK sketches instead of one per band and sketch (the
-        bucket keys are computed as datasketch's ``query`` does, by its ``_H``)."""
-        lsh, found = self.lsh, set()
+    def _lsh_candidates(self, sketches: list[bytes]) -> set[str]:
+        """Members sharing a bucket with any of the sketches in any band: one SUNION per
+        band for up to QUERY_CHUNK sketches, every band in one round trip."""
+        found: set[str] = set()
         for start in range(0, len(sketches), QUERY_CHUNK):
-            chunk = sketches[start:start + QUERY_CHUNK]
-            for (lo, hi), table in zip(lsh.hashranges, lsh.hashtables):
-                for keys in table.getmany(*[lsh._H(m.hashvalues[lo:hi]) for m in chunk]):
-                    found.update(keys)
-        if lsh.prepickle:  # keys are stored pickled (datasketch's default with Redis)
-            found = {pickle.loads(key) for key in found}
-        return {k.decode() if isinstance(k, bytes) else k for k in found}
+            chunk = [bucket_digests(s, self.bands, self.rows)
+                     for s in sketches[start:start + QUERY_CHUNK]]
+            pipe = self.redis.pipeline(transaction=False)
+            for band in range(self.bands):
+                head = f"{self.buckets}{band}:"
+                pipe.sunion([head + digests[band] for digests in chunk])
+            for members in pipe.execute():
+                found.update(m.decode() for m in members)
+        return found
 
     # -- keeping it in line with the folder's corpus -------------------------------------
+
+    def _script_args(self) -> list[Any]:
+        return [self.buckets, 4 * self.rows, self.bands, self.prefix]
 
     def sync(self, state: Any) -> tuple[int, int]:
         """Make the index hold exactly this folder's accepted corpus; (added, removed).
 
         Only the documents that changed are read in full, in batches, so syncing a large
         corpus does not load every sketch at once."""
-        # the owner set is kept per LSH layout: an index first built with other bands and
-        # rows holds none of this folder's documents in the buckets read now
-        owner_key = self.prefix + "owner:" + self.layout + ":" + self.owner
-        current = sorted(m.decode() for m in self.redis.smembers(owner_key))
+        keys = [self.prefix + "meta", self.prefix + "sketch", self.owner_key]
+        current = sorted(m.decode() for m in self.redis.smembers(self.owner_key))
         desired = {self._member(doc_id): sha for doc_id, sha in state.corpus_digests()}
         stale: list[tuple[str, dict[str, Any]]] = []
         for start in range(0, len(current), 1000):
@@ -202,43 +270,25 @@ class SharedIndex:
                 meta = json.loads(raw) if raw else {}
                 if desired.get(member) != meta.get("sha256"):
                     stale.append((member, meta))
-        for member, meta in stale:
-            if member in self.lsh:
-                self.lsh.remove(member)
-            pipe = self.redis.pipeline()
-            pipe.hdel(self.prefix + "meta", member)
-            pipe.srem(owner_key, member)
-            if meta.get("sha256"):
-                pipe.srem(self.prefix + "sha:" + meta["sha256"], member)
-            if meta.get("text_sha256"):
-                pipe.srem(self.prefix + "text:" + meta["text_sha256"], member)
-            pipe.execute()
+        for start in range(0, len(stale), SYNC_CHUNK):
+            args = self._script_args()
+            for member, meta in stale[start:start + SYNC_CHUNK]:
+                args += [member, meta.get("sha256") or "", meta.get("text_sha256") or ""]
+            self._remove(keys=keys, args=args)
         present = set(current) - {member for member, _meta in stale}
         missing = sorted(m for m in desired if m not in present)
         added = 0
-        for start in range(0, len(missing), 500):
-            ids = [m.partition(":")[2] for m in missing[start:start + 500]]
-            rows = state.corpus_rows(ids)
-            # the sketches first: a member of the owner set is fully indexed, so a sync
-            # killed in between inserts the chunk again on the next run
-            with self.lsh.insertion_session() as session:
-                for row in rows:
-                    if row["minhash"]:
-                        session.insert(self._member(row["doc_id"]), dup.lean(row["minhash"]),
-                                       check_duplication=False)
-            pipe = self.redis.pipeline()  # one round trip for the chunk's documents
-            for row in rows:
-                member = self._member(row["doc_id"])
+        for start in range(0, len(missing), SYNC_CHUNK):
+            ids = [m.partition(":")[2] for m in missing[start:start + SYNC_CHUNK]]
+            args = self._script_args()
+            for row in state.corpus_rows(ids):
                 meta = {"path": row["path"], "sha256": row["sha256"],
-                        "text_sha256": row["text_sha256"],
-                        "minhash": row["minhash"].hex() if row["minhash"] else None,
-                        "trust": row["trust"], "date": row["date"],
-                        "first_seen": row["first_seen"]}
-                pipe.hset(self.prefix + "meta", member, json.dumps(meta, sort_keys=True))
-                pipe.sadd(owner_key, member)
-                pipe.sadd(self.prefix + "sha:" + row["sha256"], member)
-                if row["text_sha256"]:
-                    pipe.sadd(self.prefix + "text:" + row["text_sha256"], member)
+                        "text_sha256": row["text_sha256"], "trust": row["trust"],
+                        "date": row["date"], "first_seen": row["first_seen"]}
+                args += [self._member(row["doc_id"]), json.dumps(meta, sort_keys=True),
+                         row["minhash"] or b"", row["sha256"], row["text_sha256"] or ""]
                 added += 1
-            pipe.execute()
+            # one script a chunk: a member joins the owner set after its buckets, so a
+            # sync killed before the script ran adds the chunk again on the next run
+            self._add(keys=keys, args=args)
         return added, len(stale)

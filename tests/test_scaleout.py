@@ -167,3 +167,90 @@ def test_review_release_keeps_the_index_in_line(services, tmp_path):
     review.act(out, "release", ["language/avis-aux-voyageurs.html"], note="bilingual notice",
                by="r")
     assert client.hlen("gate:review:meta") == before + 1
+
+
+def _bucket_members(client, index):
+    """Every (bucket key, member) pair of the index's LSH buckets."""
+    pairs = set()
+    for key in client.scan_iter(match=index.buckets + "*", count=1000):
+        pairs.update((key.decode(), m.decode()) for m in client.smembers(key))
+    return pairs
+
+
+def _expected_buckets(client, index):
+    """The bucket pairs the stored sketches call for, computed here in Python (the Lua
+    scripts compute them in Redis)."""
+    from gate.index import bucket_digests
+    pairs = set()
+    for member, sketch in client.hgetall(index.prefix + "sketch").items():
+        for band, digest in enumerate(bucket_digests(sketch, index.bands, index.rows)):
+            pairs.add((f"{index.buckets}{band}:{digest}", member.decode()))
+    return pairs
+
+
+def test_index_buckets_follow_the_folder_through_removals_and_refills(services, tmp_path):
+    import redis as redis_lib
+
+    from gate.index import SharedIndex
+    from gate.state import open_state
+    out = tmp_path / "out"
+    go(out, index=services["redis"], index_name="layout")
+    client = redis_lib.Redis.from_url(services["redis"])
+    state = open_state(out / "state" / "gate.sqlite")
+    try:
+        folder = state.meta("folder_id")
+        accepted = {doc_id for doc_id, _sha in state.corpus_digests()}
+    finally:
+        state.close()
+    index = SharedIndex(services["redis"], "layout", folder, 0.8)
+    owners = {m.decode() for m in client.smembers(index.owner_key)}
+    assert owners == {f"{folder}:{doc_id}" for doc_id in accepted}
+    pairs = _bucket_members(client, index)
+    assert pairs and pairs == _expected_buckets(client, index)
+    # one bucket per band for every document with a sketch
+    assert len(pairs) == index.bands * client.hlen(index.prefix + "sketch")
+
+    # a full run over a smaller inbox removes documents: their buckets go with them
+    smaller = tmp_path / "smaller"
+    shutil.copytree(INBOX, smaller, symlinks=True)
+    shutil.rmtree(smaller / "wiki")
+    go(out, inbox=smaller, index=services["redis"], index_name="layout", allow_removals=100)
+    left = {m.decode() for m in client.smembers(index.owner_key)}
+    assert left < owners
+    assert {m for _key, m in _bucket_members(client, index)} <= left
+    assert _bucket_members(client, index) == _expected_buckets(client, index)
+    assert {m.decode() for m in client.hkeys(index.prefix + "meta")} == left
+
+    # an index whose buckets were built another way (an earlier gate, another layout)
+    # has no owner set for this layout: the next run fills it again
+    client.delete(index.owner_key, index.prefix + "sketch",
+                  *client.scan_iter(match=index.buckets + "*"))
+    go(out, inbox=smaller, index=services["redis"], index_name="layout")
+    assert {m.decode() for m in client.smembers(index.owner_key)} == left
+    assert _bucket_members(client, index) == _expected_buckets(client, index)
+    assert len(_bucket_members(client, index)) == \
+        index.bands * client.hlen(index.prefix + "sketch") > 0
+
+
+def test_a_stored_document_without_its_binary_sketch_is_still_a_candidate(services,
+                                                                         tmp_path):
+    """Metadata written by an earlier gate (the sketch as hex inside it) still serves."""
+    import redis as redis_lib
+
+    from gate.checks import duplicate as dup
+    from gate.index import SharedIndex
+    go(tmp_path / "team-a", index=services["redis"], index_name="hexmeta")
+    client = redis_lib.Redis.from_url(services["redis"])
+    sketches = client.hgetall("gate:hexmeta:sketch")
+    member, sketch = sorted(sketches.items())[0]
+    meta = json.loads(client.hget("gate:hexmeta:meta", member))
+    meta["minhash"] = sketch.hex()
+    client.hset("gate:hexmeta:meta", member, json.dumps(meta))
+    client.delete("gate:hexmeta:sketch")
+    index = SharedIndex(services["redis"], "hexmeta", "another-folder", 0.8)
+    probe = dup.Item(key="probe", path="probe.txt", sha256=meta["sha256"], text_sha256=None,
+                     minhash=None, trust=50, date=None, seen=(1, 0), in_batch=True,
+                     accepted_before=False)
+    found = index.candidates([probe], batch_ids={"probe"}, include_own=False)
+    assert [(item.key, item.minhash, item.fixed) for item in found] == \
+        [(member.decode(), sketch, True)]
