@@ -20,10 +20,11 @@ a bucket is a set of members under ``gate:<name>:lsh<tag>:<band>:<digest>``, whe
 ``<digest>`` is the first 16 hex digits of the SHA-1 of the band's MinHash values (little-
 endian 32-bit, as stored) and ``<tag>`` a short hash of the layout (permutations, bands,
 rows, scheme, seed), so an index built with other parameters is never read by mistake.
-Candidates of a batch are fetched with one ``SUNION`` per band for up to QUERY_CHUNK
-sketches (one round trip); documents are added and removed by one Lua script per chunk,
-which computes the bucket keys itself (``redis.sha1hex``), so a document costs the
-coordinator a few arguments, not a command per band.
+Candidates of a batch are fetched by one Lua script for up to QUERY_CHUNK documents
+(one ``SUNION`` per band, the exact-copy sets, the candidates' metadata and sketches), and
+documents are added and removed by one script per chunk; the scripts compute the bucket
+keys themselves (``redis.sha1hex``), so a document costs the coordinator a few arguments
+and no command per band.
 
 Other keys: ``gate:<name>:meta`` (hash: member -> JSON of path, digests, trust, date,
 first seen), ``gate:<name>:sketch`` (hash: member -> the MinHash values, 1 KiB binary),
@@ -49,7 +50,7 @@ from gate.checks import duplicate as dup
 from gate.errors import LockError, UsageError
 
 LOCK_SECONDS = 6 * 3600
-QUERY_CHUNK = 500  # sketches whose LSH buckets are fetched in one round trip
+QUERY_CHUNK = 500  # documents whose candidates are fetched by one script
 SYNC_CHUNK = 500  # documents added or removed by one script
 
 # KEYS: meta, sketch, owner set. ARGV: the bucket prefix, rows per band (bytes: 4 x rows),
@@ -73,6 +74,50 @@ for i = 5, #ARGV, 5 do
 end
 for i = 5, #ARGV, 5 do redis.call('SADD', KEYS[3], ARGV[i]) end
 return 0
+"""
+
+# The same KEYS and first ARGV; per document of a batch: its sketch ('' when none),
+# sha256 and text sha256 ('' when none). Returns member, meta JSON and sketch (false when
+# none) of every stored document sharing a bucket or a digest with one of them: one
+# SUNION per band for the batch, every bucket key computed here.
+_QUERY = """
+local prefix, width, bands, exact = ARGV[1], tonumber(ARGV[2]), tonumber(ARGV[3]), ARGV[4]
+local found, keys = {}, {}
+for band = 0, bands - 1 do
+  local head = prefix .. band .. ':'
+  local n = 0
+  for i = 5, #ARGV, 3 do
+    local sketch = ARGV[i]
+    if #sketch > 0 then
+      n = n + 1
+      keys[n] = head ..
+        string.sub(redis.sha1hex(string.sub(sketch, band * width + 1, (band + 1) * width)), 1, 16)
+    end
+  end
+  if n > 0 then
+    for _, member in ipairs(redis.call('SUNION', unpack(keys, 1, n))) do found[member] = true end
+  end
+end
+for i = 5, #ARGV, 3 do
+  for _, member in ipairs(redis.call('SMEMBERS', exact .. 'sha:' .. ARGV[i + 1])) do
+    found[member] = true
+  end
+  if #ARGV[i + 2] > 0 then
+    for _, member in ipairs(redis.call('SMEMBERS', exact .. 'text:' .. ARGV[i + 2])) do
+      found[member] = true
+    end
+  end
+end
+local out = {}
+for member in pairs(found) do
+  local meta = redis.call('HGET', KEYS[1], member)
+  if meta then
+    out[#out + 1] = member
+    out[#out + 1] = meta
+    out[#out + 1] = redis.call('HGET', KEYS[2], member)
+  end
+end
+return out
 """
 
 # The same KEYS and first ARGV; per document: member, sha256, text sha256 ('' when none).
@@ -137,7 +182,8 @@ def display_url(url: str) -> str:
 
 
 def bucket_digests(sketch: bytes, bands: int, rows: int) -> list[str]:
-    """The bucket of each band for a sketch (as the Lua scripts compute them)."""
+    """The bucket of each band for a sketch, as the Lua scripts compute them (the
+    reference the tests check them against)."""
     width = 4 * rows
     return [hashlib.sha1(sketch[band * width:(band + 1) * width]).hexdigest()[:16]
             for band in range(bands)]
@@ -169,6 +215,7 @@ class SharedIndex:
         tag = hashlib.sha1(layout.encode()).hexdigest()[:6]
         self.buckets = f"{self.prefix}lsh{tag}:"
         self.owner_key = f"{self.prefix}owner:{tag}:{owner}"
+        self._query = self.redis.register_script(_QUERY)
         self._add = self.redis.register_script(_ADD)
         self._remove = self.redis.register_script(_REMOVE)
         self._token = f"{owner}:{socket.gethostname()}:{os.getpid()}"
@@ -200,25 +247,18 @@ class SharedIndex:
     def candidates(self, batch: list[dup.Item], *, batch_ids: set[str],
                    include_own: bool) -> list[dup.Item]:
         """Stored documents that could be duplicates of the batch, as duplicate Items."""
-        members: set[str] = set()
-        pipe = self.redis.pipeline(transaction=False)
-        for item in batch:
-            pipe.smembers(self.prefix + "sha:" + item.sha256)
-            if item.text_sha256:
-                pipe.smembers(self.prefix + "text:" + item.text_sha256)
-        for found in pipe.execute():
-            members.update(m.decode() for m in found)
-        members.update(self._lsh_candidates([item.minhash for item in batch
-                                             if item.minhash is not None]))
+        keys = [self.prefix + "meta", self.prefix + "sketch"]
+        found: dict[str, tuple[bytes, bytes | None]] = {}
+        for start in range(0, len(batch), QUERY_CHUNK):
+            args = self._script_args()
+            for item in batch[start:start + QUERY_CHUNK]:
+                args += [item.minhash or b"", item.sha256, item.text_sha256 or ""]
+            flat = self._query(keys=keys, args=args)
+            for at in range(0, len(flat), 3):
+                found[flat[at].decode()] = (flat[at + 1], flat[at + 2] or None)
         out: list[dup.Item] = []
-        wanted = sorted(members)
-        pipe = self.redis.pipeline(transaction=False)
-        pipe.hmget(self.prefix + "meta", wanted)
-        pipe.hmget(self.prefix + "sketch", wanted)
-        metas, sketches = pipe.execute() if wanted else ([], [])
-        for member, raw, sketch in zip(wanted, metas, sketches):
-            if raw is None:
-                continue
+        for member in sorted(found):
+            raw, sketch = found[member]
             meta = json.loads(raw)
             owner, _, doc_id = member.partition(":")
             own = owner == self.owner
@@ -229,26 +269,11 @@ class SharedIndex:
             out.append(dup.Item(
                 key=doc_id if own else member, path=meta["path"] if own else
                 f"{meta['path']} (accepted in {owner})", sha256=meta["sha256"],
-                text_sha256=meta.get("text_sha256"), minhash=sketch or None,
+                text_sha256=meta.get("text_sha256"), minhash=sketch,
                 trust=meta["trust"], date=datetime.fromisoformat(meta["date"])
                 if meta.get("date") else None, seen=(meta["first_seen"], -1), in_batch=False,
                 accepted_before=True, fixed=not own))
         return out
-
-    def _lsh_candidates(self, sketches: list[bytes]) -> set[str]:
-        """Members sharing a bucket with any of the sketches in any band: one SUNION per
-        band for up to QUERY_CHUNK sketches, every band in one round trip."""
-        found: set[str] = set()
-        for start in range(0, len(sketches), QUERY_CHUNK):
-            chunk = [bucket_digests(s, self.bands, self.rows)
-                     for s in sketches[start:start + QUERY_CHUNK]]
-            pipe = self.redis.pipeline(transaction=False)
-            for band in range(self.bands):
-                head = f"{self.buckets}{band}:"
-                pipe.sunion([head + digests[band] for digests in chunk])
-            for members in pipe.execute():
-                found.update(m.decode() for m in members)
-        return found
 
     # -- keeping it in line with the folder's corpus -------------------------------------
 
