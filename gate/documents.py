@@ -28,13 +28,14 @@ from gate import containers
 from gate.checks.base import Document, RunContext
 from gate.commit import Output, Reporter
 from gate.discovery import Entry, walk
-from gate.evaluation import Releases, evaluate_document, extraction_of
+from gate.evaluation import Releases, extraction_of
 from gate.extract.model import Extracted
 from gate.extract.pool import Failure
 from gate.intake import FileTask, Intake, StagedTask, read_entry
+from gate.judge import Judge, Subject, verdict
 from gate.manifest import Manifest, ManifestRecord
 from gate.policy import LoadedPolicy
-from gate.record import Slim, doc_record, slim
+from gate.record import Slim
 from gate.state import dumps
 from gate.templates import Page, learn, removal, removal_key, site_of, stored_pages
 from gate.work import Params
@@ -73,6 +74,7 @@ class _Item:
     measured: bool = False  # measured at once (no template assumed), while it waits
     hint: str | None = None  # its digest in the last run
     cached: tuple[dict, dict] | None = None  # that digest's cache entry, if usable
+    judged: tuple[str, Slim] | None = None  # a worker's verdict on its measures (gate.judge)
 
 
 def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, output: Output,
@@ -103,6 +105,7 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
     doc_rows: list[tuple[str, int, str]] = []
     state.clear_run_docs(run_id)
     stage_root = str(output.blobs.root)
+    judge = Judge(loaded, ctx, releases, cache_print)
 
     flushed = [time.monotonic()]
 
@@ -116,18 +119,19 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
             doc_rows.clear()
 
     def evaluated(item: _Item) -> None:
+        """Its record and Slim: the worker's verdict when it evaluated these measures."""
         assert item.extracted is not None
-        record = item.record
-        document = Document(path=item.entry.path, kind=item.entry.kind,
-                            size=item.intake.size, sha256=item.intake.sha256,
-                            manifest=record, extracted=item.extracted,
-                            measures=item.measures, link_target=item.entry.link_target)
-        evaluation = evaluate_document(document, loaded, ctx,
-                                       measure_errors=item.measure_errors, releases=releases)
-        rec = doc_record(item.index, doc_id(item.entry.path), item.entry, item.intake,
-                         document, evaluation, item.cache_key, loaded.policy)
-        slims[item.index] = slim(rec, evaluation, document, item.measure_errors)
-        doc_rows.append((run_id, item.index, rec.to_json()))
+        if item.judged is None:
+            document = Document(path=item.entry.path, kind=item.entry.kind,
+                                size=item.intake.size, sha256=item.intake.sha256,
+                                manifest=item.record, extracted=item.extracted,
+                                measures=item.measures, link_target=item.entry.link_target)
+            item.judged = verdict(item.index, doc_id(item.entry.path), item.entry,
+                                  item.intake, document, item.measure_errors,
+                                  item.cache_key, judge)
+        record_json, slims[item.index] = item.judged
+        item.judged = None
+        doc_rows.append((run_id, item.index, record_json))
         if len(doc_rows) >= CACHE_BATCH and (time.monotonic() - flushed[0] >= CACHE_PAUSE_S
                                              or len(doc_rows) >= 16 * CACHE_BATCH):
             flush()
@@ -137,6 +141,13 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
         item.extracted = Extracted(type=None, problem=item.intake.problem,
                                    problem_detail=item.intake.detail)
         evaluated(item)
+
+    def subject(item: _Item, cache_key: str | None, intake: Intake | None) -> Subject:
+        """The worker evaluates what it measures (gate.judge); the bytes stay here."""
+        return Subject(item.index, doc_id(item.entry.path), item.entry, item.record, judge,
+                       cache_key, Intake(sha256=intake.sha256, size=intake.size,
+                                         problem=intake.problem, detail=intake.detail)
+                       if intake is not None else None)
 
     waiting: list[_Item] = []
 
@@ -152,12 +163,14 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
         item.measured = measured
         if not measured:
             item.measures = {}  # measured after learning, on the page's own text
+            item.judged = None
         waiting.append(item)
 
     def received(item: _Item, result: Any) -> dict[str, list[int]]:
         """A worker's result, into the cache unless a bug in gate; returns its blocks."""
         item.extracted, item.measures, item.measure_errors = \
             extraction_of(result, item.intake.data)
+        item.judged = result.get("judged") if isinstance(result, dict) else None
         item.intake.data = None
         if isinstance(result, dict):
             for stage, seconds in result.get("timings", {}).items():
@@ -179,6 +192,7 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
         return blocks
 
     def from_cache(item: _Item, cached: tuple[dict, dict]) -> None:
+        item.judged = None
         item.extracted = Extracted.from_json(cached[0])
         item.measures = cached[1].get("measures", {})
         arrived(item, cached[1].get("blocks"), cached[1].get("measured", True))
@@ -196,7 +210,8 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
         if source is None:
             return None
         return StagedTask(item.entry.path, str(source), item.intake.sha256, params,
-                          site=item.site is not None, extra=extra)
+                          site=item.site is not None, extra=extra,
+                          subject=subject(item, item.cache_key, item.intake))
 
     def missing(item: _Item) -> None:
         """The staged copy vanished: fail closed."""
@@ -280,7 +295,7 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
                 site=item.site is not None,
                 skip=item.hint if item.cached is not None else None, placed=holds,
                 probe=resumed and placed is None, sync=getattr(pool, "remote", False),
-                size=entry.size or 0)
+                size=entry.size or 0, subject=subject(item, None, None))
 
     def extract_again() -> Any:
         for item in again:
@@ -300,6 +315,7 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
             cached = usable(item.cache_key, None) if not drop else None
             if cached is not None:
                 item.measures = cached[1].get("measures", {})
+                item.judged = None
                 evaluated(item)
                 continue
             earlier = state.cache_text_z(item.cache_key)
@@ -309,6 +325,7 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
                 item.cache_key = key
                 item.extracted = Extracted.from_json(cached[0])
                 item.measures = cached[1].get("measures", {})
+                item.judged = None
                 evaluated(item)
                 continue
             item.cache_key = key

@@ -147,6 +147,7 @@ class FileTask:
     probe: bool = False
     sync: bool = False  # the node flushes what it staged before answering (a cluster)
     size: int = 0  # the size discovery saw (how tasks are batched)
+    subject: Any = None  # evaluate it once measured (gate.judge.Subject), or None
 
     def run(self) -> dict[str, Any]:
         from gate.work import process
@@ -161,7 +162,8 @@ class FileTask:
         if intake.sha256 == self.skip or self.probe:
             return out
         task = _with_site((self.path, intake.data, self.params), intake.data, self.site)
-        out["result"] = packed(process(task))
+        out["result"] = _judged(packed(process(task)), self.subject,
+                                Intake(**out["intake"]))
         return out
 
 
@@ -178,6 +180,7 @@ class StagedTask:
     params: Any
     site: bool = False
     extra: tuple[Any, bytes | None] | None = None
+    subject: Any = None  # evaluate it once measured (gate.judge.Subject), or None
 
     @property
     def size(self) -> int:
@@ -202,7 +205,20 @@ class StagedTask:
             task = (self.path, data, self.params, drop,
                     zlib.decompress(earlier).decode("utf-8", "surrogatepass")
                     if earlier is not None else None)
-        return {"result": packed(process(task))}
+        return {"result": _judged(packed(process(task)), self.subject,
+                                  Intake(sha256=self.sha256, size=len(data)))}
+
+
+def _judged(result: dict[str, Any], subject: Any, intake: Intake) -> dict[str, Any]:
+    """A measured result with the worker's verdict on it (``judged``: the record's JSON
+    and the Slim, see :mod:`gate.judge`) when a subject is given."""
+    if subject is not None and result.get("measured", True):
+        from gate.judge import judged
+        try:
+            result["judged"] = judged(subject, intake, result)
+        except Exception:  # noqa: BLE001 - the coordinator evaluates it then, as it would
+            pass
+    return result
 
 
 def packed(result: dict[str, Any]) -> dict[str, Any]:
