@@ -1,6 +1,7 @@
 """The per-document stage of a run: every inbox document read once (:mod:`gate.intake`),
 staged, extracted and measured in a worker or found in the digest-keyed cache, then
-evaluated (:mod:`gate.evaluation`). Each document's :class:`~gate.record.DocRecord` goes
+evaluated (:mod:`gate.evaluation`; by the worker that measured it when it can, see
+:mod:`gate.judge`). Each document's :class:`~gate.record.DocRecord` goes
 to the state at once; only its :class:`~gate.record.Slim` stays in memory for the corpus
 checks.
 
