@@ -254,3 +254,18 @@ def test_a_stored_document_without_its_binary_sketch_is_still_a_candidate(servic
     found = index.candidates([probe], batch_ids={"probe"}, include_own=False)
     assert [(item.key, item.minhash, item.fixed) for item in found] == \
         [(member.decode(), sketch, True)]
+
+
+def test_a_second_folder_is_refused_while_a_run_holds_the_index(services):
+    from gate.errors import LockError
+    from gate.index import SharedIndex
+    first = SharedIndex(services["redis"], "locked", "folder-a", 0.8)
+    second = SharedIndex(services["redis"], "locked", "folder-b", 0.8)
+    first.lock()
+    try:
+        with pytest.raises(LockError, match="in use by another gate run"):
+            second.lock()
+    finally:
+        first.unlock()
+    second.lock()  # free again once the first run is done
+    second.unlock()
