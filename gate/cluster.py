@@ -4,18 +4,24 @@ The coordinating ``gate run`` process does bookkeeping, not per-document work: i
 each batch of inbox files by name (:class:`~gate.intake.FileTask`), and on the Dask worker
 the files are read, hashed, staged (``state/blobs`` of the output folder) and extracted and
 measured there, from storage every node sees at the same path (a shared file system; the
-inbox and the output folder must be mounted alike on every node). The coordinator receives
-each document's digest with its results (the text already compressed, the cache rows
-already encoded) and files them; decisions and placement stay with it, placing the staged
-bytes the worker checked, so the bytes checked are the bytes placed and decisions are
-identical to a local run.
+inbox and the output folder must be mounted alike on every node). The per-document checks
+are evaluated there too (:mod:`gate.judge`). The coordinator receives each document's
+digest with its results (the text already compressed, the cache rows already encoded, the
+record and Slim of its evaluation) and files them; the corpus checks, decisions and
+placement stay with it, placing the staged bytes the worker checked, so the bytes checked
+are the bytes placed and decisions are identical to a local run.
+
+Tasks travel to Dask in batches (BATCH documents or BATCH_BYTES at most, the last ones
+split evenly over the workers), so the scheduler and the client handle a few large tasks
+rather than one per document.
 
 On each Dask worker a batch runs through the same isolated worker pool as locally (its
 own processes, CPU-time limit and memory cap), so a hostile file costs a ``format``
 finding there too, not a Dask worker. The pool's processes are forked from a fork server
 that loaded the parsers and language profiles once (:mod:`gate.warm`), so a recycled
 worker starts warm. Staged copies are flushed to disk by the node that writes them
-(a coordinator's sync does not reach another machine's cache).
+(a coordinator's sync does not reach another machine's cache), once per batch and file
+system (``syncfs``), not per file.
 """
 
 from __future__ import annotations
