@@ -59,7 +59,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import words
 
-TEMPLATES_VERSION = 11  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 12  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -353,8 +353,11 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
         if _word_count(found.values()) < TEMPLATE_SHARE * _word_count(text.split("\n")) \
                 and not _merged(unplaced, blocks):
             return text, {"template_blocks": len(drop), "kept": "all (little template in it)"}
-    if placed and main_words and (main_words >= MAIN_RATIO * own_words or
-                                  own_words - main_words < MIN_OWN_WORDS):
+    # the page's own blocks replace trafilatura's text only when most of that text was
+    # template (trafilatura chose the template); a text that is mostly the page's own
+    # stays, however much else (comments, a byline, an author's note) the page holds
+    if placed and main_words and (main_words >= MAIN_RATIO * _word_count(text.split("\n"))
+                                  or own_words - main_words < MIN_OWN_WORDS):
         cleaned, source = "\n".join(main_rest).strip("\n"), "main"
     elif own_words >= MIN_OWN_WORDS:
         cleaned, source = "\n".join(own), "page"

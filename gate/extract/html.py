@@ -337,7 +337,9 @@ def complete_main(text: str, blocks: tuple[Block, ...], digests: list[int | None
     while first > 0 and blocks[first - 1].kind == "heading" and \
             blocks[first - 1].links < 0.5:
         first -= 1
-    while last + 1 < len(blocks) and blocks[last + 1].kind != "text" and \
+    # a closing list or table, up to the first heading after it: a heading there opens
+    # a section of its own (an aside's "Trending", "Comments"), no part of this text
+    while last + 1 < len(blocks) and blocks[last + 1].kind not in ("text", "heading") and \
             blocks[last + 1].links < 0.5:
         last += 1
     added = [i for i in range(first, last + 1) if blocks[i].hash not in covered and
