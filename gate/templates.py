@@ -64,6 +64,9 @@ MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
 SHARE_ASIDE = 0.2
+SHARE_ROTATING = 0.4  # a block on this share of the pages (and ASIDE_MIN_PAGES), in the
+# main text or not, rotates through the template (other answers, popular articles)
+BYLINE_MAX_WORDS = 6  # "answered by A. N." between two template blocks is template
 MAIN_RATIO = 0.5
 TEMPLATE_SHARE = 0.3  # template share of an unplaceable text that makes it give way
 MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilatura's text
@@ -72,6 +75,8 @@ SHAPE_MIN_WORDS = 3  # a line with numbers this short (3-12 words) may be a per-
 SHAPE_MAX_WORDS = 12  # template line ("Updated 34 days ago"); a title "Notice 2" is not
 MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
 SANDWICH_MAX = 6  # template blocks in a row kept between two blocks of the page's own
+TITLE_MIN_WORDS = 3  # a title this long that another page's list quotes makes a teaser
+DATE_MAX_WORDS = 4  # "25 February 2026" after a quoted title: a list of events, of news
 
 
 def site_of(source_url: str | None) -> str | None:
@@ -112,7 +117,12 @@ def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
     shaped = sorted({(shape, b.hash) for b in blocks
                      if b.kind == "text" and not b.nav and b.links < LINK_DOMINATED and
                      (shape := shape_hash(b.text)) is not None})
-    return {"main": main, "other": other, "shaped": [list(pair) for pair in shaped]}
+    summary: dict[str, Any] = {"main": main, "other": other,
+                               "shaped": [list(pair) for pair in shaped]}
+    titles = {" ".join(words(b.text)) for b in blocks if b.title}
+    if len(titles) == 1:
+        summary["title"] = titles.pop()
+    return summary
 
 
 @dataclass(frozen=True)
@@ -123,12 +133,14 @@ class Page:
     main: np.ndarray  # uint64, sorted, distinct
     other: np.ndarray  # uint64, sorted, distinct, none of them in main
     shaped: tuple[tuple[int, int], ...] = ()  # (shape hash, block hash) of numbered lines
+    title: str = ""  # the words of its title (HTML: its one <h1>), normalised
 
     @classmethod
-    def of(cls, site: str, summary: dict[str, list]) -> Page:
+    def of(cls, site: str, summary: dict[str, Any]) -> Page:
         return cls(site, np.array(summary.get("main", ()), dtype=np.uint64),
                    np.array(summary.get("other", ()), dtype=np.uint64),
-                   tuple((int(s), int(h)) for s, h in summary.get("shaped", ())))
+                   tuple((int(s), int(h)) for s, h in summary.get("shaped", ())),
+                   str(summary.get("title") or ""))
 
     @property
     def hashes(self) -> np.ndarray:
@@ -138,13 +150,14 @@ class Page:
         return hashlib.sha256(self.main.tobytes() + b"|" + self.other.tobytes()).digest()
 
 
-Learnt = dict[str, tuple[np.ndarray, np.ndarray, frozenset[int]]]
+Learnt = dict[str, tuple[np.ndarray, np.ndarray, frozenset[int], frozenset[str]]]
 
 
 def learn(pages: Iterable[Page]) -> Learnt:
     """Each host's template, for hosts that teach any: (blocks on most pages, blocks by
     the aside rule only, as sorted uint64 hashes; shapes of numbered lines on most
-    pages)."""
+    pages; its pages' titles of ``TITLE_MIN_WORDS`` words or more, which lists on other
+    pages quote)."""
     by_site: dict[str, dict[bytes, Page]] = {}
     for page in pages:
         by_site.setdefault(page.site, {}).setdefault(page.signature(), page)
@@ -163,6 +176,7 @@ def learn(pages: Iterable[Page]) -> Learnt:
         anywhere = total >= max(MIN_PAGES, math.ceil(SHARE_ANY * n))
         aside = (total >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n))) & \
             (2 * mains <= total)
+        aside |= total >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ROTATING * n))
         strong, weak = every[anywhere], every[aside & ~anywhere]
         # short lines with numbers that differ from page to page ("Updated 153 days
         # ago", "1,849 views"): their shape on most pages, in more than one wording
@@ -176,8 +190,9 @@ def learn(pages: Iterable[Page]) -> Learnt:
         shapes = frozenset(shape for shape, count in pages_of.items()
                            if count >= max(MIN_PAGES, math.ceil(SHARE_ANY * n)) and
                            len(wordings[shape]) > 1)
-        if len(strong) or len(weak) or shapes:
-            learnt[site] = (strong, weak, shapes)
+        titles = frozenset(p.title for p in distinct if p.title.count(" ") + 1 >= TITLE_MIN_WORDS)
+        if len(strong) or len(weak) or shapes or titles:
+            learnt[site] = (strong, weak, shapes, titles)
     return learnt
 
 
@@ -196,12 +211,14 @@ def stored_pages(state: Any, batch: set[str]) -> list[Page]:
     return pages
 
 
-Removal = tuple[tuple[int, ...], tuple[int, ...]]  # (everywhere, aside-only), or ()
+# (everywhere, aside-only[, the titles of the site's other pages]), or ()
+Removal = tuple[tuple[int, ...], ...] | tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...]]
 
 
 def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     """The template blocks of ``page``: those on most of the site's pages, and those only
-    the aside rule names (sorted hashes each); ``()`` when none."""
+    the aside rule names (sorted hashes each), and the titles of the site's other pages
+    (lists quoting them are teasers, see :func:`_quoting`); ``()`` when none."""
     template = learnt.get(page.site)
     if template is None:
         return ()
@@ -211,13 +228,18 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     shaped = {h for shape, h in page.shaped if shape in template[2]} - set(found[0])
     if shaped:
         found[0] = tuple(sorted(set(found[0]) | shaped))
-    return (found[0], found[1]) if found[0] or found[1] else ()
+    titles = tuple(sorted(template[3] - {page.title})) if len(template) > 3 else ()
+    if not (found[0] or found[1] or titles):
+        return ()
+    return (found[0], found[1], titles) if titles else (found[0], found[1])
 
 
 def removal_key(template: Removal) -> str:
     """A short stable name for a removal (part of the cache key of the cleaned text)."""
     blob = b"|".join(b"".join(int(h).to_bytes(8, "little") for h in sorted(part))
-                     for part in template)
+                     for part in template[:2])
+    if len(template) > 2:
+        blob += b"|" + "\n".join(template[2]).encode("utf-8")
     return hashlib.sha256(blob).hexdigest()[:16]
 
 
@@ -234,9 +256,17 @@ def _dropped(blocks: Sequence[Block], strong: set[int], weak: set[int]) -> set[i
     while changed:  # a run of weak blocks goes when one end of it touches an anchor
         changed = False
         for i, block in enumerate(blocks):
-            if block.hash in weak and not anchored[i] and \
-                    not (block.kind == "heading" and block.main) and (
-                    (i > 0 and anchored[i - 1]) or (i + 1 < len(blocks) and anchored[i + 1])):
+            if anchored[i] or block.title or (block.kind == "heading" and block.main):
+                continue
+            before = i > 0 and anchored[i - 1]
+            after = i + 1 < len(blocks) and anchored[i + 1]
+            # a short byline ("answered by A. N.", "posted by ...") between two blocks of
+            # the template goes with them
+            byline = (before or after) and block.links == 0 and \
+                len(block.text.split()) <= BYLINE_MAX_WORDS and \
+                0 < i < len(blocks) - 1 and \
+                all(anchored[k] or blocks[k].hash in weak for k in (i - 1, i + 1))
+            if (block.hash in weak and (before or after)) or byline:
                 anchored[i] = changed = True
                 drop.add(block.hash)
     return drop
@@ -267,6 +297,57 @@ def _sandwiched(blocks: Sequence[Block], drop: set[int]) -> set[int]:
             kept.update(b.hash for b in run)
         i = j
     return kept
+
+
+MONTHS = frozenset(
+    "january february march april may june july august september october november "
+    "december jan feb mar apr jun jul aug sep sept oct nov dec".split())
+
+
+def _dateish(word: str) -> bool:
+    """A word of a date or a time ("25", "february", "2026", "9:30am")."""
+    return word in MONTHS or any(c.isdigit() for c in word)
+
+
+def _quoting(blocks: Sequence[Block], titles: Iterable[str]) -> set[int]:
+    """The blocks that quote other pages of the site, linked or not: a block that is
+    another page's title (``titles``, normalised words), alone or followed by a date;
+    and blocks that begin with one ("Title Snippet ...") standing next to another such
+    block, or making up half or more of a list (its other items then quote pages the run
+    does not hold). An unlinked list of "upcoming events" or "more news" is a teaser list
+    whatever its words, and it differs from page to page, so counting blocks cannot name
+    it. The page's own title and a paragraph that merely begins with another page's
+    title (a story and its update) stay."""
+    by_start: dict[tuple[str, ...], list[str]] = {}
+    for title in titles:
+        by_start.setdefault(tuple(title.split()[:TITLE_MIN_WORDS]), []).append(title)
+    if not by_start:
+        return set()
+    quoted = [0] * len(blocks)  # 2: a title (and a date), 1: begins with a title
+    for i, block in enumerate(blocks):
+        if block.title:
+            continue
+        tokens = words(block.text)
+        if len(tokens) < TITLE_MIN_WORDS:
+            continue
+        flat = " ".join(tokens)
+        for title in by_start.get(tuple(tokens[:TITLE_MIN_WORDS]), ()):
+            if flat == title or flat.startswith(title + " "):
+                rest = tokens[title.count(" ") + 1:]
+                quoted[i] = max(quoted[i], 2 if len(rest) <= DATE_MAX_WORDS and
+                                all(_dateish(w) for w in rest) else 1)
+    found = {i for i, q in enumerate(quoted) if q == 2 or (q and (
+        (i > 0 and quoted[i - 1]) or (i + 1 < len(blocks) and quoted[i + 1])))}
+    i = 0
+    while i < len(blocks):  # lists with half or more of their items quoting titles
+        j = i
+        while j < len(blocks) and blocks[j].kind == "item":
+            j += 1
+        hits = sum(1 for k in range(i, j) if quoted[k])
+        if hits >= 2 and 2 * hits >= j - i:
+            found.update(k for k in range(i, j) if not blocks[k].title)
+        i = max(j, i + 1)
+    return {blocks[i].hash for i in found}
 
 
 def _word_count(lines: Iterable[str]) -> int:
@@ -330,6 +411,8 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
     blocks = tuple(blocks)
     drop = _dropped(blocks, set(template[0]), set(template[1]))
     drop -= _sandwiched(blocks, drop)
+    if len(template) > 2:
+        drop |= _quoting(blocks, template[2])
     if not drop:
         return text, {}
     drop |= _crumb_trails(blocks)

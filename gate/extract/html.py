@@ -453,13 +453,15 @@ def with_title(text: str, blocks: tuple[Block, ...], root: lxml.etree._Element
     if len(heads) != 1:
         return text, blocks
     digest = block_hash(" ".join(heads[0].text_content().split()))
-    if digest is None or digest in line_hashes(text, blocks):
-        return text, blocks
     for i, block in enumerate(blocks):
         if block.hash == digest:
             if block.kind != "heading" or block.links >= 0.5 or block.nav:
                 return text, blocks
-            marked = blocks[:i] + (dataclasses.replace(block, main=True),) + blocks[i + 1:]
+            # marked as the title: other pages of the site that quote it are teasers
+            title = dataclasses.replace(block, title=True)
+            if digest in line_hashes(text, blocks):
+                return text, blocks[:i] + (title,) + blocks[i + 1:]
+            marked = blocks[:i] + (dataclasses.replace(title, main=True),) + blocks[i + 1:]
             return f"{block.text}\n{text}" if text else block.text, marked
     return text, blocks
 
