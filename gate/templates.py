@@ -59,7 +59,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import words
 
-TEMPLATES_VERSION = 12  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 13  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -71,8 +71,8 @@ MAIN_RATIO = 0.5
 TEMPLATE_SHARE = 0.3  # template share of an unplaceable text that makes it give way
 MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilatura's text
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
-SHAPE_MIN_WORDS = 3  # a line with numbers this short (3-12 words) may be a per-page
-SHAPE_MAX_WORDS = 12  # template line ("Updated 34 days ago"); a title "Notice 2" is not
+SHAPE_MIN_WORDS = 3  # a line with numbers this short (3-30 words) may be a per-page
+SHAPE_MAX_WORDS = 30  # template line ("Updated 34 days ago"); a title "Notice 2" is not
 MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
 SANDWICH_MAX = 6  # template blocks in a row kept between two blocks of the page's own
 TITLE_MIN_WORDS = 3  # a title this long that another page's list quotes makes a teaser
@@ -90,15 +90,23 @@ def site_of(source_url: str | None) -> str | None:
         return None
 
 
+MONTHS = frozenset(
+    "january february march april may june july august september october november "
+    "december jan feb mar apr jun jul aug sep sept oct nov dec".split())
+
+
 def shape_hash(text: str) -> int | None:
     """The hash of a short line's words with every word holding a digit made one and the
-    same ("Updated 153 days ago" and "Updated 4 days ago" alike); None for a block that
-    is not such a line (3 to 12 words, a digit among them, and not only numbers)."""
+    same, and so is every month's name ("Updated 153 days ago" and "Updated 4 days ago"
+    alike, "Last reviewed 3 May 2026" and "Last reviewed 29 June 2026"); None for a block
+    that is not such a line (3 to 30 words, a digit among them, and not only numbers
+    and months)."""
     tokens = words(text)
     if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS or \
             not any(c.isdigit() for c in text):
         return None
-    shape = " ".join("#" if any(c.isdigit() for c in t) else t for t in tokens)
+    shape = " ".join("#" if t in MONTHS or any(c.isdigit() for c in t) else t
+                     for t in tokens)
     if shape.count("#") == len(tokens):
         return None
     digest = hashlib.blake2b(shape.encode("utf-8"), digest_size=8, person=b"shape").digest()
@@ -245,18 +253,26 @@ def removal_key(template: Removal) -> str:
 
 def _dropped(blocks: Sequence[Block], strong: set[int], weak: set[int]) -> set[int]:
     """The blocks removed from this page: every strong one, and a weak one (recurring on
-    a fifth of the pages, outside the main text) only where it sits beside a link-dominated
-    or a strong block, or in a run of weak blocks that does, as teasers and section menus
-    do; a stock paragraph that several notices share sits among their own text and stays,
-    and so does a heading of the main text (a page's title, which other pages of the site
-    list in their asides)."""
+    a fifth of the pages, outside the main text, or on ``SHARE_ROTATING`` of them) only
+    where it sits beside a link-dominated or a strong block, or in a run of weak blocks
+    that does, as teasers and section menus do; a stock paragraph that several notices
+    share sits among their own text and stays, and so do the page's title and a heading
+    of the main text that opens text of the page's own (other pages of the site list such
+    titles in their asides). A short byline between two such blocks goes with them."""
     drop = set(strong)
     anchored = [b.links >= LINK_DOMINATED or b.hash in strong for b in blocks]
+
+    def opens(i: int) -> bool:  # a heading followed by text of the page's own
+        after = blocks[i + 1] if i + 1 < len(blocks) else None
+        return after is not None and after.hash not in strong and after.hash not in weak \
+            and after.links < LINK_DOMINATED and not after.nav
+
     changed = True
     while changed:  # a run of weak blocks goes when one end of it touches an anchor
         changed = False
         for i, block in enumerate(blocks):
-            if anchored[i] or block.title or (block.kind == "heading" and block.main):
+            if anchored[i] or block.title or (block.kind == "heading" and block.main and
+                                               opens(i)):
                 continue
             before = i > 0 and anchored[i - 1]
             after = i + 1 < len(blocks) and anchored[i + 1]
@@ -297,11 +313,6 @@ def _sandwiched(blocks: Sequence[Block], drop: set[int]) -> set[int]:
             kept.update(b.hash for b in run)
         i = j
     return kept
-
-
-MONTHS = frozenset(
-    "january february march april may june july august september october november "
-    "december jan feb mar apr jun jul aug sep sept oct nov dec".split())
 
 
 def _dateish(word: str) -> bool:

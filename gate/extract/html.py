@@ -360,6 +360,7 @@ SNIPPET_MIN_WORDS = 3
 BYLINE_MAX_WORDS = 6  # a date or a byline between a teaser's title and its snippet
 LIST_HEADING_MAX_WORDS = 6  # "Related articles", "More things to do", "See also"
 PAGE_MIN_WORDS = 15  # fewer left without the teaser lists: the lists are the page
+LINKED = 0.5  # a block with this share of linked characters is a link (of a site map)
 
 
 def _card(blocks: Sequence[Block], i: int) -> int:
@@ -389,8 +390,9 @@ def _card(blocks: Sequence[Block], i: int) -> int:
 
 def teaser_lists(blocks: Sequence[Block]) -> set[int]:
     """Indices of the blocks in teaser lists: runs of at least ``TEASER_MIN_CARDS`` cards
-    (see :func:`_card`) one after the other -- "related articles", "see also", "more things
-    to do", "other notices", "similar threads" -- with the short heading right before a
+    (see :func:`_card`) one after the other, or with links between them (a site map's
+    columns with a teaser card here and there) -- "related articles", "see also", "more
+    things to do", "other notices", "similar threads" -- with the short heading right before a
     run; a shorter run only between a short heading of its own and another short block,
     a link or the end of the page. Each card quotes another page, so the list is
     navigation whatever its words are, and it differs from page to page, so learning a
@@ -399,10 +401,18 @@ def teaser_lists(blocks: Sequence[Block]) -> set[int]:
     i = 0
     while i < len(blocks):
         start, cards, items = i, 0, 0
-        while i < len(blocks) and (size := _card(blocks, i)):
-            i += abs(size)
-            cards += 1
-            items += size < 0
+        end = i  # after the last card
+        while i < len(blocks):
+            size = _card(blocks, i)
+            if size:
+                i = end = i + abs(size)
+                cards += 1
+                items += size < 0
+            elif cards and size >= 0 and blocks[i].links >= LINKED:
+                i += 1  # a site map's links between the cards ("fat footer")
+            else:
+                break
+        i = end
         before = start - 1
         headed = before >= 0 and blocks[before].links < 0.5 and \
             len(blocks[before].text.split()) <= LIST_HEADING_MAX_WORDS
