@@ -278,10 +278,11 @@ def _dropped(blocks: Sequence[Block], strong: set[int], weak: set[int]) -> set[i
             after = i + 1 < len(blocks) and anchored[i + 1]
             # a short byline ("answered by A. N.", "posted by ...") between two blocks of
             # the template goes with them
-            byline = (before or after) and block.links == 0 and \
+            byline = (before or after) and block.links == 0 and block.kind == "text" and \
                 len(block.text.split()) <= BYLINE_MAX_WORDS and \
                 0 < i < len(blocks) - 1 and \
-                all(anchored[k] or blocks[k].hash in weak for k in (i - 1, i + 1))
+                all((anchored[k] or blocks[k].hash in weak) and blocks[k].kind == "text"
+                    for k in (i - 1, i + 1))
             if (block.hash in weak and (before or after)) or byline:
                 anchored[i] = changed = True
                 drop.add(block.hash)
