@@ -59,7 +59,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import words
 
-TEMPLATES_VERSION = 13  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 14  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -73,6 +73,7 @@ MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilat
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
 SHAPE_MIN_WORDS = 3  # a line with numbers this short (3-30 words) may be a per-page
 SHAPE_MAX_WORDS = 30  # template line ("Updated 34 days ago"); a title "Notice 2" is not
+SHAPE_CELL_WORDS = 8  # a table cell this long may be such a line (a layout table's footer)
 MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
 SANDWICH_MAX = 6  # template blocks in a row kept between two blocks of the page's own
 TITLE_MIN_WORDS = 3  # a title this long that another page's list quotes makes a teaser
@@ -122,8 +123,11 @@ def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
     # a teaser list's blocks quote other pages (their titles, their first words): counted,
     # they would make a page's own title and opening look like a rotating teaser
     other = sorted({b.hash for b in blocks if b.hash not in taken and not b.nav})
+    # a layout table's footer cell is such a line too; a shorter cell is table data
     shaped = sorted({(shape, b.hash) for b in blocks
-                     if b.kind == "text" and not b.nav and b.links < LINK_DOMINATED and
+                     if (b.kind == "text" or (b.kind == "cell" and
+                                              len(b.text.split()) >= SHAPE_CELL_WORDS)) and
+                     not b.nav and b.links < LINK_DOMINATED and
                      (shape := shape_hash(b.text)) is not None})
     summary: dict[str, Any] = {"main": main, "other": other,
                                "shaped": [list(pair) for pair in shaped]}
