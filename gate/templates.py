@@ -59,7 +59,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import words
 
-TEMPLATES_VERSION = 14  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 15  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -114,6 +114,21 @@ def shape_hash(text: str) -> int | None:
     return int.from_bytes(digest, "little") >> 1
 
 
+# a comment signed at its end: "Can you post a photo? - A. Reader", "... -- Ann B."
+_SIGNED = re.compile(r"^(.*\S)\s+(?:[-–—]|--)\s+[A-Z][\w'’.]*(?:\s+[A-Z][\w'’]*\.?)?$")
+
+
+def signed_hash(text: str) -> int | None:
+    """The hash of a comment's words without its signature ("Does it happen every time?
+    - Ann B."), None for a block that is not signed so."""
+    m = _SIGNED.match(text.strip())
+    if m is None or len(words(m.group(1))) < SHAPE_MIN_WORDS:
+        return None
+    digest = hashlib.blake2b(" ".join(words(m.group(1))).encode("utf-8"), digest_size=8,
+                             person=b"signed").digest()
+    return int.from_bytes(digest, "little") >> 1
+
+
 def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
     """The page's distinct block hashes, in trafilatura's main text or not, and the shapes
     of its short lines with numbers (for the cache and the parent's learning; a few
@@ -131,6 +146,10 @@ def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
                      (shape := shape_hash(b.text)) is not None})
     summary: dict[str, Any] = {"main": main, "other": other,
                                "shaped": [list(pair) for pair in shaped]}
+    signed = sorted({(stem, b.hash) for b in blocks if b.links < LINK_DOMINATED and
+                     (stem := signed_hash(b.text)) is not None})
+    if signed:
+        summary["signed"] = [list(pair) for pair in signed]
     titles = {" ".join(words(b.text)) for b in blocks if b.title}
     if len(titles) == 1:
         summary["title"] = titles.pop()
@@ -146,13 +165,15 @@ class Page:
     other: np.ndarray  # uint64, sorted, distinct, none of them in main
     shaped: tuple[tuple[int, int], ...] = ()  # (shape hash, block hash) of numbered lines
     title: str = ""  # the words of its title (HTML: its one <h1>), normalised
+    signed: tuple[tuple[int, int], ...] = ()  # (stem hash, block hash) of signed comments
 
     @classmethod
     def of(cls, site: str, summary: dict[str, Any]) -> Page:
         return cls(site, np.array(summary.get("main", ()), dtype=np.uint64),
                    np.array(summary.get("other", ()), dtype=np.uint64),
                    tuple((int(s), int(h)) for s, h in summary.get("shaped", ())),
-                   str(summary.get("title") or ""))
+                   str(summary.get("title") or ""),
+                   tuple((int(s), int(h)) for s, h in summary.get("signed", ())))
 
     @property
     def hashes(self) -> np.ndarray:
@@ -162,14 +183,16 @@ class Page:
         return hashlib.sha256(self.main.tobytes() + b"|" + self.other.tobytes()).digest()
 
 
-Learnt = dict[str, tuple[np.ndarray, np.ndarray, frozenset[int], frozenset[str]]]
+Learnt = dict[str, tuple[np.ndarray, np.ndarray, frozenset[int], frozenset[str],
+                         frozenset[int]]]
 
 
 def learn(pages: Iterable[Page]) -> Learnt:
     """Each host's template, for hosts that teach any: (blocks on most pages, blocks by
     the aside rule only, as sorted uint64 hashes; shapes of numbered lines on most
     pages; its pages' titles of ``TITLE_MIN_WORDS`` words or more, which lists on other
-    pages quote)."""
+    pages quote; comments signed by different people that recur, as the aside rule
+    counts, on its pages)."""
     by_site: dict[str, dict[bytes, Page]] = {}
     for page in pages:
         by_site.setdefault(page.site, {}).setdefault(page.signature(), page)
@@ -203,8 +226,19 @@ def learn(pages: Iterable[Page]) -> Learnt:
                            if count >= max(MIN_PAGES, math.ceil(SHARE_ANY * n)) and
                            len(wordings[shape]) > 1)
         titles = frozenset(p.title for p in distinct if p.title.count(" ") + 1 >= TITLE_MIN_WORDS)
-        if len(strong) or len(weak) or shapes or titles:
-            learnt[site] = (strong, weak, shapes, titles)
+        # the same comment under different names on many pages: a forum's stock replies
+        stems_of: dict[int, int] = {}
+        signers: dict[int, set[int]] = {}
+        for page in distinct:
+            for stem in {stem for stem, _h in page.signed}:
+                stems_of[stem] = stems_of.get(stem, 0) + 1
+            for stem, digest in page.signed:
+                signers.setdefault(stem, set()).add(digest)
+        stems = frozenset(stem for stem, count in stems_of.items()
+                          if count >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n)) and
+                          len(signers[stem]) > 1)
+        if len(strong) or len(weak) or shapes or titles or stems:
+            learnt[site] = (strong, weak, shapes, titles, stems)
     return learnt
 
 
@@ -223,8 +257,9 @@ def stored_pages(state: Any, batch: set[str]) -> list[Page]:
     return pages
 
 
-# (everywhere, aside-only[, the titles of the site's other pages]), or ()
-Removal = tuple[tuple[int, ...], ...] | tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...]]
+# (everywhere, aside-only[, the titles of the site's other pages, signed comments]), or ()
+Removal = tuple[tuple[int, ...], ...] | \
+    tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...], tuple[int, ...]]
 
 
 def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
@@ -240,10 +275,11 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     shaped = {h for shape, h in page.shaped if shape in template[2]} - set(found[0])
     if shaped:
         found[0] = tuple(sorted(set(found[0]) | shaped))
-    titles = tuple(sorted(template[3] - {page.title})) if len(template) > 3 else ()
-    if not (found[0] or found[1] or titles):
+    titles = tuple(sorted(template[3] - {page.title}))
+    signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]}))
+    if not (found[0] or found[1] or titles or signed):
         return ()
-    return (found[0], found[1], titles) if titles else (found[0], found[1])
+    return (found[0], found[1], titles, signed) if titles or signed else (found[0], found[1])
 
 
 def removal_key(template: Removal) -> str:
@@ -251,7 +287,8 @@ def removal_key(template: Removal) -> str:
     blob = b"|".join(b"".join(int(h).to_bytes(8, "little") for h in sorted(part))
                      for part in template[:2])
     if len(template) > 2:
-        blob += b"|" + "\n".join(template[2]).encode("utf-8")
+        blob += b"|" + "\n".join(template[2]).encode("utf-8") + b"|" + \
+            b"".join(int(h).to_bytes(8, "little") for h in template[3])
     return hashlib.sha256(blob).hexdigest()[:16]
 
 
@@ -285,7 +322,7 @@ def _dropped(blocks: Sequence[Block], strong: set[int], weak: set[int]) -> set[i
             byline = (before or after) and block.links == 0 and block.kind == "text" and \
                 len(block.text.split()) <= BYLINE_MAX_WORDS and \
                 0 < i < len(blocks) - 1 and \
-                all((anchored[k] or blocks[k].hash in weak) and blocks[k].kind == "text"
+                all((anchored[k] or blocks[k].hash in weak) and blocks[k].kind != "cell"
                     for k in (i - 1, i + 1))
             if (block.hash in weak and (before or after)) or byline:
                 anchored[i] = changed = True
@@ -427,8 +464,8 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
     blocks = tuple(blocks)
     drop = _dropped(blocks, set(template[0]), set(template[1]))
     drop -= _sandwiched(blocks, drop)
-    if len(template) > 2:
-        drop |= _quoting(blocks, template[2])
+    if len(template) > 2:  # teasers and stock comments, wherever they stand
+        drop |= _quoting(blocks, template[2]) | set(template[3])
     if not drop:
         return text, {}
     drop |= _crumb_trails(blocks)
