@@ -463,9 +463,10 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
         return text, {}
     blocks = tuple(blocks)
     drop = _dropped(blocks, set(template[0]), set(template[1]))
-    drop -= _sandwiched(blocks, drop)
-    if len(template) > 2:  # teasers and stock comments, wherever they stand
-        drop |= _quoting(blocks, template[2]) | set(template[3])
+    # teasers quoting other pages and stock comments go wherever they stand
+    certain = _quoting(blocks, template[2]) | set(template[3]) if len(template) > 2 else set()
+    drop |= certain
+    drop -= _sandwiched(blocks, drop) - certain
     if not drop:
         return text, {}
     drop |= _crumb_trails(blocks)
