@@ -19,9 +19,15 @@ template when it occurs
 * on at least ``SHARE_ANY`` of them (and at least ``MIN_PAGES``) wherever it stands, or
 * on at least ``SHARE_ASIDE`` of them (and at least ``ASIDE_MIN_PAGES``) and outside
   trafilatura's main text on at least half of those (menus, teasers and footers that vary
-  by section, teasers that rotate) -- removed from a page only where it sits next to a
+  by section, teasers that rotate), or on at least ``SHARE_ROTATING`` of them wherever it
+  stands (a forum's stock answers) -- removed from a page only where it sits next to a
   link-dominated or an everywhere-template block, so a stock paragraph that several
   notices of a site share (and that trafilatura missed) is not taken for a teaser.
+
+Short lines with numbers and dates are counted by their shape (:func:`shape_hash`),
+comments signed at their end by their words without the signature (:func:`signed_hash`),
+and each page's title (its ``<h1>``) is learnt so that lists quoting it on other pages
+are known for teasers (:func:`_quoting`).
 
 A host with fewer than ``MIN_PAGES`` distinct pages teaches nothing: its pages keep
 trafilatura's text, as before. On the first run of a new site with three or four pages,
@@ -31,9 +37,9 @@ whose every page is a version of one document, whose shared body is taken for te
 (the versions then keep their own differences only).
 
 Removal (worker, :func:`compose`): the page's template blocks are dropped from
-trafilatura's text; when what remains is less than ``MAIN_RATIO`` of the page's own
-(non-template, not link-dominated) blocks, trafilatura chose the template as the main
-text, and the page's own blocks are used instead. So they are when trafilatura's text
+trafilatura's text; when what remains is less than ``MAIN_RATIO`` of that text,
+trafilatura chose the template as the main text, and the page's own (non-template, not
+link-dominated) blocks are used instead. So they are when trafilatura's text
 cannot be laid onto the page's blocks line by line and one of its lines holds two or more
 whole blocks (a layout table's cell written as one line: the template cannot be taken out
 of it, and its list items and rows have lost their order), or template blocks make up at
@@ -57,9 +63,9 @@ import numpy as np
 
 from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
-from gate.tokens import words
+from gate.tokens import block_hash, words
 
-TEMPLATES_VERSION = 15  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 16  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -225,7 +231,13 @@ def learn(pages: Iterable[Page]) -> Learnt:
         shapes = frozenset(shape for shape, count in pages_of.items()
                            if count >= max(MIN_PAGES, math.ceil(SHARE_ANY * n)) and
                            len(wordings[shape]) > 1)
-        titles = frozenset(p.title for p in distinct if p.title.count(" ") + 1 >= TITLE_MIN_WORDS)
+        # titles of three words or more, not one the site gives most of its pages
+        named: dict[str, int] = {}
+        for p in distinct:
+            named[p.title] = named.get(p.title, 0) + 1
+        titles = frozenset(title for title, count in named.items()
+                           if title.count(" ") + 1 >= TITLE_MIN_WORDS and
+                           count < math.ceil(SHARE_ANY * n))
         # the same comment under different names on many pages: a forum's stock replies
         stems_of: dict[int, int] = {}
         signers: dict[int, set[int]] = {}
@@ -270,6 +282,8 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     if template is None:
         return ()
     mine = page.hashes
+    if page.title in template[3]:  # its title stays, however many menus link to it
+        mine = mine[mine != np.uint64(block_hash(page.title) or 0)]
     found = [tuple(int(h) for h in np.intersect1d(mine, part, assume_unique=True))
              for part in template[:2]]
     shaped = {h for shape, h in page.shaped if shape in template[2]} - set(found[0])
