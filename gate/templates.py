@@ -412,9 +412,11 @@ def _quoting(blocks: Sequence[Block], titles: Iterable[str]) -> set[int]:
             j += 1
         hits = sum(1 for k in range(i, j) if quoted[k])
         if hits >= 2 and 2 * hits >= j - i:
-            found.update(k for k in range(i, j) if not blocks[k].title)
+            found.update(range(i, j))
         i = max(j, i + 1)
-    return {blocks[i].hash for i in found}
+    # a list item that is the page's own title (a menu linking to it) is left to the rules
+    # that count blocks: their removal spares the title
+    return {blocks[i].hash for i in found} - {b.hash for b in blocks if b.title}
 
 
 def _word_count(lines: Iterable[str]) -> int:

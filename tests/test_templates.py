@@ -755,3 +755,23 @@ def test_a_printed_pages_title_header_and_address_footer_are_furniture():
     # a first line whose last part is not what the page goes on with stays
     other = "Budget - Summary\nThe council set its budget.\nMore text."
     assert without_furniture([other]) == [other]
+
+
+def test_a_pages_title_stays_though_every_page_links_to_it():
+    # an invented docs site whose sidebar on every page links to every guide: the link
+    # texts are the guides' titles, so each title is on every page
+    titles = [f"Guide to the {w} {v} setup" for w, v in zip(_VOCAB[:6], _VOCAB[6:12])]
+    def blocks_of(i: int) -> list[Block]:
+        return _blocks(*[(t, {"links": 1.0, "lead": 1.0, "kind": "item", "main": False})
+                         for t in titles],
+                       (titles[i], {"kind": "heading", "title": True}),
+                       prose(1000 + i, 40))
+    pages = [(b := blocks_of(i), templates.Page.of("docs.example.net html",
+                                                   templates.block_summary(b)))
+             for i in range(6)]
+    learnt = templates.learn([p for _b, p in pages])
+    assert block_hash(titles[2]) in learnt["docs.example.net html"][0].tolist()
+    blocks, mine = pages[2]
+    text = "\n".join(b.text for b in blocks[-2:])
+    cleaned, _info = templates.compose(text, blocks, templates.removal(mine, learnt))
+    assert cleaned == text
