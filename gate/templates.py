@@ -65,7 +65,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import block_hash, words
 
-TEMPLATES_VERSION = 16  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 17  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -120,8 +120,9 @@ def shape_hash(text: str) -> int | None:
     return int.from_bytes(digest, "little") >> 1
 
 
-# a comment signed at its end: "Can you post a photo? - A. Reader", "... -- Ann B."
-_SIGNED = re.compile(r"^(.*\S)\s+(?:[-–—]|--)\s+[A-Z][\w'’.]*(?:\s+[A-Z][\w'’]*\.?)?$")
+# a comment signed at its end: a sentence, then a dash and a name ("Can you post a
+# photo? - Ann B.", "... works now. -- Tomas Reed")
+_SIGNED = re.compile(r"^(.*[.?!)\"'’”])\s+(?:[-–—]|--)\s+[A-Z][\w'’]*\.?(?:\s+[A-Z][\w'’]*\.?)?$")
 
 
 def signed_hash(text: str) -> int | None:

@@ -674,6 +674,8 @@ def test_signed_comments_that_recur_under_other_names_are_template():
         templates.signed_hash("Can you post a photo? - Tomas K.")
     assert templates.signed_hash("Can you post a photo?") is None
     assert templates.signed_hash("Monday - Closed all day") is None  # no signature
+    # a row of opening hours is no signed sentence
+    assert templates.signed_hash("Opening hours on Saturday - Closed") is None
     questions = ["Does it happen every time or only sometimes?",
                  "Did this start after an update?", "Which firmware version is it?"]
     def blocks_of(i: int) -> list[Block]:
