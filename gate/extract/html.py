@@ -464,9 +464,9 @@ def with_title(text: str, blocks: tuple[Block, ...], root: lxml.etree._Element
         return text, blocks
     digest = block_hash(" ".join(heads[0].text_content().split()))
     for i, block in enumerate(blocks):
-        if block.hash == digest:
-            if block.kind != "heading" or block.links >= 0.5 or block.nav:
-                return text, blocks
+        # the heading itself (a menu before it may link to the page by the same words)
+        if block.hash == digest and block.kind == "heading" and block.links < 0.5 and \
+                not block.nav:
             # marked as the title: other pages of the site that quote it are teasers
             title = dataclasses.replace(block, title=True)
             if digest in line_hashes(text, blocks):
