@@ -19,9 +19,15 @@ template when it occurs
 * on at least ``SHARE_ANY`` of them (and at least ``MIN_PAGES``) wherever it stands, or
 * on at least ``SHARE_ASIDE`` of them (and at least ``ASIDE_MIN_PAGES``) and outside
   trafilatura's main text on at least half of those (menus, teasers and footers that vary
-  by section, teasers that rotate) -- removed from a page only where it sits next to a
+  by section, teasers that rotate), or on at least ``SHARE_ROTATING`` of them wherever it
+  stands (a forum's stock answers) -- removed from a page only where it sits next to a
   link-dominated or an everywhere-template block, so a stock paragraph that several
   notices of a site share (and that trafilatura missed) is not taken for a teaser.
+
+Short lines with numbers and dates are counted by their shape (:func:`shape_hash`),
+comments signed at their end by their words without the signature (:func:`signed_hash`),
+and each page's title (its ``<h1>``) is learnt so that lists quoting it on other pages
+are known for teasers (:func:`_quoting`).
 
 A host with fewer than ``MIN_PAGES`` distinct pages teaches nothing: its pages keep
 trafilatura's text, as before. On the first run of a new site with three or four pages,
@@ -31,9 +37,9 @@ whose every page is a version of one document, whose shared body is taken for te
 (the versions then keep their own differences only).
 
 Removal (worker, :func:`compose`): the page's template blocks are dropped from
-trafilatura's text; when what remains is less than ``MAIN_RATIO`` of the page's own
-(non-template, not link-dominated) blocks, trafilatura chose the template as the main
-text, and the page's own blocks are used instead. So they are when trafilatura's text
+trafilatura's text; when what remains is less than ``MAIN_RATIO`` of that text,
+trafilatura chose the template as the main text, and the page's own (non-template, not
+link-dominated) blocks are used instead. So they are when trafilatura's text
 cannot be laid onto the page's blocks line by line and one of its lines holds two or more
 whole blocks (a layout table's cell written as one line: the template cannot be taken out
 of it, and its list items and rows have lost their order), or template blocks make up at
@@ -57,21 +63,27 @@ import numpy as np
 
 from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
-from gate.tokens import words
+from gate.tokens import block_hash, words
 
-TEMPLATES_VERSION = 11  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 17  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
 SHARE_ASIDE = 0.2
+SHARE_ROTATING = 0.4  # a block on this share of the pages (and ASIDE_MIN_PAGES), in the
+# main text or not, rotates through the template (other answers, popular articles)
+BYLINE_MAX_WORDS = 6  # "answered by A. N." between two template blocks is template
 MAIN_RATIO = 0.5
 TEMPLATE_SHARE = 0.3  # template share of an unplaceable text that makes it give way
 MIN_OWN_WORDS = 30  # words of its own a page needs before they replace trafilatura's text
 LINK_DOMINATED = 0.5  # a block with this share of linked characters is navigation
-SHAPE_MIN_WORDS = 3  # a line with numbers this short (3-12 words) may be a per-page
-SHAPE_MAX_WORDS = 12  # template line ("Updated 34 days ago"); a title "Notice 2" is not
+SHAPE_MIN_WORDS = 3  # a line with numbers this short (3-30 words) may be a per-page
+SHAPE_MAX_WORDS = 30  # template line ("Updated 34 days ago"); a title "Notice 2" is not
+SHAPE_CELL_WORDS = 8  # a table cell this long may be such a line (a layout table's footer)
 MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
 SANDWICH_MAX = 6  # template blocks in a row kept between two blocks of the page's own
+TITLE_MIN_WORDS = 3  # a title this long that another page's list quotes makes a teaser
+DATE_MAX_WORDS = 4  # "25 February 2026" after a quoted title: a list of events, of news
 
 
 def site_of(source_url: str | None) -> str | None:
@@ -85,18 +97,42 @@ def site_of(source_url: str | None) -> str | None:
         return None
 
 
+MONTHS = frozenset(
+    "january february march april may june july august september october november "
+    "december jan feb mar apr jun jul aug sep sept oct nov dec".split())
+
+
 def shape_hash(text: str) -> int | None:
     """The hash of a short line's words with every word holding a digit made one and the
-    same ("Updated 153 days ago" and "Updated 4 days ago" alike); None for a block that
-    is not such a line (3 to 12 words, a digit among them, and not only numbers)."""
+    same, and so is every month's name ("Updated 153 days ago" and "Updated 4 days ago"
+    alike, "Last reviewed 3 May 2026" and "Last reviewed 29 June 2026"); None for a block
+    that is not such a line (3 to 30 words, a digit among them, and not only numbers
+    and months)."""
     tokens = words(text)
     if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS or \
             not any(c.isdigit() for c in text):
         return None
-    shape = " ".join("#" if any(c.isdigit() for c in t) else t for t in tokens)
+    shape = " ".join("#" if t in MONTHS or any(c.isdigit() for c in t) else t
+                     for t in tokens)
     if shape.count("#") == len(tokens):
         return None
     digest = hashlib.blake2b(shape.encode("utf-8"), digest_size=8, person=b"shape").digest()
+    return int.from_bytes(digest, "little") >> 1
+
+
+# a comment signed at its end: a sentence, then a dash and a name ("Can you post a
+# photo? - Ann B.", "... works now. -- Tomas Reed")
+_SIGNED = re.compile(r"^(.*[.?!)\"'’”])\s+(?:[-–—]|--)\s+[A-Z][\w'’]*\.?(?:\s+[A-Z][\w'’]*\.?)?$")
+
+
+def signed_hash(text: str) -> int | None:
+    """The hash of a comment's words without its signature ("Does it happen every time?
+    - Ann B."), None for a block that is not signed so."""
+    m = _SIGNED.match(text.strip())
+    if m is None or len(words(m.group(1))) < SHAPE_MIN_WORDS:
+        return None
+    digest = hashlib.blake2b(" ".join(words(m.group(1))).encode("utf-8"), digest_size=8,
+                             person=b"signed").digest()
     return int.from_bytes(digest, "little") >> 1
 
 
@@ -109,10 +145,22 @@ def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
     # a teaser list's blocks quote other pages (their titles, their first words): counted,
     # they would make a page's own title and opening look like a rotating teaser
     other = sorted({b.hash for b in blocks if b.hash not in taken and not b.nav})
+    # a layout table's footer cell is such a line too; a shorter cell is table data
     shaped = sorted({(shape, b.hash) for b in blocks
-                     if b.kind == "text" and not b.nav and b.links < LINK_DOMINATED and
+                     if (b.kind == "text" or (b.kind == "cell" and
+                                              len(b.text.split()) >= SHAPE_CELL_WORDS)) and
+                     not b.nav and b.links < LINK_DOMINATED and
                      (shape := shape_hash(b.text)) is not None})
-    return {"main": main, "other": other, "shaped": [list(pair) for pair in shaped]}
+    summary: dict[str, Any] = {"main": main, "other": other,
+                               "shaped": [list(pair) for pair in shaped]}
+    signed = sorted({(stem, b.hash) for b in blocks if b.links < LINK_DOMINATED and
+                     (stem := signed_hash(b.text)) is not None})
+    if signed:
+        summary["signed"] = [list(pair) for pair in signed]
+    titles = {" ".join(words(b.text)) for b in blocks if b.title}
+    if len(titles) == 1:
+        summary["title"] = titles.pop()
+    return summary
 
 
 @dataclass(frozen=True)
@@ -123,12 +171,16 @@ class Page:
     main: np.ndarray  # uint64, sorted, distinct
     other: np.ndarray  # uint64, sorted, distinct, none of them in main
     shaped: tuple[tuple[int, int], ...] = ()  # (shape hash, block hash) of numbered lines
+    title: str = ""  # the words of its title (HTML: its one <h1>), normalised
+    signed: tuple[tuple[int, int], ...] = ()  # (stem hash, block hash) of signed comments
 
     @classmethod
-    def of(cls, site: str, summary: dict[str, list]) -> Page:
+    def of(cls, site: str, summary: dict[str, Any]) -> Page:
         return cls(site, np.array(summary.get("main", ()), dtype=np.uint64),
                    np.array(summary.get("other", ()), dtype=np.uint64),
-                   tuple((int(s), int(h)) for s, h in summary.get("shaped", ())))
+                   tuple((int(s), int(h)) for s, h in summary.get("shaped", ())),
+                   str(summary.get("title") or ""),
+                   tuple((int(s), int(h)) for s, h in summary.get("signed", ())))
 
     @property
     def hashes(self) -> np.ndarray:
@@ -138,13 +190,16 @@ class Page:
         return hashlib.sha256(self.main.tobytes() + b"|" + self.other.tobytes()).digest()
 
 
-Learnt = dict[str, tuple[np.ndarray, np.ndarray, frozenset[int]]]
+Learnt = dict[str, tuple[np.ndarray, np.ndarray, frozenset[int], frozenset[str],
+                         frozenset[int]]]
 
 
 def learn(pages: Iterable[Page]) -> Learnt:
     """Each host's template, for hosts that teach any: (blocks on most pages, blocks by
     the aside rule only, as sorted uint64 hashes; shapes of numbered lines on most
-    pages)."""
+    pages; its pages' titles of ``TITLE_MIN_WORDS`` words or more, which lists on other
+    pages quote; comments signed by different people that recur, as the aside rule
+    counts, on its pages)."""
     by_site: dict[str, dict[bytes, Page]] = {}
     for page in pages:
         by_site.setdefault(page.site, {}).setdefault(page.signature(), page)
@@ -163,6 +218,7 @@ def learn(pages: Iterable[Page]) -> Learnt:
         anywhere = total >= max(MIN_PAGES, math.ceil(SHARE_ANY * n))
         aside = (total >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n))) & \
             (2 * mains <= total)
+        aside |= total >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ROTATING * n))
         strong, weak = every[anywhere], every[aside & ~anywhere]
         # short lines with numbers that differ from page to page ("Updated 153 days
         # ago", "1,849 views"): their shape on most pages, in more than one wording
@@ -176,8 +232,26 @@ def learn(pages: Iterable[Page]) -> Learnt:
         shapes = frozenset(shape for shape, count in pages_of.items()
                            if count >= max(MIN_PAGES, math.ceil(SHARE_ANY * n)) and
                            len(wordings[shape]) > 1)
-        if len(strong) or len(weak) or shapes:
-            learnt[site] = (strong, weak, shapes)
+        # titles of three words or more, not one the site gives most of its pages
+        named: dict[str, int] = {}
+        for p in distinct:
+            named[p.title] = named.get(p.title, 0) + 1
+        titles = frozenset(title for title, count in named.items()
+                           if title.count(" ") + 1 >= TITLE_MIN_WORDS and
+                           count < math.ceil(SHARE_ANY * n))
+        # the same comment under different names on many pages: a forum's stock replies
+        stems_of: dict[int, int] = {}
+        signers: dict[int, set[int]] = {}
+        for page in distinct:
+            for stem in {stem for stem, _h in page.signed}:
+                stems_of[stem] = stems_of.get(stem, 0) + 1
+            for stem, digest in page.signed:
+                signers.setdefault(stem, set()).add(digest)
+        stems = frozenset(stem for stem, count in stems_of.items()
+                          if count >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n)) and
+                          len(signers[stem]) > 1)
+        if len(strong) or len(weak) or shapes or titles or stems:
+            learnt[site] = (strong, weak, shapes, titles, stems)
     return learnt
 
 
@@ -196,47 +270,76 @@ def stored_pages(state: Any, batch: set[str]) -> list[Page]:
     return pages
 
 
-Removal = tuple[tuple[int, ...], tuple[int, ...]]  # (everywhere, aside-only), or ()
+# (everywhere, aside-only[, the titles of the site's other pages, signed comments]), or ()
+Removal = tuple[tuple[int, ...], ...] | \
+    tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...], tuple[int, ...]]
 
 
 def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     """The template blocks of ``page``: those on most of the site's pages, and those only
-    the aside rule names (sorted hashes each); ``()`` when none."""
+    the aside rule names (sorted hashes each), and the titles of the site's other pages
+    (lists quoting them are teasers, see :func:`_quoting`); ``()`` when none."""
     template = learnt.get(page.site)
     if template is None:
         return ()
     mine = page.hashes
+    if page.title in template[3]:  # its title stays, however many menus link to it
+        mine = mine[mine != np.uint64(block_hash(page.title) or 0)]
     found = [tuple(int(h) for h in np.intersect1d(mine, part, assume_unique=True))
              for part in template[:2]]
     shaped = {h for shape, h in page.shaped if shape in template[2]} - set(found[0])
     if shaped:
         found[0] = tuple(sorted(set(found[0]) | shaped))
-    return (found[0], found[1]) if found[0] or found[1] else ()
+    titles = tuple(sorted(template[3] - {page.title}))
+    signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]}))
+    if not (found[0] or found[1] or titles or signed):
+        return ()
+    return (found[0], found[1], titles, signed) if titles or signed else (found[0], found[1])
 
 
 def removal_key(template: Removal) -> str:
     """A short stable name for a removal (part of the cache key of the cleaned text)."""
     blob = b"|".join(b"".join(int(h).to_bytes(8, "little") for h in sorted(part))
-                     for part in template)
+                     for part in template[:2])
+    if len(template) > 2:
+        blob += b"|" + "\n".join(template[2]).encode("utf-8") + b"|" + \
+            b"".join(int(h).to_bytes(8, "little") for h in template[3])
     return hashlib.sha256(blob).hexdigest()[:16]
 
 
 def _dropped(blocks: Sequence[Block], strong: set[int], weak: set[int]) -> set[int]:
     """The blocks removed from this page: every strong one, and a weak one (recurring on
-    a fifth of the pages, outside the main text) only where it sits beside a link-dominated
-    or a strong block, or in a run of weak blocks that does, as teasers and section menus
-    do; a stock paragraph that several notices share sits among their own text and stays,
-    and so does a heading of the main text (a page's title, which other pages of the site
-    list in their asides)."""
+    a fifth of the pages, outside the main text, or on ``SHARE_ROTATING`` of them) only
+    where it sits beside a link-dominated or a strong block, or in a run of weak blocks
+    that does, as teasers and section menus do; a stock paragraph that several notices
+    share sits among their own text and stays, and so do the page's title and a heading
+    of the main text that opens text of the page's own (other pages of the site list such
+    titles in their asides). A short byline between two such blocks goes with them."""
     drop = set(strong)
     anchored = [b.links >= LINK_DOMINATED or b.hash in strong for b in blocks]
+
+    def opens(i: int) -> bool:  # a heading followed by text of the page's own
+        after = blocks[i + 1] if i + 1 < len(blocks) else None
+        return after is not None and after.hash not in strong and after.hash not in weak \
+            and after.links < LINK_DOMINATED and not after.nav
+
     changed = True
     while changed:  # a run of weak blocks goes when one end of it touches an anchor
         changed = False
         for i, block in enumerate(blocks):
-            if block.hash in weak and not anchored[i] and \
-                    not (block.kind == "heading" and block.main) and (
-                    (i > 0 and anchored[i - 1]) or (i + 1 < len(blocks) and anchored[i + 1])):
+            if anchored[i] or block.title or (block.kind == "heading" and block.main and
+                                               opens(i)):
+                continue
+            before = i > 0 and anchored[i - 1]
+            after = i + 1 < len(blocks) and anchored[i + 1]
+            # a short byline ("answered by A. N.", "posted by ...") between two blocks of
+            # the template goes with them
+            byline = (before or after) and block.links == 0 and block.kind == "text" and \
+                len(block.text.split()) <= BYLINE_MAX_WORDS and \
+                0 < i < len(blocks) - 1 and \
+                all((anchored[k] or blocks[k].hash in weak) and blocks[k].kind != "cell"
+                    for k in (i - 1, i + 1))
+            if (block.hash in weak and (before or after)) or byline:
                 anchored[i] = changed = True
                 drop.add(block.hash)
     return drop
@@ -267,6 +370,54 @@ def _sandwiched(blocks: Sequence[Block], drop: set[int]) -> set[int]:
             kept.update(b.hash for b in run)
         i = j
     return kept
+
+
+def _dateish(word: str) -> bool:
+    """A word of a date or a time ("25", "february", "2026", "9:30am")."""
+    return word in MONTHS or any(c.isdigit() for c in word)
+
+
+def _quoting(blocks: Sequence[Block], titles: Iterable[str]) -> set[int]:
+    """The blocks that quote other pages of the site, linked or not: a block that is
+    another page's title (``titles``, normalised words), alone or followed by a date;
+    and blocks that begin with one ("Title Snippet ...") standing next to another such
+    block, or making up half or more of a list (its other items then quote pages the run
+    does not hold). An unlinked list of "upcoming events" or "more news" is a teaser list
+    whatever its words, and it differs from page to page, so counting blocks cannot name
+    it. The page's own title and a paragraph that merely begins with another page's
+    title (a story and its update) stay."""
+    by_start: dict[tuple[str, ...], list[str]] = {}
+    for title in titles:
+        by_start.setdefault(tuple(title.split()[:TITLE_MIN_WORDS]), []).append(title)
+    if not by_start:
+        return set()
+    quoted = [0] * len(blocks)  # 2: a title (and a date), 1: begins with a title
+    for i, block in enumerate(blocks):
+        if block.title:
+            continue
+        tokens = words(block.text)
+        if len(tokens) < TITLE_MIN_WORDS:
+            continue
+        flat = " ".join(tokens)
+        for title in by_start.get(tuple(tokens[:TITLE_MIN_WORDS]), ()):
+            if flat == title or flat.startswith(title + " "):
+                rest = tokens[title.count(" ") + 1:]
+                quoted[i] = max(quoted[i], 2 if len(rest) <= DATE_MAX_WORDS and
+                                all(_dateish(w) for w in rest) else 1)
+    found = {i for i, q in enumerate(quoted) if q == 2 or (q and (
+        (i > 0 and quoted[i - 1]) or (i + 1 < len(blocks) and quoted[i + 1])))}
+    i = 0
+    while i < len(blocks):  # lists with half or more of their items quoting titles
+        j = i
+        while j < len(blocks) and blocks[j].kind == "item":
+            j += 1
+        hits = sum(1 for k in range(i, j) if quoted[k])
+        if hits >= 2 and 2 * hits >= j - i:
+            found.update(range(i, j))
+        i = max(j, i + 1)
+    # a list item that is the page's own title (a menu linking to it) is left to the rules
+    # that count blocks: their removal spares the title
+    return {blocks[i].hash for i in found} - {b.hash for b in blocks if b.title}
 
 
 def _word_count(lines: Iterable[str]) -> int:
@@ -329,7 +480,10 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
         return text, {}
     blocks = tuple(blocks)
     drop = _dropped(blocks, set(template[0]), set(template[1]))
-    drop -= _sandwiched(blocks, drop)
+    # teasers quoting other pages and stock comments go wherever they stand
+    certain = _quoting(blocks, template[2]) | set(template[3]) if len(template) > 2 else set()
+    drop |= certain
+    drop -= _sandwiched(blocks, drop) - certain
     if not drop:
         return text, {}
     drop |= _crumb_trails(blocks)
@@ -353,8 +507,11 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
         if _word_count(found.values()) < TEMPLATE_SHARE * _word_count(text.split("\n")) \
                 and not _merged(unplaced, blocks):
             return text, {"template_blocks": len(drop), "kept": "all (little template in it)"}
-    if placed and main_words and (main_words >= MAIN_RATIO * own_words or
-                                  own_words - main_words < MIN_OWN_WORDS):
+    # the page's own blocks replace trafilatura's text only when most of that text was
+    # template (trafilatura chose the template); a text that is mostly the page's own
+    # stays, however much else (comments, a byline, an author's note) the page holds
+    if placed and main_words and (main_words >= MAIN_RATIO * _word_count(text.split("\n"))
+                                  or own_words - main_words < MIN_OWN_WORDS):
         cleaned, source = "\n".join(main_rest).strip("\n"), "main"
     elif own_words >= MIN_OWN_WORDS:
         cleaned, source = "\n".join(own), "page"

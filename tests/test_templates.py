@@ -119,7 +119,7 @@ def test_a_version_cluster_in_the_main_text_is_not_template():
     # text on 6 of 20 pages, below SHARE_ANY; an aside outside it on 6 of 20 is template
     pages = [page("b.example.org", [50, 51, 60 + i], [1, 90]) for i in range(6)]
     pages += [page("b.example.org", [300 + i], [1, 91]) for i in range(14)]
-    everywhere, aside, _shapes = templates.learn(pages)["b.example.org"]
+    everywhere, aside, _shapes, _titles, _signed = templates.learn(pages)["b.example.org"]
     assert everywhere.tolist() == [1] and aside.tolist() == [90, 91]  # not 50, 51
 
 
@@ -594,3 +594,186 @@ def test_an_export_line_with_the_pages_address_and_date_is_learnt_as_template():
     cleaned, _info = templates.compose(text, blocks, templates.removal(mine, learnt))
     assert cleaned.split("\n")[0] == "Notice 2"
     assert words("Source: https://x.example.org/a-2.htm") == ["source"]
+
+
+# -- teasers quoting titles, rotating blocks, signed comments, bylines (invented) -----------
+
+def _blocks(*specs: tuple) -> list[Block]:
+    """Blocks from (text, keyword arguments) pairs or plain texts."""
+    out = []
+    for spec in specs:
+        text, more = (spec, {}) if isinstance(spec, str) else spec
+        out.append(Block(text, block_hash(text), **more))
+    return out
+
+
+def test_lists_quoting_other_pages_titles_are_teasers():
+    # an invented school site: each page's <h1> is its title; an unlinked "Upcoming
+    # events" list quotes other pages' titles with a date, a "More events" list quotes
+    # them with their first words
+    titles = [f"Seminar on {w} and {v} in estuaries" for w, v in
+              zip(_VOCAB[:8], _VOCAB[8:16])]
+    def blocks_of(i: int) -> list[Block]:
+        others = [t for j, t in enumerate(titles) if j != i][:3]
+        return _blocks(
+            ("Invented School home", {"links": 1.0, "main": False}),
+            (titles[i], {"kind": "heading", "title": True}),
+            prose(300 + i, 40),
+            # a story's update begins with the story's own words: it stays
+            f"{titles[(i + 1) % 8]} was moved to the main hall, as {prose(400 + i, 12)}",
+            prose(310 + i, 30),
+            ("Upcoming events", {"kind": "heading"}),
+            *[(f"{t} {3 + k} March 2026", {"kind": "item"}) for k, t in enumerate(others)],
+            ("More events", {"kind": "heading"}),
+            *[(f"{t} {prose(500 + k, 10)}", {"kind": "item"}) for k, t in enumerate(others)],
+            ("Invented School, all rights reserved.", {"main": False}))
+    pages = [(b := blocks_of(i), templates.Page.of("school.example.org html",
+                                                   templates.block_summary(b)))
+             for i in range(8)]
+    assert pages[0][1].title == " ".join(words(titles[0]))
+    learnt = templates.learn([p for _b, p in pages])
+    blocks, mine = pages[2]
+    drop = templates.removal(mine, learnt)
+    assert " ".join(words(titles[2])) not in drop[2]  # its own title is not a teaser
+    text = "\n".join(b.text for b in blocks[1:-1])
+    cleaned, info = templates.compose(text, blocks, drop)
+    assert cleaned.split("\n") == [b.text for b in blocks[1:5]], info
+    # quoting needs a title of three words or more, and the quoting block must begin
+    # with it: "was moved" in the middle of a sentence quotes nothing
+    assert templates._quoting(_blocks("Notice two", "The Notice two text"), ["notice two"]) \
+        == set()
+
+
+def test_rotating_answers_and_bylines_under_a_template_heading_go():
+    # an invented forum: each thread shows three of six stock answers, each followed by a
+    # byline ("answered by ..."), under an "Other answers" heading on every page
+    stock = [prose(600 + k, 18) for k in range(6)]
+    def blocks_of(i: int) -> list[Block]:
+        answers = [stock[(i + k) % 6] for k in range(3)]
+        return _blocks(("Invented Forum", {"links": 1.0}),
+                       (f"Thread {i} " + prose(700 + i, 6), {"kind": "heading", "title": True}),
+                       prose(710 + i, 40), prose(720 + i, 30),
+                       ("Other answers", {"kind": "heading"}),
+                       *[part for k, a in enumerate(answers)
+                         for part in (a, f"answered by Reader {chr(65 + (i + k) % 26)}.")],
+                       ("Related threads", {"kind": "heading", "main": False}))
+    pages = [(b := blocks_of(i), templates.Page.of("forum.example.org html",
+                                                   templates.block_summary(b)))
+             for i in range(12)]
+    learnt = templates.learn([p for _b, p in pages])
+    strong, weak = learnt["forum.example.org html"][:2]
+    assert block_hash(stock[0]) in weak.tolist()  # on 6 of 12 pages, in the main text
+    blocks, mine = pages[3]
+    text = "\n".join(b.text for b in blocks[1:-1])
+    cleaned, _info = templates.compose(text, blocks, templates.removal(mine, learnt))
+    assert cleaned.split("\n") == [b.text for b in blocks[1:4]]
+
+
+def test_signed_comments_that_recur_under_other_names_are_template():
+    assert templates.signed_hash("Can you post a photo? - Ann B.") == \
+        templates.signed_hash("Can you post a photo? - Tomas K.")
+    assert templates.signed_hash("Can you post a photo?") is None
+    assert templates.signed_hash("Monday - Closed all day") is None  # no signature
+    # a row of opening hours is no signed sentence
+    assert templates.signed_hash("Opening hours on Saturday - Closed") is None
+    questions = ["Does it happen every time or only sometimes?",
+                 "Did this start after an update?", "Which firmware version is it?"]
+    def blocks_of(i: int) -> list[Block]:
+        return _blocks((f"Thread {i} title words", {"kind": "heading", "title": True}),
+                       prose(800 + i, 40),
+                       *[(f"{q} - Reader {chr(65 + (i * 3 + k) % 26)}.", {"kind": "item"})
+                         for k, q in enumerate(questions)],
+                       prose(810 + i, 30))
+    pages = [(b := blocks_of(i), templates.Page.of("qa.example.org html",
+                                                   templates.block_summary(b)))
+             for i in range(6)]
+    learnt = templates.learn([p for _b, p in pages])
+    blocks, mine = pages[1]
+    drop = templates.removal(mine, learnt)
+    assert set(drop[3]) == {b.hash for b in blocks[2:5]}
+    text = "\n".join(b.text for b in blocks)
+    cleaned, _info = templates.compose(text, blocks, drop)
+    # between the page's own paragraphs, and still gone: they are no stock sentence
+    assert cleaned.split("\n") == [blocks[0].text, blocks[1].text, blocks[5].text]
+
+
+def test_dates_with_month_names_make_one_shape():
+    assert templates.shape_hash("Last reviewed 3 May 2026") == \
+        templates.shape_hash("Last reviewed 29 November 2025")
+    long_line = ("Page last updated 9 April 2026. Best viewed at 800 x 600. Webmaster: "
+                 "webmaster at club.example.net. You are visitor number 25065.")
+    assert templates.shape_hash(long_line) is not None  # up to 30 words
+    assert templates.shape_hash("May 2026") is None  # only a date
+
+
+def test_trafilaturas_text_stays_when_most_of_it_is_the_pages_own():
+    # the page's own blocks (a notice plus readers' comments and an author's note) hold
+    # far more words than trafilatura's text once the template is out; the text was
+    # mostly the notice, so it is kept and the comments do not come in
+    menu = _blocks(("Home Bins Roads", {"links": 1.0, "main": False}))
+    notice = _blocks(prose(900, 40), prose(901, 30))
+    comments = _blocks(*[(prose(910 + i, 25), {"main": False}) for i in range(6)])
+    blocks = menu + notice + comments
+    text = "\n".join(b.text for b in menu + notice)
+    cleaned, info = templates.compose(text, blocks, ((menu[0].hash,), ()))
+    assert cleaned == "\n".join(b.text for b in notice) and info["kept"] == "main"
+    # a text that was mostly template gives way to the page's own blocks
+    text = "\n".join(b.text for b in menu * 40 + notice[:1])
+    cleaned, info = templates.compose(text, blocks, ((menu[0].hash,), ()))
+    assert info["kept"] == "page"
+
+
+def test_completion_stops_at_a_heading_after_the_text():
+    blocks = tuple(_blocks(("Notice title", {"kind": "heading"}), "First paragraph here.",
+                           ("A closing item", {"kind": "item", "main": False}),
+                           ("Trending", {"kind": "heading", "main": False}),
+                           ("Other story title", {"kind": "item", "main": False})))
+    text, _kept = complete_main("Notice title\nFirst paragraph here.", blocks)
+    assert text.split("\n") == ["Notice title", "First paragraph here.", "A closing item"]
+
+
+def test_teaser_cards_between_site_map_links_are_a_teaser_list():
+    from gate.extract.html import teaser_lists
+
+    links = [("Parks", {"links": 1.0, "lead": 1.0, "kind": "item"}),
+             ("Licensing", {"links": 1.0, "lead": 1.0, "kind": "item"})]
+    blocks = _blocks(prose(950, 40), ("Explore the site", {"kind": "heading", "main": False}),
+                     *[part for k in range(3) for part in (
+                         (f"Other notice {k} title", {"links": 1.0, "lead": 1.0}),
+                         prose(960 + k, 14), *links)])
+    # the heading, three cards and the links between them (the links after the last
+    # card are the site map's own)
+    assert teaser_lists(blocks) == set(range(1, 12))
+
+
+def test_a_printed_pages_title_header_and_address_footer_are_furniture():
+    from gate.extract.pdf import without_furniture
+
+    page = ("Invented Club - Minutes - Committee meeting held on 6 May\n"
+            "Committee meeting held on 6 May\nThe meeting opened at 7pm.\n"
+            "Page 1 of 1 - https://club.example.net/files/minutes.pdf")
+    assert without_furniture([page]) == [
+        "Committee meeting held on 6 May\nThe meeting opened at 7pm."]
+    # a first line whose last part is not what the page goes on with stays
+    other = "Budget - Summary\nThe council set its budget.\nMore text."
+    assert without_furniture([other]) == [other]
+
+
+def test_a_pages_title_stays_though_every_page_links_to_it():
+    # an invented docs site whose sidebar on every page links to every guide: the link
+    # texts are the guides' titles, so each title is on every page
+    titles = [f"Guide to the {w} {v} setup" for w, v in zip(_VOCAB[:6], _VOCAB[6:12])]
+    def blocks_of(i: int) -> list[Block]:
+        return _blocks(*[(t, {"links": 1.0, "lead": 1.0, "kind": "item", "main": False})
+                         for t in titles],
+                       (titles[i], {"kind": "heading", "title": True}),
+                       prose(1000 + i, 40))
+    pages = [(b := blocks_of(i), templates.Page.of("docs.example.net html",
+                                                   templates.block_summary(b)))
+             for i in range(6)]
+    learnt = templates.learn([p for _b, p in pages])
+    assert block_hash(titles[2]) in learnt["docs.example.net html"][0].tolist()
+    blocks, mine = pages[2]
+    text = "\n".join(b.text for b in blocks[-2:])
+    cleaned, _info = templates.compose(text, blocks, templates.removal(mine, learnt))
+    assert cleaned == text

@@ -337,7 +337,9 @@ def complete_main(text: str, blocks: tuple[Block, ...], digests: list[int | None
     while first > 0 and blocks[first - 1].kind == "heading" and \
             blocks[first - 1].links < 0.5:
         first -= 1
-    while last + 1 < len(blocks) and blocks[last + 1].kind != "text" and \
+    # a closing list or table, up to the first heading after it: a heading there opens
+    # a section of its own (an aside's "Trending", "Comments"), no part of this text
+    while last + 1 < len(blocks) and blocks[last + 1].kind not in ("text", "heading") and \
             blocks[last + 1].links < 0.5:
         last += 1
     added = [i for i in range(first, last + 1) if blocks[i].hash not in covered and
@@ -358,6 +360,7 @@ SNIPPET_MIN_WORDS = 3
 BYLINE_MAX_WORDS = 6  # a date or a byline between a teaser's title and its snippet
 LIST_HEADING_MAX_WORDS = 6  # "Related articles", "More things to do", "See also"
 PAGE_MIN_WORDS = 15  # fewer left without the teaser lists: the lists are the page
+LINKED = 0.5  # a block with this share of linked characters is a link (of a site map)
 
 
 def _card(blocks: Sequence[Block], i: int) -> int:
@@ -387,8 +390,9 @@ def _card(blocks: Sequence[Block], i: int) -> int:
 
 def teaser_lists(blocks: Sequence[Block]) -> set[int]:
     """Indices of the blocks in teaser lists: runs of at least ``TEASER_MIN_CARDS`` cards
-    (see :func:`_card`) one after the other -- "related articles", "see also", "more things
-    to do", "other notices", "similar threads" -- with the short heading right before a
+    (see :func:`_card`) one after the other, or with links between them (a site map's
+    columns with a teaser card here and there) -- "related articles", "see also", "more
+    things to do", "other notices", "similar threads" -- with the short heading right before a
     run; a shorter run only between a short heading of its own and another short block,
     a link or the end of the page. Each card quotes another page, so the list is
     navigation whatever its words are, and it differs from page to page, so learning a
@@ -397,10 +401,18 @@ def teaser_lists(blocks: Sequence[Block]) -> set[int]:
     i = 0
     while i < len(blocks):
         start, cards, items = i, 0, 0
-        while i < len(blocks) and (size := _card(blocks, i)):
-            i += abs(size)
-            cards += 1
-            items += size < 0
+        end = i  # after the last card
+        while i < len(blocks):
+            size = _card(blocks, i)
+            if size:
+                i = end = i + abs(size)
+                cards += 1
+                items += size < 0
+            elif cards and size >= 0 and blocks[i].links >= LINKED:
+                i += 1  # a site map's links between the cards ("fat footer")
+            else:
+                break
+        i = end
         before = start - 1
         headed = before >= 0 and blocks[before].links < 0.5 and \
             len(blocks[before].text.split()) <= LIST_HEADING_MAX_WORDS
@@ -451,13 +463,15 @@ def with_title(text: str, blocks: tuple[Block, ...], root: lxml.etree._Element
     if len(heads) != 1:
         return text, blocks
     digest = block_hash(" ".join(heads[0].text_content().split()))
-    if digest is None or digest in line_hashes(text, blocks):
-        return text, blocks
     for i, block in enumerate(blocks):
-        if block.hash == digest:
-            if block.kind != "heading" or block.links >= 0.5 or block.nav:
-                return text, blocks
-            marked = blocks[:i] + (dataclasses.replace(block, main=True),) + blocks[i + 1:]
+        # the heading itself (a menu before it may link to the page by the same words)
+        if block.hash == digest and block.kind == "heading" and block.links < 0.5 and \
+                not block.nav:
+            # marked as the title: other pages of the site that quote it are teasers
+            title = dataclasses.replace(block, title=True)
+            if digest in line_hashes(text, blocks):
+                return text, blocks[:i] + (title,) + blocks[i + 1:]
+            marked = blocks[:i] + (dataclasses.replace(title, main=True),) + blocks[i + 1:]
             return f"{block.text}\n{text}" if text else block.text, marked
     return text, blocks
 

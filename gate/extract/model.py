@@ -94,6 +94,7 @@ class Block:
     # snippet" in one list item
     lead: float = 0.0
     nav: bool = False  # navigation by its structure (a run of teasers), never the text
+    title: bool = False  # the page's title (its one ``<h1>``, HTML)
 
 
 @dataclass

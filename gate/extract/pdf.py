@@ -18,6 +18,7 @@ from pypdf.errors import DependencyError, FileNotDecryptedError, LimitReachedErr
 
 from gate.extract.model import DateClaim, Extracted, Extraction, failed
 from gate.extract.text import clean_text
+from gate.tokens import words
 
 logging.getLogger("pypdf").setLevel(logging.ERROR)
 
@@ -204,7 +205,9 @@ _PAGE_NUMBER = re.compile(r"^\W*(?:page\s+)?\d{1,4}(?:\s*(?:of|/)\s*\d{1,4})?\W*
                           r"|\bpage\s+\d{1,4}(?:\s+of\s+\d{1,4})?\W*$", re.IGNORECASE)
 # the parts of a footer line such as "Page 3 of 7 | https://example.org/a" or "Invented
 # Office  ·  Page 3": split at a bar, a middle dot or a run of spaces
-_FOOTER_PARTS = re.compile(r"\s+[|·•]\s+|\s{2,}")
+_FOOTER_PARTS = re.compile(r"\s+[|·•\-–—]\s+|\s{2,}")
+# the parts of a printed page's header ("Invented Office - Notices - <the title>")
+_HEADER_PARTS = re.compile(r"\s+[|·•\-–—:]\s+")
 _ADDRESS = re.compile(r"^(?:[a-z][a-z0-9+.-]*://|www\.)\S+$|^\S+@\S+\.\S+$", re.IGNORECASE)
 FURNITURE_LINES = 2  # lines at the top and at the bottom of a page that may be furniture
 FURNITURE_MAX_WORDS = 8
@@ -235,8 +238,27 @@ def without_furniture(texts: list[str]) -> list[str]:
         drop = {i for i in ends if len(texts) >= 2 and seen[key(lines[i])] >= recurring}
         drop |= {i for i in ends[:1] + ends[-1:]  # the very first and last line only
                  if _page_number_line(lines[i])}
+        if not out and _title_header(lines, drop):
+            drop.add(next(i for i, line in enumerate(lines) if line.strip()))
         out.append("\n".join(line for i, line in enumerate(lines) if i not in drop))
     return out
+
+
+def _title_header(lines: list[str], drop: set[int]) -> bool:
+    """Whether the first page's first line is a printed page's header: parts split by a
+    dash or a bar ("Invented Office - Notices - Road closures this week") whose last
+    parts are the title the page then starts with, so the header is the site's name
+    before the title."""
+    filled = [i for i, line in enumerate(lines) if line.strip() and i not in drop]
+    if len(filled) < 2 or filled[0] != next(i for i, line in enumerate(lines) if line.strip()):
+        return False
+    first = lines[filled[0]].strip()
+    after = words(" ".join(lines[i] for i in filled[1:4]))
+    for m in _HEADER_PARTS.finditer(first):
+        title = words(first[m.end():])
+        if len(title) >= 2 and words(first[:m.start()]) and after[:len(title)] == title:
+            return True
+    return False
 
 
 def _page_number_line(line: str) -> bool:
