@@ -11,6 +11,7 @@ a later command re-runs to complete an interrupted run or review action.
 
 from __future__ import annotations
 
+import functools
 import hashlib
 import json
 import os
@@ -63,6 +64,23 @@ def placement_fingerprint(folder: str, record: dict[str, Any], text_key: str | N
     return fingerprint(folder, record, text_key)
 
 
+def _placement(folder: str, path: str, sha256: str | None, text_key: str | None,
+               prov: dict[str, Any], run_json: str) -> tuple[str, str]:
+    """(fingerprint, payload JSON) of a decided document's placement, the record
+    serialised once for both: the fingerprint is the bytes :func:`placement_fingerprint`
+    hashes (``json.dumps`` of a list joins its items with ", "), and the payload is what
+    ``json.dumps`` of ``{path, sha256, text_key, record: {**prov, "run": run_info}}``
+    holds, its record's keys sorted (whoever reads it re-sorts them anyway).
+    ``run_json``: the run's info as JSON, encoded once a run."""
+    prov_json = json.dumps(prov, sort_keys=True, default=str)
+    key_json = json.dumps(text_key)
+    print_ = hashlib.sha256(f"[{json.dumps(folder)}, {prov_json}, {key_json}]".encode()
+                            ).hexdigest()
+    payload = (f'{{"path": {json.dumps(path)}, "sha256": {json.dumps(sha256)}, '
+               f'"text_key": {key_json}, "record": {prov_json[:-1]}, "run": {run_json}}}}}')
+    return print_, payload
+
+
 @dataclass
 class Output:
     """An output folder being written: its state, staged originals, placer and the shared
@@ -98,6 +116,11 @@ class Run:
     mode: str  # full | incremental
     info: dict[str, Any]
     allow_removals: int | None = None  # confirms a full run's large removal (gate.brake)
+
+    @functools.cached_property
+    def info_json(self) -> str:
+        """``info`` as JSON, for every placement's record (:func:`_placement`)."""
+        return json.dumps(self.info)
 
 
 def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
@@ -177,11 +200,11 @@ def _decide_one(record: DocRecord, slim: Slim, run: Run, loaded: LoadedPolicy,
     else:
         change = "remove" if before is not None else "none"
     text_key = slim.cache_key if record.has_text else None
-    print_ = placement_fingerprint(folder, prov, text_key)
+    print_, payload = _placement(folder, slim.path,
+                                 slim.sha256 if record.problem is None else None, text_key,
+                                 prov, run.info_json)
     if placed is None or placed[0] != folder or placed[2] != print_:
-        payload = {"path": slim.path, "sha256": slim.sha256 if record.problem is None else None,
-                   "text_key": text_key, "record": {**prov, "run": run.info}}
-        rows.placements.append((run.id, slim.doc_id, folder, json.dumps(payload)))
+        rows.placements.append((run.id, slim.doc_id, folder, payload))
     date = slim.date.isoformat() if slim.date else None
     rows.entries.append((slim.doc_id, folder, slim.path, slim.sha256, print_, run.id,
                          slim.cache_key, slim.trust, date, status, review))

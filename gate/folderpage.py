@@ -88,11 +88,15 @@ def commands(folder: str, doc_id: str, status: str, releasable: bool) -> list[st
     return lines + ([base.format("policy")] if releasable else [])
 
 
-def _item(out: Path, folder: str, row: dict[str, Any], status: str, diff: bool
-          ) -> dict[str, Any]:
+def _item(out: Path, folder: str, row: dict[str, Any], status: str, diff: bool,
+          decided: dict[str, Any] | None = None) -> dict[str, Any]:
+    """One queue entry. ``decided``: what the newest run's decision says of a held entry
+    that run placed (its reasons and source URL, the same as its reasons.json holds), so
+    the record file is not read back."""
     where = row["folder"]
     name = "reasons.json" if where == "quarantine" else "provenance.json"
-    record = _read_json(out / where / row["doc_id"] / name)
+    record = decided if decided is not None else \
+        _read_json(out / where / row["doc_id"] / name)
     reasons = record.get("reasons") or []
     review = None
     if status == "released":
@@ -116,13 +120,16 @@ def _item(out: Path, folder: str, row: dict[str, Any], status: str, diff: bool
             "commands": commands(folder, row["doc_id"], status, releasable)}
 
 
-def queue(out: Path, state: State) -> list[dict[str, Any]]:
+def queue(out: Path, state: State, newest: tuple[str, dict[str, Any]] | None = None
+          ) -> list[dict[str, Any]]:
     """Every quarantine entry with its status, every entry released since the newest run,
     and every entry purged since then; open entries first, each group by urgency, then
-    path."""
+    path. ``newest``: the newest run's id and, by document id, what its decisions say of
+    the documents it held (see :func:`_decided`)."""
     folder = str(out.resolve())
     items = []
     diffs = 0
+    run_id, held = newest if newest is not None else (None, {})
     for row in state.reviewed_entries():
         if row["folder"] == "quarantine":
             status = row["status"]
@@ -130,7 +137,11 @@ def queue(out: Path, state: State) -> list[dict[str, Any]]:
             status = "released"
         else:
             continue
-        item = _item(out, folder, row, status, diffs < DIFF_ENTRIES)
+        # an entry the newest run placed and no review action has touched since: its
+        # record holds the reasons of that run's decision
+        decided = held.get(row["doc_id"]) if row["run_id"] == run_id and \
+            row["folder"] == "quarantine" and status in ("open", "rejected") else None
+        item = _item(out, folder, row, status, diffs < DIFF_ENTRIES, decided)
         diffs += bool(item["diffs"])
         items.append(item)
     for entry in state.audit_since_run():
@@ -162,15 +173,33 @@ def page_input(out: Path, state: State) -> tuple[dict[str, Any], dict[str, Any]]
         return None
     docs = []
     held = 0
+    decided: dict[str, dict[str, Any]] = {}
     for entry in state.decision_records(runs[0]["run_id"]):
         accepted = entry.get("decision") == "accepted"
         docs.append(report.html_view(entry, accepted or held < HTML_REASONS))
         held += not accepted
+        found = _decided(entry)
+        if found is not None:
+            decided[entry["id"]] = found
     previous = None
     if len(runs) > 1:
         previous = {"id": runs[1]["run_id"], "summary": runs[1]["summary"]}
-    view = {"queue": queue(out, state), "previous": previous, "folder": str(out.resolve())}
+    view = {"queue": queue(out, state, (runs[0]["run_id"], decided)), "previous": previous,
+            "folder": str(out.resolve())}
     return {**rest, "documents": docs}, view
+
+
+def _decided(entry: dict[str, Any]) -> dict[str, Any] | None:
+    """What the queue needs of a held document's record (its reasons and source URL),
+    from its report entry: the entry and the record are made from the same decision
+    (:func:`gate.report.entry`, :func:`gate.report.provenance`). None when the entry
+    cannot tell: not held in quarantine, or without a source URL (the record's manifest
+    may still name one)."""
+    if entry.get("decision") != "quarantined" or \
+            entry.get("location") != f"quarantine/{entry.get('id')}" or \
+            not isinstance(entry.get("source"), dict) or not entry["source"].get("url"):
+        return None
+    return {"reasons": entry.get("reasons") or [], "source": {"url": entry["source"].get("url")}}
 
 
 def render_folder(out: Path, state: State) -> str | None:

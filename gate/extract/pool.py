@@ -228,6 +228,9 @@ class WorkerPool:
         # must use "spawn" instead
         self._ctx = multiprocessing.get_context(start_method)
         self._workers: list[_Worker] = []
+        # workers waiting for a message: kept from one run() to the next, so a run's
+        # several passes (extraction, templates, placement batches) fork them once
+        self._idle: deque[_Worker] = deque()
 
     def __enter__(self) -> WorkerPool:
         return self
@@ -242,6 +245,7 @@ class WorkerPool:
             else:
                 worker.stop()
         self._workers = []
+        self._idle.clear()
 
     def _spawn(self) -> _Worker:
         worker = _Worker(self._ctx, self.fn, self.memory_bytes, self.timeout_s)
@@ -250,6 +254,8 @@ class WorkerPool:
 
     def _retire(self, worker: _Worker, kill: bool) -> None:
         self._workers.remove(worker)
+        if worker in self._idle:
+            self._idle.remove(worker)
         if kill:
             worker.kill()
         else:
@@ -267,7 +273,7 @@ class WorkerPool:
         responsible gets the failure and the others their normal result."""
         pending = iter(tasks)
         queue: deque[tuple[Any, Any, bool]] = deque()  # (tag, payload, alone)
-        idle: deque[_Worker] = deque()
+        idle = self._idle
         busy: dict[Connection, _Worker] = {}
         state = {"exhausted": False, "next_id": 0}
 
