@@ -559,7 +559,10 @@ _STOP = frozenset(fold_entry(w) for w in (
     "great, please, instead, every, please, words, word, sentences, paragraph, about, "
     "for, und, oder, eine, einen, einer, nicht, mit, auf, fur, pour, avec, dans, sur, une, "
     "des, les, para, con, una, unos, por, los, las, per, della, delle, degli, sono, voor, met, "
-    "een, dat, niet").split(", "))
+    "een, dat, niet, "
+    # correspondence: "Tell us as soon as possible", "Please find the latest version below"
+    "soon, possible, attached, enclosed, pasted, latest, version, "
+    "convenience, earliest").split(", "))
 
 
 def content_words(folded_unit: str) -> list[str]:

@@ -57,6 +57,14 @@ _CHAT_LINE = re.compile(r"(?m)^[ \t>*_]*(?:[\[(]?\d{1,2}:\d{2}(?::\d{2})?[\])]?[
 # an instruction, as security training and incident write-ups do.
 QUOTE_REPORT_DAMPING = 0.35
 QUOTE_REPORT_NOTE = "the instruction is quoted; the words around it report it"
+# The model reads topic as well as mood: "Saved conversation from the workspace assistant,
+# shared by the user" names the reader and the user but asks nothing of anyone.
+MOOD_CATEGORIES = frozenset({"ask", "drop", "leak", "task", "vocative", "you"})
+_READER_CALLED = re.compile(r"\b(?:ai|assistants?|models?|bots?|agents?|chatbots?|llms?|"
+                            r"readers?|helpers?|summari[sz]ers?|systems?|tools?)\s*[:,]")
+NO_MOOD_DAMPING = 0.5
+NO_MOOD_NOTE = "no word of the window asks anything"
+QUOTE_REPORT_SIGNALS = frozenset({"instruction", "model-address", "answer-steering"})
 _SENTENCE_END = re.compile("[.!?\u3002\uff01\uff1f\u061f\u0964](?:\\s|$)")
 EXAMPLE_HEAD_DAMPING = 0.5
 QUOTED_URL_DAMPING = 0.35
@@ -73,7 +81,8 @@ _MENTION_NOTES = ("quoted", "given as an example", "presents an example", REPORT
                   "the words around it report it")
 QUOTE_REPORT_SHARE = 0.3  # at least this share of the window is inside quotation marks
 QUOTE_REPORT_WORDS = 5  # ... and at least this many words are outside them
-_QUOTATION = re.compile(r'"[^"\n]{6,}?"|\u201c[^\u201d]{6,}?\u201d|\u00ab[^\u00bb]{6,}?\u00bb|'
+_QUOTATION = re.compile(r'"(?:[^"\n]|\n(?![ \t]*\n)){6,}?"|'
+                        r'\u201c[^\u201d]{6,}?\u201d|\u00ab[^\u00bb]{6,}?\u00bb|'
                         r'\u201e[^\u201c\u201d]{6,}?[\u201c\u201d]|\u300c[^\u300d]{4,}?\u300d|'
                         r'(?<!\w)\'[^\'\n]{6,}?\'(?!\w)')
 _CODE_CHARS = re.compile(r"[(){};=<>\[\]$]|\b(?:def|import|return|function|var|let)\b")
@@ -286,6 +295,11 @@ class Screen:
                 if not ends:
                     continue  # a title or label ("Guidance note: ..."), not a request
                 weight = max(weight, model.HIDDEN_WEIGHT)
+            if not _directive_mood(folded[r.start:r.end]):
+                if not visible_text:
+                    continue  # hidden metadata describing the page ("Saved conversation ...")
+                weight *= NO_MOOD_DAMPING
+                why += f"; {NO_MOOD_NOTE}"
             found.append(("instruction", weight, r.start, r.end, why, None,
                           {"model_probability": r.probability}))
         if not found:
@@ -308,15 +322,16 @@ class Screen:
             if visible_text and self.topic:
                 weight *= TOPIC_DAMPING * 0.8
                 why = f"{why}; the document discusses the topic"
-            if visible_text and self.chat_log and _speaker(folded, start) and \
-                    signal in CHAT_LOG_SIGNALS | SPOKEN_BY_THE_SYSTEM:
+            if visible_text and self.chat_log and (_speaker(folded, start) and (
+                    signal in CHAT_LOG_SIGNALS | SPOKEN_BY_THE_SYSTEM) or (
+                    signal == "task-hijack" and _named_speaker(folded, start))):
                 weight *= CHAT_LOG_DAMPING
                 why = f"{why}; {CHAT_LOG_NOTE}"
             if visible_text and signal == "instruction" and \
                     EXAMPLE_HEAD.match(folded, start, folded.find("\n", start, end) % (end + 1)):
                 weight *= EXAMPLE_HEAD_DAMPING
                 why = f"{why}; under a heading that presents an example"
-            if visible_text and signal == "instruction":
+            if visible_text and signal in QUOTE_REPORT_SIGNALS:
                 rest = _unquoted_rest(folded, start, end)
                 if rest is not None and learnt.probability(rest) < learnt.low and \
                         not model.addressed(rest):  # "Note for AI: say '...'" is no report
@@ -432,6 +447,10 @@ class Screen:
         return kept
 
 
+_NAMED_LINE = re.compile(r"[ \t>*_]*[\[(]?\d{1,2}:\d{2}(?::\d{2})?[\])]?[ \t]+"
+                         r"([^\W\d][\w.'\-]*(?: [^\W\d][\w.'\-]*){0,2}):[ \t]")
+_CUSTOMER_SPEAKERS = frozenset({"user", "customer", "visitor", "client", "guest", "caller",
+                                "system", "assistant", "bot", "ai"})
 _SYSTEM_SPEAKERS = frozenset({"system", "assistant", "agent", "bot", "support", "moderator",
                               "operator"})
 
@@ -442,6 +461,14 @@ def _speaker(text: str, pos: int) -> bool:
     line = text.rfind("\n", 0, max(0, pos)) + 1
     m = _CHAT_LINE.match(text[line:line + 80].lower())
     return bool(m and m.group(2) in _SYSTEM_SPEAKERS and m.end() > m.end(2))
+
+
+def _named_speaker(text: str, pos: int) -> bool:
+    """Is ``pos`` on a timestamped line of a named participant ("[09:14] Priya M.: Could you
+    give me the order number?"): one person asking another, not a role-labelled line?"""
+    line = text.rfind("\n", 0, max(0, pos)) + 1
+    n = _NAMED_LINE.match(text[line:line + 80].lower())
+    return bool(n and n.group(1).split()[0] not in _CUSTOMER_SPEAKERS)
 
 
 def _is_chat_log(folded: str) -> bool:
@@ -570,6 +597,18 @@ def _other_language(folded: str, start: int, end: int) -> str | None:
 
 
 _WORD = re.compile(r"[^\W\d_]+")
+
+
+def _directive_mood(window: str) -> bool:
+    """Does an English window carry a word of the directive mood (a modal, an imperative
+    opening a clause, "ignore", "reveal", a request for work), "you", or an address to the
+    reader ("Bot, ...", "For automated readers: ...")? Other languages are not judged: their
+    lexicons are too small to tell that a sentence asks nothing."""
+    unit = window[:directive.MAX_UNIT]
+    feats, tokens = directive.features(unit)
+    if directive.spoken(tokens) - {"en"} or _READER_CALLED.search(unit):
+        return True
+    return any(cats & MOOD_CATEGORIES for cats in feats.values())
 
 
 def _unquoted_rest(folded: str, start: int, end: int) -> str | None:
