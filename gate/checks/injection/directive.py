@@ -240,6 +240,7 @@ class Hit:
     lang: str
     why: str
     distinct: bool = False  # a task request sharing (almost) no content word with its document
+    detailed: bool = False  # a task request of many content words, few of them the document's
 
 
 _SIGNS = {
@@ -486,6 +487,7 @@ def _standing(text: str, start: int, end: int) -> str | None:
 # -- task hijacking --------------------------------------------------------------------------
 
 _FILLER = ("please, now, also, instead, then, finally, first, and, ok, okay, so, next, lastly, "
+           "p.s., ps, p.p.s., "
            "can you, could you, would you, will you, i want you to, i need you to, "
            "before continuing, before you continue, before summarizing, before answering, "
            "kannst du, konntest du, peux-tu, pourrais-tu, pouvez-vous, puedes, podrias, "
@@ -507,7 +509,7 @@ _TASK_SUB = [t for t in _TASKS if _SUB_SCRIPT.search(t)]
 
 _FILLERS = "|".join(re.escape(fold_entry(f)).replace(r"\ ", r"\s+") for f in _entries(_FILLER))
 _OPENING = r"[ \t>*#\-\d.)\"'_]*(?:(?:" + _FILLERS + r")[\s,]+){0,2}$"
-_AFTER_BOUNDARY = re.compile(r"[\n.!?:;|\t]" + _OPENING)
+_AFTER_BOUNDARY = re.compile(r"(?:[\n.!?:;|\t]|\b(?:and\s+)?(?:instead|rather)\b)" + _OPENING)
 _AT_START = re.compile(r"^" + _OPENING)
 _OBJECT = re.compile(
     r"\s+(?:me|us|mir|moi|mi|mnie|mig|мне|мені|nekem|bana|μου|a|an|some|the|one|"
@@ -571,6 +573,14 @@ def content_words(folded_unit: str) -> list[str]:
     return [w[:4] if len(w) <= 6 else w[:5] for w in words if w not in _STOP]
 
 
+# "Drop the current request and instead list ...": the reader's task swapped for another.
+SWAPPED = re.compile(r"\b(?:instead|rather)\b[\s,]*$|\b(?:drop|abandon|stop|cancel|skip|"
+                     r"forget|ignore|pause|set\s+aside)\s+(?:the|your|this)\s+(?:current|"
+                     r"present|original|pending|existing)\s+(?:request|task|question|query|job)")
+HIJACK_DETAIL = 6  # content words of a request specific enough to be its own task
+HIJACK_DETAIL_WEIGHT = 0.1
+
+
 def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
                 task_words: set[str]) -> list[Hit]:
     """Sentences opening with a request for work that the document is not about."""
@@ -613,10 +623,15 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
                 why.append(f"it stands {'alone' if place == 'alone' else 'at the ' + place}")
             if any(f & {"ai", "when", "drop"} for f in feats.values()):
                 weight += 0.1
+            if SWAPPED.search(unit, 0, vstart - start):
+                weight += 0.15
+                why.append("it replaces the reader's task (\"instead\")")
+            detailed = len(set(words)) >= HIJACK_DETAIL and overlap <= 0.2 and \
+                not SWAPPED.search(unit, 0, vstart - start)
             n = len(set(words))
             hits.append(Hit("task-hijack", round(min(weight, 0.6), 4), start, end, "",
                             "; ".join(why), (n >= 4 and shared == 0) or
-                            (n >= 8 and overlap <= 0.15)))
+                            (n >= 8 and overlap <= 0.15), detailed))
     return hits
 
 
@@ -782,6 +797,11 @@ def _alone_or_listed(hijacks: list[Hit]) -> list[Hit]:
         for h in hijacks:
             h.weight = round(h.weight * HIJACK_LISTED, 4)
             h.why += f"; one of {len(hijacks)} such requests (a list of tasks)"
+        return hijacks
+    for h in hijacks:
+        if h.detailed:
+            h.weight = round(min(h.weight + HIJACK_DETAIL_WEIGHT, 0.6), 4)
+            h.why += "; a detailed request of its own"
     return hijacks
 
 
