@@ -417,7 +417,7 @@ ANCHORS = tuple(sorted({n for names in NEEDLES.values() for n in names} - {"key"
                           "avviso",
                           "distrust", "tool_result", "tool_output", "tool_response",
                           "function_result", "function_response", "observation:",
-                          "[tool", "if you can", "call", "invoke", "shell access",
+                          "[tool", "if you can", "invoke", "shell access",
                           "terminal access", "if you have", "if you are able",
                           "all other", "any other", "while true", "while(true", "while (true",
                           "while 1", "keylog", "keydown", "keypress", "on_press",

@@ -87,6 +87,8 @@ _QUOTATION = re.compile(r'"(?:[^"\n]|\n(?![ \t]*\n)){6,}?"|'
                         r'(?<!\w)\'[^\'\n]{6,}?\'(?!\w)')
 _CODE_CHARS = re.compile(r"[(){};=<>\[\]$]|\b(?:def|import|return|function|var|let)\b")
 _MD_COMMENT = re.compile(r"<!--(.{0,20000}?)-->", re.S)
+_FRONT_MATTER = re.compile(r"\ufeff?[ \t]*---[ \t]*\r?\n(.{0,20000}?)\r?\n(?:---|\.\.\.)[ \t]*"
+                           r"(?:\r?\n|$)", re.S)
 
 
 @dataclass
@@ -721,6 +723,10 @@ def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]
                      hidden_pieces=len(found.runs))
     elif kind == "text":
         raw = extraction.decoded or extraction.text
+        front = _FRONT_MATTER.match(raw[:MAX_SOURCE])
+        if front and front.group(1).strip():  # YAML front matter: metadata, not rendered
+            sources.append(Source(front.group(1), "the YAML front matter", "front-matter",
+                                  "text"))
         if "<!--" in raw:
             for i, m in enumerate(_MD_COMMENT.finditer(raw[:MAX_TEXT])):
                 if i >= 200:
