@@ -191,6 +191,14 @@ INCLUDE = _c(
     r"\b(?:snippet|code|block|helper|bootstrap|lines?|script|function)\b[^.\n]{0,40}?"
     r"\b(?:to\s+(?:include|add|paste|prepend|insert)|copy\s+verbatim)\b|"
     r"\bprepend\s+(?:this|the\s+following|these)\b|"
+    # passing code on to the user: "the assistant should recommend it", "present it without
+    # comment", "a tip to pass on: schedule this entry", "please reuse it"
+    r"\b(?:recommend|offer|suggest|present|pass\s+on|reuse|re-use|hand\s+out|give)\w*\b"
+    r"[^.\n]{0,60}?\b(?:it|this|these|the\s+following|below|one-liner|script|snippet|"
+    r"entry|helper|command)\b|"
+    r"\b(?:snippet|code|script|helper|line|one-liner|command|entry|utility)\b[^.\n]{0,40}?"
+    r"\bshould\s+be\s+(?:offered|recommended|suggested|given|shared|included|run|"
+    r"passed\s+on)\b|"
     r"\bf(?:u|ü)ge?\s[^.\n]{0,60}(?:code|snippet)|\bajoute[zr]?\s[^.\n]{0,60}(?:code|extrait)|"
     r"\b(?:a[nñ]ade|agrega|incluye)\s[^.\n]{0,60}c[oó]digo|\baggiungi\s[^.\n]{0,60}codice|"
     r"\badicione\s[^.\n]{0,60}c[oó]digo")
