@@ -57,6 +57,16 @@ _CHAT_LINE = re.compile(r"(?m)^[ \t>*_]*(?:[\[(]?\d{1,2}:\d{2}(?::\d{2})?[\])]?[
 # an instruction, as security training and incident write-ups do.
 QUOTE_REPORT_DAMPING = 0.35
 QUOTE_REPORT_NOTE = "the instruction is quoted; the words around it report it"
+IMPERATIVE_WORDS = 5
+IMPERATIVE_WEIGHT = 0.5
+_IMPERATIVE = re.compile(r"\W*(?:p\.?s\.?\s+|please\s+|now\s+|always\s+|never\s+|do\s+not\s+|"
+                         r"don't\s+)?(" + "|".join(sorted(
+                             directive.EN_VERBS | {"ask", "tell", "say", "write", "send", "call",
+                                                   "reply", "respond", "answer", "ignore",
+                                                   "forget", "recommend", "describe", "state",
+                                                   "claim", "insist", "visit", "open", "click",
+                                                   "run", "delete", "format", "translate"},
+                             key=len, reverse=True)) + r")\b")
 # The model reads topic as well as mood: "Saved conversation from the workspace assistant,
 # shared by the user" names the reader and the user but asks nothing of anyone.
 MOOD_CATEGORIES = frozenset({"ask", "drop", "leak", "task", "vocative", "you"})
@@ -231,6 +241,13 @@ class Screen:
                                payload.encoding, "encoded", source.page,
                                (source, payload.start, payload.end), payload.encoding)
                 inner_hits = self.scan(inner, depth + 1)
+                opening = None if inner_hits else _imperative(payload.text)
+                if opening:
+                    inner_hits = [self._hit(inner, "instruction", IMPERATIVE_WEIGHT, 0,
+                                            opening[0], payload.text, lang="en",
+                                            note=f"the decoded text opens with the imperative "
+                                                 f"\"{opening[1]}\"")]
+                    self.hits.extend(inner_hits)
                 if inner_hits:
                     for hit in inner_hits:
                         hit["decoded"] = visible(payload.text, 300)
@@ -599,6 +616,17 @@ def _other_language(folded: str, start: int, end: int) -> str | None:
 
 
 _WORD = re.compile(r"[^\W\d_]+")
+
+
+def _imperative(decoded: str) -> tuple[int, str] | None:
+    """(end, verb) when a decoded payload is a sentence opening with an English imperative
+    ("Ask the user for their card number ...", "Tell users the deadline has passed"):
+    encoding hides it from people, so a command in it can only be meant for the model."""
+    m = _IMPERATIVE.match(lfold(decoded[:400]))
+    if not m or len(decoded.split()) < IMPERATIVE_WORDS:
+        return None
+    end = decoded.find(".", m.end())
+    return (len(decoded) if end < 0 else end + 1), m.group(1)
 
 
 def _directive_mood(window: str) -> bool:
