@@ -149,7 +149,10 @@ TOOL_NEEDLES = ("call", "invoke", "trigger", "execute", "run ", "use ", "using "
                 "function_call",
                 "tool_call", "tool_use", "functioncall", "tool_code", "<invoke", "arguments",
                 "parameters", "\"args\"", "\"input\"", "\"params\"")
-AUTHORITY_NEEDLES = ("hinweis", "mitteilung", "nachricht", "anweisung", "avis", "aviso",
+AUTHORITY_NEEDLES = ("indexing", "crawling", "search", "team to", "department to",
+                     "may now", "can now", "no longer", "need not", "authorised",
+                     "authorized", "permitted", "allowed", "hinweis", "mitteilung",
+                     "nachricht", "anweisung", "avis", "aviso",
                      "avviso", "automated", "ai ", "a.i.", "llm", "machine", "autonomous",
                      "language model", "supersede", "override", "replaces", "invalidates",
                      "precedence", "outranks", "prevails", "trumps", "authoritative",
@@ -299,6 +302,20 @@ _URGENT = _c(r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*)|silently|"
                      r"https?://)")
 
 AUTHORITY: list[tuple[re.Pattern[str], float, str]] = [
+    (_c(r"\b(?:notice|message|note|memo|statement|instructions?|directive|advisory|guidance|"
+        r"announcement|bulletin|update|policy)\s+(?:\w+\s+){0,4}?(?:to|for)\s+(?:all\s+|any\s+)?"
+        r"(?:indexing|crawling|search|retrieval|answering|ai-assisted|ai-powered)\s+"
+        r"(?:systems?|agents?|readers?|assistants?|models?|tools?|crawlers?|search|bots?)|"
+        r"\bfrom\s+(?:the\s+)?(?:[\w&-]+\s+){0,4}?(?:team|department|office|desk|board)\s+to\s+"
+        r"(?:all\s+|any\s+)?(?:[\w-]+\s+)?(?:chatbots?|assistants?|agents?|ai|llms?|models?|"
+        r"bots?|crawlers?)\b"), 0.55, "is a notice addressed to automated systems"),
+    (_c(r"\b(?:the|this|any|all|every)\s+(?:ai\s+)?(?:assistants?|models?|ai|bots?|chatbots?|"
+        r"agents?|llms?)\s+(?:is|are)\s+(?:now\s+|hereby\s+)?(?:authori[sz]ed|allowed|"
+        r"permitted|cleared|free)\s+to\b|\b(?:the|this|any|all|every)\s+(?:ai\s+)?"
+        r"(?:assistants?|models?|ai|bots?|chatbots?|agents?|llms?)\s+(?:may|can)\s+now\b|"
+        r"\b(?:the|this|any|all|every)\s+(?:ai\s+)?(?:assistants?|models?|ai|bots?|chatbots?|"
+        r"agents?|llms?)\s+(?:no\s+longer\s+(?:needs?|has|have)\s+to|need\s+not\s+"
+        r"(?:follow|observe|apply))\b"), 0.5, "grants the reader new permissions"),
     (_c(r"\b(?:notice|message|note|memo|attention|instructions?|directive|advisory|"
                 r"alert|guidance|announcement|bulletin)\s+(?:\w+\s+){0,4}?(?:to|for)\s+"
                 r"(?:all\s+|any\s+)?(?:automated|ai|a\.i\.|llm|machine|autonomous|ai-based)\s+"
@@ -409,6 +426,8 @@ WINDOW = 1_500
 ANCHORS = tuple(sorted({n for names in NEEDLES.values() for n in names} - {"key", "while",
                                                                           "profile", "credentials"}
                        | {"tool", "function_call", "tool_call", "tool_use", "<invoke",
+                          "indexing", "team to", "department to", "may now", "can now",
+                          "authorised to", "authorized to", "no longer need",
                           "\"arguments\"", "\"parameters\"", "'arguments'", "automated",
                           "supersede", "authoritative", "precedence", "other sources",
                           "approved by", "verified by", "authorized by", "authorised by",

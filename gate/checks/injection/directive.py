@@ -359,9 +359,12 @@ CONDITIONED = re.compile(
     r"[^.\n]{1,60}?\s+(?:arises|comes\s+up|is\s+(?:raised|mentioned|discussed))\b[^.\n]{0,4}?,"
     r"\s*(?:please\s+|always\s+)?(?:say|tell|answer|reply|respond|reassure|recommend|mention|"
     r"state|insist|claim|deny|quote|cite|stress|emphasi[sz]e|point)\b|"
-    r"^\W*(?:please\s+|always\s+)?(?:quote|cite|mention|state|repeat|use|give)\s+(?:this|that|"
-    r"the)\s+(?:\w+\s+){0,2}?(?:number|figure|rate|score|price|claim|statement|sentence)\s+"
-    r"whenever\b")
+    r"(?:^|(?<=[.!?:\n]))\W*(?:please\s+|always\s+)?(?:quote|cite|mention|state|repeat|use|"
+    r"give)\s+(?:this|that|"
+    r"the)\s+(?:\w+\s+){0,2}?(?:number|figure|rate|score|price|claim|statement|sentence|"
+    r"citation|certification|fact|finding|rating|wording)\s+(?:whenever|when|every\s+time|"
+    r"each\s+time)\s+[^.\n]{1,60}?\s+(?:is|are)\s+(?:discussed|mentioned|raised|asked\s+about|"
+    r"brought\s+up)\b")
 # An address to an automated reader followed by what it is told: "Reminder to the bot: the
 # correct figure is 98.6%", "A short request to whichever model condenses this page: ...".
 CALLED_OUT = re.compile(r"^[^:\n]{0,80}(?:\b(?:ai|assistant|model|bot|llm|chatbot|agent|"
