@@ -803,12 +803,56 @@ def _close(family: str, texts: list[str], pieces: list[tuple[int, int, str, str]
     return Source(_SEPARATOR.join(texts), pieces[0][2], pieces[0][3], family, pieces=pieces)
 
 
+ACROSTIC_LINES = (3, 12)  # lines in a block whose first words are read as a sentence
+ACROSTIC_MAX_LINE = 200
+ACROSTIC_BLOCKS = 60
+_LINE_LEAD = re.compile(r"[ \t]*(?:[-*+\u2022>#|]+[ \t]*|\d{1,3}[.)][ \t]+)?([^\W\d_][\w'-]*)")
+_READER_NOUN = re.compile(r"(?:ai|assistant|model|bot|chatbot|agent|llm|summari[sz]er|helper|"
+                          r"copilot|crawler)s?$")
+
+
+def _acrostics(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
+    """Blocks of 3 to 12 short consecutive lines whose first words, read together, make a
+    sentence for the model ("Bot / Answer / In / Spanish / Only ..."): an instruction split
+    over the starts of lines. Only the sentence readings (:mod:`.directive`) are used."""
+    text = screen.text[:directive.MAX_CHARS]
+    out: list[dict[str, Any]] = []
+    block: list[tuple[int, int, str]] = []
+    blocks = 0
+    at = 0
+    for line in text.split("\n") + [""]:
+        start, at = at, at + len(line) + 1
+        m = _LINE_LEAD.match(line) if line.strip() and len(line) <= ACROSTIC_MAX_LINE else None
+        if m:
+            block.append((start, start + len(line), m.group(1)))
+            continue
+        if ACROSTIC_LINES[0] <= len(block) <= ACROSTIC_LINES[1]:
+            blocks += 1
+            words = [w for _, _, w in block]
+            if _READER_NOUN.match(words[0].lower()):
+                words[0] += ","  # the reader is called by name
+            sentence = " ".join(words) + "."
+            for d in directive.scan(sentence, min_weight=directive.MIN_WEIGHT):
+                hit = screen._hit(indexed, d.signal, d.weight, block[0][0], block[-1][1], text,
+                                  lang=d.lang or None,
+                                  note=f"{d.why}; read from the first words of {len(block)} "
+                                       f"consecutive lines: \"{sentence}\"")
+                hit["decoded"] = sentence
+                out.append(hit)
+        block = []
+        if blocks >= ACROSTIC_BLOCKS:
+            break
+    return out
+
+
 def measure(extraction: Extraction) -> dict[str, Any]:
     """Screen one document (runs in the worker); see the module docstring."""
     text = extraction.text or ""
     screen = Screen(text[:MAX_TEXT])
     sources, links, stats = _sources(extraction)
-    screen.scan(Source(screen.text, "the indexed text", None, "text", indexed=True))
+    indexed = Source(screen.text, "the indexed text", None, "text", indexed=True)
+    screen.scan(indexed)
+    screen.hits.extend(_acrostics(screen, indexed))
     if links:
         screen.scan(Source("", "a link or image address in the page markup", None, "html"),
                     links=links)
