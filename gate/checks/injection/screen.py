@@ -67,6 +67,17 @@ _IMPERATIVE = re.compile(r"\W*(?:p\.?s\.?\s+|please\s+|now\s+|always\s+|never\s+
                                                    "claim", "insist", "visit", "open", "click",
                                                    "run", "delete", "format", "translate"},
                              key=len, reverse=True)) + r")\b")
+# Customer service asks people to get in touch ("write to support@...", "please contact our
+# office by Friday"): a request naming a way to reach someone, and no AI reader or chat data.
+_CONTACT = re.compile(r"[\w.+-]+@[\w-]+\.[\w.]+|\b(?:contact|write\s+to|call\s+us|phone\s+us|"
+                      r"reply\s+to\s+(?:confirm|this|us)|get\s+in\s+touch|reach\s+us|visit\s+us|"
+                      r"our\s+(?:office|support|customer|service|team|helpdesk|help\s+desk)|"
+                      r"kontaktieren|contactez|contacte|contatti|contattare|forduljon|"
+                      r"skontaktuj|kontakta|neem\s+contact)\b")
+_CHAT_DATA = re.compile(r"\b(?:conversation|chat|transcript|history|previous\s+messages|"
+                        r"the\s+user'?s|secrets?|passwords?|api\s+keys?|credentials)\b")
+CONTACT_DAMPING = 0.5
+CONTACT_NOTE = "it asks people to get in touch"
 # The model reads topic as well as mood: "Saved conversation from the workspace assistant,
 # shared by the user" names the reader and the user but asks nothing of anyone.
 MOOD_CATEGORIES = frozenset({"ask", "drop", "leak", "task", "vocative", "you"})
@@ -314,6 +325,11 @@ class Screen:
                 if not ends:
                     continue  # a title or label ("Guidance note: ..."), not a request
                 weight = max(weight, model.HIDDEN_WEIGHT)
+            if visible_text and _CONTACT.search(folded, r.start, r.end) and \
+                    not _CHAT_DATA.search(folded, r.start, r.end) and \
+                    not model.addressed(folded[r.start:r.end]):
+                weight *= CONTACT_DAMPING  # "write to support@...", "please contact our office"
+                why += f"; {CONTACT_NOTE}"
             if not _directive_mood(folded[r.start:r.end]):
                 if not visible_text:
                     continue  # hidden metadata describing the page ("Saved conversation ...")
@@ -806,7 +822,8 @@ def _close(family: str, texts: list[str], pieces: list[tuple[int, int, str, str]
 ACROSTIC_LINES = (3, 12)  # lines in a block whose first words are read as a sentence
 ACROSTIC_MAX_LINE = 200
 ACROSTIC_BLOCKS = 60
-_LINE_LEAD = re.compile(r"[ \t]*(?:[-*+\u2022>#|]+[ \t]*|\d{1,3}[.)][ \t]+)?([^\W\d_][\w'-]*)")
+_LINE_LEAD = re.compile(r"[ \t]*(?:[-*+\u2022>#|]+[ \t]*|\d{1,3}[.)][ \t]+)?([^\W\d_][\w'-]{0,15})"
+                        r"(?=[\s,.:;!?]|$)")
 _READER_NOUN = re.compile(r"(?:ai|assistant|model|bot|chatbot|agent|llm|summari[sz]er|helper|"
                           r"copilot|crawler)s?$")
 
