@@ -359,12 +359,30 @@ CONDITIONED = re.compile(
     r"[^.\n]{1,60}?\s+(?:arises|comes\s+up|is\s+(?:raised|mentioned|discussed))\b[^.\n]{0,4}?,"
     r"\s*(?:please\s+|always\s+)?(?:say|tell|answer|reply|respond|reassure|recommend|mention|"
     r"state|insist|claim|deny|quote|cite|stress|emphasi[sz]e|point)\b|"
-    r"(?:^|(?<=[.!?:\n]))\W*(?:please\s+|always\s+)?(?:quote|cite|mention|state|repeat|use|"
-    r"give)\s+(?:this|that|"
+    r"\b(?:quote|cite|mention|state|repeat|use|give)\s+(?:this|that|"
     r"the)\s+(?:\w+\s+){0,2}?(?:number|figure|rate|score|price|claim|statement|sentence|"
     r"citation|certification|fact|finding|rating|wording)\s+(?:whenever|when|every\s+time|"
     r"each\s+time)\s+[^.\n]{1,60}?\s+(?:is|are)\s+(?:discussed|mentioned|raised|asked\s+about|"
     r"brought\s+up)\b")
+_CONDITION_WORDS = ("when", "if", "whenever", "should", "any time", "every time", "each time")
+
+
+def _conditioned(folded: str, limit: int = 200) -> list[int]:
+    """Where :data:`CONDITIONED` matches, looked for only around its condition words (a
+    search over the whole text costs several milliseconds per page)."""
+    found: set[int] = set()
+    tried = 0
+    for word in _CONDITION_WORDS:
+        for at in _occurrences(folded, word, limit):
+            tried += 1
+            m = CONDITIONED.search(folded, max(0, at - 90), at + 250)
+            if m:
+                found.add(m.start())
+            if tried >= limit or len(found) >= 20:
+                return sorted(found)
+    return sorted(found)
+
+
 # An address to an automated reader followed by what it is told: "Reminder to the bot: the
 # correct figure is 98.6%", "A short request to whichever model condenses this page: ...".
 CALLED_OUT = re.compile(r"^[^:\n]{0,80}(?:\b(?:ai|assistant|model|bot|llm|chatbot|agent|"
@@ -769,8 +787,9 @@ def _scan_folded(text: str, folded: str, words: set[str] | None = None,
     seen: dict[int, int] = {}
     triggers, tasks = _words(folded, words)
     positions = _trigger_positions(folded, triggers)
-    if "user" in folded or " of " in folded:  # conditions on the user or a topic
-        positions = sorted(positions + [m.start() for m in CONDITIONED.finditer(folded)][:20])
+    conditioned = _conditioned(folded)
+    if conditioned:
+        positions = sorted(positions + conditioned)
     units = units_around(text, folded, positions)[:MAX_UNITS]
     for start, end in units:
         unit, quoted = _unquoted(folded[start:end])

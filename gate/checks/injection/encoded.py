@@ -210,8 +210,7 @@ def find(text: str, budget: list[int]) -> list[Payload]:
             if m.group().startswith("\\x"):
                 end = m.end()
             keep(encoding, start, end, _decode(encoding, text[start:end][:MAX_RUN]))
-    low = text[:200_000].lower()
-    if any(w in low for w in _REVERSED_CUES):
+    if _REVERSED_CUE.search(text, 0, 200_000):
         for start, end in _reversed_lines(text[:200_000]):
             if tried >= MAX_CANDIDATES:
                 break
@@ -234,7 +233,7 @@ _REVERSED = frozenset("eht dna ot fo ni si uoy ruoy rof taht htiw eb siht no sa 
                       "resu eseht lla ton od nehw".split())
 _FORWARD = frozenset("the and to of in is you your for that with be this on as at or by it are "
                      "user these all not do when".split())
-_REVERSED_CUES = (" eht ", " dna ", " ot ", " fo ", " uoy ", "gni")
+_REVERSED_CUE = re.compile(r" (?:eht|dna|ot|fo|uoy|ni|si) ")
 _LETTERS = re.compile(r"[a-z]+")
 
 

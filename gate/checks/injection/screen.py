@@ -828,6 +828,14 @@ _READER_NOUN = re.compile(r"(?:ai|assistant|model|bot|chatbot|agent|llm|summari[
                           r"copilot|crawler)s?$")
 
 
+ACROSTIC_CUES = frozenset({"ai", "assistant", "assistants", "model", "models", "bot", "bots",
+                           "chatbot", "agent", "agents", "llm", "summariser", "summarizer",
+                           "helper", "copilot", "crawler", "summary", "summaries", "answer",
+                           "answers", "reply", "replies", "response", "responses", "output",
+                           "you", "your", "user", "users", "ignore", "forget", "disregard"}
+                          | directive.EN_VERBS)
+
+
 def _acrostics(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
     """Blocks of 3 to 12 short consecutive lines whose first words, read together, make a
     sentence for the model ("Bot / Answer / In / Spanish / Only ..."): an instruction split
@@ -846,6 +854,9 @@ def _acrostics(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
         if ACROSTIC_LINES[0] <= len(block) <= ACROSTIC_LINES[1]:
             blocks += 1
             words = [w for _, _, w in block]
+            if not ACROSTIC_CUES.intersection(w.lower() for w in words):
+                block = []
+                continue  # names no reader, no answer and no request: nothing to read
             if _READER_NOUN.match(words[0].lower()):
                 words[0] += ","  # the reader is called by name
             sentence = " ".join(words) + "."
