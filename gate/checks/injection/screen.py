@@ -90,6 +90,7 @@ _SENTENCE_END = re.compile("[.!?\u3002\uff01\uff1f\u061f\u0964](?:\\s|$)")
 EXAMPLE_HEAD_DAMPING = 0.5
 QUOTED_URL_DAMPING = 0.35
 EXAMPLE_URL_DAMPING = 0.5
+_LINK_OPENER = re.compile(r"(?:<\w+[^<>]*=\s*[\"']?|!?\[[^\]\n]{0,60}\]\(\s*<?)$")
 # Narration of what an instruction did ("it asked the assistant to add ..."): third person
 # and past tense about the reader, as incident reports write; a planted line speaks to it.
 REPORTED = re.compile(r"\b(?:asked|told|instructed|directed|ordered|tricked|convinced|"
@@ -218,8 +219,8 @@ class Screen:
             if visible_text and u.start >= 0 and wording._quoted(text, u.start, u.end):
                 weight *= QUOTED_URL_DAMPING  # an address quoted in a report or lesson
                 why = f"{why}; quoted"
-            elif visible_text and u.start >= 0 and \
-                    wording._CUE.search(text, max(0, u.start - 40), u.start):
+            elif visible_text and u.start >= 0 and wording._CUE.search(
+                    _LINK_OPENER.sub("", text[max(0, u.start - 100):u.start])[-40:]):
                 weight *= EXAMPLE_URL_DAMPING  # "an image tag similar to ![chart](...)"
                 why = f"{why}; given as an example"
             if u.start >= 0:
