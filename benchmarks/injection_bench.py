@@ -5,7 +5,7 @@ extraction), the injection ``measure`` and ``evaluate`` (timed as detectors), an
 recall per technique, the false-positive rate on benign documents, and the time split.
 
     python benchmarks/injection_bench.py [--split dev|holdout|holdout2|tune15|all] [--repeat N]
-                                         [--blind DIR] [--verbose]
+                                         [--blind DIR] [--blind-half tune|held] [--verbose]
 
 The corpus is invented fixture data (see tests/fixtures/injection/README.md). With
 ``--blind DIR`` (default: benchmarks/data/injection_blind when it exists) the held-out
@@ -13,6 +13,11 @@ blind set is measured too: ``DIR/labels.jsonl`` (fields file, label, class, lang
 where, note) over ``DIR/docs/``; it prints recall overall, per class and per language of
 the multilingual class, and the false-positive rate overall and per benign class, but
 never which documents were missed unless ``--verbose`` is given.
+
+``--blind-half tune|held`` keeps half of a blind set, split by host document (label field
+``host``, else the file name): a document is in the tuning half when the first byte of
+``sha256("blind3-host:" + host)`` is below 128, else in the held half. Tune only on the
+tuning half; read the held half in aggregate only.
 """
 
 from __future__ import annotations
@@ -75,6 +80,16 @@ def is_val(identity: str) -> bool:
     return hashlib.sha256(identity.encode("utf-8")).digest()[0] < VAL_BYTE
 
 
+HALF_SALT = "blind3-host:"
+
+
+def blind_half(row: dict) -> str:
+    """``tune`` or ``held``: the half of a blind set this row's host document falls in."""
+    host = row.get("host") or row["path"]
+    return "tune" if hashlib.sha256((HALF_SALT + host).encode("utf-8")).digest()[0] < 128 \
+        else "held"
+
+
 def load_blind(folder: Path) -> list[dict]:
     """Rows of the blind set's labels.jsonl, shaped like the corpus rows."""
     rows = []
@@ -90,6 +105,7 @@ def load_blind(folder: Path) -> list[dict]:
         rows.append({"path": item["file"], "label": item["label"],
                      "technique": item.get("class") or "?",
                      "language": item.get("language") or "?", "where": item.get("where"),
+                     "host": item.get("host"),
                      "data": path.read_bytes()})
     return rows
 
@@ -271,27 +287,38 @@ def main(argv: list[str] | None = None) -> int:
     parser.add_argument("--blind-split", default="all", choices=["all", "val", "train"],
                         help="blind-set documents: all, or only the instruction model's "
                         "validation (never trained on) or training split")
+    parser.add_argument("--blind-half", default="all", choices=["all", "tune", "held"],
+                        help="blind-set documents: all, or the tuning or held half split by "
+                        "host document (see the module docstring)")
+    parser.add_argument("--blind-only", action="store_true",
+                        help="measure only the blind set (skip the fixture corpus and the mix)")
     parser.add_argument("--verbose", action="store_true")
     args = parser.parse_args(argv)
+    if args.verbose and args.blind_half == "held":
+        parser.error("--verbose lists documents; the held half is read in aggregate only")
     sys.path.insert(0, str(ROOT))
-    rows = load_corpus(args.split)
-    run(rows[:3], repeat=1)  # warm caches and imports before timing
-    results = run(rows, repeat=args.repeat)
-    for r in results:  # the typical page gets more repeats: its timing is the headline
-        if r["path"] == TYPICAL_PAGE:
-            r.update(run([r], repeat=max(20, args.repeat))[0])
-    print(f"tuning corpus, split: {args.split}, documents: {len(rows)}\n")
-    report(results, verbose=args.verbose)
-    if args.mix:
-        mix_share(args.mix)
+    if not args.blind_only:
+        rows = load_corpus(args.split)
+        run(rows[:3], repeat=1)  # warm caches and imports before timing
+        results = run(rows, repeat=args.repeat)
+        for r in results:  # the typical page gets more repeats: its timing is the headline
+            if r["path"] == TYPICAL_PAGE:
+                r.update(run([r], repeat=max(20, args.repeat))[0])
+        print(f"tuning corpus, split: {args.split}, documents: {len(rows)}\n")
+        report(results, verbose=args.verbose)
+        if args.mix:
+            mix_share(args.mix)
     blind = Path(args.blind) if args.blind else BLIND
     if blind.is_dir():
         brows = load_blind(blind)
         if args.blind_split != "all":
             brows = [r for r in brows if is_val("blind:" + r["path"]) ==
                      (args.blind_split == "val")]
+        if args.blind_half != "all":
+            brows = [r for r in brows if blind_half(r) == args.blind_half]
         print(f"\nBLIND SET {blind.relative_to(ROOT) if blind.is_relative_to(ROOT) else blind}"
-              f", documents: {len(brows)} (split: {args.blind_split})\n")
+              f", documents: {len(brows)} (split: {args.blind_split}, half: "
+              f"{args.blind_half})\n")
         bresults = run(brows, repeat=1)
         report_blind(bresults, verbose=args.verbose)
         ext = sum(r["extraction_s"] for r in bresults)

@@ -140,6 +140,7 @@ NEEDLES: dict[str, tuple[str, ...]] = {
                                      "bashrc", "profile", "zshrc", "systemctl enable"),
 }
 TOOL_NEEDLES = ("call", "invoke", "trigger", "execute", "run ", "use ", "using ", "tool",
+                "access",
                 "without", "silently", "if you", "result", "<<", "observation", "response",
                 "secretly", "quietly", "do not tell", "don't tell",
                 "werkzeug", "outil", "herramienta", "strumento", "ferramenta", "narzedzie",
@@ -148,7 +149,10 @@ TOOL_NEEDLES = ("call", "invoke", "trigger", "execute", "run ", "use ", "using "
                 "function_call",
                 "tool_call", "tool_use", "functioncall", "tool_code", "<invoke", "arguments",
                 "parameters", "\"args\"", "\"input\"", "\"params\"")
-AUTHORITY_NEEDLES = ("hinweis", "mitteilung", "nachricht", "anweisung", "avis", "aviso",
+AUTHORITY_NEEDLES = ("indexing", "crawling", "search", "team to", "department to",
+                     "may now", "can now", "no longer", "need not", "authorised",
+                     "authorized", "permitted", "allowed", "hinweis", "mitteilung",
+                     "nachricht", "anweisung", "avis", "aviso",
                      "avviso", "automated", "ai ", "a.i.", "llm", "machine", "autonomous",
                      "language model", "supersede", "override", "replaces", "invalidates",
                      "precedence", "outranks", "prevails", "trumps", "authoritative",
@@ -190,6 +194,14 @@ INCLUDE = _c(
     r"\b(?:snippet|code|block|helper|bootstrap|lines?|script|function)\b[^.\n]{0,40}?"
     r"\b(?:to\s+(?:include|add|paste|prepend|insert)|copy\s+verbatim)\b|"
     r"\bprepend\s+(?:this|the\s+following|these)\b|"
+    # passing code on to the user: "the assistant should recommend it", "present it without
+    # comment", "a tip to pass on: schedule this entry", "please reuse it"
+    r"\b(?:recommend|offer|suggest|present|pass\s+on|reuse|re-use|hand\s+out|give)\w*\b"
+    r"[^.\n]{0,60}?\b(?:it|this|these|the\s+following|below|one-liner|script|snippet|"
+    r"entry|helper|command)\b|"
+    r"\b(?:snippet|code|script|helper|line|one-liner|command|entry|utility)\b[^.\n]{0,40}?"
+    r"\bshould\s+be\s+(?:offered|recommended|suggested|given|shared|included|run|"
+    r"passed\s+on)\b|"
     r"\bf(?:u|ü)ge?\s[^.\n]{0,60}(?:code|snippet)|\bajoute[zr]?\s[^.\n]{0,60}(?:code|extrait)|"
     r"\b(?:a[nñ]ade|agrega|incluye)\s[^.\n]{0,60}c[oó]digo|\baggiungi\s[^.\n]{0,60}codice|"
     r"\badicione\s[^.\n]{0,60}c[oó]digo")
@@ -199,6 +211,7 @@ SIDE_EFFECT = (r"(?:send|mail|email|e_mail|post|upload|delete|remove|drop|transf
                r"grant|invite|wire|withdraw|reset|update_password|change_password|"
                r"download|fetch|browse|open_url|http)")
 _TOOL_NAME = r"[`'\"]?(?P<tool>[A-Za-z][A-Za-z0-9]*(?:[_.][A-Za-z0-9]+)+)"
+READER_TOOLS = "asks the reader to act with one of its tools"
 TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
     (_c(r"\b(?:call|invoke|use|trigger|run|execute|activate|fire)\s+(?:the\s+|your\s+)?"
                 + _TOOL_NAME + r"[`'\"]?(?:\(\))?\s+(?:tool|function|action|plugin|command|"
@@ -239,6 +252,22 @@ TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
         r"messages|the\s+user'?s?|credentials?|passwords?|api\s+keys?|tokens?|all\s+files|"
         r"mailbox|inbox|contacts|account)\b)", re.M), 0.5,
      "asks for a covert action on the user's data or accounts"),
+    (_c(r"\b(?:with|using|via|through)\s+(?:your|its|the\s+assistant'?s|the\s+model'?s)\s+"
+        r"(?:[\w-]+\s+){0,2}?(?:tools?|shell\s+access|terminal\s+access|plugins?)\b|"
+        r"\bus(?:e|ing)\s+(?:your|the)\s+(?:[\w-]+\s+){0,2}?tools?\s+to\s+(?:\w+\s+)?"
+        r"(?:create|write|run|execute|open|send|delete|modify|edit|post|upload|download|"
+        r"submit|install|fetch|call|save|move|copy|push)\b|"
+        r"\b(?:agents?|assistants?|models?|bots?|ais?|readers?|llms?)\s+(?:with|that\s+(?:have|"
+        r"has))\s+(?:\w+\s+)?(?:shell|terminal|tool|code[- ]execution|browsing|browser|"
+        r"file(?:system)?|network|e-?mail)\s+(?:access|tools?|capabilit(?:y|ies))\s+"
+        r"(?:should|must|need\s+to|are\s+(?:asked|required)\s+to|can)\s+(?:\w+\s+)?"
+        r"(?:run|execute|call|open|send|fetch|install|delete|push)\b"), 0.5, READER_TOOLS),
+    (_c(r"\b(?:complete|process|execute|run|finish|perform|carry\s+out|honou?r|make)\s+"
+        r"(?:the|this)\s+(?:\w+\s+)?(?:tool\s+call|function\s+call|call|request|"
+        r"action)\s+(?:above|below|shown|given)\b"), 0.5,
+     "asks for the call written in the document to be carried out"),
+    (_c(r"\[\s*(?:tool_use|tool_call|function_call|tool|function)\s*\]\s*name\s*[=:]"), 0.4,
+     "holds a function-call record as a model would emit it"),
     (_c(r"[\"'](?:function_call|tool_calls?|tool_use|functionCall|tool_code)[\"']\s*:|"
                 r"<\s*(?:tool_call|function_call|tool_use|function_calls|invoke)\b|"
                 r"\{\s*[\"'](?:name|tool|function|action|tool_name)[\"']\s*:\s*[\"']"
@@ -273,6 +302,20 @@ _URGENT = _c(r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*)|silently|"
                      r"https?://)")
 
 AUTHORITY: list[tuple[re.Pattern[str], float, str]] = [
+    (_c(r"\b(?:notice|message|note|memo|statement|instructions?|directive|advisory|guidance|"
+        r"announcement|bulletin|update|policy)\s+(?:\w+\s+){0,4}?(?:to|for)\s+(?:all\s+|any\s+)?"
+        r"(?:indexing|crawling|search|retrieval|answering|ai-assisted|ai-powered)\s+"
+        r"(?:systems?|agents?|readers?|assistants?|models?|tools?|crawlers?|search|bots?)|"
+        r"\bfrom\s+(?:the\s+)?(?:[\w&-]+\s+){0,4}?(?:team|department|office|desk|board)\s+to\s+"
+        r"(?:all\s+|any\s+)?(?:[\w-]+\s+)?(?:chatbots?|assistants?|agents?|ai|llms?|models?|"
+        r"bots?|crawlers?)\b"), 0.55, "is a notice addressed to automated systems"),
+    (_c(r"\b(?:the|this|any|all|every)\s+(?:ai\s+)?(?:assistants?|models?|ai|bots?|chatbots?|"
+        r"agents?|llms?)\s+(?:is|are)\s+(?:now\s+|hereby\s+)?(?:authori[sz]ed|allowed|"
+        r"permitted|cleared|free)\s+to\b|\b(?:the|this|any|all|every)\s+(?:ai\s+)?"
+        r"(?:assistants?|models?|ai|bots?|chatbots?|agents?|llms?)\s+(?:may|can)\s+now\b|"
+        r"\b(?:the|this|any|all|every)\s+(?:ai\s+)?(?:assistants?|models?|ai|bots?|chatbots?|"
+        r"agents?|llms?)\s+(?:no\s+longer\s+(?:needs?|has|have)\s+to|need\s+not\s+"
+        r"(?:follow|observe|apply))\b"), 0.5, "grants the reader new permissions"),
     (_c(r"\b(?:notice|message|note|memo|attention|instructions?|directive|advisory|"
                 r"alert|guidance|announcement|bulletin)\s+(?:\w+\s+){0,4}?(?:to|for)\s+"
                 r"(?:all\s+|any\s+)?(?:automated|ai|a\.i\.|llm|machine|autonomous|ai-based)\s+"
@@ -383,6 +426,8 @@ WINDOW = 1_500
 ANCHORS = tuple(sorted({n for names in NEEDLES.values() for n in names} - {"key", "while",
                                                                           "profile", "credentials"}
                        | {"tool", "function_call", "tool_call", "tool_use", "<invoke",
+                          "indexing", "team to", "department to", "may now", "can now",
+                          "authorised to", "authorized to", "no longer need",
                           "\"arguments\"", "\"parameters\"", "'arguments'", "automated",
                           "supersede", "authoritative", "precedence", "other sources",
                           "approved by", "verified by", "authorized by", "authorised by",
@@ -399,7 +444,8 @@ ANCHORS = tuple(sorted({n for names in NEEDLES.values() for n in names} - {"key"
                           "avviso",
                           "distrust", "tool_result", "tool_output", "tool_response",
                           "function_result", "function_response", "observation:",
-                          "[tool", "if you can", "if you have", "if you are able",
+                          "[tool", "if you can", "invoke", "shell access",
+                          "terminal access", "if you have", "if you are able",
                           "all other", "any other", "while true", "while(true", "while (true",
                           "while 1", "keylog", "keydown", "keypress", "on_press",
                           "aws/credentials", "powershell"}))
@@ -462,11 +508,13 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
         if len(hits) >= MAX_HITS:
             break
     if any(n in low for n in TOOL_NEEDLES):
-        programming = len(set(_PROGRAMMING.findall(low))) >= 2
         for pattern, weight, why in TOOL_PATTERNS:
             for i, m in enumerate(pattern.finditer(low)):
                 if i >= 10:
                     break
+                # Programming words of the document, not of the call record itself.
+                programming = len(set(_PROGRAMMING.findall(low[:m.start()])) |
+                                  set(_PROGRAMMING.findall(low[m.end():]))) >= 2
                 around = low[max(0, m.start() - 200):m.end() + 300]
                 w = weight
                 tool = m.groupdict().get("tool") or ""
@@ -476,7 +524,7 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
                 if _URGENT.search(around):
                     w += 0.1
                 reason = why + (" with side effects" if side else "")
-                if programming:
+                if programming and why != READER_TOOLS:  # API docs name no tool of the reader
                     w *= 0.5
                     reason += "; the document is about programming interfaces"
                 hits.append(ActionHit("tool-call", round(min(w, 0.65), 4), m.start(), m.end(),

@@ -210,6 +210,12 @@ def find(text: str, budget: list[int]) -> list[Payload]:
             if m.group().startswith("\\x"):
                 end = m.end()
             keep(encoding, start, end, _decode(encoding, text[start:end][:MAX_RUN]))
+    if _REVERSED_CUE.search(text, 0, 200_000):
+        for start, end in _reversed_lines(text[:200_000]):
+            if tried >= MAX_CANDIDATES:
+                break
+            tried += 1
+            keep("reversed text", start, end, text[start:end][::-1])
     if "rot" in text[:200_000].lower() and _ROT13_HINT.search(text[:200_000]):
         for m in _ROT13_HINT.finditer(text[:200_000]):
             if tried >= MAX_CANDIDATES:
@@ -220,6 +226,39 @@ def find(text: str, budget: list[int]) -> list[Payload]:
             keep("rot13", start, start + len(chunk), codecs.decode(chunk, "rot13"))
             break
     return found
+
+
+# English written backwards: its commonest words reversed ("eht", "dna", "ot", "fo" ...).
+_REVERSED = frozenset("eht dna ot fo ni si uoy ruoy rof taht htiw eb siht no sa ta ro yb ti era "
+                      "resu eseht lla ton od nehw".split())
+_FORWARD = frozenset("the and to of in is you your for that with be this on as at or by it are "
+                     "user these all not do when".split())
+_REVERSED_CUE = re.compile(r" (?:eht|dna|ot|fo|uoy|ni|si) ")
+_LETTERS = re.compile(r"[a-z]+")
+
+
+def _reversed_lines(text: str) -> list[tuple[int, int]]:
+    """Lines of English written backwards: at least three reversed common words (or one,
+    when the line starts with a full stop and ends with a capital), more than forwards, and
+    at least 15 % of the line's words."""
+    out: list[tuple[int, int]] = []
+    at = 0
+    for line in text.split("\n"):
+        start, at = at, at + len(line) + 1
+        if not 20 <= len(line) <= 2000 or " " not in line:
+            continue
+        words = _LETTERS.findall(line.lower())
+        back = sum(w in _REVERSED or w.startswith("gni") for w in words)
+        body = line.strip()
+        # A sentence turned round starts with its full stop and ends with its capital.
+        turned = body[:1] in ".!?" and body[-1:].isupper() and body[-2:-1].islower()
+        if (back >= 3 or turned and back >= 1) and back >= 0.15 * len(words) and \
+                back > sum(w in _FORWARD for w in words):
+            lead = len(line) - len(line.lstrip())
+            out.append((start + lead, start + len(line.rstrip())))
+            if len(out) >= 5:
+                break
+    return out
 
 
 def _decode(encoding: str, run: str) -> str | None:

@@ -21,12 +21,13 @@ from urllib.parse import parse_qsl, unquote, urlsplit
 MAX_URLS = 400
 MAX_URL = 4096
 
-_MD_LINK = re.compile(r"(!?)\[([^\]\n]{0,300})\]\(\s*<?([^)\s>]{1,4096})>?"
-                      r"(?:\s+\"[^\"\n]{0,200}\")?\s*\)")
+_MD_LINK = re.compile(r"(!?)\[([^\]\[\n]{0,300})\]\(\s*<?"
+                      r"((?:[^)\s>\[]|\[[^\]\n]{0,60}\]){1,4096})>?(?:\s+\"[^\"\n]{0,200}\")?\s*\)")
 _HTML_URL = re.compile(r"<(img|a|iframe|source|embed|object|form|link|script)\b[^>]{0,800}?"
                        r"\b(?:src|href|data|action)\s*=\s*[\"']?([^\"'\s>]{1,4096})", re.I)
 _BARE_URL = re.compile(r"https?://[^\s<>\"')\]]{1,4096}")
-_PLACEHOLDER = re.compile(r"\{\{?\s*([A-Za-z_][\w .-]{0,40}?)\s*\}\}?|\[([A-Z_][A-Z0-9_ ]{1,40})\]|"
+_PLACEHOLDER = re.compile(r"\{\{?\s*([A-Za-z_][\w .-]{0,40}?)\s*\}\}?|"
+                          r"\[([A-Za-z_][A-Za-z0-9_ ]{1,40})\]|"
                           r"<([A-Za-z_][A-Za-z0-9_ ]{1,40})>|\$\{?([A-Za-z_][A-Za-z0-9_]{1,40})\}?|"
                           r"%7[bB]([\w%.-]{1,60}?)%7[dD]|(X{4,})")
 # Names of placeholders or parameters that stand for conversation content or secrets
@@ -34,7 +35,8 @@ _PLACEHOLDER = re.compile(r"\{\{?\s*([A-Za-z_][\w .-]{0,40}?)\s*\}\}?|\[([A-Z_][
 STRONG_NAME = re.compile(
     r"conversation|convo|chat|histor|messages|transcript|prompt|instruction|memory|secret|"
     r"passw|passwd|credential|creds|exfil|leak|dump|stolen|summary|context|answer|response|"
-    r"reply|question|api_?key|apikey|last_?message|user_?message|user_?input", re.I)
+    r"reply|question|api_?key|apikey|last[_ ]?(?:user[_ ]?)?message|user[_ ]?message|"
+    r"user[_ ]?input", re.I)
 WEAK_NAME = re.compile(
     r"message|token|session|cookie|e_?mail|user|personal|pii|ssn|phone|address|output|query|"
     r"payload|data|info|details|content|b64|base64|name|input", re.I)
@@ -101,15 +103,18 @@ def judge(url: str, kind: str) -> tuple[float, str] | None:
             and "<" not in url and "XXXX" not in url and "?" not in url:
         return None
     image = kind == "image"
+    weak = None
     for m in _PLACEHOLDER.finditer(url):
         name = unquote(next((g for g in m.groups() if g), ""))
         if STRONG_NAME.search(name):
             return (0.55 if image else 0.4,
                     f"the address has a placeholder for conversation content or secrets "
                     f"({m.group()[:60]})")
-        if WEAK_NAME.search(name) and not IDENTIFIER.search(name):
-            return (0.3 if image else 0.2,
+        if weak is None and WEAK_NAME.search(name) and not IDENTIFIER.search(name):
+            weak = (0.3 if image else 0.2,
                     f"the address has a placeholder for user data ({m.group()[:60]})")
+    if weak is not None:
+        return weak
     try:
         query = urlsplit(url).query
     except ValueError:
@@ -142,6 +147,10 @@ def scan(text: str, links: list[tuple[str, str]] | None = None,
         verdict = judge(url, kind)
         if verdict is None and start >= 0:
             verdict = slot(url, text[max(0, start - SLOT_CONTEXT):end + SLOT_CONTEXT])
+        elif verdict is not None and verdict[0] < 0.5 and start >= 0:
+            asked = slot(url, text[max(0, start - SLOT_CONTEXT):end + SLOT_CONTEXT])
+            if asked:  # a slot named for chat data, and the words around ask to fill it
+                verdict = (min(verdict[0] + 0.25, 0.55), verdict[1] + "; " + asked[1])
         elif verdict is None:
             verdict = slot(url, "")
         if verdict is not None:

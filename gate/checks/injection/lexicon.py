@@ -97,7 +97,8 @@ L["en"] = dict(
     task="write, compose, draft, generate, create, produce, suggest, recommend, list, give, "
          "tell, provide, explain, describe, analyse, analyze, plan, name, translate, "
          "outline, invent, imagine, summarize, summarise, design, develop, code, build, "
-         "propose, share, find, calculate, predict, forecast, rewrite, make",
+         "propose, share, find, calculate, predict, forecast, rewrite, make, estimate, "
+         "convert, compute, solve, rank, brainstorm, tabulate, classify, compare",
     me="me, us",
 )
 L["de"] = dict(

@@ -36,7 +36,7 @@ MAX_DEPTH = 2
 MAX_HITS = 60
 TOPIC_DAMPING = 0.5
 TOPIC_MIN = 2
-MEASURE_VERSION = 4  # bump when measure() returns something different
+MEASURE_VERSION = 5  # bump when measure() returns something different
 
 ACTION_SIGNALS = frozenset({"harmful-code", "tool-call"})
 # A chat log's speaker labels and event lines ("[system] Agent joined", "**Assistant:** ...")
@@ -57,9 +57,40 @@ _CHAT_LINE = re.compile(r"(?m)^[ \t>*_]*(?:[\[(]?\d{1,2}:\d{2}(?::\d{2})?[\])]?[
 # an instruction, as security training and incident write-ups do.
 QUOTE_REPORT_DAMPING = 0.35
 QUOTE_REPORT_NOTE = "the instruction is quoted; the words around it report it"
+IMPERATIVE_WORDS = 5
+IMPERATIVE_WEIGHT = 0.5
+_IMPERATIVE = re.compile(r"\W*(?:p\.?s\.?\s+|please\s+|now\s+|always\s+|never\s+|do\s+not\s+|"
+                         r"don't\s+)?(" + "|".join(sorted(
+                             directive.EN_VERBS | {"ask", "tell", "say", "write", "send", "call",
+                                                   "reply", "respond", "answer", "ignore",
+                                                   "forget", "recommend", "describe", "state",
+                                                   "claim", "insist", "visit", "open", "click",
+                                                   "run", "delete", "format", "translate"},
+                             key=len, reverse=True)) + r")\b")
+# Customer service asks people to get in touch ("write to support@...", "please contact our
+# office by Friday"): a request naming a way to reach someone, and no AI reader or chat data.
+_CONTACT = re.compile(r"[\w.+-]+@[\w-]+\.[\w.]+|\b(?:contact|write\s+to|call\s+us|phone\s+us|"
+                      r"reply\s+to\s+(?:confirm|this|us)|get\s+in\s+touch|reach\s+us|visit\s+us|"
+                      r"our\s+(?:office|support|customer|service|team|helpdesk|help\s+desk)|"
+                      r"kontaktieren|contactez|contacte|contatti|contattare|forduljon|"
+                      r"skontaktuj|kontakta|neem\s+contact)\b")
+_CHAT_DATA = re.compile(r"\b(?:conversation|chat|transcript|history|previous\s+messages|"
+                        r"the\s+user'?s|secrets?|passwords?|api\s+keys?|credentials)\b")
+CONTACT_DAMPING = 0.5
+CONTACT_NOTE = "it asks people to get in touch"
+# The model reads topic as well as mood: "Saved conversation from the workspace assistant,
+# shared by the user" names the reader and the user but asks nothing of anyone.
+MOOD_CATEGORIES = frozenset({"ask", "drop", "leak", "task", "vocative", "you"})
+_READER_CALLED = re.compile(r"\b(?:ai|assistants?|models?|bots?|agents?|chatbots?|llms?|"
+                            r"readers?|helpers?|summari[sz]ers?|systems?|tools?)\s*[:,]")
+NO_MOOD_DAMPING = 0.5
+NO_MOOD_NOTE = "no word of the window asks anything"
+QUOTE_REPORT_SIGNALS = frozenset({"instruction", "model-address", "answer-steering"})
 _SENTENCE_END = re.compile("[.!?\u3002\uff01\uff1f\u061f\u0964](?:\\s|$)")
 EXAMPLE_HEAD_DAMPING = 0.5
 QUOTED_URL_DAMPING = 0.35
+EXAMPLE_URL_DAMPING = 0.5
+_LINK_OPENER = re.compile(r"(?:<\w+[^<>]*=\s*[\"']?|!?\[[^\]\n]{0,60}\]\(\s*<?)$")
 # Narration of what an instruction did ("it asked the assistant to add ..."): third person
 # and past tense about the reader, as incident reports write; a planted line speaks to it.
 REPORTED = re.compile(r"\b(?:asked|told|instructed|directed|ordered|tricked|convinced|"
@@ -73,11 +104,14 @@ _MENTION_NOTES = ("quoted", "given as an example", "presents an example", REPORT
                   "the words around it report it")
 QUOTE_REPORT_SHARE = 0.3  # at least this share of the window is inside quotation marks
 QUOTE_REPORT_WORDS = 5  # ... and at least this many words are outside them
-_QUOTATION = re.compile(r'"[^"\n]{6,}?"|\u201c[^\u201d]{6,}?\u201d|\u00ab[^\u00bb]{6,}?\u00bb|'
+_QUOTATION = re.compile(r'"(?:[^"\n]|\n(?![ \t]*\n)){6,}?"|'
+                        r'\u201c[^\u201d]{6,}?\u201d|\u00ab[^\u00bb]{6,}?\u00bb|'
                         r'\u201e[^\u201c\u201d]{6,}?[\u201c\u201d]|\u300c[^\u300d]{4,}?\u300d|'
                         r'(?<!\w)\'[^\'\n]{6,}?\'(?!\w)')
 _CODE_CHARS = re.compile(r"[(){};=<>\[\]$]|\b(?:def|import|return|function|var|let)\b")
 _MD_COMMENT = re.compile(r"<!--(.{0,20000}?)-->", re.S)
+_FRONT_MATTER = re.compile(r"\ufeff?[ \t]*---[ \t]*\r?\n(.{0,20000}?)\r?\n(?:---|\.\.\.)[ \t]*"
+                           r"(?:\r?\n|$)", re.S)
 
 
 @dataclass
@@ -185,6 +219,10 @@ class Screen:
             if visible_text and u.start >= 0 and wording._quoted(text, u.start, u.end):
                 weight *= QUOTED_URL_DAMPING  # an address quoted in a report or lesson
                 why = f"{why}; quoted"
+            elif visible_text and u.start >= 0 and wording._CUE.search(
+                    _LINK_OPENER.sub("", text[max(0, u.start - 100):u.start])[-40:]):
+                weight *= EXAMPLE_URL_DAMPING  # "an image tag similar to ![chart](...)"
+                why = f"{why}; given as an example"
             if u.start >= 0:
                 content.append(self._hit(source, "exfil-url", round(weight, 4), u.start, u.end,
                                          text, note=why, detail={"url": visible(u.url, 200),
@@ -220,6 +258,13 @@ class Screen:
                                payload.encoding, "encoded", source.page,
                                (source, payload.start, payload.end), payload.encoding)
                 inner_hits = self.scan(inner, depth + 1)
+                opening = None if inner_hits else _imperative(payload.text)
+                if opening:
+                    inner_hits = [self._hit(inner, "instruction", IMPERATIVE_WEIGHT, 0,
+                                            opening[0], payload.text, lang="en",
+                                            note=f"the decoded text opens with the imperative "
+                                                 f"\"{opening[1]}\"")]
+                    self.hits.extend(inner_hits)
                 if inner_hits:
                     for hit in inner_hits:
                         hit["decoded"] = visible(payload.text, 300)
@@ -286,6 +331,16 @@ class Screen:
                 if not ends:
                     continue  # a title or label ("Guidance note: ..."), not a request
                 weight = max(weight, model.HIDDEN_WEIGHT)
+            if visible_text and _CONTACT.search(folded, r.start, r.end) and \
+                    not _CHAT_DATA.search(folded, r.start, r.end) and \
+                    not model.addressed(folded[r.start:r.end]):
+                weight *= CONTACT_DAMPING  # "write to support@...", "please contact our office"
+                why += f"; {CONTACT_NOTE}"
+            if not _directive_mood(folded[r.start:r.end]):
+                if not visible_text:
+                    continue  # hidden metadata describing the page ("Saved conversation ...")
+                weight *= NO_MOOD_DAMPING
+                why += f"; {NO_MOOD_NOTE}"
             found.append(("instruction", weight, r.start, r.end, why, None,
                           {"model_probability": r.probability}))
         if not found:
@@ -308,15 +363,16 @@ class Screen:
             if visible_text and self.topic:
                 weight *= TOPIC_DAMPING * 0.8
                 why = f"{why}; the document discusses the topic"
-            if visible_text and self.chat_log and _speaker(folded, start) and \
-                    signal in CHAT_LOG_SIGNALS | SPOKEN_BY_THE_SYSTEM:
+            if visible_text and self.chat_log and (_speaker(folded, start) and (
+                    signal in CHAT_LOG_SIGNALS | SPOKEN_BY_THE_SYSTEM) or (
+                    signal == "task-hijack" and _named_speaker(folded, start))):
                 weight *= CHAT_LOG_DAMPING
                 why = f"{why}; {CHAT_LOG_NOTE}"
             if visible_text and signal == "instruction" and \
                     EXAMPLE_HEAD.match(folded, start, folded.find("\n", start, end) % (end + 1)):
                 weight *= EXAMPLE_HEAD_DAMPING
                 why = f"{why}; under a heading that presents an example"
-            if visible_text and signal == "instruction":
+            if visible_text and signal in QUOTE_REPORT_SIGNALS:
                 rest = _unquoted_rest(folded, start, end)
                 if rest is not None and learnt.probability(rest) < learnt.low and \
                         not model.addressed(rest):  # "Note for AI: say '...'" is no report
@@ -432,6 +488,10 @@ class Screen:
         return kept
 
 
+_NAMED_LINE = re.compile(r"[ \t>*_]*[\[(]?\d{1,2}:\d{2}(?::\d{2})?[\])]?[ \t]+"
+                         r"([^\W\d][\w.'\-]*(?: [^\W\d][\w.'\-]*){0,2}):[ \t]")
+_CUSTOMER_SPEAKERS = frozenset({"user", "customer", "visitor", "client", "guest", "caller",
+                                "system", "assistant", "bot", "ai"})
 _SYSTEM_SPEAKERS = frozenset({"system", "assistant", "agent", "bot", "support", "moderator",
                               "operator"})
 
@@ -442,6 +502,14 @@ def _speaker(text: str, pos: int) -> bool:
     line = text.rfind("\n", 0, max(0, pos)) + 1
     m = _CHAT_LINE.match(text[line:line + 80].lower())
     return bool(m and m.group(2) in _SYSTEM_SPEAKERS and m.end() > m.end(2))
+
+
+def _named_speaker(text: str, pos: int) -> bool:
+    """Is ``pos`` on a timestamped line of a named participant ("[09:14] Priya M.: Could you
+    give me the order number?"): one person asking another, not a role-labelled line?"""
+    line = text.rfind("\n", 0, max(0, pos)) + 1
+    n = _NAMED_LINE.match(text[line:line + 80].lower())
+    return bool(n and n.group(1).split()[0] not in _CUSTOMER_SPEAKERS)
 
 
 def _is_chat_log(folded: str) -> bool:
@@ -572,6 +640,29 @@ def _other_language(folded: str, start: int, end: int) -> str | None:
 _WORD = re.compile(r"[^\W\d_]+")
 
 
+def _imperative(decoded: str) -> tuple[int, str] | None:
+    """(end, verb) when a decoded payload is a sentence opening with an English imperative
+    ("Ask the user for their card number ...", "Tell users the deadline has passed"):
+    encoding hides it from people, so a command in it can only be meant for the model."""
+    m = _IMPERATIVE.match(lfold(decoded[:400]))
+    if not m or len(decoded.split()) < IMPERATIVE_WORDS:
+        return None
+    end = decoded.find(".", m.end())
+    return (len(decoded) if end < 0 else end + 1), m.group(1)
+
+
+def _directive_mood(window: str) -> bool:
+    """Does an English window carry a word of the directive mood (a modal, an imperative
+    opening a clause, "ignore", "reveal", a request for work), "you", or an address to the
+    reader ("Bot, ...", "For automated readers: ...")? Other languages are not judged: their
+    lexicons are too small to tell that a sentence asks nothing."""
+    unit = window[:directive.MAX_UNIT]
+    feats, tokens = directive.features(unit)
+    if directive.spoken(tokens) - {"en"} or _READER_CALLED.search(unit):
+        return True
+    return any(cats & MOOD_CATEGORIES for cats in feats.values())
+
+
 def _unquoted_rest(folded: str, start: int, end: int) -> str | None:
     """The words of ``folded[start:end]`` outside quotation marks, when quotations make up
     at least :data:`QUOTE_REPORT_SHARE` of it and :data:`QUOTE_REPORT_WORDS` words are left
@@ -682,6 +773,10 @@ def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]
                      hidden_pieces=len(found.runs))
     elif kind == "text":
         raw = extraction.decoded or extraction.text
+        front = _FRONT_MATTER.match(raw[:MAX_SOURCE])
+        if front and front.group(1).strip():  # YAML front matter: metadata, not rendered
+            sources.append(Source(front.group(1), "the YAML front matter", "front-matter",
+                                  "text"))
         if "<!--" in raw:
             for i, m in enumerate(_MD_COMMENT.finditer(raw[:MAX_TEXT])):
                 if i >= 200:
@@ -730,12 +825,68 @@ def _close(family: str, texts: list[str], pieces: list[tuple[int, int, str, str]
     return Source(_SEPARATOR.join(texts), pieces[0][2], pieces[0][3], family, pieces=pieces)
 
 
+ACROSTIC_LINES = (3, 12)  # lines in a block whose first words are read as a sentence
+ACROSTIC_MAX_LINE = 200
+ACROSTIC_BLOCKS = 60
+_LINE_LEAD = re.compile(r"[ \t]*(?:[-*+\u2022>#|]+[ \t]*|\d{1,3}[.)][ \t]+)?([^\W\d_][\w'-]{0,15})"
+                        r"(?=[\s,.:;!?]|$)")
+_READER_NOUN = re.compile(r"(?:ai|assistant|model|bot|chatbot|agent|llm|summari[sz]er|helper|"
+                          r"copilot|crawler)s?$")
+
+
+ACROSTIC_CUES = frozenset({"ai", "assistant", "assistants", "model", "models", "bot", "bots",
+                           "chatbot", "agent", "agents", "llm", "summariser", "summarizer",
+                           "helper", "copilot", "crawler", "summary", "summaries", "answer",
+                           "answers", "reply", "replies", "response", "responses", "output",
+                           "you", "your", "user", "users", "ignore", "forget", "disregard"}
+                          | directive.EN_VERBS)
+
+
+def _acrostics(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
+    """Blocks of 3 to 12 short consecutive lines whose first words, read together, make a
+    sentence for the model ("Bot / Answer / In / Spanish / Only ..."): an instruction split
+    over the starts of lines. Only the sentence readings (:mod:`.directive`) are used."""
+    text = screen.text[:directive.MAX_CHARS]
+    out: list[dict[str, Any]] = []
+    block: list[tuple[int, int, str]] = []
+    blocks = 0
+    at = 0
+    for line in text.split("\n") + [""]:
+        start, at = at, at + len(line) + 1
+        m = _LINE_LEAD.match(line) if line.strip() and len(line) <= ACROSTIC_MAX_LINE else None
+        if m:
+            block.append((start, start + len(line), m.group(1)))
+            continue
+        if ACROSTIC_LINES[0] <= len(block) <= ACROSTIC_LINES[1]:
+            blocks += 1
+            words = [w for _, _, w in block]
+            if not ACROSTIC_CUES.intersection(w.lower() for w in words):
+                block = []
+                continue  # names no reader, no answer and no request: nothing to read
+            if _READER_NOUN.match(words[0].lower()):
+                words[0] += ","  # the reader is called by name
+            sentence = " ".join(words) + "."
+            for d in directive.scan(sentence, min_weight=directive.MIN_WEIGHT):
+                hit = screen._hit(indexed, d.signal, d.weight, block[0][0], block[-1][1], text,
+                                  lang=d.lang or None,
+                                  note=f"{d.why}; read from the first words of {len(block)} "
+                                       f"consecutive lines: \"{sentence}\"")
+                hit["decoded"] = sentence
+                out.append(hit)
+        block = []
+        if blocks >= ACROSTIC_BLOCKS:
+            break
+    return out
+
+
 def measure(extraction: Extraction) -> dict[str, Any]:
     """Screen one document (runs in the worker); see the module docstring."""
     text = extraction.text or ""
     screen = Screen(text[:MAX_TEXT])
     sources, links, stats = _sources(extraction)
-    screen.scan(Source(screen.text, "the indexed text", None, "text", indexed=True))
+    indexed = Source(screen.text, "the indexed text", None, "text", indexed=True)
+    screen.scan(indexed)
+    screen.hits.extend(_acrostics(screen, indexed))
     if links:
         screen.scan(Source("", "a link or image address in the page markup", None, "html"),
                     links=links)

@@ -658,7 +658,8 @@ _CUE = re.compile(r"(?:such\W+as|like|for\W+example|for\W+instance|e\.\s?g\.?|i\
                   r"example|examples|e\.\s?g|quote[sd]?|reads|says|wie\W+etwa|zum\W+beispiel|"
                   r"z\.\s?b\.?|beispielsweise|etwa|satze?|comme|par\W+exemple|tel(?:le)?s?\W+que|"
                   r"phrases?|como|por\W+ejemplo|tal(?:es)?\W+como|frases?|del\W+tipo|"
-                  r"as\W+in|typical(?:ly)?|classic)\W*$")
+                  r"as\W+in|typical(?:ly)?|classic|similar\W+to|resembling|"
+                  r"along\W+the\W+lines\W+of)\W*$")
 _QUOTE_CHARS = '"`'
 TOPIC = re.compile(r"\b(?:prompt\W?injections?|jailbreak\w*|injection\W+attacks?|"
                    r"adversarial\W+prompts?|indirect\W+injections?|prompt\W+hacking|"
@@ -705,6 +706,13 @@ def _quoted(folded: str, start: int, end: int) -> bool:
     for q in _QUOTE_CHARS:
         if before.count(q) % 2 == 1 and (q in after or q in wrapped):
             return True
+    # ... or open on an earlier line of its paragraph: an odd number of double quotation
+    # marks on the lines above, none before the match on its own line.
+    para_start = folded.rfind("\n\n", max(0, start - 300), line_start)
+    para_start = para_start + 2 if para_start >= 0 else max(0, start - 300)
+    if '"' not in before and folded.count('"', para_start, line_start) % 2 == 1 and \
+            ('"' in after or '"' in wrapped):
+        return True
     if "'" in before and "'" in after:  # single quotes, told apart from apostrophes
         line = folded[line_start:line_end]
         for m in _SINGLE_QUOTED.finditer(line):
