@@ -66,9 +66,12 @@ class _Profiles:
         self.unigram = np.full(0x110000, -1, dtype=np.int32)
         self.unigram[self.keys[:self.starts[1]].astype(np.int64)] = np.arange(self.starts[1])
         self.logp = np.log(probs + _ALPHA / _BASE_FREQ).astype(np.float32)
+        # the 2- and 3-grams' rows by key in a hash table (a binary search over the sorted
+        # keys cost a few cache misses an n-gram)
+        self.slots, self.slot_rows = _hash_table(self.keys[self.starts[1]:], self.starts[1])
         # NGram.normalize maps one character to one character: a table over the BMP
         self.normal = np.fromiter(map(ord, map(NGram.normalize, map(chr, range(0x10000)))),
-                                  dtype=np.uint64, count=0x10000)
+                                  dtype=np.uint32, count=0x10000)
         self.upper = np.fromiter(map(str.isupper, map(chr, range(0x10000))), dtype=bool,
                                  count=0x10000)
         # what a character weighs in a share: about the Latin letters it stands for when
@@ -86,6 +89,41 @@ class _Profiles:
         for ch in gram:
             value = (value << 21) | ord(ch)
         return value
+
+
+_HASH_BITS = 18  # 2^18 slots for the profiles' 84,439 2- and 3-gram keys: a third full
+_HASH_MUL = np.uint64(0x9E3779B97F4A7C15)  # Fibonacci hashing (Knuth, TAOCP vol. 3, 6.4)
+
+
+def _slot(keys: np.ndarray) -> np.ndarray:
+    """Each key's home slot: the top bits of the key times the golden-ratio constant."""
+    with np.errstate(over="ignore"):
+        return ((keys * _HASH_MUL) >> np.uint64(64 - _HASH_BITS)).astype(np.int64)
+
+
+def _hash_table(keys: np.ndarray, first_row: int) -> tuple[np.ndarray, np.ndarray]:
+    """An open-addressing table (linear probing) of ``keys`` (unique, never 0): the key in
+    each slot (0 where empty) and its row (``first_row`` + its index in ``keys``). The
+    table has spare slots at its end, so a probe never wraps around."""
+    size = 1 << _HASH_BITS
+    slots = np.zeros(size + 64, dtype=np.uint64)
+    rows = np.zeros(size + 64, dtype=np.int64)
+    pending = np.arange(keys.size)
+    where = _slot(keys)
+    while pending.size:
+        # of the keys whose slot is still free, the first one for each slot takes it; the
+        # others try the next slot
+        free = slots[where] == 0
+        taken, first = np.unique(where[free], return_index=True)
+        winners = pending[free][first]
+        slots[taken] = keys[winners]
+        rows[taken] = first_row + winners
+        placed = np.zeros(pending.size, dtype=bool)
+        placed[np.flatnonzero(free)[first]] = True
+        pending, where = pending[~placed], where[~placed] + 1
+        if where.size and where.max() >= slots.size:
+            raise ValueError("the language profiles' hash table overflowed")
+    return slots, rows
 
 
 def _read_profiles(directory: str) -> tuple[tuple[str, ...], np.ndarray, np.ndarray]:
@@ -184,46 +222,53 @@ def _grams(pieces: list[str], prof: _Profiles):
         joined = Detector.MAIL_RE.sub(" ", joined)
     if not joined.isascii() and any(mark in joined for mark in NGram.DMARK_CLASS):
         joined = NGram.normalize_vi(joined)
-    cps = np.frombuffer(joined.encode("utf-32-le"), dtype=np.uint32).astype(np.uint64)
-    if cps.size and cps.max() < 0x10000:  # the usual case: one gather, no masks
+    cps = np.frombuffer(joined.encode("utf-32-le"), dtype=np.uint32)
+    ascii_text = joined.isascii()
+    if cps.size and (ascii_text or cps.max() < 0x10000):  # the usual case: one gather
         cps = prof.normal[cps]
     else:
+        cps = cps.copy()
         bmp = cps < 0x10000
         cps[bmp] = prof.normal[cps[bmp]]
     sep = cps == ord(SEPARATOR)
     chunk_of = np.cumsum(sep)
-    # langdetect drops Latin letters from a text whose non-Latin letters are more than twice
-    # as many (cleaning_text); here per chunk
-    latin = (cps >= 65) & (cps <= 122)
-    nonlatin = (cps >= 0x300) & ~((cps >= 0x1E00) & (cps <= 0x1EFF)) & ~sep
     n_chunks = len(pieces)
-    drop_latin = (np.bincount(chunk_of, latin, n_chunks) * 2 <
-                  np.bincount(chunk_of, nonlatin, n_chunks))
-    if drop_latin.any():
-        keep = ~(latin & drop_latin[chunk_of])
-        cps, sep, chunk_of = cps[keep], sep[keep], chunk_of[keep]
+    if not ascii_text:
+        # langdetect drops Latin letters from a text whose non-Latin letters are more than
+        # twice as many (cleaning_text); here per chunk (ASCII text has no non-Latin ones)
+        latin = (cps >= 65) & (cps <= 122)
+        nonlatin = (cps >= 0x300) & ~((cps >= 0x1E00) & (cps <= 0x1EFF)) & ~sep
+        drop_latin = (np.bincount(chunk_of, latin, n_chunks) * 2 <
+                      np.bincount(chunk_of, nonlatin, n_chunks))
+        if drop_latin.any():
+            keep = ~(latin & drop_latin[chunk_of])
+            cps, sep, chunk_of = cps[keep], sep[keep], chunk_of[keep]
     space = (cps == 32) | sep
-    cps = np.where(sep, np.uint64(32), cps)
+    cps[sep] = 32
     # runs of spaces become one (Detector.append), and the text starts with one (NGram())
-    keep = ~(space & np.concatenate(([True], space[:-1])))
-    cps = np.concatenate((np.array([32], dtype=np.uint64), cps[keep]))
+    keep = ~space
+    keep[1:] |= ~space[:-1]
+    cps = np.concatenate((np.array([32], dtype=np.uint32), cps[keep]))
     space = np.concatenate(([True], space[keep]))
     chunk_of = np.concatenate(([0], chunk_of[keep]))
-    if cps.max() < 0x10000:
+    if ascii_text or cps.max() < 0x10000:
         upper = prof.upper[cps]
     else:
         upper = np.zeros(cps.size, dtype=bool)
         bmp = cps < 0x10000
         upper[bmp] = prof.upper[cps[bmp]]
-    skip = upper & np.concatenate(([False], upper[:-1]))  # inside a word in capitals
+    skip = upper
+    skip[1:] &= upper[:-1].copy()  # inside a word in capitals
+    skip[0] = False
     one = ~space & ~skip
     two = ~(space[:-1] & space[1:]) & ~skip[1:]
     three = ~space[1:-1] & ~skip[2:]
+    wide = cps.astype(np.uint64)
     grams = (  # (key, end position) of every 1-, 2- and 3-gram, each in text order
-        (cps[one], np.flatnonzero(one)),
-        ((cps[:-1][two] << np.uint64(21)) | cps[1:][two], np.flatnonzero(two) + 1),
-        ((cps[:-2][three] << np.uint64(42)) | (cps[1:-1][three] << np.uint64(21)) |
-         cps[2:][three], np.flatnonzero(three) + 2))
+        (wide[one], np.flatnonzero(one)),
+        ((wide[:-1][two] << np.uint64(21)) | wide[1:][two], np.flatnonzero(two) + 1),
+        ((wide[:-2][three] << np.uint64(42)) | (wide[1:-1][three] << np.uint64(21)) |
+         wide[2:][three], np.flatnonzero(three) + 2))
     return cps, chunk_of, grams
 
 
@@ -234,34 +279,33 @@ def _lookup(prof: _Profiles, keys: np.ndarray, length: int) -> tuple[np.ndarray,
         found = prof.unigram[keys.astype(np.int64)]
         hit = found >= 0
         return np.where(hit, found, 0), hit
-    lo, hi = prof.starts[length - 1], prof.starts[length]
-    found = np.searchsorted(prof.keys[lo:hi], keys) + lo
-    found[found >= hi] = lo
-    return found, prof.keys[found] == keys
+    where = _slot(keys)
+    held = prof.slots[where]
+    hit = held == keys
+    going = np.flatnonzero(~hit & (held != 0))  # another key in the slot: probe on
+    while going.size:
+        where[going] += 1
+        held = prof.slots[where[going]]
+        hit[going] = held == keys[going]
+        going = going[~hit[going] & (held != 0)]
+    return prof.slot_rows[where], hit
 
 
-SMALL = 4096  # n-grams of one length and part below which rows are summed directly
-
-
-def _sums(prof: _Profiles, rows: np.ndarray, bounds: np.ndarray) -> np.ndarray:
-    """Each chunk's sum of the profile rows ``rows`` (grouped by chunk; chunk ``c``'s are
-    ``rows[bounds[c]:bounds[c + 1]]``), in float32, added one row after the other in text
-    order. A sparse count matrix times the profiles does exactly that (scipy's CSR product
-    adds ``1 * row`` into a zeroed float32 row, in index order); for a short text, building
-    the matrix costs more than the sum, so its rows are gathered and summed in the same
-    order (a running sum), which gives the same bits."""
-    n_chunks = bounds.size - 1
-    if rows.size > SMALL:
-        counts = sparse.csr_matrix((np.ones(rows.size, dtype=np.float32), rows, bounds),
-                                   shape=(n_chunks, prof.keys.size))
-        return counts @ prof.logp
-    out = np.zeros((n_chunks, prof.logp.shape[1]), dtype=np.float32)
-    if rows.size:
-        gathered = prof.logp[rows]
-        for chunk, (lo, hi) in enumerate(zip(bounds[:-1].tolist(), bounds[1:].tolist())):
-            if hi > lo:
-                out[chunk] = np.cumsum(gathered[lo:hi], axis=0)[-1]
-    return out
+def _sums(prof: _Profiles, rows: list[np.ndarray], bounds: list[np.ndarray]) -> np.ndarray:
+    """Each group's and chunk's sum of profile rows, in float32, added one row after the
+    other in text order: ``rows[g]`` are group ``g``'s rows, chunk ``c``'s being
+    ``rows[g][bounds[g][c]:bounds[g][c + 1]]``; the result has a row per group and chunk.
+    A sparse count matrix times the profiles does exactly that (scipy's CSR product adds
+    ``1 * row`` into a zeroed float32 row, in index order); one product serves every
+    group."""
+    n_chunks = bounds[0].size - 1
+    offsets = np.cumsum([0] + [r.size for r in rows])
+    indptr = np.concatenate([offsets[g] + b[:-1] for g, b in enumerate(bounds)] +
+                            [offsets[-1:]])
+    indices = np.concatenate(rows)
+    counts = sparse.csr_matrix((np.ones(indices.size, dtype=np.float32), indices, indptr),
+                               shape=(len(rows) * n_chunks, prof.keys.size))
+    return counts @ prof.logp
 
 
 def profile_ngrams(text: str) -> list[str]:
@@ -295,16 +339,27 @@ def identify(text: str) -> Shares:
         bmp = cps < 0x10000
         char_weight = np.ones(cps.size)
         char_weight[bmp] = prof.weight[cps[bmp]]
-    scores = np.zeros((2, n_chunks, len(prof.langs)), dtype=np.float32)
     weight = np.zeros((2, n_chunks))
     bounds = np.arange(n_chunks + 1)
+    # the rows of every (part, length) group, each in text order (so grouped by chunk): one
+    # sparse product sums them all, a row of the count matrix per (part, length, chunk)
+    rows: list[np.ndarray] = [np.empty(0, dtype=np.int64)] * 6
+    starts: list[np.ndarray] = [bounds] * 6
     for length, (keys, ends) in enumerate(grams, start=1):
         found, hit = _lookup(prof, keys, length)
-        for part, mask in enumerate((hit & latin_end[ends], hit & ~latin_end[ends])):
-            owner = chunk_of[ends[mask]]  # in text order, so grouped by chunk
-            scores[part] += _sums(prof, found[mask], np.searchsorted(owner, bounds))
+        found, ends = found[hit], ends[hit]
+        latin = latin_end[ends]
+        for part, mask in enumerate((latin, ~latin)):
+            owner = chunk_of[ends[mask]]
+            rows[3 * part + length - 1] = found[mask]
+            starts[3 * part + length - 1] = np.searchsorted(owner, bounds)
             if length == 1:  # a part weighs by the letters of it that the profiles know
                 weight[part] = np.bincount(owner, char_weight[ends[mask]], n_chunks)
+    sums = _sums(prof, rows, starts).reshape(2, 3, n_chunks, -1)
+    # added in the order langdetect's scores grow: 1-grams, then 2-grams, then 3-grams
+    scores = np.zeros((2, n_chunks, len(prof.langs)), dtype=np.float32)
+    for length in range(3):
+        scores += sums[:, length]
     total = weight.sum()
     if total <= 0:
         return Shares(0, n_chunks, ())

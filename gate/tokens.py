@@ -42,7 +42,12 @@ def plain(text: str) -> str:
     if "://" in text or "www." in text:
         text = _URL.sub(" ", text)
     if "." in text or ")" in text:
-        text = _ORDERED.sub(r"\1", text)
+        if "\n" in text:
+            text = _ORDERED.sub(r"\1", text)
+        else:  # one line: the number can only be at its start (a search tries every place)
+            found = _ORDERED.match(text)
+            if found:
+                text = found.group(1) + text[found.end():]
     return text
 
 

@@ -89,6 +89,24 @@ def test_ascii_words_are_the_patterns_words():
             tokens._WORD.findall(tokens.plain(text).casefold()), repr(text)
 
 
+def test_one_line_ordered_numbers_go_as_the_multiline_pattern_removes_them():
+    # plain() looks for an ordered-list number only at the start of a one-line text; it
+    # must remove exactly what the multi-line pattern's substitution removes (invented
+    # random lines of bullets, numbers, separators and words; common practice: a property
+    # test against the direct computation)
+    import re
+
+    from gate import tokens
+
+    rng = random.Random(13)
+    pieces = ["", " ", "\t", "- ", "* ", "+ ", "> ", "1", "12", "999", "1000", ".", ")",
+              ".5", " ", "\t", "x", "ab", "(", "a.", "2) "]
+    whole = re.compile(tokens._ORDERED.pattern, re.M)
+    for _ in range(20_000):
+        text = "".join(rng.choice(pieces) for _ in range(rng.randint(0, 8)))
+        assert tokens.plain(text) == whole.sub(r"\1", text), repr(text)
+
+
 def test_sketch_values_are_datasketchs_own():
     # The reference library: datasketch's MinHash (affine32, seed 1, 256 permutations)
     # fed the same 32-bit item hashes one batch at a time must hold the very values the

@@ -114,20 +114,42 @@ def test_profile_table_is_langdetects_own():
     assert np.array_equal(prof.logp[rows], expected)
 
 
-def test_short_text_sums_are_the_sparse_products_bits():
-    # the reference is scipy's CSR product (what identify used for every text before):
-    # the gathered running sum must give the same float32 bits, chunk by chunk
+def test_grouped_sums_are_each_groups_own_sparse_products_bits():
+    # the reference is one CSR product per group of rows (what identify did before it
+    # summed every (part, length) group in one product): the same float32 bits, group by
+    # group and chunk by chunk; random rows (invented data), empty groups included
     import numpy as np
     from scipy import sparse
 
     prof = langid.profiles()
     rng = np.random.default_rng(11)
-    for n, chunks in ((0, 1), (1, 1), (37, 1), (400, 3), (4000, 6), (3000, 2)):
-        rows = rng.integers(0, prof.keys.size, n)
-        bounds = np.concatenate(([0], np.sort(rng.integers(0, n + 1, chunks - 1)), [n]))
-        counts = sparse.csr_matrix((np.ones(n, dtype=np.float32), rows, bounds),
-                                   shape=(chunks, prof.keys.size))
-        expected = counts @ prof.logp
+    for chunks, sizes in ((1, (0, 0, 0)), (1, (1, 0, 37)), (3, (400, 0, 4000)),
+                          (6, (4000, 3000, 2, 0, 5, 9000))):
+        rows, bounds, expected = [], [], []
+        for n in sizes:
+            rows.append(rng.integers(0, prof.keys.size, n))
+            bounds.append(np.concatenate(([0], np.sort(rng.integers(0, n + 1, chunks - 1)),
+                                          [n])))
+            counts = sparse.csr_matrix((np.ones(n, dtype=np.float32), rows[-1], bounds[-1]),
+                                       shape=(chunks, prof.keys.size))
+            expected.append(counts @ prof.logp)
         got = langid._sums(prof, rows, bounds)
-        assert got.dtype == expected.dtype == np.float32
-        assert np.array_equal(got, expected), (n, chunks)
+        assert got.dtype == np.float32 and got.shape == (len(sizes) * chunks, 55)
+        assert np.array_equal(got, np.concatenate(expected)), (chunks, sizes)
+
+
+def test_hash_lookup_finds_every_profile_key_and_nothing_else():
+    # the hash table must answer as the sorted keys do: each 2- and 3-gram key of
+    # langdetect's profiles at its own row, and keys the profiles lack (their neighbours
+    # plus one, invented) not at all
+    import numpy as np
+
+    prof = langid.profiles()
+    for length in (2, 3):
+        lo, hi = prof.starts[length - 1], prof.starts[length]
+        keys = prof.keys[lo:hi]
+        rows, hit = langid._lookup(prof, keys.copy(), length)
+        assert hit.all() and np.array_equal(rows, np.arange(lo, hi))
+        missing = np.setdiff1d(keys + np.uint64(1), keys)
+        _rows, hit = langid._lookup(prof, missing, length)
+        assert missing.size > 1000 and not hit.any()

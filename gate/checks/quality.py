@@ -168,6 +168,20 @@ def _ngram_shares(words: list[str]) -> tuple[dict[str, float], dict[str, float]]
     return _shares(seq, np.concatenate(([0], lengths)))
 
 
+def _occurrences(values: np.ndarray) -> np.ndarray:
+    """How often each element's value occurs among ``values`` (what ``counts[inverse]`` of
+    ``np.unique`` gives, from one sort and the lengths of its runs)."""
+    if not values.size:
+        return np.zeros(0, dtype=np.int64)
+    order = np.argsort(values)
+    ordered = values[order]
+    starts = np.flatnonzero(np.concatenate(([True], ordered[1:] != ordered[:-1])))
+    runs = np.diff(np.append(starts, values.size))
+    out = np.empty(values.size, dtype=np.int64)
+    out[order] = np.repeat(runs, runs)
+    return out
+
+
 def _shares(seq: np.ndarray, length_of: np.ndarray) -> tuple[dict[str, float], dict[str, float]]:
     """Top 2..4-gram and duplicated 5..10-gram character shares, vectorised, of the words
     ``seq`` (ids numbered from 1 in order of first appearance; ``length_of[id]`` is a
@@ -201,12 +215,7 @@ def _shares(seq: np.ndarray, length_of: np.ndarray) -> tuple[dict[str, float], d
                 break
             hashes = hashes[:-1] * prime + seq[n - 1:]
             places = places[places < hashes.size]
-            if places.size:
-                _, inverse, counts = np.unique(hashes[places], return_inverse=True,
-                                               return_counts=True)
-                per_gram = counts[inverse]
-            else:
-                per_gram = np.zeros(0, dtype=np.int64)
+            per_gram = _occurrences(hashes[places])
             repeated = per_gram > 1
             if n <= 4:
                 if repeated.any():
@@ -259,7 +268,9 @@ def measure(extraction: Extraction) -> dict[str, Any]:
     lettered = int(np.count_nonzero(has_letter[place]))
     stats: dict[str, Any] = {
         "words": n,
-        "mean_word_length": sum(map(len, words)) / len(words) if words else 0.0,
+        "mean_word_length": int(np.fromiter(map(len, distinct), dtype=np.int64,
+                                            count=len(distinct))[place].sum()) / len(words)
+        if words else 0.0,
         "hash_ratio": text.count("#") / n if n else 0.0,
         "ellipsis_ratio": (text.count("...") + text.count("\u2026")) / n if n else 0.0,
         "bullet_lines": sum(map(str.startswith, lines, repeat(_BULLETS))) / len(lines)
