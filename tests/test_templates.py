@@ -498,6 +498,30 @@ def test_export_headers_front_matter_and_end_markers_are_not_text():
         "---\nNot front matter here.\n---\nText"
     got = extract((front + body).encode(), max_pages=10, max_nesting=100)
     assert words(got.text) == words(body)
+
+
+def test_an_export_banner_naming_the_organisation_goes_when_the_text_has_its_own_title():
+    """Invented data: an exporter's banner longer than a short one ("<organisation> -
+    plain text export") over ``Key: value`` lines is the exporter's when the text goes on
+    with an underlined or a "#" title; without such a title the first line may be the
+    document's own title over a memo's header, and it all stays (from memory: plain-text
+    exports underline their title with "=" as setext headings do)."""
+    from gate.extract.text import without_export_header
+
+    header = ("Invented Valley Netball League - plain text export\n"
+              "Source: https://www.league.example.org/export/a.txt\nExported: 6 June 2026\n\n")
+    body = ("Tigers v Kestrels moved to 17 June\n==================================\n\n"
+            "Because of a power cut the game will not go ahead.")
+    assert without_export_header(header + body + "\n\n-- end of export --\n") == body
+    atx = "# Tigers v Kestrels moved\n\nThe game will not go ahead."
+    assert without_export_header(header + atx) == atx
+    memo = ("Minutes of the invented parish council's June meeting\n"
+            "Chair: A. N. Other\nDate: 6 June 2026\n\nThe council met at seven.")
+    assert without_export_header(memo) == memo
+    # a banner far longer than a name is a sentence of the document
+    long = ("The invented league's committee met on Monday and agreed the following "
+            "changes to the fixtures list\n" + header.split("\n", 1)[1] + body)
+    assert without_export_header(long) == long
     # a PDF footer of a page number beside the page's address (single page: no repetition)
     from gate.extract.pdf import without_furniture
     assert without_furniture(["Notice\nBody line.\nPage 1 of 1  |  https://x.example.org/a"]) \

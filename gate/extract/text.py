@@ -38,15 +38,32 @@ _MARKER = re.compile(r"^\s*[-=*~#_]{2,}\s*[^\W\d_][\w .'-]{0,40}?\s*[-=*~#_]{2,}
 FRONT_MAX_LINES = 40  # a front matter block longer than this is not one
 HEADER_MAX_LINES = 8  # key lines of an export header
 BANNER_MAX_WORDS = 6
+LONG_BANNER_MAX_WORDS = 14  # "<organisation's name> - plain text export", when the text
+# has a title of its own after the header (an underlined or a "#" heading)
+_UNDERLINE = re.compile(r"^\s*(?:=+|-+|~+)\s*$")
+_ATX = re.compile(r"^\s{0,3}#{1,6}\s+\S")
+
+
+def _titled(lines: list[str]) -> bool:
+    """Whether the first line with words of ``lines`` is a heading: a "#" heading, or a
+    line underlined with "=", "-" or "~" (a setext heading, a plain-text export's title)."""
+    for k, line in enumerate(lines):
+        if line.strip():
+            return bool(_ATX.match(line)) or (
+                k + 1 < len(lines) and bool(_UNDERLINE.match(lines[k + 1])) and
+                not _UNDERLINE.match(line))
+    return False
 
 
 def without_export_header(text: str) -> str:
     """A text without what an exporter or a static-site generator puts around the
     document: YAML (or TOML) front matter at the very start (``---`` ... ``---``), a header
     of two or more ``Key: value`` lines at the very start (after at most one short banner
-    line, such as "Records export") ended by a blank line or a rule, and a last line that is only a
-    marker ("-- end of export --"). None of it is the document's own text, and a copy of
-    the document in another format does not carry it. Anything else is left as it is."""
+    line, such as "Records export", or a longer one naming the exporter, "<organisation> -
+    plain text export", when the text goes on with a title of its own) ended by a blank
+    line or a rule, and a last line that is only a marker ("-- end of export --"). None of
+    it is the document's own text, and a copy of the document in another format does not
+    carry it. Anything else is left as it is."""
     lines = text.split("\n")
     start = 0
     if lines and _FRONT_FENCE.match(lines[0]):
@@ -63,9 +80,10 @@ def without_export_header(text: str) -> str:
         while first < len(lines) and not lines[first].strip():
             first += 1
         i = first
-        if i < len(lines) and not _KEY_LINE.match(lines[i]) and \
-                len(lines[i].split()) <= BANNER_MAX_WORDS:
-            i += 1  # a banner line
+        banner = 0
+        if i < len(lines) and not _KEY_LINE.match(lines[i]):
+            banner = len(lines[i].split())
+            i += 1  # a banner line, perhaps
         while i < len(lines) and lines[i].strip() and _KEY_LINE.match(lines[i]) and \
                 filled < HEADER_MAX_LINES:
             filled += 1
@@ -73,6 +91,11 @@ def without_export_header(text: str) -> str:
         if filled >= 2 and (i >= len(lines) or not lines[i].strip() or
                             _RULE.match(lines[i])):
             start = i + 1 if i < len(lines) and _RULE.match(lines[i]) else i
+            # a longer banner is the exporter's only when the text has its own title
+            # below: otherwise it may be the document's title over a memo's header
+            if banner > BANNER_MAX_WORDS and not (
+                    banner <= LONG_BANNER_MAX_WORDS and _titled(lines[start:])):
+                start = 0
     end = len(lines)
     while end > start and not lines[end - 1].strip():
         end -= 1
