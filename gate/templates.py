@@ -65,7 +65,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import block_hash, words
 
-TEMPLATES_VERSION = 17  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 18  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -454,6 +454,24 @@ def _crumb_trails(blocks: Sequence[Block]) -> set[int]:
     return found
 
 
+def _orphan_headings(blocks: Sequence[Block]) -> set[int]:
+    """Headings of the template that trafilatura kept in its main text without what they
+    head ("Most viewed", "About the author", "On this page" over a page's own contents):
+    a heading, not the page's title, whose next block is link-dominated, navigation, or
+    outside trafilatura's main text (a table's cell aside: trafilatura drops a table of
+    the page's own at times, and its heading stays). A heading of the page's own text is
+    followed by that text, which trafilatura keeps; a section that is only a list of
+    links loses its heading's few words."""
+    found = set()
+    for i, b in enumerate(blocks[:-1]):
+        after = blocks[i + 1]
+        if b.kind == "heading" and b.main and not b.title and b.links < LINK_DOMINATED \
+                and (after.links >= LINK_DOMINATED or after.nav or
+                     (not after.main and after.kind != "cell")):
+            found.add(b.hash)
+    return found - {b.hash for b in blocks if b.title}
+
+
 def _merged(lines: Sequence[str], blocks: Sequence[Block]) -> bool:
     """Whether a line holds two or more whole blocks of the page, words for words (a
     layout table's cell written as one line, which loses the cell's own structure: its
@@ -486,7 +504,7 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
     drop -= _sandwiched(blocks, drop) - certain
     if not drop:
         return text, {}
-    drop |= _crumb_trails(blocks)
+    drop |= _crumb_trails(blocks) | _orphan_headings(blocks)
     page = {b.hash for b in blocks}
     main_rest: list[str] = []
     unplaced: list[str] = []  # lines that are no block nor a row of blocks

@@ -426,6 +426,37 @@ def test_a_breadcrumb_trail_ending_in_the_pages_title_is_navigation():
                                         Block("null", block_hash("null"))]) == set()
 
 
+
+def test_a_template_heading_kept_without_what_it_heads_is_not_text():
+    """Invented data: trafilatura kept "Most viewed" and "About the author" in its main
+    text but not the list or the bio under them, and "On this page" over a list of links
+    to the page's sections; the page's own headings, followed by its own text, stay."""
+    def b(text: str, **kw) -> Block:
+        return Block(text, block_hash(text), **kw)
+
+    menu = b("Home Clinics Contact", main=False, links=1.0)
+    viewed = b("Most viewed", kind="heading")
+    teaser = b("Eye clinic moves on 2 May", main=False, links=1.0, kind="item")
+    author = b("About the author", kind="heading")
+    bio = b("A. N. Writer works for the invented trust.", main=False)
+    contents = b("On this page", kind="heading")
+    toc = b("Your first visit", kind="item", links=1.0)
+    title = b("Falls clinic", kind="heading", title=True)
+    section = b("Your first visit", kind="heading")
+    own = [b(prose(300 + i, 25)) for i in range(3)]
+    blocks = [menu, viewed, teaser, author, bio, contents, toc, title, own[0], section,
+              own[1], own[2]]
+    text = "\n".join([viewed.text, author.text, contents.text, title.text, own[0].text,
+                      section.text, own[1].text, own[2].text])
+    assert templates._orphan_headings(blocks) == {viewed.hash, author.hash, contents.hash}
+    # a table trafilatura dropped from the main text keeps its heading
+    hours = b("Opening hours", kind="heading")
+    assert templates._orphan_headings([hours, b("Season", main=False, kind="cell")]) == set()
+    cleaned, _info = templates.compose(text, blocks, ((menu.hash,), ()))
+    assert cleaned == "\n".join([title.text, own[0].text, section.text, own[1].text,
+                                 own[2].text])
+
+
 # -- teaser lists, titles, export headers, stock template inside a notice (invented) --------
 
 TEASERS = ("<div class='rel'><div>Related articles</div>" + "".join(
