@@ -47,7 +47,9 @@ least ``TEMPLATE_SHARE`` of it; a text whose lines are pieces of paragraphs (a s
 wraps its lines) is kept as it is otherwise. Either happens only when the page's own
 blocks hold at least ``MIN_OWN_WORDS`` words (more than trafilatura's remainder, in the
 first case): a table of contents or a page of links keeps its text. When nothing would
-remain, the page is kept as extracted.
+remain, the page is kept as extracted. On a page with template blocks, a breadcrumb trail
+and a heading trafilatura kept without what it heads (its list of links, an author box
+outside the main text: :func:`_orphan_headings`) go too.
 """
 
 from __future__ import annotations
