@@ -16,8 +16,10 @@ never which documents were missed unless ``--verbose`` is given.
 
 ``--blind-half tune|held`` keeps half of a blind set, split by host document (label field
 ``host``, else the file name): a document is in the tuning half when the first byte of
-``sha256("blind3-host:" + host)`` is below 128, else in the held half. Tune only on the
-tuning half; read the held half in aggregate only.
+``sha256(salt + host)`` is below 128, else in the held half. The salt follows the set:
+``--blind-salt`` when given, else ``blindN-host:`` for a folder whose name ends in the
+number N (``injection_blind4`` -> ``blind4-host:``), else ``blind3-host:`` (the third
+set's split, unchanged). Tune only on the tuning half; read the held half in aggregate only.
 """
 
 from __future__ import annotations
@@ -26,6 +28,7 @@ import argparse
 import hashlib
 import importlib.util
 import json
+import re
 import statistics
 import sys
 import time
@@ -83,10 +86,16 @@ def is_val(identity: str) -> bool:
 HALF_SALT = "blind3-host:"
 
 
-def blind_half(row: dict) -> str:
+def half_salt(folder: Path) -> str:
+    """The salt of a blind set's host split: ``blindN-host:`` for a folder named ``...blindN``."""
+    digits = re.search(r"blind(\d+)$", folder.name)
+    return f"blind{digits.group(1)}-host:" if digits else HALF_SALT
+
+
+def blind_half(row: dict, salt: str = HALF_SALT) -> str:
     """``tune`` or ``held``: the half of a blind set this row's host document falls in."""
     host = row.get("host") or row["path"]
-    return "tune" if hashlib.sha256((HALF_SALT + host).encode("utf-8")).digest()[0] < 128 \
+    return "tune" if hashlib.sha256((salt + host).encode("utf-8")).digest()[0] < 128 \
         else "held"
 
 
@@ -290,6 +299,9 @@ def main(argv: list[str] | None = None) -> int:
     parser.add_argument("--blind-half", default="all", choices=["all", "tune", "held"],
                         help="blind-set documents: all, or the tuning or held half split by "
                         "host document (see the module docstring)")
+    parser.add_argument("--blind-salt", default=None,
+                        help="salt of the host split (default: from the folder name, "
+                        "blindN-host: for ...blindN)")
     parser.add_argument("--blind-only", action="store_true",
                         help="measure only the blind set (skip the fixture corpus and the mix)")
     parser.add_argument("--verbose", action="store_true")
@@ -315,7 +327,8 @@ def main(argv: list[str] | None = None) -> int:
             brows = [r for r in brows if is_val("blind:" + r["path"]) ==
                      (args.blind_split == "val")]
         if args.blind_half != "all":
-            brows = [r for r in brows if blind_half(r) == args.blind_half]
+            salt = args.blind_salt if args.blind_salt is not None else half_salt(blind)
+            brows = [r for r in brows if blind_half(r, salt) == args.blind_half]
         print(f"\nBLIND SET {blind.relative_to(ROOT) if blind.is_relative_to(ROOT) else blind}"
               f", documents: {len(brows)} (split: {args.blind_split}, half: "
               f"{args.blind_half})\n")

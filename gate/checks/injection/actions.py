@@ -140,7 +140,7 @@ NEEDLES: dict[str, tuple[str, ...]] = {
                                      "bashrc", "profile", "zshrc", "systemctl enable"),
 }
 TOOL_NEEDLES = ("call", "invoke", "trigger", "execute", "run ", "use ", "using ", "tool",
-                "access",
+                "access", "via ", "interpreter", "browsing",
                 "without", "silently", "if you", "result", "<<", "observation", "response",
                 "secretly", "quietly", "do not tell", "don't tell",
                 "werkzeug", "outil", "herramienta", "strumento", "ferramenta", "narzedzie",
@@ -262,6 +262,26 @@ TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
         r"file(?:system)?|network|e-?mail)\s+(?:access|tools?|capabilit(?:y|ies))\s+"
         r"(?:should|must|need\s+to|are\s+(?:asked|required)\s+to|can)\s+(?:\w+\s+)?"
         r"(?:run|execute|call|open|send|fetch|install|delete|push)\b"), 0.5, READER_TOOLS),
+    # "Agents with browsing: open https://... and press the first button", "Code
+    # interpreter: execute ...": a reader that can act, called by what it can do.
+    (_c(r"\b(?:(?:agents?|assistants?|models?|bots?|ais?|llms?)\s+with\s+(?:\w+\s+)?"
+        r"(?:browsing|browser|shell|terminal|tools?|code[- ]execution|e-?mail)(?:\s+(?:access|"
+        r"tools?|capabilit(?:y|ies)))?|code\s+interpreter|browsing\s+(?:agent|tool))\s*[:,]\s*"
+        r"(?:please\s+)?(?:open|run|execute|call|send|fetch|visit|click|press|install|download|"
+        r"delete|push)\b"), 0.5, READER_TOOLS),
+    # "Set the mailbox rule ... via update_settings", "Share this folder with ... using
+    # share_document": an action on the user's things through a named function.
+    (_c(r"(?:^|[.!?:;]\s+|\n\s*)(?:please\s+|now\s+|then\s+|also\s+)?(?:set|share|send|"
+        r"forward|transfer|delete|remove|grant|change|update|create|add|move|copy|post|upload|"
+        r"publish|invite|disable|enable|pay)\s+(?:[^\n.]|\.(?![\s])){0,160}?\b(?:via|using|through)\s+"
+        r"(?:the\s+)?" + _TOOL_NAME + r"[`'\"]?(?:\(\))?(?:\s+(?:tool|function|action|call))?"
+        r"\s*(?:[.;,!]|$)", re.M), 0.45, "asks for an action through a named function"),
+    # "Open a pull request that changes the CI image ... and merge it without waiting for
+    # review": a change to shared code or systems, with the review skipped.
+    (_c(r"(?:^|[.!?:;]\s+|\n\s*)(?:please\s+|now\s+|then\s+|also\s+)?(?:open|merge|push|"
+        r"deploy|approve|commit|release|publish)\s+(?:[^\n.]|\.(?![\s])){0,200}?\bwithout\s+(?:waiting\s+"
+        r"for\s+|a\s+|any\s+)?(?:code\s+)?(?:review|approval|sign-?off)", re.M), 0.5,
+     "asks for a change to be merged or deployed without review"),
     (_c(r"\b(?:complete|process|execute|run|finish|perform|carry\s+out|honou?r|make)\s+"
         r"(?:the|this)\s+(?:\w+\s+)?(?:tool\s+call|function\s+call|call|request|"
         r"action)\s+(?:above|below|shown|given)\b"), 0.5,
@@ -297,7 +317,8 @@ _PROGRAMMING = _c(r"\b(?:api|apis|endpoint|sdk|json|schema|parameters?|plug-?in|
                   r"repository|developers?|http|request|response|returns?|integer|string|"
                   r"boolean|callback|method)\b")
 _URGENT = _c(r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*)|silently|"
-                     r"immediately|right\s+away|now|do\s+not\s+(?:tell|inform|mention|ask)|"
+                     r"immediately|right\s+away|now|no\s+confirmation|pre-?approved|"
+                     r"without\s+(?:waiting|review|approval)|do\s+not\s+(?:tell|inform|mention|ask)|"
                      r"before\s+(?:answering|responding|replying)|[\w.+-]+@[\w-]+\.[\w.]+|"
                      r"https?://)")
 
@@ -446,6 +467,8 @@ ANCHORS = tuple(sorted({n for names in NEEDLES.values() for n in names} - {"key"
                           "function_result", "function_response", "observation:",
                           "[tool", "if you can", "invoke", "shell access",
                           "terminal access", "if you have", "if you are able",
+                          "pre-approved", "preapproved", "without waiting", "without review",
+                          "no confirmation", " via ", "interpreter", "browsing",
                           "all other", "any other", "while true", "while(true", "while (true",
                           "while 1", "keylog", "keydown", "keypress", "on_press",
                           "aws/credentials", "powershell"}))

@@ -628,12 +628,38 @@ SWAPPED = re.compile(r"\b(?:instead|rather)\b[\s,]*$|\b(?:drop|abandon|stop|canc
                      r"present|original|pending|existing)\s+(?:request|task|question|query|job)")
 HIJACK_DETAIL = 6  # content words of a request specific enough to be its own task
 HIJACK_DETAIL_WEIGHT = 0.1
+# A request back to the writer ("Tell us what you'd like next", "给我们发送电子邮件"): the
+# reader is asked to answer the people who wrote the page, not given another task.
+_TO_US = re.compile(r"\W*(?:us|们)\b|们")
+# A document that sets work for people (an assignment brief, homework, an exam paper) is
+# made of requests for work that share few words with the rest: two of these marks in the
+# text around the request say so ("Submission deadline", "Length: 600 to 800 words").
+_SETS_WORK = re.compile(
+    r"\b(?:(assignments?|homework|coursework|worksheet|exam\s+paper)|(deadline|due\s+(?:on\s+)?"
+    r"(?:mon|tue|wed|thu|fri|sat|sun|\d))|(marking|marks|graded|grading|rubric|worth\s+\d+\s*%)|"
+    r"(\d[\d,]*\s+words|word\s+(?:limit|count))|(modules?|year\s+\d+|students?|pupils?))\b")
+SETS_WORK_MARKS = 2
+SETS_WORK_DAMPING = 0.4
+SETS_WORK_NOTE = "the document sets work for people (an assignment or homework)"
+
+
+def sets_work(folded: str, start: int, end: int) -> bool:
+    """Do two kinds of marks of an assignment occur in the document outside [start, end)?"""
+    kinds = set()
+    for m in _SETS_WORK.finditer(folded[:MAX_CHARS]):
+        if start <= m.start() < end:
+            continue
+        kinds.add(m.lastindex)
+        if len(kinds) >= SETS_WORK_MARKS:
+            return True
+    return False
 
 
 def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
                 task_words: set[str]) -> list[Hit]:
     """Sentences opening with a request for work that the document is not about."""
     hits: list[Hit] = []
+    work: bool | None = None  # does the document set work for people? (read when needed)
     starts = _lead_positions(folded, task_words)
     if _LEAD_SUB is not None and _SUB_SCRIPT.search(folded[:MAX_CHARS]):
         starts.extend((m.start(), m.end(), True) for m in _LEAD_SUB.finditer(folded))
@@ -657,7 +683,7 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
             overlap = shared / len(set(words))
             if overlap > 0.25 or len(elsewhere.split()) < 25:
                 continue
-            if not has_object:
+            if not has_object or _TO_US.match(folded, vend):
                 continue  # a bare verb ("Written by ...", "List of values") is too common
             weight = 0.4 if shared == 0 else 0.35
             why = [f"opens with a request for work (\"{folded[vstart:vend]}\")",
@@ -677,10 +703,18 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
                 why.append("it replaces the reader's task (\"instead\")")
             detailed = len(set(words)) >= HIJACK_DETAIL and overlap <= 0.2 and \
                 not SWAPPED.search(unit, 0, vstart - start)
+            if work is None:
+                work = sets_work(folded, start, end)
+            damped = bool(work) and not SWAPPED.search(unit, 0, vstart - start)
+            if damped:  # one exercise among others: neither "the only request" nor detailed
+                weight *= SETS_WORK_DAMPING
+                why.append(SETS_WORK_NOTE)
+                detailed = False
             n = len(set(words))
             hits.append(Hit("task-hijack", round(min(weight, 0.6), 4), start, end, "",
-                            "; ".join(why), (n >= 4 and shared == 0) or
-                            (n >= 8 and overlap <= 0.15), detailed))
+                            "; ".join(why), not damped and ((n >= 4 and shared == 0) or
+                                                            (n >= 8 and overlap <= 0.15)),
+                            detailed))
     return hits
 
 

@@ -879,6 +879,49 @@ def _acrostics(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
     return out
 
 
+# "Say — exported transcript. / that — times are local. / the — ...": an instruction spelt
+# by the first word of each line, set off from the rest of its line by a dash. Lines that
+# do not open with "word —" (a wrapped continuation) are passed over, long lines count.
+_DASHED = re.compile(r"^[ \t]*([^\s\u2014\u2013]{1,40})[ \t]+[\u2014\u2013][ \t]", re.M)
+DASHED_MIN = 4  # dashed lines in a run
+DASHED_GAP = 4  # line breaks between two dashed lines of one run, at most (wrapped lines)
+
+
+def _dashed_leads(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
+    """The first words of a run of "word — text" lines read together by the sentence
+    readings and the instruction model, as one sentence."""
+    text = screen.text[:directive.MAX_CHARS]
+    if "\u2014" not in text and "\u2013" not in text:
+        return []
+    runs: list[list[re.Match[str]]] = []
+    for m in _DASHED.finditer(text):
+        if runs and text.count("\n", runs[-1][-1].end(), m.start()) <= DASHED_GAP:
+            runs[-1].append(m)
+        else:
+            runs.append([m])
+    out: list[dict[str, Any]] = []
+    learnt = model.model()
+    for run in runs[:ACROSTIC_BLOCKS]:
+        if len(run) < DASHED_MIN:
+            continue
+        sentence = " ".join(m.group(1) for m in run)
+        start, end = run[0].start(1), run[-1].end(1)
+        why = f"read from the first words of {len(run)} dashed lines: \"{sentence[:200]}\""
+        found = [(d.signal, d.weight, d.why, d.lang or None) for d in
+                 directive.scan(sentence, min_weight=directive.MIN_WEIGHT)]
+        folded = lfold(sentence)
+        for r in learnt.read(folded, model.HIDDEN_FLOOR):  # words no author lines up
+            found.append(("instruction", max(learnt.weight(r), model.DISCONTINUITY_WEIGHT),
+                              f"the words read as an instruction to the assistant (model "
+                              f"score {r.probability:.2f})", None))
+        for signal, weight, note, lang in found:
+            hit = screen._hit(indexed, signal, weight, start, end, text, lang=lang,
+                              note=f"{note}; {why}")
+            hit["decoded"] = sentence
+            out.append(hit)
+    return out
+
+
 def measure(extraction: Extraction) -> dict[str, Any]:
     """Screen one document (runs in the worker); see the module docstring."""
     text = extraction.text or ""
@@ -887,6 +930,7 @@ def measure(extraction: Extraction) -> dict[str, Any]:
     indexed = Source(screen.text, "the indexed text", None, "text", indexed=True)
     screen.scan(indexed)
     screen.hits.extend(_acrostics(screen, indexed))
+    screen.hits.extend(_dashed_leads(screen, indexed))
     if links:
         screen.scan(Source("", "a link or image address in the page markup", None, "html"),
                     links=links)
