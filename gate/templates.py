@@ -224,16 +224,8 @@ def learn(pages: Iterable[Page]) -> Learnt:
         strong, weak = every[anywhere], every[aside & ~anywhere]
         # short lines with numbers that differ from page to page ("Updated 153 days
         # ago", "1,849 views"): their shape on most pages, in more than one wording
-        pages_of: dict[int, int] = {}
-        wordings: dict[int, set[int]] = {}
-        for page in distinct:
-            for shape in {shape for shape, _h in page.shaped}:
-                pages_of[shape] = pages_of.get(shape, 0) + 1
-            for shape, digest in page.shaped:
-                wordings.setdefault(shape, set()).add(digest)
-        shapes = frozenset(shape for shape, count in pages_of.items()
-                           if count >= max(MIN_PAGES, math.ceil(SHARE_ANY * n)) and
-                           len(wordings[shape]) > 1)
+        shapes = _varied((page.shaped for page in distinct),
+                         max(MIN_PAGES, math.ceil(SHARE_ANY * n)))
         # titles of three words or more, not one the site gives most of its pages
         named: dict[str, int] = {}
         for p in distinct:
@@ -242,19 +234,27 @@ def learn(pages: Iterable[Page]) -> Learnt:
                            if title.count(" ") + 1 >= TITLE_MIN_WORDS and
                            count < math.ceil(SHARE_ANY * n))
         # the same comment under different names on many pages: a forum's stock replies
-        stems_of: dict[int, int] = {}
-        signers: dict[int, set[int]] = {}
-        for page in distinct:
-            for stem in {stem for stem, _h in page.signed}:
-                stems_of[stem] = stems_of.get(stem, 0) + 1
-            for stem, digest in page.signed:
-                signers.setdefault(stem, set()).add(digest)
-        stems = frozenset(stem for stem, count in stems_of.items()
-                          if count >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n)) and
-                          len(signers[stem]) > 1)
+        stems = _varied((page.signed for page in distinct),
+                        max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n)))
         if len(strong) or len(weak) or shapes or titles or stems:
             learnt[site] = (strong, weak, shapes, titles, stems)
     return learnt
+
+
+def _varied(per_page: Iterable[Iterable[tuple[int, int]]], least: int) -> frozenset[int]:
+    """Keys (a numbered line's shape, a signed comment's stem) that stand on at least
+    ``least`` pages in more than one variant (wording, signature); each page gives its
+    (key, variant digest) pairs."""
+    pages_of: dict[int, int] = {}
+    variants: dict[int, set[int]] = {}
+    for pairs in per_page:
+        pairs = list(pairs)
+        for key in {key for key, _digest in pairs}:
+            pages_of[key] = pages_of.get(key, 0) + 1
+        for key, digest in pairs:
+            variants.setdefault(key, set()).add(digest)
+    return frozenset(key for key, count in pages_of.items()
+                     if count >= least and len(variants[key]) > 1)
 
 
 def stored_pages(state: Any, batch: set[str]) -> list[Page]:
