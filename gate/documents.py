@@ -26,14 +26,14 @@ from pathlib import Path
 from typing import Any
 
 from gate import containers
-from gate.checks.base import Document, RunContext
+from gate.checks.base import RunContext
 from gate.commit import Output, Reporter
 from gate.discovery import Entry, walk
 from gate.evaluation import Releases, extraction_of
 from gate.extract.model import Extracted
 from gate.extract.pool import Failure
 from gate.intake import FileTask, Intake, StagedTask, read_entry
-from gate.judge import Judge, Subject, verdict
+from gate.judge import Judge, Subject, document_of, verdict
 from gate.manifest import Manifest, ManifestRecord
 from gate.policy import LoadedPolicy
 from gate.record import Slim
@@ -123,10 +123,8 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
         """Its record and Slim: the worker's verdict when it evaluated these measures."""
         assert item.extracted is not None
         if item.judged is None:
-            document = Document(path=item.entry.path, kind=item.entry.kind,
-                                size=item.intake.size, sha256=item.intake.sha256,
-                                manifest=item.record, extracted=item.extracted,
-                                measures=item.measures, link_target=item.entry.link_target)
+            document = document_of(item.entry, item.record, item.intake, item.extracted,
+                                   item.measures)
             item.judged = verdict(item.index, doc_id(item.entry.path), item.entry,
                                   item.intake, document, item.measure_errors,
                                   item.cache_key, judge)

@@ -51,6 +51,15 @@ class Subject:
     intake: Intake | None = None  # None: what the worker's own reading found
 
 
+def document_of(entry: Entry, record: ManifestRecord | None, intake: Intake,
+                extracted: Any, measures: dict[str, Any]) -> Document:
+    """The document the checks evaluate: what discovery, the manifest and intake know of
+    it, with its extraction and measures."""
+    return Document(path=entry.path, kind=entry.kind, size=intake.size, sha256=intake.sha256,
+                    manifest=record, extracted=extracted, measures=measures,
+                    link_target=entry.link_target)
+
+
 def verdict(index: int, doc_id: str, entry: Entry, intake: Intake, document: Document,
             measure_errors: dict[str, str], cache_key: str | None,
             judge: Judge) -> tuple[str, Slim]:
@@ -67,9 +76,7 @@ def judged(subject: Subject, intake: Intake, result: dict[str, Any]) -> tuple[st
     ``intake``: the digest and size as the coordinator files them)."""
     intake = subject.intake or intake
     extracted, measures, errors = extraction_of(result, None)
-    document = Document(path=subject.entry.path, kind=subject.entry.kind, size=intake.size,
-                        sha256=intake.sha256, manifest=subject.record, extracted=extracted,
-                        measures=measures, link_target=subject.entry.link_target)
+    document = document_of(subject.entry, subject.record, intake, extracted, measures)
     key = subject.cache_key or f"{intake.sha256}:{subject.judge.cache_print}"
     return verdict(subject.index, subject.doc_id, subject.entry, intake, document, errors,
                    key, subject.judge)
