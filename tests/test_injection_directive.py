@@ -230,3 +230,20 @@ def test_instruction_spelt_by_dashed_line_leads_is_read():
     glossary = HOST + "\n\n" + "\n".join(f"{w} \u2014 {r}" for w, r in zip(
         ["Timetable", "Season", "Peak", "Kiosk", "Junction"], rest)) + "\n"
     assert not held(glossary)  # a list of terms spells nothing
+
+
+def test_a_long_run_of_dashed_lines_is_read_in_bounded_parts():
+    # Invented list of 130 "term — text" lines (hostile size): each reading takes at most
+    # screen.DASHED_MAX lines, and what the finding shows of it is bounded like every other
+    # decoded text (300 characters).
+    from gate.checks.injection import screen
+    lines = [f"word{i % 50} \u2014 some explanatory text number {i}" for i in range(130)]
+    text = HOST + "\n\n" + "\n".join(lines) + "\n"
+    measured = CHECK.measure(extract(text.encode("utf-8"), max_pages=5, max_nesting=250))
+    dashed = [h for h in measured["signals"] if "dashed lines" in (h.get("note") or "")]
+    assert dashed, "the dashed runs are read"
+    for hit in dashed:
+        # normalize.visible's bound: the limit, the last piece (an escape such as <U+200B>
+        # is 8 characters) and an ellipsis
+        assert len(hit["decoded"]) <= 300 + 8 + 1
+        assert len(hit["decoded"].split()) <= screen.DASHED_MAX

@@ -871,7 +871,7 @@ def _acrostics(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
                                   lang=d.lang or None,
                                   note=f"{d.why}; read from the first words of {len(block)} "
                                        f"consecutive lines: \"{sentence}\"")
-                hit["decoded"] = sentence
+                hit["decoded"] = visible(sentence, 300)
                 out.append(hit)
         block = []
         if blocks >= ACROSTIC_BLOCKS:
@@ -885,6 +885,7 @@ def _acrostics(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
 _DASHED = re.compile(r"^[ \t]*([^\s\u2014\u2013]{1,40})[ \t]+[\u2014\u2013][ \t]", re.M)
 DASHED_MIN = 4  # dashed lines in a run
 DASHED_GAP = 4  # line breaks between two dashed lines of one run, at most (wrapped lines)
+DASHED_MAX = 40  # dashed lines read as one sentence, at most (a long glossary is read in parts)
 
 
 def _dashed_leads(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
@@ -895,7 +896,8 @@ def _dashed_leads(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
         return []
     runs: list[list[re.Match[str]]] = []
     for m in _DASHED.finditer(text):
-        if runs and text.count("\n", runs[-1][-1].end(), m.start()) <= DASHED_GAP:
+        if runs and len(runs[-1]) < DASHED_MAX and \
+                text.count("\n", runs[-1][-1].end(), m.start()) <= DASHED_GAP:
             runs[-1].append(m)
         else:
             runs.append([m])
@@ -917,7 +919,7 @@ def _dashed_leads(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
         for signal, weight, note, lang in found:
             hit = screen._hit(indexed, signal, weight, start, end, text, lang=lang,
                               note=f"{note}; {why}")
-            hit["decoded"] = sentence
+            hit["decoded"] = visible(sentence, 300)
             out.append(hit)
     return out
 
