@@ -11,6 +11,12 @@ parent and of the workers per document does much less, so each run also prints t
 that CPU time allows (cores divided by the CPU per document of all processes together),
 the parent's CPU by stage and the workers' CPU by extraction step and check.
 ``--profile`` prints the parent process's top functions (cProfile) for the first run.
+``--steps`` also times each step of a worker's loop (reading, staging, extraction and
+checks, the verdict, packing, assembling entries, messages) with the thread's CPU clock and
+prints them per document; a diagnostic (its wrappers and one small file per message add a
+little CPU of their own). The workers' figures are read with the thread's clock because a
+pool worker arms a CPU-time timer, and while one is armed the process's clock
+(``time.process_time``) lags: short spans read far too small (see gate/work.py).
 """
 
 from __future__ import annotations
@@ -64,6 +70,80 @@ def make_inbox(root: Path, count: int) -> Path:
     return inbox
 
 
+# the worker's steps --steps times: (module, attribute, label)
+STEPS = (("gate.intake", "read_path", "reading"), ("gate.intake", "stage", "staging"),
+         ("gate.intake", "_with_site", "sniffing"), ("gate.work", "process",
+                                                     "extraction and checks"),
+         ("gate.judge", "judged", "verdict"), ("gate.intake", "packed", "packing"),
+         ("gate.placement", "build_entry", "assembling entries"))
+
+
+def time_steps(folder: Path) -> None:
+    """Wrap the worker's steps (in this process, so forked workers inherit the wrappers)
+    and its message loop: each worker adds its step times up and writes them to
+    ``folder/steps-<pid>.json`` before each reply."""
+    import importlib
+    from gate.extract import pool
+
+    spent: dict[str, float] = {}
+    clock = time.thread_time
+
+    def wrap(module: str, name: str, label: str) -> None:
+        owner = importlib.import_module(module)
+        inner = getattr(owner, name)
+
+        def timed_step(*args: object, **kwargs: object) -> object:
+            began = clock()
+            try:
+                return inner(*args, **kwargs)
+            finally:
+                spent[label] = spent.get(label, 0.0) + clock() - began
+        setattr(owner, name, timed_step)
+
+    for module, name, label in STEPS:
+        wrap(module, name, label)
+    serve = pool._serve
+
+    class Reply:
+        """The worker's end of its pipe: the totals are written before each answer."""
+
+        def __init__(self, conn: object):
+            self.conn = conn
+
+        def recv(self) -> object:
+            began = clock()
+            message = self.conn.recv()
+            spent["messages"] = spent.get("messages", 0.0) + clock() - began
+            return message
+
+        def send(self, value: object) -> None:
+            began = clock()
+            self.conn.send(value)
+            spent["messages"] = spent.get("messages", 0.0) + clock() - began
+            spent["worker loop (all)"] = clock()
+            (folder / f"steps-{os.getpid()}.json").write_text(json.dumps(spent))
+
+        def close(self) -> None:
+            self.conn.close()
+
+    def timed_serve(conn, fn, memory_bytes, cpu_s):  # pool._serve's arguments
+        spent.clear()
+        serve(Reply(conn), fn, memory_bytes, cpu_s)
+
+    pool._serve = timed_serve
+
+
+def step_figures(folder: Path, docs: int) -> str:
+    """The workers' step times per document, from their files (removed after reading)."""
+    total: dict[str, float] = {}
+    for path in sorted(folder.glob("steps-*.json")):
+        for label, seconds in json.loads(path.read_text()).items():
+            total[label] = total.get(label, 0.0) + seconds
+        path.unlink()
+    return ", ".join(f"{label} {seconds / docs * 1000:.2f} ms"
+                     for label, seconds in sorted(total.items(), key=lambda kv: -kv[1]))
+
+
 PARALLEL = ("extracting", "removing site templates", "placing")  # stages workers share
 
 
@@ -76,8 +156,8 @@ def _idle_seconds(stages: dict[str, float], workers_cpu: float, cores: int) -> f
     return max(shared, (shared + workers_cpu) / cores) + rest
 
 
-def timed(inbox: Path, policy: Path, out: Path, workers: int, cores: int
-          ) -> tuple[float, dict]:
+def timed(inbox: Path, policy: Path, out: Path, workers: int, cores: int,
+          steps: Path | None = None) -> tuple[float, dict]:
     """Run once; print elapsed time, documents/s and CPU time per document (the parent's
     and the workers'), which depends far less than elapsed time on what else the machine
     is doing, and the rate that CPU time allows on ``cores`` cores."""
@@ -113,6 +193,9 @@ def timed(inbox: Path, policy: Path, out: Path, workers: int, cores: int
               f"; outside them (reading, staging, packing, assembling the entries, "
               f"messages, start-up) "
               f"{(workers_cpu - sum(result.timings.values())) / docs * 1000:.2f} ms")
+    if steps is not None:
+        print("  worker CPU per document by step (thread clock, --steps): " +
+              step_figures(steps, docs))
     return seconds, result.summary
 
 
@@ -123,6 +206,8 @@ def main() -> None:
     parser.add_argument("--cores", type=int, default=2,
                         help="cores the CPU-time rate is computed for (default 2)")
     parser.add_argument("--profile", action="store_true")
+    parser.add_argument("--steps", action="store_true",
+                        help="time each step of the workers' loop (a diagnostic)")
     args = parser.parse_args()
     work = ROOT / "bench-out" / f"small-{args.docs}"
     inbox = make_inbox(work, args.docs)
@@ -130,6 +215,12 @@ def main() -> None:
     policy.write_text(BENCH_POLICY, encoding="utf-8")
     out = work / f"out-{args.workers}"
     shutil.rmtree(out, ignore_errors=True)
+    steps = None
+    if args.steps:
+        steps = work / "steps"
+        shutil.rmtree(steps, ignore_errors=True)
+        steps.mkdir()
+        time_steps(steps)
     print(f"{args.docs} tiny text documents, {args.workers} workers, "
           f"{os.cpu_count()} cores")
     if args.profile:
@@ -138,13 +229,13 @@ def main() -> None:
         profiler = cProfile.Profile(time.process_time)  # CPU, not waiting
         profiler.enable()
     print("first run (extraction, checks, placement):")
-    seconds, summary = timed(inbox, policy, out, args.workers, args.cores)
+    seconds, summary = timed(inbox, policy, out, args.workers, args.cores, steps)
     if args.profile:
         profiler.disable()
         pstats.Stats(profiler).sort_stats("tottime").print_stats(30)
     print(f"  {summary['accepted']} accepted, {summary['quarantined']} quarantined")
     print("second run (unchanged inbox, cached extraction):")
-    timed(inbox, policy, out, args.workers, args.cores)
+    timed(inbox, policy, out, args.workers, args.cores, steps)
 
 
 if __name__ == "__main__":
