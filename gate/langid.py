@@ -256,16 +256,18 @@ def _grams(pieces: list[str], prof: _Profiles):
     """langdetect's n-grams of every piece, vectorised: the normalised code points, the
     piece each belongs to, and (keys, end positions) for n = 1, 2, 3, each in text order."""
     joined = SEPARATOR.join(pieces)
+    # ASCII pieces (the separator is not): no combining mark to recompose and no
+    # non-Latin letter to outnumber the Latin ones, so those two steps are left out
+    ascii_text = all(map(str.isascii, pieces))
     # each pass only where it can match (a URL needs "http", an address "@", Vietnamese
     # recomposition a combining mark): the same text, without three scans of it
     if "http" in joined:
         joined = Detector.URL_RE.sub(" ", joined)
     if "@" in joined:
         joined = Detector.MAIL_RE.sub(" ", joined)
-    if not joined.isascii() and any(mark in joined for mark in NGram.DMARK_CLASS):
+    if not ascii_text and any(mark in joined for mark in NGram.DMARK_CLASS):
         joined = NGram.normalize_vi(joined)
     cps = np.frombuffer(joined.encode("utf-32-le"), dtype=np.uint32)
-    ascii_text = joined.isascii()
     if cps.size and (ascii_text or cps.max() < 0x10000):  # the usual case: one gather
         cps = prof.normal[cps]
     else:
@@ -374,8 +376,13 @@ def identify(text: str) -> Shares:
     cps, chunk_of, grams = _grams(pieces, prof)
     # a chunk is scored twice: its n-grams that end in a Latin letter, and the others, so
     # identifiers in a Japanese page or a Russian quote in a German one are judged apart
-    latin_end = (cps < 0x250) | ((cps >= 0x1E00) & (cps < 0x1F00))
-    if cps.max() < 0x10000:
+    # (a text below U+0250 has Latin ends only, each letter weighing 1: nothing to split)
+    top = int(cps.max())
+    only_latin = top < 0x250
+    latin_end = None if only_latin else (cps < 0x250) | ((cps >= 0x1E00) & (cps < 0x1F00))
+    if only_latin:
+        char_weight = None
+    elif top < 0x10000:
         char_weight = prof.weight[cps]
     else:
         bmp = cps < 0x10000
@@ -390,6 +397,14 @@ def identify(text: str) -> Shares:
     for length, (keys, ends) in enumerate(grams, start=1):
         found, hit = _lookup(prof, keys, length)
         found, ends = found[hit], ends[hit]
+        if latin_end is None:  # the other part's groups stay empty
+            owner = chunk_of[ends]
+            rows[length - 1] = found
+            starts[length - 1] = np.searchsorted(owner, bounds)
+            starts[3 + length - 1] = np.zeros(n_chunks + 1, dtype=np.int64)
+            if length == 1:
+                weight[0] = np.bincount(owner, minlength=n_chunks)
+            continue
         latin = latin_end[ends]
         for part, mask in enumerate((latin, ~latin)):
             owner = chunk_of[ends[mask]]
