@@ -413,7 +413,15 @@ def _timeline(start: float, end: float) -> dict[str, Any]:
             kinds: dict[str, int] = defaultdict(int)
             for row in mine:
                 kinds[f"{row[4]}{' (2nd)' if row[5] else ''}"] += 1
+            # between two tasks of one worker: its result to the parent, the next task
+            # back (pipe, pickling, the parent's turn)
+            mine_by: dict[int, list[tuple[float, float]]] = defaultdict(list)
+            for row in mine:
+                mine_by[row[0]].append((row[1], row[2]))
+            waits = [b[0] - a[1] for spans_of in mine_by.values()
+                     for a, b in zip(sorted(spans_of), sorted(spans_of)[1:])]
             phase.update(label=f"pool pass {passes}", busy=busy, tail=tail,
+                         between=sum(waits), gaps=sum(1 for w in waits if w > 0.0005),
                          parent_outside=(wall1 - wall0) - inside,
                          worker_cpu=sum(r[3] for r in mine),
                          tasks=dict(kinds), first_task=min(r[1] for r in mine) - wall0,
@@ -446,7 +454,8 @@ def show_timeline(timeline: dict[str, Any]) -> None:
                   f"{phase['first_task']:.2f} s); tail {phase['tail']:.2f} s; longest task "
                   f"{phase['longest']:.2f} s wall, {phase['longest_cpu']:.2f} s CPU")
             print(f"      the parent outside the pool (filing results, evaluating) "
-                  f"{phase['parent_outside']:.2f} s")
+                  f"{phase['parent_outside']:.2f} s; workers waiting between two of their "
+                  f"tasks {phase['between']:.2f} s in all ({phase['gaps']} waits over 0.5 ms)")
         covered += phase["to"] - phase["from"]
         last = max(last, phase["to"])
     if timeline["wall"] - last > 0.005:
