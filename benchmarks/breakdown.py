@@ -1,7 +1,7 @@
 """Where each millisecond of a document goes: CPU ms per document by stage and by check.
 
     .venv/bin/python benchmarks/breakdown.py [--docs 600] [--workers 1] [--json FILE]
-                                             [--before FILE]
+                                             [--before FILE] [--timeline]
 
 Runs ``gate run`` in this process on the bench mix (benchmarks/corpus.py: about 80 % HTML
 pages of 10-100 KB with boilerplate, 10 % multi-page PDFs, 10 % plain text; the same
@@ -24,6 +24,13 @@ The last lines give the issue's ratio: all checks' measure() plus template compo
 against the whole of extract() (which includes the page's blocks), in per cent. With
 ``--json`` the figures are written to a file; ``--before`` prints an earlier file's
 figures beside this run's.
+
+``--timeline`` adds the wall-time budget of the run (use it with ``--workers 2``): the
+parent's phases in order (start-up before the first pass, each pass of the worker pool,
+template learning, corpus checks, deciding, placing), and for each pass how long all, some
+or none of the workers were busy, its tail (from the last moment every worker was busy to
+its end) and the parent's own time between two results. Wall figures grow on a loaded
+machine; the CPU seconds of each phase (parent, workers) beside them do not.
 """
 
 from __future__ import annotations
@@ -228,7 +235,86 @@ def _worker_process(original: Any, task: Any) -> Any:
     return result
 
 
-def run_once(docs: int, workers: int) -> dict[str, Any]:
+_spans: list[tuple[str, float, float, float, float]] = []  # parent: label, wall, CPU
+_timeline_file: list[str] = []  # where the workers append their spans (JSON lines)
+
+
+def _span(fn: Any, label: str) -> Any:
+    """A parent phase's wall-clock span and CPU seconds (a generator: from its call to
+    its exhaustion, with the time spent inside it apart from the consumer's)."""
+    import inspect
+
+    if inspect.isgeneratorfunction(fn):
+        @functools.wraps(fn)
+        def spanned_gen(*args: Any, **kwargs: Any) -> Any:
+            wall0, cpu0 = time.monotonic(), time.process_time()
+            inside = 0.0
+            gen = fn(*args, **kwargs)
+            try:
+                while True:
+                    began = time.monotonic()
+                    try:
+                        item = next(gen)
+                    except StopIteration:
+                        break
+                    finally:
+                        inside += time.monotonic() - began
+                    yield item
+            finally:
+                _spans.append((label, wall0, time.monotonic(), time.process_time() - cpu0,
+                               inside))
+        return spanned_gen
+
+    @functools.wraps(fn)
+    def spanned(*args: Any, **kwargs: Any) -> Any:
+        wall0, cpu0 = time.monotonic(), time.process_time()
+        try:
+            return fn(*args, **kwargs)
+        finally:
+            _spans.append((label, wall0, time.monotonic(), time.process_time() - cpu0, 0.0))
+    return spanned
+
+
+def _worker_span(original: Any, task: Any) -> Any:
+    """gate.intake.work_on with its wall-clock span and CPU time appended to the timeline
+    file (one line per task; a batch of small tasks gives one line each)."""
+    wall0, cpu0 = time.monotonic(), time.process_time()
+    result = original(task)
+    wall1, cpu = time.monotonic(), time.process_time() - cpu0
+    inner = result.get("result") if isinstance(result, dict) else None
+    kind = ((inner or {}).get("extracted") or {}).get("type") or type(task).__name__
+    second = bool(getattr(task, "extra", None))
+    with open(_timeline_file[0], "a", encoding="utf-8") as fh:
+        fh.write(json.dumps([os.getpid(), wall0, wall1, cpu, kind, second]) + "\n")
+    return result
+
+
+def _install_timeline(folder: Path) -> None:
+    import gate.cluster
+    import gate.commit
+    import gate.corpus
+    import gate.documents as documents
+    import gate.extract.pool
+    import gate.intake
+    import gate.pipeline
+
+    _timeline_file[:] = [str(folder / "worker-spans.jsonl")]
+    Path(_timeline_file[0]).write_text("")
+    gate.cluster.work_on = functools.partial(_worker_span, gate.intake.work_on)
+    pool = gate.extract.pool.WorkerPool
+    pool.run = _span(pool.run, "pool")
+    documents.check_documents = _span(documents.check_documents, "documents")
+    gate.pipeline.check_documents = documents.check_documents
+    for module, name, label in (
+            (documents, "learn", "template learning"),
+            (gate.pipeline, "warm_up", "warm-up (profiles, imports)"),
+            (gate.pipeline, "run_corpus_checks", "corpus checks"),
+            (gate.pipeline, "commit", "commit (decide, record, place)"),
+            (gate.commit, "finish", "placing, report files")):
+        setattr(module, name, _span(getattr(module, name), label))
+
+
+def run_once(docs: int, workers: int, timeline: bool = False) -> dict[str, Any]:
     from gate import checks as _checks  # noqa: F401 - the registry, before probes
     import gate.work
     from gate.pipeline import RunOptions
@@ -247,6 +333,8 @@ def run_once(docs: int, workers: int) -> dict[str, Any]:
     _install_worker_probes()
     _install_parent_probes()
     gate.work.process = functools.partial(_worker_process, gate.work.process)
+    if timeline:
+        _install_timeline(work)
     loaded = load_policy(policy)
     options = RunOptions(inbox=inbox, policy=loaded, out=out, as_of=parse_as_of(AS_OF),
                          workers=workers)
@@ -255,10 +343,12 @@ def run_once(docs: int, workers: int) -> dict[str, Any]:
     self0 = resource.getrusage(resource.RUSAGE_SELF)
     kids0 = resource.getrusage(resource.RUSAGE_CHILDREN)
     wall0 = time.perf_counter()
+    start = time.monotonic()
     _enter("parent: unprobed")
     result = run_pipeline(options)
     _leave()
     wall = time.perf_counter() - wall0
+    end = time.monotonic()
     self1 = resource.getrusage(resource.RUSAGE_SELF)
     kids1 = resource.getrusage(resource.RUSAGE_CHILDREN)
     parent_cpu = (self1.ru_utime + self1.ru_stime) - (self0.ru_utime + self0.ru_stime)
@@ -283,7 +373,94 @@ def run_once(docs: int, workers: int) -> dict[str, Any]:
     return {"docs": report["summary"]["documents"], "workers": workers, "wall_s": wall,
             "parent_cpu_s": parent_cpu, "worker_cpu_s": worker_cpu,
             "parent": dict(_acc), "worker": dict(worker), "whole": dict(whole),
-            "counts": dict(counts), "stages": stages, "decisions": decisions}
+            "counts": dict(counts), "stages": stages, "decisions": decisions,
+            "timeline": _timeline(start, end) if timeline else None}
+
+
+def _occupancy(spans: list[tuple[float, float]], begin: float, end: float,
+               workers: int) -> tuple[dict[int, float], float]:
+    """Seconds of [begin, end] during which 0, 1, ... workers were busy, and the tail:
+    from the last moment all ``workers`` were busy (or ``begin``) to ``end``."""
+    points = sorted([(max(s, begin), 1) for s, e in spans if e > begin and s < end] +
+                    [(min(e, end), -1) for s, e in spans if e > begin and s < end])
+    busy: dict[int, float] = defaultdict(float)
+    level, at, full_until = 0, begin, begin
+    for moment, step in points:
+        busy[level] += moment - at
+        if level >= workers:
+            full_until = moment
+        level += step
+        at = moment
+    busy[level] += end - at
+    return dict(busy), end - full_until
+
+
+def _timeline(start: float, end: float) -> dict[str, Any]:
+    """The run's wall-time budget (see the module docstring)."""
+    rows = [json.loads(line) for line in Path(_timeline_file[0]).read_text().splitlines()]
+    workers = len({pid for pid, *_rest in rows}) or 1
+    phases = []
+    passes = 0
+    for label, wall0, wall1, cpu, inside in sorted(_spans, key=lambda s: s[1]):
+        phase = {"label": label, "from": wall0 - start, "to": wall1 - start, "cpu": cpu}
+        if label == "pool":
+            spans = [(s, e) for _pid, s, e, *_rest in rows if s >= wall0 and e <= wall1]
+            mine = [r for r in rows if r[1] >= wall0 and r[2] <= wall1]
+            if not mine:
+                continue  # an empty pass
+            passes += 1
+            busy, tail = _occupancy(spans, wall0, wall1, 2)
+            kinds: dict[str, int] = defaultdict(int)
+            for row in mine:
+                kinds[f"{row[4]}{' (2nd)' if row[5] else ''}"] += 1
+            # between two tasks of one worker: its result to the parent, the next task
+            # back (pipe, pickling, the parent's turn)
+            mine_by: dict[int, list[tuple[float, float]]] = defaultdict(list)
+            for row in mine:
+                mine_by[row[0]].append((row[1], row[2]))
+            waits = [b[0] - a[1] for spans_of in mine_by.values()
+                     for a, b in zip(sorted(spans_of), sorted(spans_of)[1:])]
+            phase.update(label=f"pool pass {passes}", busy=busy, tail=tail,
+                         between=sum(waits), gaps=sum(1 for w in waits if w > 0.0005),
+                         parent_outside=(wall1 - wall0) - inside,
+                         worker_cpu=sum(r[3] for r in mine),
+                         tasks=dict(kinds), first_task=min(r[1] for r in mine) - wall0,
+                         longest=max(r[2] - r[1] for r in mine),
+                         longest_cpu=max(r[3] for r in mine))
+        phases.append(phase)
+    return {"wall": end - start, "workers": workers, "phases": phases}
+
+
+def show_timeline(timeline: dict[str, Any]) -> None:
+    print(f"wall-time budget of the run ({timeline['wall']:.2f} s wall; from the start of "
+          "gate's run(); CPU s of the parent, and of the workers in a pass):")
+    covered = 0.0
+    last = 0.0
+    for phase in timeline["phases"]:
+        if phase["label"] == "documents":
+            continue  # the passes and learning inside it are shown
+        gap = phase["from"] - last
+        if gap > 0.005:
+            print(f"  {'':30s} {last:7.2f} -> {phase['from']:7.2f}  {gap:6.2f} s  "
+                  "parent, in no phase listed (set-up, discovery, evaluation)")
+        print(f"  {phase['label']:30s} {phase['from']:7.2f} -> {phase['to']:7.2f}  "
+              f"{phase['to'] - phase['from']:6.2f} s  parent CPU {phase['cpu']:6.2f} s")
+        if "busy" in phase:
+            busy = phase["busy"]
+            print(f"      {', '.join(f'{n} {v}' for n, v in sorted(phase['tasks'].items()))}"
+                  f"; workers' CPU {phase['worker_cpu']:.2f} s")
+            print(f"      both workers busy {busy.get(2, 0.0):.2f} s, one {busy.get(1, 0.0):.2f}"
+                  f" s, none {busy.get(0, 0.0):.2f} s (first task began after "
+                  f"{phase['first_task']:.2f} s); tail {phase['tail']:.2f} s; longest task "
+                  f"{phase['longest']:.2f} s wall, {phase['longest_cpu']:.2f} s CPU")
+            print(f"      the parent outside the pool (filing results, evaluating) "
+                  f"{phase['parent_outside']:.2f} s; workers waiting between two of their "
+                  f"tasks {phase['between']:.2f} s in all ({phase['gaps']} waits over 0.5 ms)")
+        covered += phase["to"] - phase["from"]
+        last = max(last, phase["to"])
+    if timeline["wall"] - last > 0.005:
+        print(f"  {'':30s} {last:7.2f} -> {timeline['wall']:7.2f}  "
+              f"{timeline['wall'] - last:6.2f} s  parent, after the last phase listed")
 
 
 def _ms(seconds: float, docs: int) -> float:
@@ -347,11 +524,15 @@ def main() -> None:
     parser.add_argument("--workers", type=int, default=1)
     parser.add_argument("--json", type=Path, help="write the figures to this file")
     parser.add_argument("--before", type=Path, help="an earlier --json file to show beside")
+    parser.add_argument("--timeline", action="store_true",
+                        help="also the run's wall-time budget (phases, busy workers, tail)")
     args = parser.parse_args()
     os.environ.pop("GATE_TIMINGS", None)
-    now = run_once(args.docs, args.workers)
+    now = run_once(args.docs, args.workers, args.timeline)
     before = json.loads(args.before.read_text()) if args.before else None
     show(now, before)
+    if now["timeline"]:
+        show_timeline(now["timeline"])
     if args.json:
         args.json.write_text(json.dumps(now, indent=1, sort_keys=True))
 

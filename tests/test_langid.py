@@ -114,6 +114,20 @@ def test_profile_table_is_langdetects_own():
     assert np.array_equal(prof.logp[rows], expected)
 
 
+def test_normalisation_table_is_langdetects_normalize_of_every_bmp_character():
+    # the reference is langdetect's NGram.normalize, called on each of the 65,536 code
+    # points (what the table was built from before the block rules were vectorised)
+    import numpy as np
+    from langdetect.utils.ngram import NGram
+
+    expected = np.fromiter(map(ord, map(NGram.normalize, map(chr, range(0x10000)))),
+                           dtype=np.uint32, count=0x10000)
+    got = langid._normal_table()
+    assert got.dtype == np.uint32
+    assert np.array_equal(got, expected), np.flatnonzero(got != expected)[:10]
+    assert np.array_equal(langid.profiles().normal, expected)
+
+
 def test_grouped_sums_are_each_groups_own_sparse_products_bits():
     # the reference is one CSR product per group of rows (what identify did before it
     # summed every (part, length) group in one product): the same float32 bits, group by
