@@ -159,6 +159,11 @@ def tree_cpu(procs: list[subprocess.Popen] | None) -> dict[str, float]:
 PROBES = [
     ("gate.cluster", "ClusterExecutor", "run",
      "pool.run on the cluster (Dask submit and results, building the tasks)"),
+    ("distributed.client", "Client", "submit", "of which Dask submit"),
+    ("distributed.client", "Future", "result", "of which Dask results"),
+    ("gate.documents", None, "site_of", "sites of pages"),
+    ("gate.documents", None, "doc_id", "document ids"),
+    ("gate.documents", None, "verdict", "evaluations here"),
     ("gate.state", "State", "cache_put_packed", "filing cache rows"),
     ("gate.state", "State", "put_run_docs", "filing records"),
     ("gate.state", "State", "cache_meta", "cache look-ups"),
