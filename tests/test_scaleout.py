@@ -269,3 +269,25 @@ def test_a_second_folder_is_refused_while_a_run_holds_the_index(services):
         first.unlock()
     second.lock()  # free again once the first run is done
     second.unlock()
+
+
+def test_the_scale_benchmarks_probes_find_their_functions_and_put_them_back():
+    """benchmarks/cluster_scale.py times functions of gate and Dask by wrapping them: each
+    must still exist where it is named, a generator must yield what it yielded, and the
+    originals must be back afterwards (no services needed)."""
+    pytest.importorskip("distributed")
+    import importlib
+
+    from benchmarks.cluster_scale import PROBES, Probes
+
+    def target(module, cls, name):
+        owner = importlib.import_module(module)
+        return getattr(getattr(owner, cls) if cls else owner, name)
+
+    before = [target(m, c, n) for m, c, n, _label in PROBES]
+    with Probes() as probes:
+        assert all(target(m, c, n) is not b for (m, c, n, _l), b in zip(PROBES, before))
+        counted = probes._generator(lambda n: (yield from range(n)), "counting")
+        assert list(counted(3)) == [0, 1, 2]
+        assert "counting" in probes.per_document(1)
+    assert [target(m, c, n) for m, c, n, _label in PROBES] == before
