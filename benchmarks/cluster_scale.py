@@ -41,6 +41,7 @@ import sys
 import time
 from datetime import UTC, datetime
 from pathlib import Path
+from typing import Any
 
 ROOT = Path(__file__).resolve().parent.parent
 sys.path.insert(0, str(ROOT))
@@ -152,6 +153,88 @@ def tree_cpu(procs: list[subprocess.Popen] | None) -> dict[str, float]:
     return split
 
 
+# Finer than the stages: the coordinator's main-thread CPU inside some functions (each
+# figure includes the probed functions it calls). Each is (module, class or None, name,
+# label); a generator is timed inside its next() calls only.
+PROBES = [
+    ("gate.cluster", "ClusterExecutor", "run",
+     "pool.run on the cluster (Dask submit and results, building the tasks)"),
+    ("distributed.client", "Client", "submit", "of which Dask submit"),
+    ("distributed.client", "Future", "result", "of which Dask results"),
+    ("gate.documents", None, "site_of", "sites of pages"),
+    ("gate.documents", None, "doc_id", "document ids"),
+    ("gate.documents", None, "verdict", "evaluations here"),
+    ("gate.state", "State", "cache_put_packed", "filing cache rows"),
+    ("gate.state", "State", "put_run_docs", "filing records"),
+    ("gate.state", "State", "cache_meta", "cache look-ups"),
+    ("gate.state", "State", "cache_text_z", "cache texts read"),
+    ("gate.documents", None, "learn", "template learning"),
+    ("gate.documents", None, "removal", "template removal sets"),
+    ("gate.pipeline", None, "run_corpus_checks", "corpus checks"),
+    ("gate.commit", None, "_decide_one", "deciding"),
+    ("gate.report", "ReportWriter", "document", "report lines"),
+    ("gate.state", "State", "write", "decision rows"),
+    ("gate.placement", "Placer", "apply_batch", "placing (with the entries' round trip)"),
+    ("gate.index", "SharedIndex", "sync", "index sync"),
+    ("gate.commit", None, "render_folder", "folder page"),
+    ("gate.placement", "Blobs", "clear", "removing staged copies"),
+]
+
+
+class Probes:
+    """Wraps the PROBES while a run is measured, adding up main-thread CPU per label."""
+
+    def __init__(self) -> None:
+        self.spent: dict[str, float] = {}
+        self.undo: list[tuple[Any, str, Any]] = []
+
+    def __enter__(self) -> Probes:
+        import importlib
+        import inspect
+        for module, cls, name, label in PROBES:
+            owner = importlib.import_module(module)
+            owner = getattr(owner, cls) if cls else owner
+            original = owner.__dict__[name] if cls else getattr(owner, name)
+            wrap = self._generator if inspect.isgeneratorfunction(original) else self._plain
+            self.undo.append((owner, name, original))
+            setattr(owner, name, wrap(original, label))
+        return self
+
+    def __exit__(self, *exc: object) -> None:
+        for owner, name, original in reversed(self.undo):
+            setattr(owner, name, original)
+
+    def _add(self, label: str, seconds: float) -> None:
+        self.spent[label] = self.spent.get(label, 0.0) + seconds
+
+    def _plain(self, function: Any, label: str) -> Any:
+        def timed(*args: Any, **kwargs: Any) -> Any:
+            started = time.thread_time()
+            try:
+                return function(*args, **kwargs)
+            finally:
+                self._add(label, time.thread_time() - started)
+        return timed
+
+    def _generator(self, function: Any, label: str) -> Any:
+        def timed(*args: Any, **kwargs: Any) -> Any:
+            inner = function(*args, **kwargs)
+            while True:
+                started = time.thread_time()
+                try:
+                    item = next(inner)
+                except StopIteration:
+                    return
+                finally:
+                    self._add(label, time.thread_time() - started)
+                yield item
+        return timed
+
+    def per_document(self, docs: int) -> str:
+        return ", ".join(f"{label} {spent / docs * 1000:.2f} ms"
+                         for label, spent in self.spent.items())
+
+
 def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
              nodes: list[subprocess.Popen] | None = None) -> dict:
     """One run in this process: elapsed, coordinator CPU by stage, Redis costs, and the
@@ -164,7 +247,8 @@ def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
     memory = redis.memory() if redis else 0
     cpu = time.process_time()
     started = time.perf_counter()
-    result = run(opts, clock)
+    with Probes() as probes:
+        result = run(opts, clock)
     clock.stage("end", None)
     seconds = time.perf_counter() - started
     coordinator = time.process_time() - cpu
@@ -176,7 +260,8 @@ def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
     out = {"docs": docs, "seconds": seconds, "main_ms": main / docs * 1e3,
            "nodes_split": nodes_split, "rate": docs / seconds,
            "per_core": docs / seconds / cores_used, "coordinator_ms": coordinator / docs * 1e3,
-           "stages": clock.per_document(docs), "accepted": result.summary["accepted"],
+           "stages": clock.per_document(docs), "probes": probes.per_document(docs),
+           "accepted": result.summary["accepted"],
            "local_children_ms": ((after.ru_utime + after.ru_stime) -
                                  (children.ru_utime + children.ru_stime)) / docs * 1e3,
            "nodes_ms": sum(nodes_split.values()),
@@ -204,6 +289,7 @@ def show(name: str, m: dict) -> None:
     print(f"    coordinator CPU by stage: {m['stages']}")
     print(f"    coordinator main thread (the run, without the Dask client's threads): "
           f"{m['main_ms']:.2f} ms/doc")
+    print(f"    of which inside (main thread, each with what it calls): {m['probes']}")
     if m["nodes_split"]:
         print("    Dask CPU by process: " + ", ".join(
             f"{role} {spent:.1f} ms/doc" for role, spent in m["nodes_split"].items()))

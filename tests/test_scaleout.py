@@ -269,3 +269,47 @@ def test_a_second_folder_is_refused_while_a_run_holds_the_index(services):
         first.unlock()
     second.lock()  # free again once the first run is done
     second.unlock()
+
+
+def test_the_scale_benchmarks_probes_find_their_functions_and_put_them_back():
+    """benchmarks/cluster_scale.py times functions of gate and Dask by wrapping them: each
+    must still exist where it is named, a generator must yield what it yielded, and the
+    originals must be back afterwards (no services needed)."""
+    pytest.importorskip("distributed")
+    import importlib
+
+    from benchmarks.cluster_scale import PROBES, Probes
+
+    def target(module, cls, name):
+        owner = importlib.import_module(module)
+        return getattr(getattr(owner, cls) if cls else owner, name)
+
+    before = [target(m, c, n) for m, c, n, _label in PROBES]
+    with Probes() as probes:
+        assert all(target(m, c, n) is not b for (m, c, n, _l), b in zip(PROBES, before))
+        counted = probes._generator(lambda n: (yield from range(n)), "counting")
+        assert list(counted(3)) == [0, 1, 2]
+        assert "counting" in probes.per_document(1)
+    assert [target(m, c, n) for m, c, n, _label in PROBES] == before
+
+
+def test_a_cache_key_filed_again_holds_the_later_row_only(tmp_path):
+    """The coordinator files a site page's row twice under one key (blocks first, then
+    measured): the second filing wins and no second row appears (invented rows)."""
+    import zlib
+
+    from gate.state import open_state
+    state = open_state(tmp_path / "gate.sqlite")
+    first = ("k:print", "ab" * 32, '{"type": "html"}', '{"measured": false}',
+             zlib.compress(b"page text", 1))
+    later = ("k:print", "ab" * 32, '{"type": "html", "ok": true}', '{"measured": true}',
+             zlib.compress(b"page text", 1))
+    other = ("j:print", "cd" * 32, '{"type": "text"}', '{"measured": true}',
+             zlib.compress(b"other", 1))
+    state.cache_put_packed([first, other])
+    state.cache_put_packed([later])
+    assert state.cache_meta("k:print") == ({"type": "html", "ok": True}, {"measured": True})
+    assert state.cache_meta("j:print") == ({"type": "text"}, {"measured": True})
+    assert state.cache_text("k:print") == "page text"
+    assert state.conn.execute("SELECT COUNT(*) FROM cache").fetchone()[0] == 2
+    state.close()
