@@ -67,7 +67,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import block_hash, words
 
-TEMPLATES_VERSION = 18  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 19  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
