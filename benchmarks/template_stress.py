@@ -59,10 +59,19 @@ PERTURBATIONS = {
     "md-ref": "copies as Markdown with reference links and pipe tables",
     "pdf-running": "copies as PDF: running header and footer, 'Page n of m', justified "
                    "and hyphenated lines, a table",
+    "share-title": "template lines that name the page's own title ('Share <title>', "
+                   "'You are reading: <title>')",
+    "rotating-line": "one template line listing four trending titles drawn from a pool",
+    "mixed": "all of the HTML perturbations above at once (semantic markup)",
+    "mixed-soup": "all of them at once in div soup",
+    "mixed-few": "all of them at once on sites of 5 pages",
     "few-3": "sites of 3 pages",
     "few-5": "sites of 5 pages",
     "few-10": "sites of 10 pages",
 }
+_ALL = {"section-menus", "varying-lines", "related-quotes", "inserted-boxes", "side-toc",
+        "cookie-end", "rotated", "share-title", "rotating-line"}
+MIXED = {"mixed": _ALL, "mixed-soup": _ALL | {"div-soup"}, "mixed-few": _ALL}
 CROSS = {"txt-hyphen": "txt", "md-ref": "md", "pdf-running": "pdf"}
 NAMES = ("Ada Quill", "Bo Marrin", "Cleo Tarrant", "Dov Elsby", "Ena Rook", "Fitz Oddie")
 MONTHS = ("January February March April May June July August September October "
@@ -77,7 +86,8 @@ class Site:
     """An invented site with a heavy template; ``mode`` is the perturbation."""
 
     def __init__(self, rng: random.Random, host: str, org: str, mode: str):
-        self.host, self.org, self.mode = host, org, mode
+        self.host, self.org = host, org
+        self.modes = MIXED.get(mode, {mode})
         self.sections = ("services", "news", "events")
         self.menus = {s: [[title(rng) for _ in range(7)] for _ in range(6)]
                       for s in self.sections}
@@ -92,42 +102,42 @@ class Site:
 
     # -- the template's parts, as (role, html) -----------------------------------------
     def menu(self, section: str) -> list[str]:
-        menus = self.menus[section if self.mode == "section-menus" else "services"]
+        menus = self.menus[section if "section-menus" in self.modes else "services"]
         return [f"<li><span>{col[0]}</span><ul>" + "".join(
             f"<li><a href='/{section}/m/{i}/{j}'>{t}</a></li>" for j, t in enumerate(col))
             + "</ul></li>" for i, col in enumerate(menus)]
 
     def teasers(self, rng: random.Random, section: str, body: dict) -> list[str]:
-        chosen = self.section_pool[section] if self.mode == "section-menus" else \
+        chosen = self.section_pool[section] if "section-menus" in self.modes else \
             self.pool[:16]
         out = [f"<div class='teaser'><h3><a href='/t/{i}'>{t}</a></h3><p>{blurb}</p></div>"
                for i, (t, blurb) in enumerate(chosen)]
-        if self.mode == "related-quotes" and self.firsts:
+        if "related-quotes" in self.modes and self.firsts:
             quoted = rng.sample(self.firsts, min(4, len(self.firsts)))
             if rng.random() < 0.34:
                 quoted[0] = (body["title"], first_sentence(body))
             out.insert(0, "<div class='related'><h3>You may also like</h3><ul>" + "".join(
                 f"<li><a href='/r/{k}'>{t}</a> {s}</li>" for k, (t, s) in enumerate(quoted))
                 + "</ul></div>")
-        if self.mode == "side-toc":
+        if "side-toc" in self.modes:
             heads = [v for k, v in body["parts"] if k == "heading"]
             out.insert(0, "<div class='toc'><h3>On this page</h3><ul>" + "".join(
                 f"<li><a href='#s{k}'>{h}</a></li>" for k, h in enumerate(heads)) + "</ul></div>")
-        if self.mode == "varying-lines":
+        if "varying-lines" in self.modes:
             out.insert(0, f"<p>Updated {rng.randint(2, 23)} hours ago</p>"
                           f"<p>{rng.randint(40, 9000):,} views this week</p>")
         return out
 
     def body(self, rng: random.Random, body: dict) -> list[str]:
         parts = [f"<h1>{body['title']}</h1>"]
-        if self.mode == "varying-lines":
+        if "varying-lines" in self.modes:
             parts.append(f"<p>Last reviewed {date(rng)} by {rng.choice(NAMES)}</p>")
         paragraphs = 0
         for kind, value in body["parts"]:
             if kind == "p":
                 parts.append(f"<p>{value}</p>")
                 paragraphs += 1
-                if self.mode == "inserted-boxes" and paragraphs in (1, 3):
+                if "inserted-boxes" in self.modes and paragraphs in (1, 3):
                     parts.append(
                         "<div class='box'><h4>Get our newsletter</h4>"
                         f"<p>{self.newsletter}</p><a href='/signup'>Sign up</a></div>"
@@ -151,17 +161,25 @@ class Site:
         legal = [f"<p>{p}</p>" for p in self.legal]
         own = self.body(rng, body)
         top = [f"<div class='brand'>{org}</div>"]
-        if self.mode == "varying-lines":
+        if "share-title" in self.modes:
+            top.append(f"<p>You are reading: {body['title']}</p>")
+            legal.insert(0, f"<p><a href='/share'>Share</a> {body['title']} with a friend "
+                            f"or <a href='/print'>print</a> it</p>")
+        if "rotating-line" in self.modes:
+            trending = rng.sample(self.pool, 4)
+            top.append("<p>Trending: " + " | ".join(
+                f"<a href='/t/{k}'>{t}</a>" for k, (t, _s) in enumerate(trending)) + "</p>")
+        if "varying-lines" in self.modes:
             top.append(f"<p>Signed in as {rng.choice(NAMES)} - page {number + 1} of "
                        f"{rng.randint(number + 2, 60)}</p>")
             legal.append(f"<p>Page generated {date(rng)} at {rng.randint(0, 23)}:"
                          f"{rng.randint(10, 59)} for {org}</p>")
-        if self.mode == "rotated":
+        if "rotated" in self.modes:
             k = rng.randrange(len(menu))
             menu = menu[k:] + menu[:k]
             rng.shuffle(teasers)
             rng.shuffle(legal)
-        if self.mode == "div-soup":
+        if "div-soup" in self.modes:
             def soup(html: str) -> str:
                 for tag in ("ul", "li", "h1", "h2", "h3", "h4", "p", "span"):
                     html = html.replace(f"<{tag}>", "<div>").replace(f"</{tag}>", "</div>")
@@ -171,19 +189,19 @@ class Site:
                     f"<div><div>{''.join(teasers)}</div><div>{''.join(own)}</div></div>"
                     f"<div>{''.join(legal)}</div>")
             html = soup(html)
-        elif self.mode == "layout-table":
+        elif "layout-table" in self.modes:
             html = (f"<table><tr><td colspan='2'>{''.join(top)}<ul>{''.join(menu)}</ul></td>"
                     f"</tr><tr><td>{''.join(teasers)}</td><td>{''.join(own)}</td></tr>"
                     f"<tr><td colspan='2'>{''.join(legal)}</td></tr></table>")
         else:
             aside = f"<aside>{''.join(teasers)}</aside>"
             main = f"<article>{''.join(own)}</article>"
-            swap = self.mode == "rotated" and rng.random() < 0.5
+            swap = "rotated" in self.modes and rng.random() < 0.5
             middle = main + aside if swap else aside + main
             html = (f"<header>{''.join(top)}<nav><ul>{''.join(menu)}</ul></nav></header>"
                     f"<main>{middle}</main><footer>{''.join(legal)}<p>&copy; {org}</p>"
                     "</footer>")
-        if self.mode == "cookie-end":
+        if "cookie-end" in self.modes:
             html += (f"<div class='consent'><p>{self.cookie}</p><button>Accept all"
                      "</button><button>Reject</button><a href='/privacy'>Privacy notice</a>"
                      "</div>")
@@ -309,6 +327,8 @@ def make(out: Path, mode: str, seed: int = 24, pages: int = 16) -> Path:
     bodies.mkdir()
     if mode.startswith("few-"):
         pages, hosts = int(mode.split("-")[1]), HOSTS
+    elif mode == "mixed-few":
+        pages, hosts = 5, HOSTS
     else:
         hosts = HOSTS[:2]
     manifest, texts, docs, relations = [], {}, [], []
@@ -324,7 +344,7 @@ def make(out: Path, mode: str, seed: int = 24, pages: int = 16) -> Path:
         site = Site(rng, host, org, mode)
         for n in range(pages):
             body = make_body(rng)
-            if mode == "side-toc" and not any(k == "heading" for k, _ in body["parts"]):
+            if "side-toc" in site.modes and not any(k == "heading" for k, _ in body["parts"]):
                 body["parts"].insert(2, ("heading", title(rng)))
             section = site.sections[n % 3]
             path = f"{host}/{section}/page-{n:03d}.html"

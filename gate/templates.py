@@ -104,21 +104,58 @@ MONTHS = frozenset(
     "december jan feb mar apr jun jul aug sep sept oct nov dec".split())
 
 
+_RAW_WORD = re.compile(r"[^\W_]+")
+
+
+def _named(text: str, count: int) -> list[bool]:
+    """Which of a line's ``count`` words are names: capitalised words ("Ada", "Quill")
+    after the first, as a reader's or an author's name is written; none when the line's
+    raw words do not line up with its normalised ones."""
+    raw = _RAW_WORD.findall(text)
+    if len(raw) != count:
+        return [False] * count
+    return [i > 0 and len(w) > 1 and w[0].isupper() and w[1:].islower()
+            for i, w in enumerate(raw)]
+
+
 def shape_hash(text: str) -> int | None:
     """The hash of a short line's words with every word holding a digit made one and the
     same, and so is every month's name ("Updated 153 days ago" and "Updated 4 days ago"
-    alike, "Last reviewed 3 May 2026" and "Last reviewed 29 June 2026"); None for a block
-    that is not such a line (3 to 30 words, a digit among them, and not only numbers
-    and months)."""
+    alike, "Last reviewed 3 May 2026" and "Last reviewed 29 June 2026"), and every
+    capitalised word after the first, a name ("Signed in as Ada Quill", "Signed in as Bo
+    Marrin"); None for a block that is not such a line (3 to 30 words, a digit or a name
+    among them, and not only numbers, months and names)."""
     tokens = words(text)
-    if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS or \
-            not any(c.isdigit() for c in text):
+    if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS:
         return None
-    shape = " ".join("#" if t in MONTHS or any(c.isdigit() for c in t) else t
-                     for t in tokens)
+    named = _named(text, len(tokens))
+    if not any(named) and not any(c.isdigit() for c in text):
+        return None
+    shape = " ".join("#" if name or t in MONTHS or any(c.isdigit() for c in t) else t
+                     for t, name in zip(tokens, named))
     if shape.count("#") == len(tokens):
         return None
     digest = hashlib.blake2b(shape.encode("utf-8"), digest_size=8, person=b"shape").digest()
+    return int.from_bytes(digest, "little") >> 1
+
+
+def titled_hash(text: str, title: str) -> int | None:
+    """The shape of a short line that names the page's own title (``title``, normalised
+    words) among words of the template's ("You are reading: <title>", "Share <title> with
+    a friend"): the title made one word, numbers and months made one as in
+    :func:`shape_hash`; None when the line does not hold the title or holds little else
+    (fewer than two words, or more than ``SHAPE_MAX_WORDS``)."""
+    tokens = words(text)
+    size = title.count(" ") + 1
+    if not title or len(tokens) <= size + 1 or len(tokens) - size > SHAPE_MAX_WORDS:
+        return None
+    flat = f" {' '.join(tokens)} "
+    at = flat.find(f" {title} ")
+    if at < 0:
+        return None
+    rest = (flat[:at] + " \x00 " + flat[at + len(title) + 2:]).split()
+    shape = " ".join("#" if t in MONTHS or any(c.isdigit() for c in t) else t for t in rest)
+    digest = hashlib.blake2b(shape.encode("utf-8"), digest_size=8, person=b"titled").digest()
     return int.from_bytes(digest, "little") >> 1
 
 
@@ -153,13 +190,19 @@ def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
                                               len(b.text.split()) >= SHAPE_CELL_WORDS)) and
                      not b.nav and b.links < LINK_DOMINATED and
                      (shape := shape_hash(b.text)) is not None})
+    titles = {" ".join(words(b.text)) for b in blocks if b.title}
+    if len(titles) == 1:  # lines naming the page's own title ("Share <title> with a friend")
+        title = next(iter(titles))
+        shaped = sorted(set(shaped) | {
+            (shape, b.hash) for b in blocks
+            if not b.title and not b.nav and b.links < LINK_DOMINATED and
+            b.kind in ("text", "cell") and (shape := titled_hash(b.text, title)) is not None})
     summary: dict[str, Any] = {"main": main, "other": other,
                                "shaped": [list(pair) for pair in shaped]}
     signed = sorted({(stem, b.hash) for b in blocks if b.links < LINK_DOMINATED and
                      (stem := signed_hash(b.text)) is not None})
     if signed:
         summary["signed"] = [list(pair) for pair in signed]
-    titles = {" ".join(words(b.text)) for b in blocks if b.title}
     if len(titles) == 1:
         summary["title"] = titles.pop()
     return summary
@@ -272,7 +315,8 @@ def stored_pages(state: Any, batch: set[str]) -> list[Page]:
     return pages
 
 
-# (everywhere, aside-only[, the titles of the site's other pages, signed comments]), or ()
+# (everywhere, aside-only[, the titles of the site's other pages, blocks that go wherever
+# they stand: signed stock comments, lines in a wording of their own]), or ()
 Removal = tuple[tuple[int, ...], ...] | \
     tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...], tuple[int, ...]]
 
@@ -289,11 +333,12 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
         mine = mine[mine != np.uint64(block_hash(page.title) or 0)]
     found = [tuple(int(h) for h in np.intersect1d(mine, part, assume_unique=True))
              for part in template[:2]]
+    # a line in a wording of its own on this page ("Last reviewed 3 May 2026 by Ada
+    # Quill") goes wherever it stands, even between two paragraphs of the page's own: it
+    # is no stock sentence of the site's notices, which are worded alike on every page
     shaped = {h for shape, h in page.shaped if shape in template[2]} - set(found[0])
-    if shaped:
-        found[0] = tuple(sorted(set(found[0]) | shaped))
     titles = tuple(sorted(template[3] - {page.title}))
-    signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]}))
+    signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]} | shaped))
     if not (found[0] or found[1] or titles or signed):
         return ()
     return (found[0], found[1], titles, signed) if titles or signed else (found[0], found[1])

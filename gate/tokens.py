@@ -18,10 +18,10 @@ from functools import lru_cache
 _WORD = re.compile(r"[^\W_]+", re.UNICODE)
 # [text](target "title") and ![alt](source): the target is not text a reader sees
 _MD_LINK = re.compile(r"(!?)\[([^\]\n]*)\]\([^)\n]*\)")
-# <https://...> autolinks are text (an address, which plain() then drops); other tags are markup
 # [text][label], [text][] and ![alt][label]: a reference link shows its text; the label
 # names a definition ("[label]: target") that plain() drops with its line
 _MD_REF = re.compile(r"!?\[([^\]\n]*)\]\[[^\]\n]*\]")
+# <https://...> autolinks are text (an address, which plain() then drops); other tags are markup
 _TAG = re.compile(r"</?[A-Za-z][A-Za-z0-9-]*(?:\s[^<>\n]*)?/?>")
 _REF_DEF = re.compile(r"^\s{0,3}\[[^\]\n]+\]:\s*\S+.*$", re.M)
 # a web or mail address written out ("https://x.example.org/a", "www.x.example.org"): an

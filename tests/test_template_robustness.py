@@ -54,3 +54,48 @@ def test_hyphenated_text_and_pdf_give_the_words_of_the_unbroken_body():
     pdf = extract(pdf_document([wrapped]), max_pages=5, max_nesting=50).text
     assert words(text) == words(body)
     assert words(pdf) == words(body)
+
+
+def _page(i: int, lines: list[str], title: str):
+    from gate import templates
+    from gate.extract.model import Block
+    from gate.tokens import block_hash
+    body = [f"{title} paragraph {k} " + " ".join(f"w{i}x{k}y{j}" for j in range(40))
+            for k in range(2)]
+    texts = [(title, "heading", True), (lines[0], "text", False), (body[0], "text", False),
+             (lines[1], "text", False), (body[1], "text", False)]
+    blocks = [Block(t, block_hash(t), kind=kind, main=True, title=is_title)
+              for t, kind, is_title in texts]
+    return blocks, templates.Page.of("reviews.example.net html", templates.block_summary(blocks))
+
+
+def test_lines_that_differ_by_names_dates_or_the_pages_title_are_template():
+    # invented pages (stress benchmark's 'varying-lines' and 'share-title'): a reviewer's
+    # name and date, and a line naming the page's own title, between the page's own
+    # paragraphs; every page has them in a wording of its own
+    from gate import templates
+    names = ("Ada Quill", "Bo Marrin", "Cleo Tarrant", "Dov Elsby", "Ena Rook")
+    months = ("March", "May", "June", "October", "December")
+    pages = [_page(i, [f"Last reviewed {i + 3} {months[i % 5]} 2026 by {names[i % 5]}",
+                       f"Share Notice number {'abcdefgh'[i]} with a friend"],
+                   f"Notice number {'abcdefgh'[i]}") for i in range(8)]
+    learnt = templates.learn([p for _b, p in pages])
+    blocks, mine = pages[2]
+    drop = templates.removal(mine, learnt)
+    text = "\n".join(b.text for b in blocks)
+    cleaned, _info = templates.compose(text, blocks, drop)
+    # the title and the two paragraphs stay; the two lines go although they stand
+    # between paragraphs of the page's own
+    assert cleaned.split("\n") == [blocks[0].text, blocks[2].text, blocks[4].text]
+    assert templates.shape_hash("Signed in as Ada Quill") == \
+        templates.shape_hash("Signed in as Bo Marrin")
+    assert templates.shape_hash("Opening hours today") is None  # no number, no name
+
+
+def test_a_name_line_in_one_wording_is_left_to_the_exact_rule():
+    # the same reviewer everywhere: one wording, so no shape is learnt (invented)
+    from gate import templates
+    pages = [_page(i, ["Reviewed by Ada Quill of the board", f"Page note {'abcdefgh'[i]} x y"],
+                   f"Notice number {'abcdefgh'[i]}") for i in range(6)]
+    learnt = templates.learn([p for _b, p in pages])
+    assert not learnt["reviews.example.net html"][2]
