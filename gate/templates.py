@@ -58,7 +58,7 @@ import hashlib
 import math
 import re
 from collections.abc import Iterable, Sequence
-from dataclasses import dataclass
+from dataclasses import dataclass, field
 from typing import Any
 
 import numpy as np
@@ -199,6 +199,12 @@ def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
             b.kind in ("text", "cell") and (shape := titled_hash(b.text, title)) is not None})
     summary: dict[str, Any] = {"main": main, "other": other,
                                "shaped": [list(pair) for pair in shaped]}
+    # only their unlinked snippets: a teaser's title (a link, a heading) is another
+    # page's title, which stays there
+    nav = sorted({b.hash for b in blocks if b.nav and b.kind != "heading" and not b.links}
+                 - taken - set(other))
+    if nav:  # teaser lists: not counted, but known to be navigation where they are whole
+        summary["nav"] = nav
     signed = sorted({(stem, b.hash) for b in blocks if b.links < LINK_DOMINATED and
                      (stem := signed_hash(b.text)) is not None})
     if signed:
@@ -218,6 +224,8 @@ class Page:
     shaped: tuple[tuple[int, int], ...] = ()  # (shape hash, block hash) of numbered lines
     title: str = ""  # the words of its title (HTML: its one <h1>), normalised
     signed: tuple[tuple[int, int], ...] = ()  # (stem hash, block hash) of signed comments
+    nav: np.ndarray = field(  # blocks of its teaser lists
+        default_factory=lambda: np.zeros(0, dtype=np.uint64))
 
     @classmethod
     def of(cls, site: str, summary: dict[str, Any]) -> Page:
@@ -225,7 +233,8 @@ class Page:
                    np.array(summary.get("other", ()), dtype=np.uint64),
                    tuple((int(s), int(h)) for s, h in summary.get("shaped", ())),
                    str(summary.get("title") or ""),
-                   tuple((int(s), int(h)) for s, h in summary.get("signed", ())))
+                   tuple((int(s), int(h)) for s, h in summary.get("signed", ())),
+                   np.array(summary.get("nav", ()), dtype=np.uint64))
 
     @property
     def hashes(self) -> np.ndarray:
@@ -265,6 +274,13 @@ def learn(pages: Iterable[Page]) -> Learnt:
             (2 * mains <= total)
         aside |= total >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ROTATING * n))
         strong, weak = every[anywhere], every[aside & ~anywhere]
+        # blocks of teaser lists on a fifth of the pages (and five) where they were told
+        # for such: weak template on a page where the list was broken up (rotated in
+        # among other boxes) and its pieces were counted; a page's own opening, quoted
+        # in the teasers of others, follows its title there, not a link
+        weak = np.union1d(weak, np.setdiff1d(_on_pages(
+            [p.nav for p in distinct], max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n))),
+            strong))
         # short lines with numbers that differ from page to page ("Updated 153 days
         # ago", "1,849 views"): their shape on most pages, in more than one wording
         shapes = _varied((page.shaped for page in distinct),
@@ -282,6 +298,14 @@ def learn(pages: Iterable[Page]) -> Learnt:
         if len(strong) or len(weak) or shapes or titles or stems:
             learnt[site] = (strong, weak, shapes, titles, stems)
     return learnt
+
+
+def _on_pages(sets: Sequence[np.ndarray], least: int) -> np.ndarray:
+    """The hashes in at least ``least`` of ``sets`` (sorted, distinct uint64 arrays)."""
+    if not sets or not any(len(x) for x in sets):
+        return np.zeros(0, dtype=np.uint64)
+    values, counts = np.unique(np.concatenate(sets), return_counts=True)
+    return values[counts >= least]
 
 
 def _varied(per_page: Iterable[Iterable[tuple[int, int]]], least: int) -> frozenset[int]:

@@ -99,3 +99,40 @@ def test_a_name_line_in_one_wording_is_left_to_the_exact_rule():
                    f"Notice number {'abcdefgh'[i]}") for i in range(6)]
     learnt = templates.learn([p for _b, p in pages])
     assert not learnt["reviews.example.net html"][2]
+
+
+def test_teaser_snippets_told_elsewhere_go_where_the_list_was_broken_up():
+    # invented pages (stress benchmark's 'mixed-soup'): a section's teasers (a linked
+    # title, an unlinked snippet) are a teaser list on most pages; on one page other boxes
+    # stand between them, the list is not told, and its snippets were counted as text
+    from gate import templates
+    from gate.extract.model import Block
+    from gate.tokens import block_hash
+
+    def b(text, **kw):
+        return Block(text, block_hash(text), **kw)
+
+    snippet = "Street works on the north route close the footpath for three weeks in May."
+    own = "Our notice number {} explains the new rates " + " ".join(f"w{j}" for j in range(40))
+    pages = []
+    for i in range(8):
+        told = i != 3
+        blocks = [b(f"Notice {'abcdefgh'[i]} of the harbour office", kind="heading",
+                    title=True, main=True),
+                  b(own.format(i), main=True),
+                  b("North route works", links=1.0, lead=1.0, nav=told),
+                  b(snippet, nav=told, main=not told),
+                  b("Rates for moorings", links=1.0, lead=1.0, nav=told),
+                  b(f"Mooring rates change in spring {'abcdefgh'[i]} for every berth here.",
+                    nav=told)]
+        pages.append((blocks, templates.Page.of("harbour.example.net html",
+                                                templates.block_summary(blocks))))
+    learnt = templates.learn([p for _b, p in pages])
+    blocks, mine = pages[3]
+    drop = templates.removal(mine, learnt)
+    text = "\n".join(x.text for x in blocks[:2] + blocks[3:4])
+    cleaned, _info = templates.compose(text, blocks, drop)
+    assert cleaned.split("\n") == [blocks[0].text, blocks[1].text]
+    # the linked titles are never learnt so: another page's title stays on that page
+    assert block_hash("North route works") not in {int(h) for h in learnt[
+        "harbour.example.net html"][1]}
