@@ -24,7 +24,10 @@ template when it occurs
   link-dominated or an everywhere-template block, so a stock paragraph that several
   notices of a site share (and that trafilatura missed) is not taken for a teaser.
 
-Short lines with numbers and dates are counted by their shape (:func:`shape_hash`),
+Short lines with numbers, dates and names are counted by their shape (:func:`shape_hash`,
+and :func:`titled_hash` for a line naming the page's own title) and go wherever they
+stand; the unlinked snippets of teaser lists told on a fifth of the pages are weak
+template where a page's list was broken up and its snippets counted;
 comments signed at their end by their words without the signature (:func:`signed_hash`),
 and each page's title (its ``<h1>``) is learnt so that lists quoting it on other pages
 are known for teasers (:func:`_quoting`).
