@@ -24,7 +24,10 @@ template when it occurs
   link-dominated or an everywhere-template block, so a stock paragraph that several
   notices of a site share (and that trafilatura missed) is not taken for a teaser.
 
-Short lines with numbers and dates are counted by their shape (:func:`shape_hash`),
+Short lines with numbers, dates and names are counted by their shape (:func:`shape_hash`,
+and :func:`titled_hash` for a line naming the page's own title) and go wherever they
+stand; the unlinked snippets of teaser lists told on a fifth of the pages are weak
+template where a page's list was broken up and its snippets counted;
 comments signed at their end by their words without the signature (:func:`signed_hash`),
 and each page's title (its ``<h1>``) is learnt so that lists quoting it on other pages
 are known for teasers (:func:`_quoting`).
@@ -58,7 +61,7 @@ import hashlib
 import math
 import re
 from collections.abc import Iterable, Sequence
-from dataclasses import dataclass
+from dataclasses import dataclass, field
 from typing import Any
 
 import numpy as np
@@ -67,7 +70,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import block_hash, words
 
-TEMPLATES_VERSION = 18  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 19  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -104,21 +107,58 @@ MONTHS = frozenset(
     "december jan feb mar apr jun jul aug sep sept oct nov dec".split())
 
 
+_RAW_WORD = re.compile(r"[^\W_]+")
+
+
+def _named(text: str, count: int) -> list[bool]:
+    """Which of a line's ``count`` words are names: capitalised words ("Ada", "Quill")
+    after the first, as a reader's or an author's name is written; none when the line's
+    raw words do not line up with its normalised ones."""
+    raw = _RAW_WORD.findall(text)
+    if len(raw) != count:
+        return [False] * count
+    return [i > 0 and len(w) > 1 and w[0].isupper() and w[1:].islower()
+            for i, w in enumerate(raw)]
+
+
 def shape_hash(text: str) -> int | None:
     """The hash of a short line's words with every word holding a digit made one and the
     same, and so is every month's name ("Updated 153 days ago" and "Updated 4 days ago"
-    alike, "Last reviewed 3 May 2026" and "Last reviewed 29 June 2026"); None for a block
-    that is not such a line (3 to 30 words, a digit among them, and not only numbers
-    and months)."""
+    alike, "Last reviewed 3 May 2026" and "Last reviewed 29 June 2026"), and every
+    capitalised word after the first, a name ("Signed in as Ada Quill", "Signed in as Bo
+    Marrin"); None for a block that is not such a line (3 to 30 words, a digit or a name
+    among them, and not only numbers, months and names)."""
     tokens = words(text)
-    if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS or \
-            not any(c.isdigit() for c in text):
+    if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS:
         return None
-    shape = " ".join("#" if t in MONTHS or any(c.isdigit() for c in t) else t
-                     for t in tokens)
+    named = _named(text, len(tokens))
+    if not any(named) and not any(c.isdigit() for c in text):
+        return None
+    shape = " ".join("#" if name or t in MONTHS or any(c.isdigit() for c in t) else t
+                     for t, name in zip(tokens, named))
     if shape.count("#") == len(tokens):
         return None
     digest = hashlib.blake2b(shape.encode("utf-8"), digest_size=8, person=b"shape").digest()
+    return int.from_bytes(digest, "little") >> 1
+
+
+def titled_hash(text: str, title: str) -> int | None:
+    """The shape of a short line that names the page's own title (``title``, normalised
+    words) among words of the template's ("You are reading: <title>", "Share <title> with
+    a friend"): the title made one word, numbers and months made one as in
+    :func:`shape_hash`; None when the line does not hold the title or holds little else
+    (fewer than two words, or more than ``SHAPE_MAX_WORDS``)."""
+    tokens = words(text)
+    size = title.count(" ") + 1
+    if not title or len(tokens) <= size + 1 or len(tokens) - size > SHAPE_MAX_WORDS:
+        return None
+    flat = f" {' '.join(tokens)} "
+    at = flat.find(f" {title} ")
+    if at < 0:
+        return None
+    rest = (flat[:at] + " \x00 " + flat[at + len(title) + 2:]).split()
+    shape = " ".join("#" if t in MONTHS or any(c.isdigit() for c in t) else t for t in rest)
+    digest = hashlib.blake2b(shape.encode("utf-8"), digest_size=8, person=b"titled").digest()
     return int.from_bytes(digest, "little") >> 1
 
 
@@ -153,13 +193,25 @@ def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
                                               len(b.text.split()) >= SHAPE_CELL_WORDS)) and
                      not b.nav and b.links < LINK_DOMINATED and
                      (shape := shape_hash(b.text)) is not None})
+    titles = {" ".join(words(b.text)) for b in blocks if b.title}
+    if len(titles) == 1:  # lines naming the page's own title ("Share <title> with a friend")
+        title = next(iter(titles))
+        shaped = sorted(set(shaped) | {
+            (shape, b.hash) for b in blocks
+            if not b.title and not b.nav and b.links < LINK_DOMINATED and
+            b.kind in ("text", "cell") and (shape := titled_hash(b.text, title)) is not None})
     summary: dict[str, Any] = {"main": main, "other": other,
                                "shaped": [list(pair) for pair in shaped]}
+    # only their unlinked snippets: a teaser's title (a link, a heading) is another
+    # page's title, which stays there
+    nav = sorted({b.hash for b in blocks if b.nav and b.kind != "heading" and not b.links}
+                 - taken - set(other))
+    if nav:  # teaser lists: not counted, but known to be navigation where they are whole
+        summary["nav"] = nav
     signed = sorted({(stem, b.hash) for b in blocks if b.links < LINK_DOMINATED and
                      (stem := signed_hash(b.text)) is not None})
     if signed:
         summary["signed"] = [list(pair) for pair in signed]
-    titles = {" ".join(words(b.text)) for b in blocks if b.title}
     if len(titles) == 1:
         summary["title"] = titles.pop()
     return summary
@@ -175,6 +227,8 @@ class Page:
     shaped: tuple[tuple[int, int], ...] = ()  # (shape hash, block hash) of numbered lines
     title: str = ""  # the words of its title (HTML: its one <h1>), normalised
     signed: tuple[tuple[int, int], ...] = ()  # (stem hash, block hash) of signed comments
+    nav: np.ndarray = field(  # blocks of its teaser lists
+        default_factory=lambda: np.zeros(0, dtype=np.uint64))
 
     @classmethod
     def of(cls, site: str, summary: dict[str, Any]) -> Page:
@@ -182,7 +236,8 @@ class Page:
                    np.array(summary.get("other", ()), dtype=np.uint64),
                    tuple((int(s), int(h)) for s, h in summary.get("shaped", ())),
                    str(summary.get("title") or ""),
-                   tuple((int(s), int(h)) for s, h in summary.get("signed", ())))
+                   tuple((int(s), int(h)) for s, h in summary.get("signed", ())),
+                   np.array(summary.get("nav", ()), dtype=np.uint64))
 
     @property
     def hashes(self) -> np.ndarray:
@@ -222,6 +277,13 @@ def learn(pages: Iterable[Page]) -> Learnt:
             (2 * mains <= total)
         aside |= total >= max(ASIDE_MIN_PAGES, math.ceil(SHARE_ROTATING * n))
         strong, weak = every[anywhere], every[aside & ~anywhere]
+        # blocks of teaser lists on a fifth of the pages (and five) where they were told
+        # for such: weak template on a page where the list was broken up (rotated in
+        # among other boxes) and its pieces were counted; a page's own opening, quoted
+        # in the teasers of others, follows its title there, not a link
+        weak = np.union1d(weak, np.setdiff1d(_on_pages(
+            [p.nav for p in distinct], max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n))),
+            strong))
         # short lines with numbers that differ from page to page ("Updated 153 days
         # ago", "1,849 views"): their shape on most pages, in more than one wording
         shapes = _varied((page.shaped for page in distinct),
@@ -239,6 +301,14 @@ def learn(pages: Iterable[Page]) -> Learnt:
         if len(strong) or len(weak) or shapes or titles or stems:
             learnt[site] = (strong, weak, shapes, titles, stems)
     return learnt
+
+
+def _on_pages(sets: Sequence[np.ndarray], least: int) -> np.ndarray:
+    """The hashes in at least ``least`` of ``sets`` (sorted, distinct uint64 arrays)."""
+    if not sets or not any(len(x) for x in sets):
+        return np.zeros(0, dtype=np.uint64)
+    values, counts = np.unique(np.concatenate(sets), return_counts=True)
+    return values[counts >= least]
 
 
 def _varied(per_page: Iterable[Iterable[tuple[int, int]]], least: int) -> frozenset[int]:
@@ -272,7 +342,8 @@ def stored_pages(state: Any, batch: set[str]) -> list[Page]:
     return pages
 
 
-# (everywhere, aside-only[, the titles of the site's other pages, signed comments]), or ()
+# (everywhere, aside-only[, the titles of the site's other pages, blocks that go wherever
+# they stand: signed stock comments, lines in a wording of their own]), or ()
 Removal = tuple[tuple[int, ...], ...] | \
     tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...], tuple[int, ...]]
 
@@ -289,11 +360,12 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
         mine = mine[mine != np.uint64(block_hash(page.title) or 0)]
     found = [tuple(int(h) for h in np.intersect1d(mine, part, assume_unique=True))
              for part in template[:2]]
+    # a line in a wording of its own on this page ("Last reviewed 3 May 2026 by Ada
+    # Quill") goes wherever it stands, even between two paragraphs of the page's own: it
+    # is no stock sentence of the site's notices, which are worded alike on every page
     shaped = {h for shape, h in page.shaped if shape in template[2]} - set(found[0])
-    if shaped:
-        found[0] = tuple(sorted(set(found[0]) | shaped))
     titles = tuple(sorted(template[3] - {page.title}))
-    signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]}))
+    signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]} | shaped))
     if not (found[0] or found[1] or titles or signed):
         return ()
     return (found[0], found[1], titles, signed) if titles or signed else (found[0], found[1])

@@ -1,10 +1,11 @@
 """The one token stream of a text: what shingles, block hashes and template learning read.
 
 Every format reaches the same words: Markdown markup (heading marks, emphasis, list
-bullets, ordered-list numbers, table pipes and separator rows, link targets and image
-sources), inline HTML tags, written-out web addresses and punctuation are not words, so
-a heading, a list item or a table cell gives the same tokens whether it came from HTML,
-PDF, plain text or Markdown. A leaf module: it imports nothing of gate.
+bullets, ordered-list numbers, table pipes and separator rows, link targets, image
+sources and reference labels), inline HTML tags, written-out web addresses and
+punctuation are not words, so a heading, a list item or a table cell gives the same
+tokens whether it came from HTML, PDF, plain text or Markdown. A leaf module: it
+imports nothing of gate.
 """
 
 from __future__ import annotations
@@ -17,6 +18,9 @@ from functools import lru_cache
 _WORD = re.compile(r"[^\W_]+", re.UNICODE)
 # [text](target "title") and ![alt](source): the target is not text a reader sees
 _MD_LINK = re.compile(r"(!?)\[([^\]\n]*)\]\([^)\n]*\)")
+# [text][label], [text][] and ![alt][label]: a reference link shows its text; the label
+# names a definition ("[label]: target") that plain() drops with its line
+_MD_REF = re.compile(r"!?\[([^\]\n]*)\]\[[^\]\n]*\]")
 # <https://...> autolinks are text (an address, which plain() then drops); other tags are markup
 _TAG = re.compile(r"</?[A-Za-z][A-Za-z0-9-]*(?:\s[^<>\n]*)?/?>")
 _REF_DEF = re.compile(r"^\s{0,3}\[[^\]\n]+\]:\s*\S+.*$", re.M)
@@ -30,11 +34,13 @@ _ORDERED = re.compile(r"^(\s*(?:[-*+>]\s+)?)\d{1,3}[.)](?=\s)", re.M)
 
 
 def plain(text: str) -> str:
-    """``text`` without Markdown link targets, reference definitions, HTML tags, written-out
-    web addresses and ordered-list numbers (the rest of the markup is punctuation, which
-    :func:`words` drops anyway)."""
+    """``text`` without Markdown link targets, reference labels and definitions, HTML
+    tags, written-out web addresses and ordered-list numbers (the rest of the markup is
+    punctuation, which :func:`words` drops anyway)."""
     if "](" in text:
         text = _MD_LINK.sub(lambda m: m.group(2), text)
+    if "][" in text:
+        text = _MD_REF.sub(lambda m: m.group(1), text)
     if "]:" in text:
         text = _REF_DEF.sub("", text)
     if "<" in text:

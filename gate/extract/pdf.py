@@ -17,7 +17,7 @@ import pypdf
 from pypdf.errors import DependencyError, FileNotDecryptedError, LimitReachedError, PyPdfError
 
 from gate.extract.model import DateClaim, Extracted, Extraction, failed
-from gate.extract.text import clean_text
+from gate.extract.text import clean_text, joined_hyphens
 from gate.tokens import words
 
 logging.getLogger("pypdf").setLevel(logging.ERROR)
@@ -189,7 +189,7 @@ def _extract(data: bytes, max_pages: int, main_text: str | None = None) -> Extra
             RecursionError, AssertionError, ZeroDivisionError, OverflowError) as err:
         return failed("pdf", "broken", f"text extraction failed on page {len(texts) + 1}: "
                                        f"{_why(err)}", **common)
-    text = clean_text("\n\n".join(without_furniture(texts)))
+    text = joined_hyphens(clean_text("\n\n".join(without_furniture(texts))))
     summary = Extracted(type="pdf", text_chars=len(text), **common)
     extraction = Extraction(summary=summary, text=text, raw=data, reader=reader)
     extraction.extras["xmp"] = _TAGS.sub(" ", xmp)[:MAX_META_CHARS]

@@ -8,6 +8,7 @@ import charset_normalizer
 
 from gate.extract.model import Extracted, Extraction, failed
 from gate.extract.sniff import BOMS
+from gate.tokens import words
 
 # C0 controls other than tab, line feed and carriage return, plus DEL. They carry no
 # text and confuse downstream tokenisers; NUL in particular truncates C strings.
@@ -106,6 +107,59 @@ def without_export_header(text: str) -> str:
     return "\n".join(lines[start:end]).strip("\n")
 
 
+# a word broken at a line's end ("resi-" + "dents"): letters, one hyphen (or a soft
+# hyphen) and the end of the line; the next line goes on with a lower-case letter
+_BROKEN_TAIL = re.compile(r"(?<![\w-])([^\W\d_]{2,})[-\u00ad]$")
+_BROKEN_HEAD = re.compile(r"^(\s*)([^\W\d_]+)")
+
+
+def joined_hyphens(text: str) -> str:
+    """A hard-wrapped text (a text export, a PDF's lines) with the words that typesetting
+    broke at a line's end made whole again, so that it gives the words HTML gives for the
+    same body: "resi-" / "dents of" becomes "residents" / "of". A hyphen at a line's end
+    may also belong to a compound ("well-" / "known"), which HTML writes with its hyphen
+    (two words); the document's own words are the dictionary (common practice in
+    dehyphenation): the pieces are joined when the whole word occurs elsewhere in the
+    text, or when either piece does not occur as a word of its own; a compound whose two
+    parts both occur alone, and never joined, keeps its hyphen."""
+    if "-\n" not in text and "\u00ad\n" not in text:
+        return text
+    lines = text.split("\n")
+    breaks = []  # (line index, head piece, tail piece)
+    for i in range(len(lines) - 1):
+        tail = _BROKEN_TAIL.search(lines[i])
+        head = _BROKEN_HEAD.match(lines[i + 1]) if tail else None
+        if tail and head and head.group(2)[0].islower():
+            breaks.append((i, tail, head))
+    if not breaks:
+        return text
+    counts: dict[str, int] = {}
+    for word in words(text):
+        counts[word] = counts.get(word, 0) + 1
+    pieces: dict[str, int] = {}  # how often a word occurs as a broken piece
+    for _i, tail, head in breaks:
+        for piece in (tail.group(1), head.group(2)):
+            key = piece.casefold()
+            pieces[key] = pieces.get(key, 0) + 1
+
+    def alone(piece: str) -> bool:
+        key = piece.casefold()
+        return counts.get(key, 0) > pieces.get(key, 0)
+
+    for i, tail, head in breaks:
+        first, second = tail.group(1), head.group(2)
+        if not (counts.get((first + second).casefold()) or
+                not alone(first) or not alone(second)):
+            continue  # a compound: "well-" / "known" with "well" and "known" elsewhere
+        broken = tail.group(0)  # the line's end, as found before any join
+        if not lines[i].endswith(broken) or not lines[i + 1].startswith(head.group(0)):
+            continue  # a line that an earlier join emptied
+        lines[i] = lines[i][:len(lines[i]) - len(broken)] + first + second
+        rest = lines[i + 1][head.end():].lstrip()
+        lines[i + 1] = head.group(1) + rest if rest else ""
+    return "\n".join(lines)
+
+
 def decode(data: bytes, encoding: str | None = None) -> tuple[str, str] | None:
     """Decode bytes to text: a known encoding, else strict UTF-8, else detection.
 
@@ -146,6 +200,6 @@ def extract_text(data: bytes, encoding: str | None) -> Extraction:
     text, used = decoded
     cleaned = clean_text(text)
     stripped = without_export_header(cleaned)
-    cleaned = stripped if stripped.strip() else cleaned
+    cleaned = joined_hyphens(stripped if stripped.strip() else cleaned)
     summary = Extracted(type="text", encoding=used, text_chars=len(cleaned))
     return Extraction(summary=summary, text=cleaned, raw=data, decoded=text)
