@@ -341,11 +341,18 @@ def doc_probability(mdl: M.Model, text: str) -> float:
 
 def choose(negatives: dict[str, tuple[list[float], float]]) -> float:
     """The lowest threshold holding at most the given share of each group of negatives."""
-    for t in np.arange(0.50, 0.996, 0.005):
+    for t in GRID:
         if all((np.mean(np.array(p) >= t) if p else 0.0) <= rate
                for p, rate in negatives.values()):
-            return float(round(t, 3))
-    return 0.995
+            return float(t)
+    return float(GRID[-1])
+
+
+# Thresholds tried: steps of 0.005 to 0.995, then finer towards 0.9999 (a model trained on
+# many hard negatives holds some of them with great confidence).
+GRID = np.round(np.concatenate([np.arange(0.50, 0.996, 0.005),
+                                [0.996, 0.997, 0.998, 0.9985, 0.999, 0.9993, 0.9995,
+                                 0.9997, 0.9998, 0.9999]]), 4)
 
 
 def main(argv: list[str] | None = None) -> int:
@@ -369,6 +376,8 @@ def main(argv: list[str] | None = None) -> int:
                         help=f"leave out the rows in {TRAIN_DIR.relative_to(ROOT)}/{TRAIN24}")
     parser.add_argument("--evaluate-only", metavar="WEIGHTS", default=None,
                         help="with --leave-out: measure this weights file instead of training")
+    parser.add_argument("--model-alone", action="store_true",
+                        help="with --leave-out: measure the model alone, not the whole check")
     args = parser.parse_args(argv)
     sets = [x.strip() for x in args.blind_sets.split(",") if x.strip()]
     unknown = [x for x in sets if x not in BLIND_SETS]
@@ -379,7 +388,8 @@ def main(argv: list[str] | None = None) -> int:
     if args.leave_out:
         sets = [x for x in sets if x != args.leave_out]
         if args.evaluate_only:
-            return leave_out_report(Path(args.evaluate_only), args.leave_out)
+            return leave_out_report(Path(args.evaluate_only), args.leave_out,
+                                    args.model_alone)
     tag = f"leave-out-{args.leave_out}" + ("-no24" if args.no_train24 else "") \
         if args.leave_out else None
     if args.out is None:
@@ -547,11 +557,11 @@ def main(argv: list[str] | None = None) -> int:
     print("\n".join(lines))
     print(f"\ntotal {time.time() - t0:.0f} s", flush=True)
     if args.leave_out:
-        return leave_out_report(Path(args.out), args.leave_out)
+        return leave_out_report(Path(args.out), args.leave_out, args.model_alone)
     return 0
 
 
-def leave_out_report(weights: Path, name: str) -> int:
+def leave_out_report(weights: Path, name: str, model_alone: bool = False) -> int:
     """Recall per class and benign rate on a blind set the weights were not trained on:
     the model alone (a document is held when a window of its text holds, as in the
     validation above) and the whole check with these weights in place of the shipped ones.
@@ -564,11 +574,28 @@ def leave_out_report(weights: Path, name: str) -> int:
     for r in rows:
         ex = extract(r["data"], max_pages=50, max_nesting=250)
         plain = [] if r["path"].endswith((".pdf", ".eml")) else _plain_lines(r["data"])
-        alone.append(dict(r, flagged=mdl.holds(lfold("\n".join([ex.text or ""] + plain))),
-                          measured=None))
+        folded = lfold("\n".join([ex.text or ""] + plain))
+        alone.append(dict(r, flagged=mdl.holds(folded), measured=None,
+                          p=mdl.probability(folded)))
     print(f"\nLEAVE-OUT {name}: the model alone ({weights.name}, threshold "
-          f"{mdl.threshold}, addressed {mdl.addressed}), {len(rows)} documents\n")
+          f"{mdl.threshold:.4f}, addressed {mdl.addressed:.4f}), {len(rows)} documents\n")
     a = report_blind(alone)
+    # Threshold-free: how well the document score (its strongest window) ranks this set's
+    # attacks above its benign documents. The cut is read off the set itself, so these
+    # figures compare models; they are not what the shipped thresholds give.
+    pos = np.array([r["p"] for r in alone if r["label"] == "attack"])
+    neg = np.array([r["p"] for r in alone if r["label"] != "attack"])
+    ranks = []
+    for rate in (0.02, 0.05):
+        cut = np.quantile(neg, 1.0 - rate, method="higher") if len(neg) else 1.0
+        ranks.append(f"recall at {rate:.0%} benign {np.mean(pos > cut):.3f}")
+    auc = float(np.mean(pos[:, None] > neg[None, :]) +
+                0.5 * np.mean(pos[:, None] == neg[None, :])) if len(pos) and len(neg) else 0.0
+    print(f"ranking (model alone): {', '.join(ranks)}, AUC {auc:.3f}")
+    if model_alone:
+        print(f"\nleave-out {name} summary: model alone recall {a['recall']:.3f}, benign "
+              f"{a['fp_rate']:.3f} ({ranks[0]}, AUC {auc:.3f})")
+        return 0
     saved = list(M._MODEL)
     M._MODEL[:] = [mdl]
     try:
@@ -577,7 +604,8 @@ def leave_out_report(weights: Path, name: str) -> int:
     finally:
         M._MODEL[:] = saved
     print(f"\nleave-out {name} summary: model alone recall {a['recall']:.3f}, benign "
-          f"{a['fp_rate']:.3f}; whole check recall {w['recall']:.3f}, benign {w['fp_rate']:.3f}")
+          f"{a['fp_rate']:.3f} ({ranks[0]}, AUC {auc:.3f}); whole check recall {w['recall']:.3f}, "
+          f"benign {w['fp_rate']:.3f}")
     return 0
 
 
