@@ -193,6 +193,14 @@ def _payload(mine: list[str], hosts: list[set[str]]) -> list[str] | None:
     return payload if 0 < len(payload) <= 8 else None
 
 
+_WORDS = re.compile(r"\w+")
+
+
+def _new_share(item: str, known: set[str]) -> float:
+    words = _WORDS.findall(item.lower())
+    return sum(w not in known for w in words) / len(words) if words else 0.0
+
+
 def blind_rows(folder: Path) -> list[dict]:
     return [json.loads(x) for x in (folder / "labels.jsonl").read_text(encoding="utf-8")
             .splitlines() if x.strip()]
@@ -227,6 +235,14 @@ def blind(units: Units, stats: Counter, name: str = "blind1",
         return [] if f.endswith((".pdf", ".eml")) else _plain_lines(data[f])
 
     benign = [r for r in rows if r["label"] == "benign"]
+    # What a document is made of, both ways; a payload is used in one or two documents of a
+    # set, while its hosts' lines and the boilerplate of a format (a title line, "Print
+    # this page", a cookie notice) recur in many: only items found in at most two
+    # documents, and in no benign one, are payload.
+    items = {r["file"]: set(lines(r["file"])) | set(_sentences_of(extracted(r["file"])))
+             for r in rows}
+    seen_in = Counter(x for r in rows for x in items[r["file"]])
+    in_benign = set().union(*(items[r["file"]] for r in benign)) if benign else set()
     by_host: dict = defaultdict(list)
     for r in benign:
         by_host[r.get("host")].append(r["file"])
@@ -249,6 +265,13 @@ def blind(units: Units, stats: Counter, name: str = "blind1",
         if payload is None and len(hosts) <= 12:
             payload = _payload(_sentences_of(extracted(r["file"])),
                                [set(_sentences_of(extracted(f))) for f in hosts])
+        if payload is not None:
+            # ... and whose words are mostly new: a host line joined or wrapped otherwise in
+            # this format (a title run into its byline) is made of the host's words.
+            known = set(_WORDS.findall(" ".join(extracted(f) + "\n" + "\n".join(lines(f))
+                                                for f in hosts[:12]).lower()))
+            payload = [x for x in payload if seen_in[x] <= 2 and x not in in_benign and
+                       _new_share(x, known) >= 0.5] or None
         if payload is None:
             stats[f"{name} attacks without a payload found"] += 1
             continue
