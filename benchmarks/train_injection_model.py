@@ -508,7 +508,9 @@ def main(argv: list[str] | None = None) -> int:
     addressed, neg = threshold, {"real": ([lfold(t) for _, _, t in val_real], FP_REAL),
                                  "blind": (val_texts["blind benign"], FP_HARD),
                                  "snippets": (val_texts["snippet benign"], FP_HARD)}
-    for mark in np.arange(0.5, threshold, 0.01):
+    # from half way between the low mark and the threshold: naming an AI reader is
+    # evidence, but a sentence about an assistant names one too
+    for mark in np.arange(round((low + threshold) / 2, 2), threshold, 0.01):
         mdl.addressed = float(mark)
         if all(np.mean([mdl.holds(t) for t in texts]) <= rate if texts else True
                for texts, rate in neg.values()):
@@ -551,7 +553,7 @@ def main(argv: list[str] | None = None) -> int:
         "",
         f"Addressed mark **{addressed}**: a window naming an AI reader (or the reader's "
         "answer with its user) at or above it is an instruction on its own; the lowest mark "
-        "within the same limits.",
+        "within the same limits, from half way between the low mark and the threshold.",
         "",
         f"* validation attacks: {len(pos)}, recall at the threshold {at['recall']:.3f}, "
         f"with the addressed mark {np.mean(held_pos):.3f}, at low "
