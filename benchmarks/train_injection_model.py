@@ -268,8 +268,11 @@ def blind(units: Units, stats: Counter, name: str = "blind1",
         if payload is not None:
             # ... and whose words are mostly new: a host line joined or wrapped otherwise in
             # this format (a title run into its byline) is made of the host's words.
+            # (a set naming no hosts: the benign document sharing most with the attack)
+            near = hosts if len(hosts) <= 12 else \
+                [max(hosts, key=lambda f: len(items[f] & items[r["file"]]))]
             known = set(_WORDS.findall(" ".join(extracted(f) + "\n" + "\n".join(lines(f))
-                                                for f in hosts[:12]).lower()))
+                                                for f in near).lower()))
             payload = [x for x in payload if seen_in[x] <= 2 and x not in in_benign and
                        _new_share(x, known) >= 0.5] or None
         if payload is None:
