@@ -304,11 +304,21 @@ def main(argv: list[str] | None = None) -> int:
                         "blindN-host: for ...blindN)")
     parser.add_argument("--blind-only", action="store_true",
                         help="measure only the blind set (skip the fixture corpus and the mix)")
+    parser.add_argument("--weights", default=None,
+                        help="instruction-model weights to use instead of the shipped file "
+                        "(e.g. bench-out/leave-out-blind4.npz from train_injection_model.py "
+                        "--leave-out blind4: the check on a set its model never saw)")
     parser.add_argument("--verbose", action="store_true")
     args = parser.parse_args(argv)
     if args.verbose and args.blind_half == "held":
         parser.error("--verbose lists documents; the held half is read in aggregate only")
     sys.path.insert(0, str(ROOT))
+    if args.weights:
+        from gate.checks.injection import model as learnt
+        try:
+            learnt._MODEL[:] = [learnt.Model(Path(args.weights))]
+        except (OSError, ValueError, KeyError) as err:
+            parser.error(f"--weights {args.weights}: not a weights file ({err})")
     if not args.blind_only:
         rows = load_corpus(args.split)
         run(rows[:3], repeat=1)  # warm caches and imports before timing

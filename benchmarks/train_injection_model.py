@@ -55,6 +55,10 @@ from gate.checks.injection.lexicon import lfold  # noqa: E402
 
 TRAIN_DIR = ROOT / "benchmarks" / "data" / "injection_train"
 BLIND_DIR = ROOT / "benchmarks" / "data" / "injection_blind"
+# The blind sets that are tuning data now (each was looked at and tuned on): name -> folder.
+BLIND_SETS = {"blind1": BLIND_DIR, **{f"blind{n}": ROOT / "benchmarks" / "data" /
+                                      f"injection_blind{n}" for n in (2, 3, 4)}}
+TRAIN24 = "train24"  # the sub-folder of TRAIN_DIR holding the rows written for issue 15
 FIXTURES = ROOT / "tests" / "fixtures" / "injection"
 CACHE = ROOT / "bench-out" / "train-cache"
 OUT = M.WEIGHTS
@@ -119,28 +123,34 @@ class Units:
 
 # -- sources -----------------------------------------------------------------------------------
 
-def snippets(units: Units, stats: Counter) -> list[dict]:
+def snippets(units: Units, stats: Counter, train24: bool = True) -> list[dict]:
     """The written snippets; returns the validation ones (scored as one-unit documents)."""
     val = []
-    for path in sorted(TRAIN_DIR.glob("*.jsonl")):
-        for n, line in enumerate(path.read_text(encoding="utf-8").splitlines()):
+    paths = sorted(TRAIN_DIR.glob("*.jsonl"))
+    if train24:
+        paths += sorted((TRAIN_DIR / TRAIN24).glob("*.jsonl"))
+    for path in paths:
+        source = "extra" if path.name.startswith("extra") else \
+            TRAIN24 if path.parent.name == TRAIN24 else "snippet"
+        for line in path.read_text(encoding="utf-8").splitlines():
             if not line.strip():
                 continue
             item = json.loads(line)
             label = 1 if item["label"] == "attack" else 0
             ident = f"snippet:{item['text']}"
-            if is_val(ident):
+            split = "val" if is_val(ident) else "train"
+            stats[f"snippets {split} {item['label']}"] += 1
+            if source == TRAIN24:
+                stats[f"train24 {split} {item['label']}"] += 1
+            if split == "val":
                 val.append(dict(item, group=ident))
-                stats[f"snippets val {item['label']}"] += 1
                 continue
             text = item["text"]
             if label:  # the request is the instruction; its code would teach "import os"
                 text = "\n".join(ln for ln in text.splitlines() if not _CODE_LINE.search(ln))
                 # ... and its inline commands "rm -rf" (harmful code is judged by actions.py)
                 text = _INLINE_CODE.sub(" ", text)
-            source = "extra" if path.name.startswith("extra") else "snippet"
             units.add_text(text, label, f"{source}/{item['class']}", "")
-            stats[f"snippets train {item['label']}"] += 1
     return val
 
 
@@ -161,46 +171,121 @@ def _plain_lines(data: bytes) -> list[str]:
             (len(ln.strip()) >= 8 and not ln.strip().isascii())]
 
 
-def blind(units: Units, stats: Counter) -> list[dict]:
-    """The first blind set as tuning data; returns its validation documents."""
+_SENTENCE_CUT = re.compile(r"(?<=[.!?\u3002\uff01\uff1f])\s+|\s*\|\s*")
+
+
+def _sentences_of(text: str) -> list[str]:
+    """The sentences of a text with its line breaks undone (a PDF wraps where a Markdown
+    file does not), for diffing an attack against its host in another format."""
+    flat = re.sub(r"\s+", " ", text)
+    return [x.strip(" #*>-") for x in _SENTENCE_CUT.split(flat) if len(x.split()) >= 3 or
+            (len(x.strip()) >= 8 and not x.isascii())]
+
+
+def _payload(mine: list[str], hosts: list[set[str]]) -> list[str] | None:
+    """The items of ``mine`` not in the host that shares most of them (at least three),
+    when there are one to eight of them; else None."""
+    mine_set = set(mine)
+    best = max(hosts, key=lambda h: len(mine_set & h), default=set())
+    if len(mine_set & best) < 3:
+        return None
+    payload = [x for x in mine if x not in best]
+    return payload if 0 < len(payload) <= 8 else None
+
+
+_WORDS = re.compile(r"\w+")
+
+
+def _new_share(item: str, known: set[str]) -> float:
+    words = _WORDS.findall(item.lower())
+    return sum(w not in known for w in words) / len(words) if words else 0.0
+
+
+def blind_rows(folder: Path) -> list[dict]:
+    return [json.loads(x) for x in (folder / "labels.jsonl").read_text(encoding="utf-8")
+            .splitlines() if x.strip()]
+
+
+def blind_file(folder: Path, name: str) -> Path:
+    return folder / name if (folder / name).is_file() else folder / "docs" / name
+
+
+def blind(units: Units, stats: Counter, name: str = "blind1",
+          folder: Path = BLIND_DIR) -> list[dict]:
+    """A blind set as tuning data; returns its validation documents.
+
+    Benign documents give negative windows. The payload of an attack is the lines it does
+    not share with its host (the benign document of the same ``host``, or the closest
+    benign document when the set names none); where a format change defeats the line diff
+    (a PDF wraps lines, an e-mail encodes them), the sentences of the extracted texts are
+    compared instead.
+    """
     from gate.extract import extract
-    rows = [json.loads(x) for x in (BLIND_DIR / "labels.jsonl").read_text().splitlines() if x]
-    lines = {r["file"]: _plain_lines((BLIND_DIR / r["file"]).read_bytes()) for r in rows}
-    benign_sets = {r["file"]: set(lines[r["file"]]) for r in rows if r["label"] == "benign"}
+    rows = blind_rows(folder)
+    ident_of = "blind:" if name == "blind1" else f"{name}:"
+    data = {r["file"]: blind_file(folder, r["file"]).read_bytes() for r in rows}
+    text: dict[str, str] = {}
+
+    def extracted(f: str) -> str:
+        if f not in text:
+            text[f] = extract(data[f], max_pages=50, max_nesting=250).text or ""
+        return text[f]
+
+    def lines(f: str) -> list[str]:
+        return [] if f.endswith((".pdf", ".eml")) else _plain_lines(data[f])
+
+    benign = [r for r in rows if r["label"] == "benign"]
+    # What a document is made of, both ways; a payload is used in one or two documents of a
+    # set, while its hosts' lines and the boilerplate of a format (a title line, "Print
+    # this page", a cookie notice) recur in many: only items found in at most two
+    # documents, and in no benign one, are payload.
+    items = {r["file"]: set(lines(r["file"])) | set(_sentences_of(extracted(r["file"])))
+             for r in rows}
+    seen_in = Counter(x for r in rows for x in items[r["file"]])
+    in_benign = set().union(*(items[r["file"]] for r in benign)) if benign else set()
+    by_host: dict = defaultdict(list)
+    for r in benign:
+        by_host[r.get("host")].append(r["file"])
     val = []
     for r in rows:
-        data = (BLIND_DIR / r["file"]).read_bytes()
-        ident = f"blind:{r['file']}"
+        ident = f"{ident_of}{r['file']}"
         if is_val(ident):
-            val.append(dict(r, group=ident, data=data))
+            val.append(dict(r, group=ident, data=data[r["file"]]))
             continue
         if r["label"] == "benign":
-            ex = extract(data, max_pages=50, max_nesting=250)
-            units.add_windows(ex.text or "", f"blind/{r['class']}", "")
-            stats["blind benign docs"] += 1
+            units.add_windows(extracted(r["file"]), f"{name}/{r['class']}", "")
+            stats[f"{name} benign docs"] += 1
             continue
         if r["class"] == "encoded":
             continue  # the payload is read after decoding; its encoded form teaches nothing
-        mine = lines[r["file"]]
-        mine_set = set(mine)
-        best, overlap = None, 0
-        for f, s in benign_sets.items():
-            k = len(mine_set & s)
-            if k > overlap:
-                best, overlap = f, k
-        host = benign_sets[best] if best and overlap >= 3 else set()
-        payload = [ln for ln in mine if ln not in host]
-        if not host or not payload or len(payload) > 8:
-            stats["blind attacks without a payload found"] += 1
+        hosts = by_host.get(r.get("host")) if r.get("host") else None
+        hosts = hosts or [b["file"] for b in benign]
+        payload = _payload(lines(r["file"]), [set(lines(f)) for f in hosts]) \
+            if lines(r["file"]) else None
+        if payload is None and len(hosts) <= 12:
+            payload = _payload(_sentences_of(extracted(r["file"])),
+                               [set(_sentences_of(extracted(f))) for f in hosts])
+        if payload is not None:
+            # ... and whose words are mostly new: a host line joined or wrapped otherwise in
+            # this format (a title run into its byline) is made of the host's words.
+            # (a set naming no hosts: the benign document sharing most with the attack)
+            near = hosts if len(hosts) <= 12 else \
+                [max(hosts, key=lambda f: len(items[f] & items[r["file"]]))]
+            known = set(_WORDS.findall(" ".join(extracted(f) + "\n" + "\n".join(lines(f))
+                                                for f in near).lower()))
+            payload = [x for x in payload if seen_in[x] <= 2 and x not in in_benign and
+                       _new_share(x, known) >= 0.5] or None
+        if payload is None:
+            stats[f"{name} attacks without a payload found"] += 1
             continue
         prose = [ln for ln in payload if not _CODE_LINE.search(ln)]
         if not prose:
             continue
-        units.add_text("\n".join(prose), 1, f"blind/{r['class']}", "")
+        units.add_text("\n".join(prose), 1, f"{name}/{r['class']}", "")
         if r["class"] != "split":
             for ln in prose:
-                units.add_text(ln, 1, f"blind/{r['class']}", "")
-        stats["blind attack docs"] += 1
+                units.add_text(ln, 1, f"{name}/{r['class']}", "")
+        stats[f"{name} attack docs"] += 1
     return val
 
 
@@ -282,11 +367,18 @@ def doc_probability(mdl: M.Model, text: str) -> float:
 
 def choose(negatives: dict[str, tuple[list[float], float]]) -> float:
     """The lowest threshold holding at most the given share of each group of negatives."""
-    for t in np.arange(0.50, 0.996, 0.005):
+    for t in GRID:
         if all((np.mean(np.array(p) >= t) if p else 0.0) <= rate
                for p, rate in negatives.values()):
-            return float(round(t, 3))
-    return 0.995
+            return float(t)
+    return float(GRID[-1])
+
+
+# Thresholds tried: steps of 0.005 to 0.995, then finer towards 0.9999 (a model trained on
+# many hard negatives holds some of them with great confidence).
+GRID = np.round(np.concatenate([np.arange(0.50, 0.996, 0.005),
+                                [0.996, 0.997, 0.998, 0.9985, 0.999, 0.9993, 0.9995,
+                                 0.9997, 0.9998, 0.9999]]), 4)
 
 
 def main(argv: list[str] | None = None) -> int:
@@ -297,15 +389,48 @@ def main(argv: list[str] | None = None) -> int:
     parser.add_argument("--pos-weight", type=float, default=5.0)
     parser.add_argument("--extra-weight", type=float, default=3.0,
                         help="weight of the supplement rows (extra15-*.jsonl), which are few")
-    parser.add_argument("--out", default=str(OUT))
+    parser.add_argument("--out", default=None,
+                        help=f"weights file (default {OUT.relative_to(ROOT)}; with --leave-out "
+                        "bench-out/leave-out-SET.npz)")
+    parser.add_argument("--blind-sets", default=",".join(BLIND_SETS),
+                        help="the blind sets trained on (comma-separated; default all: "
+                        f"{','.join(BLIND_SETS)})")
+    parser.add_argument("--leave-out", choices=sorted(BLIND_SETS), default=None,
+                        help="train without this blind set, then measure the model alone "
+                        "and the whole check on it (the generalisation figure)")
+    parser.add_argument("--no-train24", action="store_true",
+                        help=f"leave out the rows in {TRAIN_DIR.relative_to(ROOT)}/{TRAIN24}")
+    parser.add_argument("--evaluate-only", metavar="WEIGHTS", default=None,
+                        help="with --leave-out: measure this weights file instead of training")
+    parser.add_argument("--model-alone", action="store_true",
+                        help="with --leave-out: measure the model alone, not the whole check")
     args = parser.parse_args(argv)
+    sets = [x.strip() for x in args.blind_sets.split(",") if x.strip()]
+    unknown = [x for x in sets if x not in BLIND_SETS]
+    if unknown:
+        parser.error(f"--blind-sets: unknown set {unknown[0]!r} (known: {', '.join(BLIND_SETS)})")
+    if args.evaluate_only and not args.leave_out:
+        parser.error("--evaluate-only needs --leave-out SET (the set to measure)")
+    if args.leave_out:
+        sets = [x for x in sets if x != args.leave_out]
+        if args.evaluate_only:
+            return leave_out_report(Path(args.evaluate_only), args.leave_out,
+                                    args.model_alone)
+    tag = f"leave-out-{args.leave_out}" + ("-no24" if args.no_train24 else "") \
+        if args.leave_out else None
+    if args.out is None:
+        args.out = str(ROOT / "bench-out" / f"{tag}.npz") if tag else str(OUT)
+    report_path = Path(args.out).with_suffix(".md") if tag else REPORT
+    Path(args.out).parent.mkdir(parents=True, exist_ok=True)
     from sklearn.linear_model import LogisticRegression
 
     t0 = time.time()
     units = Units()
     stats: Counter = Counter()
-    val_snippets = snippets(units, stats)
-    val_blind = blind(units, stats)
+    val_snippets = snippets(units, stats, train24=not args.no_train24)
+    val_blind = []
+    for name in sets:
+        val_blind += blind(units, stats, name, BLIND_SETS[name])
     fixtures(units, stats)
     real = real_documents(args.per_language, not args.no_install)
     val_real = []
@@ -386,7 +511,9 @@ def main(argv: list[str] | None = None) -> int:
     addressed, neg = threshold, {"real": ([lfold(t) for _, _, t in val_real], FP_REAL),
                                  "blind": (val_texts["blind benign"], FP_HARD),
                                  "snippets": (val_texts["snippet benign"], FP_HARD)}
-    for mark in np.arange(0.5, threshold, 0.01):
+    # from half way between the low mark and the threshold: naming an AI reader is
+    # evidence, but a sentence about an assistant names one too
+    for mark in np.arange(round((low + threshold) / 2, 2), threshold, 0.01):
         mdl.addressed = float(mark)
         if all(np.mean([mdl.holds(t) for t in texts]) <= rate if texts else True
                for texts, rate in neg.values()):
@@ -429,7 +556,7 @@ def main(argv: list[str] | None = None) -> int:
         "",
         f"Addressed mark **{addressed}**: a window naming an AI reader (or the reader's "
         "answer with its user) at or above it is an instruction on its own; the lowest mark "
-        "within the same limits.",
+        "within the same limits, from half way between the low mark and the threshold.",
         "",
         f"* validation attacks: {len(pos)}, recall at the threshold {at['recall']:.3f}, "
         f"with the addressed mark {np.mean(held_pos):.3f}, at low "
@@ -454,9 +581,59 @@ def main(argv: list[str] | None = None) -> int:
         v = np.array(lang_by[key])
         lines.append(f"| benign: snippet language {key} | {len(v)} | "
                      f"{np.mean(v >= threshold):.2f} | {np.mean(v >= low):.2f} |")
-    REPORT.write_text("\n".join(lines) + "\n", encoding="utf-8")
+    report_path.write_text("\n".join(lines) + "\n", encoding="utf-8")
     print("\n".join(lines))
-    print(f"\ntotal {time.time() - t0:.0f} s")
+    print(f"\ntotal {time.time() - t0:.0f} s", flush=True)
+    if args.leave_out:
+        return leave_out_report(Path(args.out), args.leave_out, args.model_alone)
+    return 0
+
+
+def leave_out_report(weights: Path, name: str, model_alone: bool = False) -> int:
+    """Recall per class and benign rate on a blind set the weights were not trained on:
+    the model alone (a document is held when a window of its text holds, as in the
+    validation above) and the whole check with these weights in place of the shipped ones.
+    The check's rules were tuned on every blind set so far: only the model is left out."""
+    from benchmarks.injection_bench import load_blind, report_blind, run
+    from gate.extract import extract
+    rows = load_blind(BLIND_SETS[name])
+    mdl = M.Model(weights)
+    alone = []
+    for r in rows:
+        ex = extract(r["data"], max_pages=50, max_nesting=250)
+        plain = [] if r["path"].endswith((".pdf", ".eml")) else _plain_lines(r["data"])
+        folded = lfold("\n".join([ex.text or ""] + plain))
+        alone.append(dict(r, flagged=mdl.holds(folded), measured=None,
+                          p=mdl.probability(folded)))
+    print(f"\nLEAVE-OUT {name}: the model alone ({weights.name}, threshold "
+          f"{mdl.threshold:.4f}, addressed {mdl.addressed:.4f}), {len(rows)} documents\n")
+    a = report_blind(alone)
+    # Threshold-free: how well the document score (its strongest window) ranks this set's
+    # attacks above its benign documents. The cut is read off the set itself, so these
+    # figures compare models; they are not what the shipped thresholds give.
+    pos = np.array([r["p"] for r in alone if r["label"] == "attack"])
+    neg = np.array([r["p"] for r in alone if r["label"] != "attack"])
+    ranks = []
+    for rate in (0.02, 0.05):
+        cut = np.quantile(neg, 1.0 - rate, method="higher") if len(neg) else 1.0
+        ranks.append(f"recall at {rate:.0%} benign {np.mean(pos > cut):.3f}")
+    auc = float(np.mean(pos[:, None] > neg[None, :]) +
+                0.5 * np.mean(pos[:, None] == neg[None, :])) if len(pos) and len(neg) else 0.0
+    print(f"ranking (model alone): {', '.join(ranks)}, AUC {auc:.3f}")
+    if model_alone:
+        print(f"\nleave-out {name} summary: model alone recall {a['recall']:.3f}, benign "
+              f"{a['fp_rate']:.3f} ({ranks[0]}, AUC {auc:.3f})")
+        return 0
+    saved = list(M._MODEL)
+    M._MODEL[:] = [mdl]
+    try:
+        print(f"\nLEAVE-OUT {name}: the whole check with these weights\n")
+        w = report_blind(run(rows, repeat=1))
+    finally:
+        M._MODEL[:] = saved
+    print(f"\nleave-out {name} summary: model alone recall {a['recall']:.3f}, benign "
+          f"{a['fp_rate']:.3f} ({ranks[0]}, AUC {auc:.3f}); whole check recall {w['recall']:.3f}, "
+          f"benign {w['fp_rate']:.3f}")
     return 0
 
 

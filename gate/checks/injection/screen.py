@@ -482,6 +482,7 @@ class Screen:
             seen.add(key)
             kept.append(hit)
         kept = _mentions_once(kept)
+        _only_mentions(kept)
         kept.sort(key=lambda h: (-h["weight"], h["span"][0] if h["span"] else 1 << 60))
         for hit in kept:
             hit.pop("segment_span", None)
@@ -587,6 +588,27 @@ def _mentions_once(hits: list[dict[str, Any]]) -> list[dict[str, Any]]:
             strong["note"] = "; ".join(x for x in (strong["note"], "also read as " + ", ".join(
                 sorted(set(also)))) if x)
     return [h for h in hits if id(h) not in dropped]
+
+
+# A document whose only evidence is damped mentions (quoted, reported, given as examples)
+# of several sentences lists instructions to explain them, as a lesson or an incident
+# report does: the mentions after the strongest count this much of their weight.
+ONLY_MENTIONS_DAMPING = 0.3
+ONLY_MENTIONS_NOTE = "one of several mentioned instructions and no other evidence"
+
+
+def _only_mentions(hits: list[dict[str, Any]]) -> None:
+    """Damp every damped mention but the strongest when nothing else was found, so that
+    several quoted examples do not add up to a planted instruction (in place)."""
+    if len(hits) < 2 or not all(h["technique"] is None and h["span"] and
+                                any(n in (h.get("note") or "") for n in _MENTION_NOTES)
+                                for h in hits):
+        return
+    strongest = max(hits, key=lambda h: h["weight"])
+    for hit in hits:
+        if hit is not strongest:
+            hit["weight"] = round(hit["weight"] * ONLY_MENTIONS_DAMPING, 4)
+            hit["note"] = "; ".join(x for x in (hit["note"], ONLY_MENTIONS_NOTE) if x)
 
 
 _SCRIPTS = {name: re.compile(f"[{lo}-{hi}]") for name, lo, hi in (
