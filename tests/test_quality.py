@@ -128,6 +128,31 @@ def test_measure_matches_the_plain_definitions(seed):
     assert quality.measure(_Extraction(text)) == _reference_measure(text)
 
 
+@pytest.mark.parametrize("seed", range(10))
+def test_short_texts_counted_in_python_give_the_numpy_figures(seed, monkeypatch):
+    # invented random word-id sequences up to SMALL_TEXT_WORDS long, many with a copied
+    # run (repeated n-grams up to 10 words): the plain-Python counts are the vectorised ones
+    import numpy as np
+    rng = random.Random(seed)
+    for _ in range(300):
+        size = rng.randint(0, quality.SMALL_TEXT_WORDS)
+        vocab = rng.randint(1, 12)
+        seq = [rng.randint(1, vocab) for _ in range(size)]
+        if size > 10 and rng.random() < 0.4:
+            start, length, to = rng.randint(0, size - 5), rng.randint(3, 10), rng.randint(0, size)
+            seq = (seq[:to] + seq[start:start + length] + seq[to:])[:size]
+        length_of = [0] + [rng.randint(0, 9) for _ in range(vocab)]
+        assert quality._shares_small(seq, length_of) == quality._shares(
+            np.array(seq, dtype=np.uint64), np.array(length_of, dtype=np.int64))
+    # and whole measures, short texts taken either way
+    vocab = ["the", "The", "of", "and,", "Quillby", "depot.", "#", "...", "12", "a1", "_",
+             "\u00e9t\u00e9", "\u65e5\u672c", "(x)", "\u00df"]
+    texts = [" ".join(rng.choice(vocab) for _ in range(rng.randint(0, 64))) for _ in range(50)]
+    short = [quality.measure(_Extraction(text)) for text in texts]
+    monkeypatch.setattr(quality, "SMALL_TEXT_WORDS", -1)
+    assert short == [quality.measure(_Extraction(text)) for text in texts]
+
+
 PROSE = ("The northern depot of the invented Quillby Freight cooperative schedules "
          "deliveries in three windows each weekday. Drivers confirm every window by radio "
          "before they leave the yard, and the dispatcher keeps a ledger of each confirmed "
