@@ -317,7 +317,8 @@ class WorkerPool:
                 state["next_id"] += 1
             return out
 
-        while True:
+        def fill() -> None:
+            """Send each idle worker its next batch."""
             while len(busy) < self.size:
                 batch = next_batch()
                 if not batch:
@@ -334,11 +335,15 @@ class WorkerPool:
                 worker.task = batch
                 worker.started(self.wall_s)
                 busy[worker.conn] = worker
+
+        while True:
+            fill()
             if not busy:
                 return
             now = time.monotonic()
             soonest = min(w.deadline for w in busy.values())
             ready = wait(list(busy), timeout=max(0.0, soonest - now))
+            done: list[tuple[Any, Any]] = []  # handed on once the workers have work again
             for conn in ready:
                 worker = busy.pop(conn)
                 batch, worker.task = worker.task, None
@@ -353,10 +358,10 @@ class WorkerPool:
                         queue.extendleft((tag, payload, True)
                                          for tag, payload, _id in reversed(batch))
                     elif code == -signal.SIGXCPU:  # RLIMIT_CPU: the timer could not act
-                        yield batch[0][0], Failure("timeout", f"used more than "
-                                                              f"{self.timeout_s:g} s of CPU time")
+                        done.append((batch[0][0], Failure(
+                            "timeout", f"used more than {self.timeout_s:g} s of CPU time")))
                     else:
-                        yield batch[0][0], Failure("crashed", _death(code))
+                        done.append((batch[0][0], Failure("crashed", _death(code))))
                     continue
                 worker.done += 1  # messages: a batch of small tasks counts once
                 statuses = {status for status, _value in replies.values()}
@@ -369,11 +374,15 @@ class WorkerPool:
                     if status == "retry":
                         queue.append((tag, payload, True))
                     elif status == "ok":
-                        yield tag, value
+                        done.append((tag, value))
                     elif status in ("memory", "timeout"):
-                        yield tag, Failure(status, value)
+                        done.append((tag, Failure(status, value)))
                     else:
-                        yield tag, Failure("error", value)
+                        done.append((tag, Failure("error", value)))
+            # a worker that answered gets its next batch before the answers are handed on,
+            # so it works while the caller digests them instead of waiting for the caller
+            fill()
+            yield from done
             now = time.monotonic()
             for conn, worker in list(busy.items()):
                 if worker.deadline <= now and conn not in ready and \
