@@ -32,7 +32,7 @@ import re
 from dataclasses import dataclass
 
 import numpy as np
-from scipy.sparse import _sparsetools
+from scipy import sparse
 from langdetect import detector_factory
 from langdetect.detector import Detector
 from langdetect.utils import unicode_block
@@ -346,17 +346,10 @@ def _sums(prof: _Profiles, rows: list[np.ndarray], bounds: list[np.ndarray]) -> 
     offsets = np.cumsum([0] + [r.size for r in rows])
     indptr = np.concatenate([offsets[g] + b[:-1] for g, b in enumerate(bounds)] +
                             [offsets[-1:]])
-    indices = np.concatenate(rows).astype(np.int64, copy=False)
-    # the product scipy's ``csr_matrix(...) @ prof.logp`` computes, by the routine it calls
-    # (its checks and conversions of a freshly built matrix cost more than the product on
-    # a short text): the same float32 additions in the same order
-    n_rows = len(rows) * n_chunks
-    out = np.zeros((n_rows, prof.logp.shape[1]), dtype=np.float32)
-    _sparsetools.csr_matvecs(n_rows, prof.keys.size, prof.logp.shape[1],
-                             indptr.astype(np.int64, copy=False), indices,
-                             np.ones(indices.size, dtype=np.float32), prof.logp.ravel(),
-                             out.ravel())
-    return out
+    indices = np.concatenate(rows)
+    counts = sparse.csr_matrix((np.ones(indices.size, dtype=np.float32), indices, indptr),
+                               shape=(len(rows) * n_chunks, prof.keys.size))
+    return counts @ prof.logp
 
 
 def profile_ngrams(text: str) -> list[str]:
