@@ -261,9 +261,11 @@ def _shares_small(seq: list[int], length_of: list[int]
         counts = Counter(grams)
         if n <= 4:
             most = max(counts.values())
-            if most > 1:  # the first place with the most repeats
-                best = next(i for i, gram in enumerate(grams) if counts[gram] == most)
-                top[str(n)] = round(float(most) * sum(lengths[best:best + n]) / total, 4)
+            if most == 1:  # no n-gram repeats, so no longer one can: the rest stay 0
+                break
+            # the first place with the most repeats
+            best = next(i for i, gram in enumerate(grams) if counts[gram] == most)
+            top[str(n)] = round(float(most) * sum(lengths[best:best + n]) / total, 4)
         else:
             covered: set[int] = set()
             for i, gram in enumerate(grams):
