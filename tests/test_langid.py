@@ -198,6 +198,7 @@ def test_dense_ascii_tables_hold_exactly_the_profiles_ascii_ngrams():
     "\n\n".join([TEXTS["en"]] * 9 + ["NOTICE FOR DRIVERS: the YARD gate closes EARLY",
                                      "see http://depot.example.org/keys or mail a@b.test"]),
     "Short words ab cd ef. " * 40 + "\n\n" + "x" * 3000,
+    TEXTS["en"] + "\0 a NUL inside\n\n" + TEXTS["en"].upper() + "\n\n" + TEXTS["en"],
 ])
 def test_dense_ascii_path_gives_the_same_shares_bit_for_bit(text, monkeypatch):
     # invented ASCII texts: the dense path and the hash-table path agree exactly
