@@ -486,7 +486,8 @@ def show(now: dict[str, Any], before: dict[str, Any] | None) -> None:
         print(text)
 
     print(f"{docs} documents, {now['workers']} worker(s), wall {now['wall_s']:.1f} s; CPU "
-          f"ms per document (process time, exclusive), % of extract() time")
+          "ms per document (exclusive; the parent's process time, the workers' thread "
+          "time), % of extract() time")
     print(f"worker side: {_ms(now['worker_cpu_s'], docs):.2f} ms/doc of CPU in the workers "
           f"(getrusage), probes cover {_ms(sum(now['worker'].values()), docs):.2f}")
     old = before["worker"] if before else {}

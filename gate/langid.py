@@ -12,6 +12,9 @@ so gate reads the same profiles differently:
   normalisation, URL and e-mail removal, Vietnamese recomposition, the rule that drops Latin
   letters from mostly non-Latin text, and the rule that skips n-grams inside words in
   capitals), but with numpy over code points instead of a loop over characters;
+* an n-gram's row in the profiles is found in a hash table of their keys, or, for text
+  that is all ASCII, in dense tables of every 2- and 3-gram of a space and the 52 Latin
+  letters (the same rows, without building 64-bit keys; that text is read as bytes);
 * each chunk is scored deterministically over *all* its n-grams with the same smoothing
   (``log(0.5 / 10000 + P)`` summed: naive Bayes), and its posterior is the softmax of the
   sums;
