@@ -36,6 +36,11 @@ from dataclasses import dataclass
 
 import numpy as np
 from scipy import sparse
+
+try:  # scipy's own CSR product routine (private: the public product is the fallback)
+    from scipy.sparse._sparsetools import csr_matvecs as _csr_matvecs
+except ImportError:  # pragma: no cover - another scipy
+    _csr_matvecs = None
 from langdetect import detector_factory
 from langdetect.detector import Detector
 from langdetect.utils import unicode_block
@@ -408,9 +413,22 @@ def _sums(prof: _Profiles, rows: list[np.ndarray], bounds: list[np.ndarray]) -> 
     offsets = np.cumsum([0] + [r.size for r in rows])
     indptr = np.concatenate([offsets[g] + b[:-1] for g, b in enumerate(bounds)] +
                             [offsets[-1:]])
-    indices = np.concatenate(rows)
-    counts = sparse.csr_matrix((np.ones(indices.size, dtype=np.float32), indices, indptr),
-                               shape=(len(rows) * n_chunks, prof.keys.size))
+    indices = np.concatenate(rows).astype(np.int64, copy=False)
+    n_rows = len(rows) * n_chunks
+    ones = np.ones(indices.size, dtype=np.float32)
+    if _csr_matvecs is not None:
+        # the routine ``csr_matrix(...) @ prof.logp`` calls, called directly: the same
+        # float32 additions in the same order, without the checks and conversions of a
+        # freshly built matrix (they cost more than the product on a short text)
+        out = np.zeros((n_rows, prof.logp.shape[1]), dtype=np.float32)
+        try:
+            _csr_matvecs(n_rows, prof.keys.size, prof.logp.shape[1],
+                         indptr.astype(np.int64, copy=False), indices, ones,
+                         prof.logp.ravel(), out.ravel())
+            return out
+        except (TypeError, ValueError):  # another scipy's private signature: the public way
+            pass
+    counts = sparse.csr_matrix((ones, indices, indptr), shape=(n_rows, prof.keys.size))
     return counts @ prof.logp
 
 

@@ -205,3 +205,17 @@ def test_dense_ascii_path_gives_the_same_shares_bit_for_bit(text, monkeypatch):
     dense = langid.identify(text)
     monkeypatch.setattr(langid, "DENSE", False)
     assert langid.identify(text) == dense
+
+
+def test_public_product_fallback_gives_the_same_bits(monkeypatch):
+    # without scipy's private CSR routine, the public product: the same float32 bits
+    # (random rows, invented data)
+    import numpy as np
+
+    prof = langid.profiles()
+    rng = np.random.default_rng(5)
+    rows = [rng.integers(0, prof.keys.size, n) for n in (300, 0, 2000)]
+    bounds = [np.array([0, n // 3, n]) for n in (300, 0, 2000)]
+    direct = langid._sums(prof, rows, bounds)
+    monkeypatch.setattr(langid, "_csr_matvecs", None)
+    assert np.array_equal(langid._sums(prof, rows, bounds), direct)
