@@ -7,10 +7,13 @@ Runs ``gate run`` in this process on the bench mix (benchmarks/corpus.py: about 
 pages of 10-100 KB with boilerplate, 10 % multi-page PDFs, 10 % plain text; the same
 corpus and policy as benchmarks/ratio.py), with probes wrapped around the functions that
 do the work, in the parent and (inherited by fork) in the workers. Every figure is CPU
-time (``time.process_time``: user + system of the process), so it is stable on a loaded
-machine, and *exclusive*: a probe inside another one is charged to itself only, so the
-lines of one side add up to that side's probed total; what no probe covers is the
-``unprobed`` line (from getrusage of the process and of its finished children).
+time, so it is stable on a loaded machine: in the parent the process's
+(``time.process_time``), in a worker its thread's (``time.thread_time``, as gate.work times
+itself: while the pool's CPU-time limit is armed the kernel updates a process's CPU clock
+only now and then, so short spans read wrong), and *exclusive*: a probe inside another
+one is charged to itself only, so the lines of one side add up to that side's probed
+total; what no probe covers is the ``unprobed`` line (from getrusage of the process and of
+its finished children).
 
 Worker side: extraction per format and its parts (decoding, lxml parse, trafilatura,
 metadata, page blocks), tokenising (``gate.tokens.words``, wherever it is called),
@@ -60,6 +63,7 @@ _acc: dict[str, float] = defaultdict(float)  # exclusive CPU seconds per label
 _incl: dict[str, float] = defaultdict(float)  # inclusive CPU seconds (transparent probes)
 _stack: list[str] = []
 _last = [0.0]
+_clock = [time.process_time]  # the worker's own thread clock after a fork (see above)
 
 
 def _forked() -> None:
@@ -67,14 +71,15 @@ def _forked() -> None:
     _acc.clear()
     _incl.clear()
     _stack.clear()
-    _last[0] = time.process_time()
+    _clock[0] = time.thread_time
+    _last[0] = _clock[0]()
 
 
 os.register_at_fork(after_in_child=_forked)
 
 
 def _enter(label: str) -> None:
-    now = time.process_time()
+    now = _clock[0]()
     if _stack:
         _acc[_stack[-1]] += now - _last[0]
     _stack.append(label)
@@ -82,7 +87,7 @@ def _enter(label: str) -> None:
 
 
 def _leave() -> None:
-    now = time.process_time()
+    now = _clock[0]()
     _acc[_stack.pop()] += now - _last[0]
     _last[0] = now
 
@@ -217,15 +222,15 @@ def _worker_process(original: Any, task: Any) -> Any:
     """gate.work.process with the probes' figures added to its timings: those since the
     previous result (this task's intake and staging, the previous result's packing)."""
     _enter("worker: unprobed in process()")
-    started = time.process_time()
+    started = _clock[0]()
     result = original(task)
-    whole = time.process_time() - started
+    whole = _clock[0]() - started
     _leave()
     if isinstance(result, dict):
         kind = (result.get("extracted") or {}).get("type") or "failed"
-        began = time.process_time()
+        began = _clock[0]()
         pickle.dumps(result, protocol=pickle.HIGHEST_PROTOCOL)
-        _acc["worker: pickling the result (timed apart)"] += time.process_time() - began
+        _acc["worker: pickling the result (timed apart)"] += _clock[0]() - began
         timings = result.setdefault("timings", {})
         for label, seconds in _acc.items():
             timings[f"probe|{label}"] = seconds
@@ -278,9 +283,9 @@ def _span(fn: Any, label: str) -> Any:
 def _worker_span(original: Any, task: Any) -> Any:
     """gate.intake.work_on with its wall-clock span and CPU time appended to the timeline
     file (one line per task; a batch of small tasks gives one line each)."""
-    wall0, cpu0 = time.monotonic(), time.process_time()
+    wall0, cpu0 = time.monotonic(), _clock[0]()
     result = original(task)
-    wall1, cpu = time.monotonic(), time.process_time() - cpu0
+    wall1, cpu = time.monotonic(), _clock[0]() - cpu0
     inner = result.get("result") if isinstance(result, dict) else None
     kind = ((inner or {}).get("extracted") or {}).get("type") or type(task).__name__
     second = bool(getattr(task, "extra", None))
@@ -481,7 +486,8 @@ def show(now: dict[str, Any], before: dict[str, Any] | None) -> None:
         print(text)
 
     print(f"{docs} documents, {now['workers']} worker(s), wall {now['wall_s']:.1f} s; CPU "
-          f"ms per document (process time, exclusive), % of extract() time")
+          "ms per document (exclusive; the parent's process time, the workers' thread "
+          "time), % of extract() time")
     print(f"worker side: {_ms(now['worker_cpu_s'], docs):.2f} ms/doc of CPU in the workers "
           f"(getrusage), probes cover {_ms(sum(now['worker'].values()), docs):.2f}")
     old = before["worker"] if before else {}

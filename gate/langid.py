@@ -12,6 +12,9 @@ so gate reads the same profiles differently:
   normalisation, URL and e-mail removal, Vietnamese recomposition, the rule that drops Latin
   letters from mostly non-Latin text, and the rule that skips n-grams inside words in
   capitals), but with numpy over code points instead of a loop over characters;
+* an n-gram's row in the profiles is found in a hash table of their keys, or, for text
+  that is all ASCII, in dense tables of every 2- and 3-gram of a space and the 52 Latin
+  letters (the same rows, without building 64-bit keys; that text is read as bytes);
 * each chunk is scored deterministically over *all* its n-grams with the same smoothing
   (``log(0.5 / 10000 + P)`` summed: naive Bayes), and its posterior is the softmax of the
   sums;
@@ -33,6 +36,11 @@ from dataclasses import dataclass
 
 import numpy as np
 from scipy import sparse
+
+try:  # scipy's own CSR product routine (private: the public product is the fallback)
+    from scipy.sparse._sparsetools import csr_matvecs as _csr_matvecs
+except ImportError:  # pragma: no cover - another scipy
+    _csr_matvecs = None
 from langdetect import detector_factory
 from langdetect.detector import Detector
 from langdetect.utils import unicode_block
@@ -41,6 +49,7 @@ from langdetect.utils.ngram import NGram
 CHUNK = 600  # a paragraph longer than twice this is cut into pieces of about this size
 MIN_CHUNK = 200  # a shorter paragraph is judged together with the next
 MAX_CHARS = 400_000  # beyond this many characters, chunks are taken evenly from the text
+DENSE = True  # ASCII text looks its 2- and 3-grams up in dense tables (same rows)
 SEPARATOR = "\ue000"  # a private-use character, untouched by langdetect's normalisation
 _BASE_FREQ = 10_000  # langdetect's Detector.BASE_FREQ
 _ALPHA = 0.5  # langdetect's Detector.ALPHA_DEFAULT (its random jitter is left out)
@@ -72,6 +81,7 @@ class _Profiles:
         self.slots, self.slot_rows = _hash_table(self.keys[self.starts[1]:], self.starts[1])
         # NGram.normalize maps one character to one character: a table over the BMP
         self.normal = _normal_table()
+        self.normal_ascii = self.normal[:128].astype(np.uint8)
         self.upper = np.fromiter(map(str.isupper, map(chr, range(0x10000))), dtype=bool,
                                  count=0x10000)
         # what a character weighs in a share: about the Latin letters it stands for when
@@ -81,6 +91,7 @@ class _Profiles:
         self.weight[0xAC00:0xD7B0] = 3.0  # Hangul syllables
         self.weight[0x4E00:0xA000] = 3.0  # CJK unified ideographs
         self.weight[0x3400:0x4DC0] = 3.0  # CJK extension A
+        self.small, self.dense = _dense_tables(self)
 
     @staticmethod
     def key(gram: str) -> int:
@@ -89,6 +100,34 @@ class _Profiles:
         for ch in gram:
             value = (value << 21) | ord(ch)
         return value
+
+
+# ASCII text normalises to a space and the 52 Latin letters: numbered 0 .. 52, six bits
+# each, a 2-gram is (a << 6) | b and a 3-gram (a << 12) | (b << 6) | c, and a table indexed
+# by that number holds the n-gram's profile row (-1: not in the profiles). Looking a row up
+# there replaces building 64-bit keys and probing the hash table, with the same rows.
+_ASCII_LETTERS = " ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz"
+
+
+def _dense_tables(prof: _Profiles) -> tuple[np.ndarray, list[np.ndarray | None]]:
+    """(each ASCII code point's 6-bit number, -1 for characters ASCII normalisation never
+    leaves; for n = 2 and 3 the row of every n-gram of those numbers), for :func:`_grams`'
+    ASCII path; the tables come from :func:`_lookup` itself."""
+    small = np.full(128, -1, dtype=np.int32)
+    letters = np.frombuffer(_ASCII_LETTERS.encode("ascii"), dtype=np.uint8)
+    small[letters] = np.arange(letters.size)
+    dense: list[np.ndarray | None] = [None, None]
+    for length in (2, 3):
+        codes = np.arange(1 << (6 * length), dtype=np.int64)
+        parts = [(codes >> (6 * (length - 1 - i))) & 63 for i in range(length)]
+        valid = np.all([part < letters.size for part in parts], axis=0)
+        keys = np.zeros(codes.size, dtype=np.uint64)
+        for part in parts:
+            keys = (keys << np.uint64(21)) | letters[np.minimum(part, letters.size - 1)] \
+                .astype(np.uint64)
+        rows, hit = _lookup(prof, keys, length)
+        dense.append(np.where(hit & valid, rows, -1).astype(np.int32))
+    return small, dense
 
 
 def _normal_table() -> np.ndarray:
@@ -252,13 +291,22 @@ def chunks(text: str) -> list[str]:
     return out
 
 
-def _grams(pieces: list[str], prof: _Profiles):
+def _grams(pieces: list[str], prof: _Profiles, dense: bool = False):
     """langdetect's n-grams of every piece, vectorised: the normalised code points, the
-    piece each belongs to, and (keys, end positions) for n = 1, 2, 3, each in text order."""
-    joined = SEPARATOR.join(pieces)
+    piece each belongs to, and (keys, end positions) for n = 1, 2, 3, each in text order.
+    With ``dense`` and text that is all ASCII, the 2- and 3-grams' keys are their numbers
+    in the dense tables (see :func:`_dense_tables`) and a fourth value, True, says so."""
     # ASCII pieces (the separator is not): no combining mark to recompose and no
     # non-Latin letter to outnumber the Latin ones, so those two steps are left out
     ascii_text = all(map(str.isascii, pieces))
+    # ASCII pieces for the dense tables are read as bytes, a NUL between two (a piece
+    # holding a NUL itself takes the general way): a quarter of the memory to go through
+    narrow = dense and ascii_text
+    if narrow:
+        joined = "\0".join(pieces)
+        narrow = joined.count("\0") == len(pieces) - 1
+    if not narrow:
+        joined = SEPARATOR.join(pieces)
     # each pass only where it can match (a URL needs "http", an address "@", Vietnamese
     # recomposition a combining mark): the same text, without three scans of it
     if "http" in joined:
@@ -267,14 +315,19 @@ def _grams(pieces: list[str], prof: _Profiles):
         joined = Detector.MAIL_RE.sub(" ", joined)
     if not ascii_text and any(mark in joined for mark in NGram.DMARK_CLASS):
         joined = NGram.normalize_vi(joined)
-    cps = np.frombuffer(joined.encode("utf-32-le"), dtype=np.uint32)
-    if cps.size and (ascii_text or cps.max() < 0x10000):  # the usual case: one gather
-        cps = prof.normal[cps]
+    if narrow:
+        raw = np.frombuffer(joined.encode("ascii"), dtype=np.uint8)
+        sep = raw == 0
+        cps = prof.normal_ascii[raw]  # a NUL becomes a space, as the separator does below
     else:
-        cps = cps.copy()
-        bmp = cps < 0x10000
-        cps[bmp] = prof.normal[cps[bmp]]
-    sep = cps == ord(SEPARATOR)
+        cps = np.frombuffer(joined.encode("utf-32-le"), dtype=np.uint32)
+        if cps.size and (ascii_text or cps.max() < 0x10000):  # the usual case: one gather
+            cps = prof.normal[cps]
+        else:
+            cps = cps.copy()
+            bmp = cps < 0x10000
+            cps[bmp] = prof.normal[cps[bmp]]
+        sep = cps == ord(SEPARATOR)
     chunk_of = np.cumsum(sep)
     n_chunks = len(pieces)
     if not ascii_text:
@@ -292,7 +345,7 @@ def _grams(pieces: list[str], prof: _Profiles):
     # runs of spaces become one (Detector.append), and the text starts with one (NGram())
     keep = ~space
     keep[1:] |= ~space[:-1]
-    cps = np.concatenate((np.array([32], dtype=np.uint32), cps[keep]))
+    cps = np.concatenate((np.array([32], dtype=cps.dtype), cps[keep]))
     space = np.concatenate(([True], space[keep]))
     chunk_of = np.concatenate(([0], chunk_of[keep]))
     if ascii_text or cps.max() < 0x10000:
@@ -307,18 +360,32 @@ def _grams(pieces: list[str], prof: _Profiles):
     one = ~space & ~skip
     two = ~(space[:-1] & space[1:]) & ~skip[1:]
     three = ~space[1:-1] & ~skip[2:]
+    if dense and ascii_text:
+        small = prof.small[cps]
+        grams = (
+            (cps[one], np.flatnonzero(one)),
+            ((small[:-1][two] << 6) | small[1:][two], np.flatnonzero(two) + 1),
+            ((small[:-2][three] << 12) | (small[1:-1][three] << 6) | small[2:][three],
+             np.flatnonzero(three) + 2))
+        return cps, chunk_of, grams, True
     wide = cps.astype(np.uint64)
     grams = (  # (key, end position) of every 1-, 2- and 3-gram, each in text order
         (wide[one], np.flatnonzero(one)),
         ((wide[:-1][two] << np.uint64(21)) | wide[1:][two], np.flatnonzero(two) + 1),
         ((wide[:-2][three] << np.uint64(42)) | (wide[1:-1][three] << np.uint64(21)) |
          wide[2:][three], np.flatnonzero(three) + 2))
-    return cps, chunk_of, grams
+    return cps, chunk_of, grams, False
 
 
-def _lookup(prof: _Profiles, keys: np.ndarray, length: int) -> tuple[np.ndarray, np.ndarray]:
+def _lookup(prof: _Profiles, keys: np.ndarray, length: int,
+            dense: bool = False) -> tuple[np.ndarray, np.ndarray]:
     """Each key's row in the profiles, and whether the profiles have it at all (the
-    n-grams of one ``length``: 1-grams by table, longer ones among their own length)."""
+    n-grams of one ``length``: 1-grams by table, longer ones among their own length, or
+    with ``dense`` in the dense ASCII tables)."""
+    if dense and length > 1:
+        found = prof.dense[length][keys]
+        hit = found >= 0
+        return np.where(hit, found, 0), hit
     if length == 1:
         found = prof.unigram[keys.astype(np.int64)]
         hit = found >= 0
@@ -346,9 +413,22 @@ def _sums(prof: _Profiles, rows: list[np.ndarray], bounds: list[np.ndarray]) -> 
     offsets = np.cumsum([0] + [r.size for r in rows])
     indptr = np.concatenate([offsets[g] + b[:-1] for g, b in enumerate(bounds)] +
                             [offsets[-1:]])
-    indices = np.concatenate(rows)
-    counts = sparse.csr_matrix((np.ones(indices.size, dtype=np.float32), indices, indptr),
-                               shape=(len(rows) * n_chunks, prof.keys.size))
+    indices = np.concatenate(rows).astype(np.int64, copy=False)
+    n_rows = len(rows) * n_chunks
+    ones = np.ones(indices.size, dtype=np.float32)
+    if _csr_matvecs is not None:
+        # the routine ``csr_matrix(...) @ prof.logp`` calls, called directly: the same
+        # float32 additions in the same order, without the checks and conversions of a
+        # freshly built matrix (they cost more than the product on a short text)
+        out = np.zeros((n_rows, prof.logp.shape[1]), dtype=np.float32)
+        try:
+            _csr_matvecs(n_rows, prof.keys.size, prof.logp.shape[1],
+                         indptr.astype(np.int64, copy=False), indices, ones,
+                         prof.logp.ravel(), out.ravel())
+            return out
+        except (TypeError, ValueError):  # another scipy's private signature: the public way
+            pass
+    counts = sparse.csr_matrix((ones, indices, indptr), shape=(n_rows, prof.keys.size))
     return counts @ prof.logp
 
 
@@ -356,7 +436,7 @@ def profile_ngrams(text: str) -> list[str]:
     """The n-grams of ``text`` (as one piece) that the profiles know, sorted: what
     langdetect's ``Detector._extract_ngrams`` yields, for the tests to compare."""
     prof = profiles()
-    _cps, _owner, grams = _grams([text], prof)
+    _cps, _owner, grams, _dense = _grams([text], prof)
     out = []
     for length, (keys, _ends) in enumerate(grams, start=1):
         _found, hit = _lookup(prof, keys, length)
@@ -373,7 +453,7 @@ def identify(text: str) -> Shares:
     if not pieces:
         return Shares(0, 0, ())
     n_chunks = len(pieces)
-    cps, chunk_of, grams = _grams(pieces, prof)
+    cps, chunk_of, grams, dense = _grams(pieces, prof, DENSE)
     # a chunk is scored twice: its n-grams that end in a Latin letter, and the others, so
     # identifiers in a Japanese page or a Russian quote in a German one are judged apart
     # (a text below U+0250 has Latin ends only, each letter weighing 1: nothing to split)
@@ -395,7 +475,7 @@ def identify(text: str) -> Shares:
     rows: list[np.ndarray] = [np.empty(0, dtype=np.int64)] * 6
     starts: list[np.ndarray] = [bounds] * 6
     for length, (keys, ends) in enumerate(grams, start=1):
-        found, hit = _lookup(prof, keys, length)
+        found, hit = _lookup(prof, keys, length, dense)
         found, ends = found[hit], ends[hit]
         if latin_end is None:  # the other part's groups stay empty
             owner = chunk_of[ends]

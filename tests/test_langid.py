@@ -167,3 +167,55 @@ def test_hash_lookup_finds_every_profile_key_and_nothing_else():
         missing = np.setdiff1d(keys + np.uint64(1), keys)
         _rows, hit = langid._lookup(prof, missing, length)
         assert missing.size > 1000 and not hit.any()
+
+
+def test_dense_ascii_tables_hold_exactly_the_profiles_ascii_ngrams():
+    # every 2- and 3-gram key of langdetect's profiles made of a space and ASCII letters is
+    # in the dense table at its own row, and no other entry is filled (checked against the
+    # sorted keys, not against the hash table the dense tables are built with)
+    import numpy as np
+
+    prof = langid.profiles()
+    letters = {ord(ch): i for i, ch in enumerate(langid._ASCII_LETTERS)}
+    for length in (2, 3):
+        expected = {}
+        for row in range(prof.starts[length - 1], prof.starts[length]):
+            key = int(prof.keys[row])
+            points = [(key >> (21 * i)) & 0x1FFFFF for i in reversed(range(length))]
+            if all(p in letters for p in points):
+                code = 0
+                for p in points:
+                    code = (code << 6) | letters[p]
+                expected[code] = row
+        table = prof.dense[length]
+        filled = np.flatnonzero(table >= 0)
+        assert len(expected) > 1000 and sorted(expected) == filled.tolist()
+        assert all(table[code] == row for code, row in expected.items())
+
+
+@pytest.mark.parametrize("text", [
+    TEXTS["en"],
+    "\n\n".join([TEXTS["en"]] * 9 + ["NOTICE FOR DRIVERS: the YARD gate closes EARLY",
+                                     "see http://depot.example.org/keys or mail a@b.test"]),
+    "Short words ab cd ef. " * 40 + "\n\n" + "x" * 3000,
+    TEXTS["en"] + "\0 a NUL inside\n\n" + TEXTS["en"].upper() + "\n\n" + TEXTS["en"],
+])
+def test_dense_ascii_path_gives_the_same_shares_bit_for_bit(text, monkeypatch):
+    # invented ASCII texts: the dense path and the hash-table path agree exactly
+    dense = langid.identify(text)
+    monkeypatch.setattr(langid, "DENSE", False)
+    assert langid.identify(text) == dense
+
+
+def test_public_product_fallback_gives_the_same_bits(monkeypatch):
+    # without scipy's private CSR routine, the public product: the same float32 bits
+    # (random rows, invented data)
+    import numpy as np
+
+    prof = langid.profiles()
+    rng = np.random.default_rng(5)
+    rows = [rng.integers(0, prof.keys.size, n) for n in (300, 0, 2000)]
+    bounds = [np.array([0, n // 3, n]) for n in (300, 0, 2000)]
+    direct = langid._sums(prof, rows, bounds)
+    monkeypatch.setattr(langid, "_csr_matvecs", None)
+    assert np.array_equal(langid._sums(prof, rows, bounds), direct)
