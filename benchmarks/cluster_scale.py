@@ -271,6 +271,9 @@ def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
         out["result_bytes"] = conn.execute(
             "SELECT AVG(LENGTH(extracted) + LENGTH(measures) + LENGTH(text)) FROM cache"
         ).fetchone()[0] or 0
+    texts = opts.out / "state" / "texts"
+    out["texts_bytes"] = sum(p.stat().st_size for p in texts.rglob("*") if p.is_file()) \
+        / docs if texts.exists() else 0
     if redis:
         out["redis_ops"] = (redis.commands() - commands - 1) / docs
         out["redis_bytes"] = (redis.memory() - memory) / max(1, result.summary["accepted"])
@@ -295,7 +298,9 @@ def show(name: str, m: dict) -> None:
             f"{role} {spent:.1f} ms/doc" for role, spent in m["nodes_split"].items()))
     print(f"    extraction and checks inside the workers: {m['work_ms']:.1f} ms/doc (time)")
     print(f"    a worker's answer (the cache row it fills): {m['result_bytes'] / 1024:.1f} KiB"
-          " per document")
+          " per document" + (f"; texts written by the workers to the shared storage "
+                             f"(state/texts), not sent: {m['texts_bytes'] / 1024:.1f} KiB "
+                             "per document" if m["texts_bytes"] else ""))
     if "redis_ops" in m:
         print(f"    Redis: {m['redis_ops']:.1f} commands/doc, "
               f"{m['redis_bytes'] / 1024:.1f} KiB per indexed document")
