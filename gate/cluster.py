@@ -41,9 +41,11 @@ from gate.state import TEXT_INLINE_BELOW, store_text
 from gate.work import Params
 
 # A Dask task costs the coordinator's client a few ms of CPU whatever it carries (on
-# loopback, loaded: 0.15 ms a document with 64 answers of this size a task, 0.11 with 128)
-BATCH = 128  # tasks per Dask task, at most ...
-BATCH_BYTES = 8 << 20  # ... and bytes read by them (sizes discovery saw)
+# loopback, loaded: 0.15 ms a document with 64 answers of this size a task, 0.11 with 128;
+# with the texts left in the shared storage an answer is a third of its size, and 256 a
+# task took the coordinator from 2.11 to 1.78 ms a document, one run each, 1 Dask worker)
+BATCH = 256  # tasks per Dask task, at most ...
+BATCH_BYTES = 16 << 20  # ... and bytes read by them (sizes discovery saw)
 RECYCLE_AFTER = 2000  # tasks per pool process on a node (forked warm, so rarely needed)
 
 # Dask's client records the code around every submit for its dashboard (a walk up the
