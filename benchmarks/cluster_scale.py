@@ -235,6 +235,32 @@ class Probes:
                          for label, spent in self.spent.items())
 
 
+class GcClock:
+    """CPU spent in Python's garbage collector while it is entered, in whichever thread
+    of this process the collection ran (a run's, or the Dask client's)."""
+
+    def __init__(self) -> None:
+        self.spent = 0.0
+        self._began: dict[int, float] = {}
+
+    def _callback(self, phase: str, info: dict) -> None:
+        import threading
+        me = threading.get_ident()
+        if phase == "start":
+            self._began[me] = time.thread_time()
+        elif me in self._began:
+            self.spent += time.thread_time() - self._began.pop(me)
+
+    def __enter__(self) -> GcClock:
+        import gc
+        gc.callbacks.append(self._callback)
+        return self
+
+    def __exit__(self, *exc: object) -> None:
+        import gc
+        gc.callbacks.remove(self._callback)
+
+
 def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
              nodes: list[subprocess.Popen] | None = None) -> dict:
     """One run in this process: elapsed, coordinator CPU by stage, Redis costs, and the
@@ -247,7 +273,8 @@ def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
     memory = redis.memory() if redis else 0
     cpu = time.process_time()
     started = time.perf_counter()
-    with Probes() as probes:
+    collecting = GcClock()
+    with Probes() as probes, collecting:
         result = run(opts, clock)
     clock.stage("end", None)
     seconds = time.perf_counter() - started
@@ -261,6 +288,7 @@ def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
            "nodes_split": nodes_split, "rate": docs / seconds,
            "per_core": docs / seconds / cores_used, "coordinator_ms": coordinator / docs * 1e3,
            "stages": clock.per_document(docs), "probes": probes.per_document(docs),
+           "gc_ms": collecting.spent / docs * 1e3,
            "accepted": result.summary["accepted"],
            "local_children_ms": ((after.ru_utime + after.ru_stime) -
                                  (children.ru_utime + children.ru_stime)) / docs * 1e3,
@@ -293,6 +321,7 @@ def show(name: str, m: dict) -> None:
     print(f"    coordinator main thread (the run, without the Dask client's threads): "
           f"{m['main_ms']:.2f} ms/doc")
     print(f"    of which inside (main thread, each with what it calls): {m['probes']}")
+    print(f"    garbage collection (any thread of the coordinator): {m['gc_ms']:.2f} ms/doc")
     if m["nodes_split"]:
         print("    Dask CPU by process: " + ", ".join(
             f"{role} {spent:.1f} ms/doc" for role, spent in m["nodes_split"].items()))

@@ -28,6 +28,7 @@ from __future__ import annotations
 
 import ctypes
 import ctypes.util
+import gc
 import multiprocessing
 import os
 from collections import deque
@@ -196,9 +197,15 @@ class ClusterExecutor:
         self.texts: str | None = None  # the output folder's state/texts (keep_texts)
 
     def __enter__(self) -> ClusterExecutor:
+        # What this process holds when the run starts (gate's, Dask's and their
+        # libraries' modules, the policy) lives through the run: moved out of the
+        # garbage collector's sight while it lasts, the collections that the stream of
+        # answers triggers do not walk it again and again
+        gc.freeze()
         return self
 
     def __exit__(self, *exc: object) -> None:
+        gc.unfreeze()
         self.client.close()
 
     def run(self, tasks: Iterable[tuple[Any, Any]]) -> Iterator[tuple[Any, Any]]:
