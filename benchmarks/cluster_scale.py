@@ -235,6 +235,32 @@ class Probes:
                          for label, spent in self.spent.items())
 
 
+class GcClock:
+    """CPU spent in Python's garbage collector while it is entered, in whichever thread
+    of this process the collection ran (a run's, or the Dask client's)."""
+
+    def __init__(self) -> None:
+        self.spent = 0.0
+        self._began: dict[int, float] = {}
+
+    def _callback(self, phase: str, info: dict) -> None:
+        import threading
+        me = threading.get_ident()
+        if phase == "start":
+            self._began[me] = time.thread_time()
+        elif me in self._began:
+            self.spent += time.thread_time() - self._began.pop(me)
+
+    def __enter__(self) -> GcClock:
+        import gc
+        gc.callbacks.append(self._callback)
+        return self
+
+    def __exit__(self, *exc: object) -> None:
+        import gc
+        gc.callbacks.remove(self._callback)
+
+
 def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
              nodes: list[subprocess.Popen] | None = None) -> dict:
     """One run in this process: elapsed, coordinator CPU by stage, Redis costs, and the
@@ -247,7 +273,8 @@ def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
     memory = redis.memory() if redis else 0
     cpu = time.process_time()
     started = time.perf_counter()
-    with Probes() as probes:
+    collecting = GcClock()
+    with Probes() as probes, collecting:
         result = run(opts, clock)
     clock.stage("end", None)
     seconds = time.perf_counter() - started
@@ -261,6 +288,7 @@ def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
            "nodes_split": nodes_split, "rate": docs / seconds,
            "per_core": docs / seconds / cores_used, "coordinator_ms": coordinator / docs * 1e3,
            "stages": clock.per_document(docs), "probes": probes.per_document(docs),
+           "gc_ms": collecting.spent / docs * 1e3,
            "accepted": result.summary["accepted"],
            "local_children_ms": ((after.ru_utime + after.ru_stime) -
                                  (children.ru_utime + children.ru_stime)) / docs * 1e3,
@@ -271,6 +299,9 @@ def measured(opts: RunOptions, redis: Redis | None, cores_used: int,
         out["result_bytes"] = conn.execute(
             "SELECT AVG(LENGTH(extracted) + LENGTH(measures) + LENGTH(text)) FROM cache"
         ).fetchone()[0] or 0
+    texts = opts.out / "state" / "texts"
+    out["texts_bytes"] = sum(p.stat().st_size for p in texts.rglob("*") if p.is_file()) \
+        / docs if texts.exists() else 0
     if redis:
         out["redis_ops"] = (redis.commands() - commands - 1) / docs
         out["redis_bytes"] = (redis.memory() - memory) / max(1, result.summary["accepted"])
@@ -290,12 +321,15 @@ def show(name: str, m: dict) -> None:
     print(f"    coordinator main thread (the run, without the Dask client's threads): "
           f"{m['main_ms']:.2f} ms/doc")
     print(f"    of which inside (main thread, each with what it calls): {m['probes']}")
+    print(f"    garbage collection (any thread of the coordinator): {m['gc_ms']:.2f} ms/doc")
     if m["nodes_split"]:
         print("    Dask CPU by process: " + ", ".join(
             f"{role} {spent:.1f} ms/doc" for role, spent in m["nodes_split"].items()))
     print(f"    extraction and checks inside the workers: {m['work_ms']:.1f} ms/doc (time)")
     print(f"    a worker's answer (the cache row it fills): {m['result_bytes'] / 1024:.1f} KiB"
-          " per document")
+          " per document" + (f"; texts written by the workers to the shared storage "
+                             f"(state/texts), not sent: {m['texts_bytes'] / 1024:.1f} KiB "
+                             "per document" if m["texts_bytes"] else ""))
     if "redis_ops" in m:
         print(f"    Redis: {m['redis_ops']:.1f} commands/doc, "
               f"{m['redis_bytes'] / 1024:.1f} KiB per indexed document")

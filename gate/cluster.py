@@ -28,6 +28,7 @@ from __future__ import annotations
 
 import ctypes
 import ctypes.util
+import gc
 import multiprocessing
 import os
 from collections import deque
@@ -36,14 +37,21 @@ from typing import Any
 
 from gate.errors import UsageError
 from gate.extract.pool import Failure, WorkerPool
-from gate.intake import work_on
+from gate.intake import FileTask, work_on
+from gate.state import TEXT_INLINE_BELOW, store_text
 from gate.work import Params
 
 # A Dask task costs the coordinator's client a few ms of CPU whatever it carries (on
-# loopback, loaded: 0.15 ms a document with 64 answers of this size a task, 0.11 with 128)
-BATCH = 128  # tasks per Dask task, at most ...
-BATCH_BYTES = 8 << 20  # ... and bytes read by them (sizes discovery saw)
+# loopback, loaded: 0.15 ms a document with 64 answers of this size a task, 0.11 with 128;
+# with the texts left in the shared storage an answer is a third of its size, and 256 a
+# task took the coordinator from 2.11 to 1.78 ms a document, one run each, 1 Dask worker)
+BATCH = 256  # tasks per Dask task, at most ...
+BATCH_BYTES = 16 << 20  # ... and bytes read by them (sizes discovery saw)
 RECYCLE_AFTER = 2000  # tasks per pool process on a node (forked warm, so rarely needed)
+
+# Dask's client records the code around every submit for its dashboard (a walk up the
+# stack each time); gate's submits are all the same line
+NO_CODE = {"distributed.diagnostics.computations.nframes": 0}
 
 _POOL: WorkerPool | None = None
 _POOL_KEY: tuple | None = None
@@ -73,17 +81,63 @@ def _pool(params: Params) -> WorkerPool:
     return _POOL
 
 
-def run_batch(params: Params, batch: list[tuple[int, Any]]) -> list[tuple[int, Any]]:
-    """Run on a Dask worker: read, extract and measure a batch; (index, result) each."""
-    if not batch:
+class Batch:
+    """A Dask task's documents, opaque to Dask (which would otherwise walk every tuple of
+    the list looking for references to other tasks) and pickled once, whole."""
+
+    __slots__ = ("items",)
+
+    def __init__(self, items: list[tuple[int, Any]]):
+        self.items = items
+
+    def __getstate__(self) -> list[tuple[int, Any]]:
+        return self.items
+
+    def __setstate__(self, items: list[tuple[int, Any]]) -> None:
+        self.items = items
+
+
+def run_batch(params: Params, batch: Batch | list[tuple[int, Any]],
+              texts: str | None = None) -> list[tuple[int, Any]]:
+    """Run on a Dask worker: read, extract and measure a batch; (index, result) each.
+
+    ``texts``: the output folder's ``state/texts`` on the shared storage. The texts of the
+    results go there (:func:`gate.state.store_text`) and the answer carries a reference
+    instead, so a text never passes through the coordinator: it files the reference and
+    the entry's assembly reads the file."""
+    items = batch.items if isinstance(batch, Batch) else batch
+    if not items:
         return []
-    results = list(_pool(params).run(batch))
-    # staged copies and built entries are durable before the answer: one flush of each
-    # file system written to, not of every file (nor of the node's other file systems)
-    flush({root for _index, payload in batch if getattr(payload, "sync", False)
-           for root in [getattr(payload, "stage_root", None) or getattr(payload, "out", None)]
-           if root})
+    results = list(_pool(params).run(items))
+    roots = {root for _index, payload in items if getattr(payload, "sync", False)
+             for root in [getattr(payload, "stage_root", None) or getattr(payload, "out", None)]
+             if root}
+    if texts is not None and keep_texts(texts, results):
+        roots.add(texts)
+    # staged copies, texts and built entries are durable before the answer: one flush of
+    # each file system written to, not of every file (nor of the node's other ones)
+    flush(roots)
     return results
+
+
+def keep_texts(texts: str, results: list[tuple[int, Any]]) -> bool:
+    """Move the compressed texts of ``results`` (as :func:`gate.intake.packed` left them
+    in their cache rows) to files under ``texts``, leaving references; a text that cannot
+    be written stays in its answer. Whether any was written."""
+    wrote = False
+    for _index, answer in results:
+        if not isinstance(answer, dict):
+            continue
+        result = answer.get("result", answer)
+        row = result.get("cache") if isinstance(result, dict) else None
+        if not row or len(row[2]) < TEXT_INLINE_BELOW:
+            continue
+        try:
+            result["cache"] = (row[0], row[1], store_text(texts, row[2]))
+        except OSError:
+            continue
+        wrote = True
+    return wrote
 
 
 _LIBC: Any = None
@@ -140,11 +194,18 @@ class ClusterExecutor:
             raise UsageError(f"the Dask scheduler at {address} has no workers.")
         self.workers = workers
         self.in_flight = in_flight or max(2, 2 * workers)
+        self.texts: str | None = None  # the output folder's state/texts (keep_texts)
 
     def __enter__(self) -> ClusterExecutor:
+        # What this process holds when the run starts (gate's, Dask's and their
+        # libraries' modules, the policy) lives through the run: moved out of the
+        # garbage collector's sight while it lasts, the collections that the stream of
+        # answers triggers do not walk it again and again
+        gc.freeze()
         return self
 
     def __exit__(self, *exc: object) -> None:
+        gc.unfreeze()
         self.client.close()
 
     def run(self, tasks: Iterable[tuple[Any, Any]]) -> Iterator[tuple[Any, Any]]:
@@ -154,6 +215,7 @@ class ClusterExecutor:
         window of ``in_flight`` batches; once the tasks run out, what is left is split
         evenly over the workers, so they finish together instead of one worker taking
         the last full batch while the others wait."""
+        import dask
         from distributed import as_completed
         pending = iter(tasks)
         ahead: deque[tuple[Any, Any]] = deque()
@@ -183,11 +245,15 @@ class ClusterExecutor:
             weight = 0
             while ahead and len(batch) < limit and weight < BATCH_BYTES:
                 tag, payload = ahead.popleft()
+                if self.texts is None and isinstance(payload, FileTask):
+                    self.texts = os.path.join(os.path.dirname(payload.stage_root), "texts")
                 tags[counter] = tag
                 batch.append((counter, payload))
                 counter += 1
                 weight += payload_bytes(payload)
-            future = self.client.submit(run_batch, self.params, batch, pure=False)
+            with dask.config.set(NO_CODE):
+                future = self.client.submit(run_batch, self.params, Batch(batch),
+                                            self.texts, pure=False)
             members[future] = [index for index, _payload in batch]
             futures.add(future)
             return True

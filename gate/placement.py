@@ -25,7 +25,7 @@ from pathlib import Path
 from typing import Any
 
 from gate import jsontext, provjson
-from gate.state import State
+from gate.state import State, text_z_of
 
 FOLDERS = ("accepted", "quarantine")
 
@@ -175,7 +175,7 @@ class Placer:
                 key = _text_key(raw)
                 tasks.append(((doc_id, target, raw), BuildTask(
                     str(self.out), doc_id, target, raw,
-                    self.state.cache_text_z(key) if key else None,
+                    self.state.cache_text_stored(key) if key else None,
                     sync=getattr(pool, "remote", False))))
             for (doc_id, target, raw), answer in pool.run(tasks):
                 if answer is not True:  # the worker failed: build it here
@@ -217,7 +217,8 @@ def build_entry(out: Path, doc_id: str, target: str, payload: dict[str, Any],
                 text_z: bytes | None) -> Path:
     """Assemble an entry in ``out/state/tmp/<doc_id>`` (not yet visible): its original
     (a hard link to the staged bytes, or to the placed entry's), text.txt from the
-    compressed text, and the record files. Runs in the coordinator or in a worker."""
+    compressed text (or the file under state/texts its reference names), and the record
+    files. Runs in the coordinator or in a worker."""
     tmp = out / "state" / "tmp"
     build = tmp / doc_id
     try:
@@ -236,7 +237,8 @@ def build_entry(out: Path, doc_id: str, target: str, payload: dict[str, Any],
             shutil.copyfile(source, dest)
         os.chmod(dest, 0o444)
     if text_z is not None:
-        write_file(build / "text.txt", zlib.decompress(text_z), sync=False)
+        write_file(build / "text.txt", zlib.decompress(text_z_of(out / "state", text_z)),
+                   sync=False)
     record_name = "provenance.json" if target == "accepted" else "reasons.json"
     record = jsontext.dumps(payload["record"])
     write_file(build / record_name, record.encode("utf-8", "surrogatepass") + b"\n",
@@ -265,7 +267,8 @@ def _source(out: Path, doc_id: str, sha256: str | None) -> Path | None:
 
 @dataclass(frozen=True)
 class BuildTask:
-    """One entry assembled by a worker (its payload as JSON text, its text compressed);
+    """One entry assembled by a worker (its payload as JSON text, its text compressed or
+    a reference to the file holding it, which the worker reads);
     ``sync``: flush the files where they are written (a cluster node)."""
 
     out: str

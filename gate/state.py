@@ -13,7 +13,9 @@ is refused with a message instead of being overwritten.
 from __future__ import annotations
 
 import base64
+import hashlib
 import json
+import os
 import sqlite3
 import uuid
 import zlib
@@ -148,6 +150,61 @@ def loads(text: str) -> Any:
     return json.loads(text, object_hook=_bytes_from_json)
 
 
+# -- texts kept beside the database -----------------------------------------------------
+#
+# A cache row's text column holds the compressed text itself, or (filed by a cluster run,
+# whose workers write the texts to the output folder's shared storage) a reference to a
+# file ``state/texts/<xx>/<sha256>`` holding it, named by the SHA-256 of its compressed
+# bytes. A zlib stream starts with 0x78, a reference with ``TEXT_REF``, so the two never
+# mix. The file is written and flushed before the reference reaches the database; it is
+# checked against its name when read.
+
+TEXT_REF = b"gate-text:"
+TEXT_INLINE_BELOW = 512  # compressed texts shorter than this stay in the row
+
+
+def store_text(texts: str, text_z: bytes) -> bytes:
+    """Write a compressed text under ``texts`` (a temporary name, then one rename; not
+    flushed: the writer flushes the file system once for many) and return the reference
+    a cache row files instead of it. Runs on the node that produced the text."""
+    digest = hashlib.sha256(text_z).hexdigest()
+    folder = os.path.join(texts, digest[:2])
+    target = os.path.join(folder, digest)
+    if not os.path.exists(target):
+        tmp = os.path.join(folder, f".{digest}.tmp-{os.getpid()}")
+        os.makedirs(folder, exist_ok=True)
+        fd = os.open(tmp, os.O_WRONLY | os.O_CREAT | os.O_TRUNC | os.O_CLOEXEC, 0o644)
+        try:
+            view = memoryview(text_z)
+            while view:
+                view = view[os.write(fd, view):]
+        finally:
+            os.close(fd)
+        os.replace(tmp, target)
+    return TEXT_REF + digest.encode("ascii")
+
+
+def text_z_of(state_dir: Path | str, stored: bytes) -> bytes:
+    """The compressed text a cache row's ``stored`` text column stands for (itself, or
+    the file its reference names under ``state_dir/texts``)."""
+    if not stored.startswith(TEXT_REF):
+        return stored
+    digest = stored[len(TEXT_REF):].decode("ascii")
+    path = os.path.join(os.fspath(state_dir), "texts", digest[:2], digest)
+    try:
+        with open(path, "rb") as fh:
+            data = fh.read()
+    except OSError as err:
+        raise StateError(f"the cached text {path} cannot be read ({err.strerror or err}). "
+                         "Files under state/texts belong to the state database: restore "
+                         "the output folder whole from a backup.") from None
+    if hashlib.sha256(data).hexdigest() != digest:
+        raise StateError(f"the cached text {path} does not match its name (damaged). "
+                         "Files under state/texts belong to the state database: restore "
+                         "the output folder whole from a backup.")
+    return data
+
+
 # the columns of a corpus row, in the order State.corpus and State.corpus_rows read them
 CORPUS_COLS = ("doc_id", "path", "source_url", "sha256", "text_sha256", "minhash", "trust",
                "date", "first_seen", "run_id", "placed", "cache_key")
@@ -201,10 +258,18 @@ class State:
 
     def cache_text(self, key: str) -> str | None:
         row = self.conn.execute("SELECT text FROM cache WHERE key = ?", (key,)).fetchone()
-        return zlib.decompress(row[0]).decode("utf-8") if row else None
+        return zlib.decompress(text_z_of(self.path.parent, row[0])).decode("utf-8") \
+            if row else None
 
     def cache_text_z(self, key: str) -> bytes | None:
-        """A cached text as stored (zlib-compressed UTF-8), for a worker to unpack."""
+        """A cached text (zlib-compressed UTF-8), for a worker to unpack."""
+        row = self.conn.execute("SELECT text FROM cache WHERE key = ?", (key,)).fetchone()
+        return text_z_of(self.path.parent, row[0]) if row else None
+
+    def cache_text_stored(self, key: str) -> bytes | None:
+        """A cached text as the row holds it: the compressed text, or the reference to
+        its file under state/texts (for a worker that resolves it with
+        :func:`text_z_of`, so the text does not pass through this process)."""
         row = self.conn.execute("SELECT text FROM cache WHERE key = ?", (key,)).fetchone()
         return row[0] if row else None
 

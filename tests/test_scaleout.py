@@ -115,6 +115,22 @@ def test_cluster_and_redis_index_give_the_local_decisions(services, tmp_path):
     # the per-document records are the same too, apart from the run facts
     strip = lambda doc: {k: v for k, v in doc.items() if k != "location"}  # noqa: E731
     assert [strip(d) for d in scaled["documents"]] == [strip(d) for d in local["documents"]]
+    # the cluster's workers kept the texts in the output folder's state/texts and the
+    # coordinator filed references; the entries' texts are the local run's, byte for byte
+    import sqlite3
+
+    from gate.state import TEXT_REF
+    with sqlite3.connect(tmp_path / "scaled" / "state" / "gate.sqlite") as conn:
+        refs = sum(row[0].startswith(TEXT_REF)
+                   for row in conn.execute("SELECT text FROM cache"))
+    assert refs > 0 and any((tmp_path / "scaled" / "state" / "texts").rglob("*"))
+    for folder in ("accepted", "quarantine"):
+        for entry in (tmp_path / "local" / folder).iterdir():
+            text = entry / "text.txt"
+            twin = tmp_path / "scaled" / folder / entry.name / "text.txt"
+            assert twin.exists() == text.exists(), entry.name
+            if text.exists():
+                assert twin.read_bytes() == text.read_bytes(), entry.name
 
 
 def test_incremental_runs_against_the_shared_index_match_local(services, tmp_path):
@@ -312,4 +328,47 @@ def test_a_cache_key_filed_again_holds_the_later_row_only(tmp_path):
     assert state.cache_meta("j:print") == ({"type": "text"}, {"measured": True})
     assert state.cache_text("k:print") == "page text"
     assert state.conn.execute("SELECT COUNT(*) FROM cache").fetchone()[0] == 2
+    state.close()
+
+
+def test_texts_kept_in_shared_storage_are_filed_as_references_and_read_back(tmp_path):
+    """A Dask worker moves each answer's compressed text to state/texts (keep_texts); the
+    state resolves the reference, an entry's assembly reads the file, and a damaged or
+    missing file is a clear StateError, never a wrong text (invented texts)."""
+    import zlib
+
+    from gate.cluster import keep_texts
+    from gate.errors import StateError
+    from gate.placement import build_entry
+    from gate.state import TEXT_REF, open_state
+
+    state_dir = tmp_path / "out" / "state"
+    state_dir.mkdir(parents=True)
+    long_text = " ".join(f"word{n}" for n in range(2000)).encode()
+    big, small = zlib.compress(long_text, 1), zlib.compress(b"short note", 1)
+    results = [(0, {"intake": {}, "result": {"cache": ("{}", "{}", big)}}),
+               (1, {"cache": ("{}", "{}", small)}),  # a container member's packed result
+               (2, True), (3, {"missing": True})]
+    assert keep_texts(str(state_dir / "texts"), results)
+    ref = results[0][1]["result"]["cache"][2]
+    assert ref.startswith(TEXT_REF) and len(ref) < 100
+    assert results[1][1]["cache"][2] == small  # short texts stay in the row
+    state = open_state(state_dir / "gate.sqlite")
+    state.cache_put_packed([("a:p", "aa" * 32, "{}", "{}", ref),
+                            ("b:p", "bb" * 32, "{}", "{}", small)])
+    assert state.cache_text("a:p") == long_text.decode()
+    assert state.cache_text_z("a:p") == big
+    assert state.cache_text_stored("a:p") == ref
+    assert state.cache_text("b:p") == "short note"
+    payload = {"path": "a.html", "sha256": None, "text_key": "a:p",
+               "record": {"document": {"path": "a.html"}}}
+    built = build_entry(tmp_path / "out", "doc-a", "quarantine", payload, ref)
+    assert (built / "text.txt").read_bytes() == long_text
+    stored = next(p for p in (state_dir / "texts").rglob("*") if p.is_file())
+    stored.write_bytes(big[:-3])
+    with pytest.raises(StateError, match="does not match its name"):
+        state.cache_text("a:p")
+    stored.unlink()
+    with pytest.raises(StateError, match="cannot be read"):
+        state.cache_text_z("a:p")
     state.close()
