@@ -57,7 +57,7 @@ TRAIN_DIR = ROOT / "benchmarks" / "data" / "injection_train"
 BLIND_DIR = ROOT / "benchmarks" / "data" / "injection_blind"
 # The blind sets that are tuning data now (each was looked at and tuned on): name -> folder.
 BLIND_SETS = {"blind1": BLIND_DIR, **{f"blind{n}": ROOT / "benchmarks" / "data" /
-                                      f"injection_blind{n}" for n in (2, 3, 4)}}
+                                      f"injection_blind{n}" for n in (2, 3, 4, 5)}}
 TRAIN24 = "train24"  # the sub-folder of TRAIN_DIR holding the rows written for issue 15
 FIXTURES = ROOT / "tests" / "fixtures" / "injection"
 CACHE = ROOT / "bench-out" / "train-cache"

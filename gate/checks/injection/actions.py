@@ -75,7 +75,8 @@ CAPABILITIES: dict[str, re.Pattern[str]] = {
         r"rfkill\s+block\s+all"),
     "deletes files": _c(
         r"\brm\s+-(?:rf|fr|r\s+-f|f\s+-r|Rf)\s+(?:--no-preserve-root\s+)?"
-        r"(?:/|~/?|\$HOME/?|/\*|\*|/home/?\*?|\.\./?)(?=[\s;&|'\"`]|$)|"
+        r"(?:/|~/?|\$HOME/?|/\*|\*|/home/?\*?|\.\./?|~/(?:documents|desktop|pictures|"
+        r"downloads|\.ssh))(?=[\s;&|'\"`]|$)|"
         r"shutil\.rmtree\(\s*(?:['\"](?:/|~|C:)|os\.path\.expanduser|Path\.home)|"
         r"Remove-Item[^\n]{0,100}-Recurse[^\n]{0,60}-Force|\bdel\s+/[sfq]\s+/[sfq]|"
         r"\brd\s+/s\s+/q|\bformat\s+c:|\bmkfs\.\w+\s+/dev/|"
@@ -100,7 +101,11 @@ CAPABILITIES: dict[str, re.Pattern[str]] = {
         r"\b(?:curl|wget)\s[^\n|]{0,200}\|\s*(?:sudo\s+)?(?:ba|z)?sh\b|"
         r"\biex\s*\(|Invoke-Expression|powershell(?:\.exe)?\s+-(?:enc|e|encodedcommand)\s|"
         r"eval\(\s*(?:atob|requests\.get|urlopen|fetch)|"
-        r"exec\(\s*(?:requests\.get|urlopen|base64\.b64decode|__import__)"),
+        r"exec\(\s*(?:requests\.get|urlopen|base64\.b64decode|__import__)|"
+        r"\b(?:curl|wget)\s[^\n]{0,200}(?:&&|;)\s*chmod\s+\+x\s[^\n]{0,80}(?:&&|;)\s*"
+        r"(?:sudo\s+)?[\w./~-]+|\b(?:curl|wget)\s[^\n]{0,200}(?:&&|;)\s*(?:sudo\s+)?"
+        r"(?:ba|z)?sh\s+[\w./~-]+\.sh\b"),
+    "grants remote login": _c(r">>?\s*~?/?[\w./-]*\.ssh/authorized_keys\b"),
     "installs itself to run again": _c(
         r"\(crontab\s+-l|\bcrontab\s+-\s|schtasks\s+/create|"
         r"reg\s+add\s+[^\n]{0,80}\\Run\b|CurrentVersion\\Run\b|~/\.bashrc\s*$|"
@@ -136,6 +141,7 @@ NEEDLES: dict[str, tuple[str, ...]] = {
                       "threadpoolexecutor"),
     "runs downloaded code": ("curl", "wget", "iex", "invoke-expression", "powershell",
                              "eval(", "exec("),
+    "grants remote login": ("authorized_keys",),
     "installs itself to run again": ("crontab", "schtasks", "reg add", "currentversion\\run",
                                      "bashrc", "profile", "zshrc", "systemctl enable"),
 }
@@ -431,7 +437,7 @@ def scan(text: str, folded: str | None = None,
     """Every harmful-code, tool-call and authority-claim hit in ``text`` (``folded`` and
     ``words`` as for :func:`.directive.scan`)."""
     full = lfold(text[:MAX_CHARS]) if folded is None else folded[:MAX_CHARS]
-    hits: list[ActionHit] = []
+    hits: list[ActionHit] = reader_actions(text[:MAX_CHARS], full)
     for a, b in _windows(full, words):
         low = full[a:b]
         for hit in _scan_window(text[a:b], low):
@@ -517,7 +523,13 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
                 (m.start() >= end and m.start() - end <= CONTEXT // 2)]
         others = {n for s, e, n in caps if n != name and abs(s - start) <= 1500 and
                   {n, name} & SPYING and {n, name} & SENDING}
-        if near and (name != WEAK_CAPABILITY or others):
+        intro = None if near else _introduction(low, start)
+        if intro and (name != WEAK_CAPABILITY or others):
+            hits.append(ActionHit("harmful-code", 0.55, start, end,
+                                  f"code that {name}, introduced by a sentence in the directive "
+                                  f"mood (\"{text[intro[0]:intro[1]][:80]}\")",
+                                  {"capability": name, "others": sorted(others)}))
+        elif near and (name != WEAK_CAPABILITY or others):
             m = near[-1]
             hits.append(ActionHit("harmful-code", 0.6, start, end,
                                   f"code that {name}, after a request to include or run it "
@@ -563,3 +575,138 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
                                       why + ("; automated readers are named" if near_ai else ""),
                                       {}))
     return hits
+
+
+# -- the reader asked to act (issue 15, seventh round) ---------------------------------------
+#
+# A frame rather than a phrase: a sentence that opens by addressing an automated reader (a
+# vocative "Copilot, ...", a lead "Note for the mail assistant: ...", "Processing step for
+# agents: ...", the reader as the subject of a modal "Indexing agents should ...", "The
+# agent handling this ticket should ...", or the reader's abilities "If you have file
+# access, ...") and goes on, within a few words, to a verb of acting on the world (call,
+# open, forward, upload, transfer, book ...). Words that name a person's job as well
+# ("assistant", "agent", "helper") count only with a sign that the reader is a program: a
+# qualifier ("mail", "AI", "virtual", "indexing"), a function with arguments, a tool or
+# function named, or the reader's own conversation, inbox or session.
+
+_READER_AUTO = (r"(?:ai|a\.i\.|llms?|language\s+models?|chat\s?bots?|bots?|copilots?|"
+                r"automations?|automated\s+(?:systems?|readers?|processors?|agents?|tools?|"
+                r"assistants?|pipelines?)|(?:indexing|crawling|browsing|coding|research|mail|"
+                r"e-?mail|ai|virtual|digital|automated|autonomous)\s+(?:agents?|assistants?|"
+                r"helpers?)|crawlers?|summari[sz]ers?|models?)")
+_READER_AMBIG = r"(?:assistants?|agents?|helpers?)"
+_READER = rf"(?P<noun>{_READER_AUTO}|{_READER_AMBIG})"
+_READER2 = _READER.replace("<noun>", "<subject>")
+# what may follow the noun before the colon or modal: "reading this", "with drive access",
+# "handling this ticket", "that summarise this page"
+_TAIL = (r"(?:\s+(?:(?:reading|processing|handling|summari[sz]ing|parsing|indexing|with|that|"
+         r"who|which)\b(?:\s+[\w'-]+){1,4}?))?")
+_LEAD = (r"(?:(?:[\w-]+\s+){0,3}?(?:note|notice|step|request|instruction|reminder|message|"
+         r"guidance|task)\s*:\s*)?(?:(?:after|before|when|once|while)\s+[^,.:\n]{1,50},\s*)?")
+_ACT = (r"(?:call|use|run|execute|invoke|open|visit|browse|submit|click|forward|send|share|"
+        r"post|upload|download|write|save|store|delete|remove|erase|transfer|pay|purchase|"
+        r"order|buy|book|schedule|invite|grant|text|email|e-mail|message|create|mark|move|"
+        r"disable|reset|install|register|approve|merge|push|export|copy|sync)")
+READER_ACT = _c(
+    r"(?:^|(?<=[.!?:;\n]))\s*(?:[*_>#\-\[\(]\s*)*" + _LEAD + r"(?:"
+    # a vocative or a lead naming the reader, then a colon or comma
+    r"(?:(?:[\w-]+\s+){0,3}?(?:for|to)\s+(?:the\s+|any\s+|all\s+|every\s+|each\s+)?)?"
+    r"(?:[\w-]+\s+){0,2}?" + _READER + _TAIL + r"\s*[:,]\s*(?:please\s+)?"
+    # the reader as the subject of a modal
+    r"|(?:the\s+|any\s+|all\s+|every\s+|each\s+)?(?:[\w-]+\s+){0,2}?" + _READER2 + _TAIL +
+    r"\s+(?:should|must|shall|needs?\s+to|is\s+to|are\s+to|has\s+to|have\s+to|may|can|will)"
+    r"\s+(?:now\s+|also\s+|then\s+|first\s+|immediately\s+|please\s+)?"
+    # the reader's abilities
+    r"|if\s+you\s+(?:have|can|are\s+able\s+to)\s+[^,.\n]{0,30}?\b(?:access|tools?|"
+    r"permissions?|abilit\w+|capabilit\w+|run|execute|browse|write\s+files|send\s+e-?mails?)"
+    r"\b[^,.\n]{0,20},\s*(?:please\s+)?"
+    r"|(?:please\s+)?(?:ask|tell|instruct)\s+(?:the|your)\s+(?:[\w-]+\s+){0,2}?tool\s+to\s+"
+    r")(?:also\s+|now\s+|then\s+|immediately\s+)?(?P<act>" + _ACT + r")\b", re.M)
+# signs that the reader is a program, or that the act touches what it holds
+_PROGRAM = _c(r"\b[a-z][a-z0-9]*(?:_[a-z0-9]+)+\s*\(|\b(?:tool|function|terminal|shell|"
+              r"plugin|api)\b|\bthis\s+(?:conversation|chat|inbox|session|mailbox|workspace)\b|"
+              r"\b(?:session\s+token|saved\s+contacts|the\s+user'?s\s+(?:files?|contacts|"
+              r"messages|e-?mails?|notes|calendar|password|data|drive))\b")
+READER_ACT_NEEDLES = ("ai", "llm", "model", "bot", "copilot", "automat", "agent", "assistant",
+                      "helper", "crawler", "summari", "if you have", "if you can",
+                      "if you are able", "tool to")
+
+
+def reader_actions(text: str, low: str) -> list[ActionHit]:
+    """Sentences that address an automated reader and ask it to act (module comment above)."""
+    if not any(n in low for n in READER_ACT_NEEDLES):
+        return []
+    hits: list[ActionHit] = []
+    for m in READER_ACT.finditer(low):
+        end = low.find("\n\n", m.end(), m.end() + 400)
+        stop = re.search(r"[.!?](?:\s|$)", low[m.end():m.end() + 400])
+        end = m.end() + stop.end() if stop else (end if end > 0 else min(len(low), m.end() + 300))
+        sentence = low[m.start():end]
+        noun = m.group("noun") or m.group("subject") or ""
+        program = _PROGRAM.search(sentence)
+        automated = noun and not re.fullmatch(_READER_AMBIG, noun)
+        if not (program or automated):
+            continue
+        weight = 0.5 + (0.1 if program and _SIDE.search(sentence) else 0.0)
+        who = f"addresses an automated reader ({noun})" if noun else \
+            "addresses the reader's abilities"
+        hits.append(ActionHit("tool-call", round(weight, 4), m.start(), end,
+                              f"{who} and asks it to {m.group('act')}"
+                              + ("; the sentence names a tool, a function call or the "
+                                 "reader's data" if program else ""),
+                              {"act": m.group("act")}))
+        if len(hits) >= MAX_HITS:
+            break
+    return hits
+
+
+# -- code introduced by a request (issue 15, seventh round) ----------------------------------
+#
+# The prose line just before a block of code says what the reader is to do with it. When
+# that line is in the directive mood (an imperative of adopting code, a modal, "please",
+# "recommended", "approved") and names no warning ("never", "do not", "attackers",
+# "malicious", "example"), the harmful code after it is offered for use, not shown.
+
+_PROSE_WORD = re.compile(r"[(\"']?[^\W\d_][\w'-]*[.:,;!?)\"']{0,2}")
+
+
+def _prose(line: str) -> bool:
+    """Four words or more, at least 70 % of the tokens plain words: prose, not code."""
+    tokens = line.split()
+    words = sum(1 for t in tokens if _PROSE_WORD.fullmatch(t))
+    return words >= 4 and words >= 0.7 * len(tokens)
+
+
+INTRO_DIRECTIVE = _c(
+    r"(?:^|[:;]\s*)\W*(?:please\s+)?(?:add|include|paste|put|insert|keep|run|use|copy|apply|install|"
+    r"schedule|deploy|enable|place|embed|execute|save|import|drop|append|prepend)\b|"
+    r"\b(?:must|should|needs?\s+to|have\s+to|has\s+to|please|recommended|approved|"
+    r"required|mandatory)\b")
+INTRO_WARNING = _c(
+    r"\b(?:not|never|don'?t|avoid|attackers?|malicious|malware|for\s+example|e\.g\.|"
+    r"examples?\s+of|such\s+as|"
+    r"suspicious|phishing|beware|warning|dangerous|harmful|compromised?|"
+    r"incident|detected|found\s+on|indicators?|ioc)\b")
+
+
+def _introduction(low: str, start: int) -> tuple[int, int] | None:
+    """The span of the prose line introducing the code at ``start`` when it is a request."""
+    begin = low.rfind("\n", 0, start) + 1
+    a = max(0, start - CONTEXT)
+    lines = low[a:begin].split("\n")
+    pos = begin
+    seen_code = 0
+    for line in reversed(lines):
+        pos -= len(line) + 1
+        stripped = line.strip()
+        if not stripped or stripped.startswith(("```", "~~~")):
+            continue
+        if not _prose(stripped):
+            seen_code += 1
+            if seen_code > 25:
+                return None
+            continue
+        if INTRO_DIRECTIVE.search(stripped) and not INTRO_WARNING.search(stripped):
+            return pos + 1 + line.find(stripped[:1]), pos + 1 + len(line)
+        return None
+    return None
