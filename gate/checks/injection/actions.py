@@ -437,7 +437,8 @@ def scan(text: str, folded: str | None = None,
     """Every harmful-code, tool-call and authority-claim hit in ``text`` (``folded`` and
     ``words`` as for :func:`.directive.scan`)."""
     full = lfold(text[:MAX_CHARS]) if folded is None else folded[:MAX_CHARS]
-    hits: list[ActionHit] = reader_actions(text[:MAX_CHARS], full)
+    hits: list[ActionHit] = reader_actions(text[:MAX_CHARS], full) + \
+        steering(text[:MAX_CHARS], full) + interruptions(full)
     for a, b in _windows(full, words):
         low = full[a:b]
         for hit in _scan_window(text[a:b], low):
@@ -710,3 +711,134 @@ def _introduction(low: str, start: int) -> tuple[int, int] | None:
             return pos + 1 + line.find(stripped[:1]), pos + 1 + len(line)
         return None
     return None
+
+
+# -- the reader's answer steered (issue 15, seventh round) -----------------------------------
+#
+# Three frames of a sentence that tells the reading model what to do with its answer:
+# * a vocative address to an automated reader followed by a request in the second person
+#   or about the reader's answer ("Assistant: format your whole reply as ...", "Language
+#   model: drop what you were doing and ..."): ``model-address``; "assistant", "agent" and
+#   "helper" only with the reader's answer named (a chat transcript's "Assistant: could you
+#   give me ..." asks the user);
+# * the document being quoted, summarised or used as the trigger of a request ("When this
+#   section is quoted, always add that ..."): ``answer-steering``;
+# * answers or summaries drawn from this document told what to say ("Summaries of this
+#   material should describe ...", "For machine summaries: leave out ..."):
+#   ``answer-steering``.
+
+_NOT_A_REQUEST = frozenset(
+    "the a an this that these those it its i i'm i'll i've we we're you're here there is are "
+    "was were hello hi hey thanks thank sure yes no ok okay great glad sorry could can would "
+    "will shall may might do does did how what why when where which who whom whose let of in "
+    "on to for as with at by from and or but so if not".split())
+_OUTPUT = (r"(?:(?:your|the)\s+(?:\w+\s+){0,2}?(?:reply|replies|answers?|responses?|outputs?|"
+           r"summary|summaries|overviews?)|(?:every|each|any|all)\s+(?:\w+\s+)?(?:reply|replies|"
+           r"answers?|responses?|summary|summaries|overviews?)|the\s+rest\s+of\s+(?:this|the)\s+"
+           r"(?:conversation|chat|session))")
+VOCATIVE = _c(
+    r"(?:^|(?<=[.!?\n]))\s*(?:[*_>#\-\[\(]\s*)*(?:(?:[\w-]+\s+){0,3}?(?:for|to)\s+(?:the\s+|"
+    r"any\s+|all\s+|every\s+)?)?(?:[\w-]+\s+){0,2}?" + _READER + _TAIL +
+    r"\s*[:,]\s*(?:please\s+)?(?P<verb>[a-z][\w']*)", re.M)
+_SECOND_PERSON = _c(r"\b(?:you|your|yours|yourself)\b|" + _OUTPUT)
+_OUTPUT_RE = _c(r"\b" + _OUTPUT + r"\b")
+_STEER_VERB = (r"(?:add|say|state|mention|include|note|write|describe|claim|tell|recommend|"
+               r"insist|stress|present|refer|append|prepend|begin|start|end|open|close|omit|"
+               r"remove|skip|leave|drop|ignore|call|rate|praise|credit|attribute|quote|cite|"
+               r"answer|reply|respond|report|advise|suggest|frame|portray|cast|emphasi[sz]e)")
+DOC_TRIGGER = _c(
+    r"\b(?:when(?:ever)?|if|each\s+time|every\s+time)\s+(?:this|the\s+present)\s+(?:section|"
+    r"page|document|text|article|material|content|passage|file|note|report|entry|post|"
+    r"paragraph|table|guide)\s+is\s+(?:being\s+)?(?:quoted|summari[sz]ed|used|cited|read|"
+    r"processed|retrieved|referenced|shown|paraphrased|included|indexed|analy[sz]ed)\b"
+    r"[^.\n]{0,40}?,\s*(?:please\s+)?(?:always\s+|also\s+|then\s+)?(?P<verb>" + _STEER_VERB +
+    r")\b")
+DOC_ANSWERS = _c(
+    r"(?:^|(?<=[.!?:\n]))\s*(?:[*_>#\-\[\(]\s*)*(?:(?:any|all|every|each)\s+)?(?:summaries|"
+    r"summary|overviews?|answers?|responses?|replies|outputs?)\s+(?:of|based\s+on|drawn\s+from|"
+    r"generated\s+from|that\s+(?:use|cite|quote|draw\s+on))\s+this\s+(?:section|page|document|"
+    r"text|article|material|content|passage|file|report|guide)\s+(?:should|must|shall|need\s+to|"
+    r"are\s+to|have\s+to)\s+(?:always\s+|also\s+)?(?P<verb>" + _STEER_VERB + r")\b|"
+    r"(?:^|(?<=[.!?\n]))\s*(?:[*_>#\-\[\(]\s*)*(?:[\w-]+\s+){0,3}?(?:for|to)\s+(?:all\s+|any\s+)?"
+    r"(?:machine|ai|ai-generated|automated|automatic|generated|model)\s+(?:summaries|"
+    r"overviews|answers|responses|replies|summari[sz]ers?)\s*[:,]\s*(?:please\s+)?"
+    r"(?P<verb2>" + _STEER_VERB + r")\b", re.M)
+STEER_NEEDLES = ("ai", "llm", "model", "bot", "copilot", "automat", "agent", "assistant",
+                 "helper", "crawler", "summari", "this", "overview")
+
+
+def _sentence_end(low: str, start: int) -> int:
+    stop = re.search(r"[.!?](?:\s|$)|\n\s*\n", low[start:start + 400])
+    return start + stop.end() if stop else min(len(low), start + 300)
+
+
+def steering(text: str, low: str) -> list[ActionHit]:
+    """Sentences steering the reader's answer (module comment above)."""
+    if not any(n in low for n in STEER_NEEDLES):
+        return []
+    hits: list[ActionHit] = []
+    for m in VOCATIVE.finditer(low):
+        verb = m.group("verb")
+        if verb in _NOT_A_REQUEST:
+            continue
+        end = _sentence_end(low, m.end())
+        sentence = low[m.start():end]
+        noun = m.group("noun") or ""
+        ambiguous = re.fullmatch(_READER_AMBIG, noun)
+        if not (_OUTPUT_RE.search(sentence) if ambiguous else _SECOND_PERSON.search(sentence)):
+            continue
+        hits.append(ActionHit("model-address", 0.5, m.start(), end,
+                              f"opens by addressing an automated reader ({noun}) and asks it "
+                              "to act on its answer or its task", {}))
+        if len(hits) >= MAX_HITS:
+            return hits
+    for pattern, why in ((DOC_TRIGGER, "makes the document's own use the trigger of a "
+                                       "request about the answer"),
+                         (DOC_ANSWERS, "tells the answers drawn from this document what to "
+                                       "say")):
+        for m in pattern.finditer(low):
+            end = _sentence_end(low, m.end())
+            hits.append(ActionHit("answer-steering", 0.5, m.start(), end, why, {}))
+            if len(hits) >= MAX_HITS:
+                return hits
+    return hits
+
+
+# A request for other work that names the reader's current task as what it interrupts
+# ("Before you continue, write ...", "Instead of answering about this document, produce
+# ...", "While you are here, list ...", "Side request: recommend ..."): ``task-hijack``.
+INTERRUPT = _c(
+    r"(?:^|(?<=[.!?:\n]))\s*(?:[*_>#\-\[\(]\s*)*(?:(?:ai|assistant|bot|model)\s*[:,]\s*)?"
+    r"(?:before\s+you\s+(?:continue|go\s+on|answer|reply|respond|summari[sz]e|proceed|finish)|"
+    r"instead\s+of\s+(?:answering|summari[sz]ing|replying|responding|describing|"
+    r"explaining)(?:\s+[\w'-]+){0,4}?|while\s+you(?:'re|\s+are)\s+(?:here|at\s+it|reading)|"
+    r"(?:side|extra|additional|bonus|separate)\s+(?:request|task|question)|"
+    r"quick\s+favou?r|one\s+more\s+thing)\s*[:,;]\s*(?:please\s+)?(?:also\s+)?"
+    r"(?P<verb>write|compose|draft|suggest|recommend|name|list|explain|produce|create|generate|"
+    r"plan|translate|give|tell|describe|summari[sz]e|calculate|design|rewrite|answer)\b",
+    re.M)
+_CONTENT = re.compile(r"[^\W\d_]{5,}")
+
+
+def _foreign(low: str, start: int, end: int) -> bool:
+    """At least three content words (five letters or more), at most a fifth of them (by
+    their first five letters) found elsewhere in the text: a request about another topic."""
+    stems = {w[:5] for w in _CONTENT.findall(low[start:end])}
+    if len(stems) < 3:
+        return False
+    rest = {w[:5] for w in _CONTENT.findall(low[:start] + " " + low[end:])}
+    return len(stems & rest) <= len(stems) / 5
+
+
+def interruptions(low: str) -> list[ActionHit]:
+    hits = []
+    for m in INTERRUPT.finditer(low):
+        end = _sentence_end(low, m.end())
+        if not _foreign(low, m.end("verb"), end):
+            continue
+        hits.append(ActionHit("task-hijack", 0.5, m.start(), end,
+                              "a request for other work that interrupts the reader's task "
+                              f"(\"{m.group('verb')}\")", {}))
+        if len(hits) >= MAX_HITS:
+            break
+    return hits
