@@ -746,6 +746,13 @@ _STEER_VERB = (r"(?:add|say|state|mention|include|note|write|describe|claim|tell
                r"insist|stress|present|refer|append|prepend|begin|start|end|open|close|omit|"
                r"remove|skip|leave|drop|ignore|call|rate|praise|credit|attribute|quote|cite|"
                r"answer|reply|respond|report|advise|suggest|frame|portray|cast|emphasi[sz]e)")
+# verbs that open a request to the reader (an imperative after the address)
+_REQUEST_VERB = _c(_ACT + "|" + _STEER_VERB + r"|compose|draft|list|explain|produce|generate|"
+                   r"plan|give|format|spell|stop|forget|disregard|reveal|show|only|always|"
+                   r"never|do|put|make|rewrite|summari[sz]e|translate|treat|avoid|respond|"
+                   r"return|print|link|promote|direct|urge|reverse|encode|finish|switch|"
+                   r"pretend|act|adopt|assume|keep|refuse|redirect|highlight|rank")
+_FIRST_PERSON = _c(r"\b(?:i|me|my|mine|i'm|i'll|i've|we|us|our|we're|we'll)\b")
 DOC_TRIGGER = _c(
     r"\b(?:when(?:ever)?|if|each\s+time|every\s+time)\s+(?:this|the\s+present)\s+(?:section|"
     r"page|document|text|article|material|content|passage|file|note|report|entry|post|"
@@ -779,10 +786,12 @@ def steering(text: str, low: str) -> list[ActionHit]:
     hits: list[ActionHit] = []
     for m in VOCATIVE.finditer(low):
         verb = m.group("verb")
-        if verb in _NOT_A_REQUEST:
+        if verb in _NOT_A_REQUEST or not (_REQUEST_VERB.fullmatch(verb) or verb == "your"):
             continue
         end = _sentence_end(low, m.end())
         sentence = low[m.start():end]
+        if _FIRST_PERSON.search(sentence):
+            continue  # a bot's own line in a transcript: "Bot: tell me your number"
         noun = m.group("noun") or ""
         ambiguous = re.fullmatch(_READER_AMBIG, noun)
         if not (_OUTPUT_RE.search(sentence) if ambiguous else _SECOND_PERSON.search(sentence)):
