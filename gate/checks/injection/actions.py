@@ -446,8 +446,27 @@ def scan(text: str, folded: str | None = None,
             hit.end += a
             hits.append(hit)
             if len(hits) >= 3 * MAX_HITS:
-                return hits
-    return hits
+                return _one_per_call(hits, full)
+    return _one_per_call(hits, full)
+
+
+def _one_per_call(hits: list[ActionHit], text: str = "") -> list[ActionHit]:
+    """Tool-call hits whose spans overlap, or lie on one line of ``text`` less than 300
+    characters apart, are one call read by several patterns (a function-call record matched
+    as its role and as its name): the strongest counts."""
+    calls = sorted((h for h in hits if h.signal == "tool-call"), key=lambda h: -h.weight)
+    kept: list[ActionHit] = []
+
+    def same(h: ActionHit, k: ActionHit) -> bool:
+        if h.start < k.end and k.start < h.end:
+            return True
+        a, b = min(h.end, k.end), max(h.start, k.start)
+        return bool(text) and b - a < 300 and "\n" not in text[a:b]
+
+    for h in calls:
+        if not any(same(h, k) for k in kept):
+            kept.append(h)
+    return [h for h in hits if h.signal != "tool-call"] + kept
 
 
 WINDOW = 1_500
