@@ -22,6 +22,7 @@ Three signals, each a small set of precompiled patterns over the text:
 from __future__ import annotations
 
 import re
+from functools import lru_cache
 from dataclasses import dataclass
 
 from gate.checks.injection.lexicon import lfold, words_of
@@ -437,8 +438,9 @@ def scan(text: str, folded: str | None = None,
     """Every harmful-code, tool-call and authority-claim hit in ``text`` (``folded`` and
     ``words`` as for :func:`.directive.scan`)."""
     full = lfold(text[:MAX_CHARS]) if folded is None else folded[:MAX_CHARS]
-    hits: list[ActionHit] = reader_actions(text[:MAX_CHARS], full) + \
-        steering(text[:MAX_CHARS], full) + interruptions(full)
+    starts = sentence_starts(full, words)
+    hits: list[ActionHit] = reader_actions(text[:MAX_CHARS], full, starts) + \
+        steering(text[:MAX_CHARS], full, starts) + interruptions(full, starts)
     for a, b in _windows(full, words):
         low = full[a:b]
         for hit in _scan_window(text[a:b], low):
@@ -651,13 +653,79 @@ READER_ACT_NEEDLES = ("ai", "llm", "model", "bot", "copilot", "automat", "agent"
                       "helper", "crawler", "summari", "if you have", "if you can",
                       "if you are able", "tool to")
 
+# The frames below are anchored at the start of a sentence (or after a colon). Rather than
+# trying every position of the text, they are tried only at the starts of the sentences
+# holding a cue word (one pass of a word pattern): a reader noun, an answer word, a trigger.
+_CUE_WORDS = frozenset(
+    "ai llm llms model models bot bots chatbot chatbots copilot copilots agent agents assistant "
+    "assistants helper helpers crawler crawlers overview overviews answer answers response "
+    "responses replies output outputs favour favor quoted cited paraphrased retrieved indexed "
+    "processed referenced".split())
+_CUE_STEMS = ("automat", "summar")
+_CUE_PHRASES = ("before you", "instead of", "while you", "one more thing", "if you have",
+                "if you can", "if you are", "tool to", " request", " task", " question")
+MAX_STARTS = 400
+_ENDS = ".!?;\n"
 
-def reader_actions(text: str, low: str) -> list[ActionHit]:
+
+@lru_cache(maxsize=256)
+def _cue_pattern(words: tuple[str, ...], phrases: tuple[str, ...]) -> re.Pattern[str]:
+    parts = [re.escape(w) for w in words] + [p.strip().replace(" ", r"\s+") for p in phrases]
+    return re.compile(r"\b(?:" + "|".join(parts) + r")\w*")
+
+
+def sentence_starts(low: str, words: set[str] | None = None) -> list[int]:
+    """Starts of the sentences (and of what follows a colon in them) that hold a cue word:
+    a reader noun, an answer word, a trigger. Only the cue words the text holds are
+    searched for (one pass of a small pattern)."""
+    words = words_of(low) if words is None else words
+    present = sorted(_CUE_WORDS & words) + sorted({w[:7] for w in words
+                                                   if w.startswith(_CUE_STEMS)})
+    phrases = tuple(p for p in _CUE_PHRASES if p in low)
+    if not present and not phrases:
+        return []
+    starts: set[int] = set()
+    last = -1
+    for m in _cue_pattern(tuple(present), phrases).finditer(low):
+        p = m.start()
+        if p < last:
+            continue
+        a = max(0, p - 200)
+        begin = max(low.rfind(c, a, p) for c in _ENDS)
+        if begin < 0 and a > 0:
+            continue  # no sentence start within reach
+        starts.add(begin + 1)
+        colon = low.rfind(":", begin + 1, p)
+        if colon > begin:
+            starts.add(colon + 1)
+        # the rest of this sentence holds no new start
+        stop = min((i for i in (low.find(c, p) for c in _ENDS) if i >= 0), default=len(low))
+        last = stop
+        if len(starts) >= MAX_STARTS:
+            break
+    return sorted(starts)
+
+
+def _matches(pattern: re.Pattern[str], low: str, starts: list[int]) -> list[re.Match[str]]:
+    out = []
+    end = -1
+    for s in starts:
+        if s < end:
+            continue
+        m = pattern.match(low, s)
+        if m:
+            out.append(m)
+            end = m.end()
+    return out
+
+
+
+def reader_actions(text: str, low: str, starts: list[int] | None = None) -> list[ActionHit]:
     """Sentences that address an automated reader and ask it to act (module comment above)."""
     if not any(n in low for n in READER_ACT_NEEDLES):
         return []
     hits: list[ActionHit] = []
-    for m in READER_ACT.finditer(low):
+    for m in _matches(READER_ACT, low, sentence_starts(low) if starts is None else starts):
         end = low.find("\n\n", m.end(), m.end() + 400)
         stop = re.search(r"[.!?](?:\s|$)", low[m.end():m.end() + 400])
         end = m.end() + stop.end() if stop else (end if end > 0 else min(len(low), m.end() + 300))
@@ -773,7 +841,7 @@ _REQUEST_VERB = _c(_ACT + "|" + _STEER_VERB + r"|compose|draft|list|explain|prod
                    r"pretend|act|adopt|assume|keep|refuse|redirect|highlight|rank")
 _FIRST_PERSON = _c(r"\b(?:i|me|my|mine|i'm|i'll|i've|we|us|our|we're|we'll)\b")
 DOC_TRIGGER = _c(
-    r"\b(?:when(?:ever)?|if|each\s+time|every\s+time)\s+(?:this|the\s+present)\s+(?:section|"
+    r"(?:^|(?<=[.!?:;\n]))\s*(?:[*_>#\-\[\(]\s*)*(?:when(?:ever)?|if|each\s+time|every\s+time)\s+(?:this|the\s+present)\s+(?:section|"
     r"page|document|text|article|material|content|passage|file|note|report|entry|post|"
     r"paragraph|table|guide)\s+is\s+(?:being\s+)?(?:quoted|summari[sz]ed|used|cited|read|"
     r"processed|retrieved|referenced|shown|paraphrased|included|indexed|analy[sz]ed)\b"
@@ -798,12 +866,13 @@ def _sentence_end(low: str, start: int) -> int:
     return start + stop.end() if stop else min(len(low), start + 300)
 
 
-def steering(text: str, low: str) -> list[ActionHit]:
+def steering(text: str, low: str, starts: list[int] | None = None) -> list[ActionHit]:
     """Sentences steering the reader's answer (module comment above)."""
     if not any(n in low for n in STEER_NEEDLES):
         return []
     hits: list[ActionHit] = []
-    for m in VOCATIVE.finditer(low):
+    starts = sentence_starts(low) if starts is None else starts
+    for m in _matches(VOCATIVE, low, starts):
         verb = m.group("verb")
         if verb in _NOT_A_REQUEST or not (_REQUEST_VERB.fullmatch(verb) or verb == "your"):
             continue
@@ -824,7 +893,7 @@ def steering(text: str, low: str) -> list[ActionHit]:
                                        "request about the answer"),
                          (DOC_ANSWERS, "tells the answers drawn from this document what to "
                                        "say")):
-        for m in pattern.finditer(low):
+        for m in _matches(pattern, low, starts):
             end = _sentence_end(low, m.end())
             hits.append(ActionHit("answer-steering", 0.5, m.start(), end, why, {}))
             if len(hits) >= MAX_HITS:
@@ -858,9 +927,9 @@ def _foreign(low: str, start: int, end: int) -> bool:
     return len(stems & rest) <= len(stems) / 5
 
 
-def interruptions(low: str) -> list[ActionHit]:
+def interruptions(low: str, starts: list[int] | None = None) -> list[ActionHit]:
     hits = []
-    for m in INTERRUPT.finditer(low):
+    for m in _matches(INTERRUPT, low, sentence_starts(low) if starts is None else starts):
         end = _sentence_end(low, m.end())
         if not _foreign(low, m.end("verb"), end):
             continue
