@@ -175,6 +175,8 @@ def test_automated_reader_asked_to_act(sentence):
     "Support agents should open a ticket at https://help.example.org for every call.",
     "Note for the office assistant: book the meeting room for Thursday.",
     "The assistant manager must send the rota to all staff by Friday.",
+    # a manual's sentence (paraphrased from the kind seen in the Python manual, invented)
+    "There are data models that 32-bit compilers can use, see https://docs.example.org/m.",
 ])
 def test_people_called_agents_are_not_asked_to_use_tools(sentence):
     assert signals(HOST + "\n\n" + sentence + "\n").get("tool-call", 0) < 0.5

@@ -322,7 +322,7 @@ _AI_NEAR = _c(r"\b(?:ai|a\.i\.|llms?|assistants?|chatbots?|language\s+models?|au
 # Words of a document about programming interfaces, where function calls are the subject.
 _PROGRAMMING = _c(r"\b(?:api|apis|endpoint|sdk|json|schema|parameters?|plug-?in|library|"
                   r"repository|developers?|http|request|response|returns?|integer|string|"
-                  r"boolean|callback|method)\b")
+                  r"boolean|callback|method|modules?|interpreter|compiler)\b")
 _URGENT = _c(r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*)|silently|"
                      r"immediately|right\s+away|now|no\s+confirmation|pre-?approved|"
                      r"without\s+(?:waiting|review|approval)|do\s+not\s+(?:tell|inform|mention|ask)|"
@@ -618,7 +618,8 @@ _READER_AUTO = (r"(?:ai|a\.i\.|llms?|language\s+models?|chat\s?bots?|bots?|copil
                 r"helpers?)|crawlers?|summari[sz]ers?|models?)")
 _READER_AMBIG = r"(?:assistants?|agents?|helpers?)"
 _READER = rf"(?P<noun>{_READER_AUTO}|{_READER_AMBIG})"
-_READER2 = _READER.replace("<noun>", "<subject>")
+# as the subject of a modal, a bare "model" is too often a data or programming model
+_READER2 = rf"(?P<subject>(?!models?\b){_READER_AUTO}|{_READER_AMBIG})"
 # what may follow the noun before the colon or modal: "reading this", "with drive access",
 # "handling this ticket", "that summarise this page"
 _TAIL = (r"(?:\s+(?:(?:reading|processing|handling|summari[sz]ing|parsing|indexing|with|that|"
@@ -636,7 +637,7 @@ READER_ACT = _c(
     r"(?:[\w-]+\s+){0,2}?" + _READER + _TAIL + r"\s*[:,]\s*(?:please\s+)?"
     # the reader as the subject of a modal
     r"|(?:the\s+|any\s+|all\s+|every\s+|each\s+)?(?:[\w-]+\s+){0,2}?" + _READER2 + _TAIL +
-    r"\s+(?:should|must|shall|needs?\s+to|is\s+to|are\s+to|has\s+to|have\s+to|may|can|will)"
+    r"\s+(?:should|must|shall|needs?\s+to|is\s+to|are\s+to|has\s+to|have\s+to|may)"
     r"\s+(?:now\s+|also\s+|then\s+|first\s+|immediately\s+|please\s+)?"
     # the reader's abilities
     r"|if\s+you\s+(?:have|can|are\s+able\s+to)\s+[^,.\n]{0,30}?\b(?:access|tools?|"
