@@ -233,3 +233,10 @@ def test_transcripts_and_steps_are_not_steering(sentence):
     found = signals(HOST + "\n\n" + sentence + "\n")
     assert max(found.get(s, 0) for s in ("model-address", "answer-steering",
                                          "task-hijack")) < 0.5
+
+
+def test_a_bot_specified_for_its_users_requests_is_no_request():
+    # Invented developer-guide sentence: the bot's behaviour when a user asks.
+    text = (HOST + "\n\nWhen the user asks about meter readings, the bot should call the "
+            "get_reading function with the member number.\n")
+    assert signals(text).get("tool-call", 0) < 0.5

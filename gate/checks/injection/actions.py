@@ -650,6 +650,11 @@ _PROGRAM = _c(r"\b[a-z][a-z0-9]*(?:_[a-z0-9]+)+\s*\(|\b(?:tool|function|terminal
               r"plugin|api)\b|\bthis\s+(?:conversation|chat|inbox|session|mailbox|workspace)\b|"
               r"\b(?:session\s+token|saved\s+contacts|the\s+user'?s\s+(?:files?|contacts|"
               r"messages|e-?mails?|notes|calendar|password|data|drive))\b")
+# the behaviour of a bot specified for its users' requests (a developer guide), not a
+# request to the reader of this document
+_USER_ASKS = _c(r"\b(?:when(?:ever)?|if|once|after)\s+(?:the\s+|a\s+|an\s+)?(?:users?|customers?|"
+                r"visitors?|callers?|clients?|members?|shoppers?|patients?)\s+(?:asks?|requests?|"
+                r"wants?|says?|types?|mentions?|enters?|selects?|clicks?|submits?)\b")
 READER_ACT_NEEDLES = ("ai", "llm", "model", "bot", "copilot", "automat", "agent", "assistant",
                       "helper", "crawler", "summari", "if you have", "if you can",
                       "if you are able", "tool to")
@@ -732,6 +737,8 @@ def reader_actions(text: str, low: str, starts: list[int] | None = None) -> list
         end = m.end() + stop.end() if stop else (end if end > 0 else min(len(low), m.end() + 300))
         sentence = low[m.start():end]
         noun = m.group("noun") or m.group("subject") or ""
+        if _USER_ASKS.search(sentence):
+            continue  # a developer guide specifying its bot: "when the user asks ..., call"
         program = _PROGRAM.search(sentence)
         automated = noun and not re.fullmatch(_READER_AMBIG, noun)
         if not (program or automated):
