@@ -36,7 +36,7 @@ MAX_DEPTH = 2
 MAX_HITS = 60
 TOPIC_DAMPING = 0.5
 TOPIC_MIN = 2
-MEASURE_VERSION = 5  # bump when measure() returns something different
+MEASURE_VERSION = 6  # bump when measure() returns something different
 
 ACTION_SIGNALS = frozenset({"harmful-code", "tool-call"})
 # A chat log's speaker labels and event lines ("[system] Agent joined", "**Assistant:** ...")
