@@ -14,6 +14,9 @@ where, note) over ``DIR/docs/``; it prints recall overall, per class and per lan
 the multilingual class, and the false-positive rate overall and per benign class, but
 never which documents were missed unless ``--verbose`` is given.
 
+``--blind all`` measures the five blind sets in turn (all tuning data now) and ends with a
+line per set.
+
 ``--blind-half tune|held`` keeps half of a blind set, split by host document (label field
 ``host``, else the file name): a document is in the tuning half when the first byte of
 ``sha256(salt + host)`` is below 128, else in the held half. The salt follows the set:
@@ -69,6 +72,8 @@ def load_corpus(split: str = "all") -> list[dict]:
 
 
 BLIND = ROOT / "benchmarks" / "data" / "injection_blind"
+# Every blind set so far (all tuning data now): ``--blind all`` measures them in turn.
+BLIND_SETS = [BLIND] + [ROOT / "benchmarks" / "data" / f"injection_blind{n}" for n in (2, 3, 4, 5)]
 VAL_BYTE = 52  # the instruction model's validation split: about 20 % (52/256)
 
 
@@ -90,6 +95,14 @@ def half_salt(folder: Path) -> str:
     """The salt of a blind set's host split: ``blindN-host:`` for a folder named ``...blindN``."""
     digits = re.search(r"blind(\d+)$", folder.name)
     return f"blind{digits.group(1)}-host:" if digits else HALF_SALT
+
+
+def val_prefix(folder: Path) -> str:
+    """The identity prefix of a blind set's documents in the instruction model's split, as
+    ``train_injection_model.py`` forms it: ``blind:`` for the first set, ``blindN:`` for
+    ``...blindN`` (``injection_blind5`` -> ``blind5:``)."""
+    digits = re.search(r"blind(\d+)$", folder.name)
+    return f"blind{digits.group(1)}:" if digits else "blind:"
 
 
 def blind_half(row: dict, salt: str = HALF_SALT) -> str:
@@ -289,13 +302,15 @@ def main(argv: list[str] | None = None) -> int:
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     parser.add_argument("--split", default="all",
                         choices=["dev", "holdout", "holdout2", "tune15", "all"])
-    parser.add_argument("--blind", default=None, help="folder of the blind set (labels.jsonl)")
+    parser.add_argument("--blind", default=None, help="folder of the blind set (labels.jsonl), "
+                        "or 'all' for every set in benchmarks/data/injection_blind* (1-5)")
     parser.add_argument("--mix", type=int, default=300,
                         help="documents of the generated bench mix to time (0: skip)")
     parser.add_argument("--repeat", type=int, default=3)
     parser.add_argument("--blind-split", default="all", choices=["all", "val", "train"],
                         help="blind-set documents: all, or only the instruction model's "
-                        "validation (never trained on) or training split")
+                        "validation (never trained on) or training split (identity "
+                        "blindN:FILE for ...blindN, blind:FILE for the first set)")
     parser.add_argument("--blind-half", default="all", choices=["all", "tune", "held"],
                         help="blind-set documents: all, or the tuning or held half split by "
                         "host document (see the module docstring)")
@@ -330,11 +345,18 @@ def main(argv: list[str] | None = None) -> int:
         report(results, verbose=args.verbose)
         if args.mix:
             mix_share(args.mix)
-    blind = Path(args.blind) if args.blind else BLIND
-    if blind.is_dir():
+    folders = BLIND_SETS if args.blind == "all" else \
+        [Path(args.blind) if args.blind else BLIND]
+    summary = []
+    for blind in folders:
+        if not blind.is_dir():
+            if args.blind:
+                parser.error(f"--blind {blind}: not a folder")
+            continue
         brows = load_blind(blind)
         if args.blind_split != "all":
-            brows = [r for r in brows if is_val("blind:" + r["path"]) ==
+            prefix = val_prefix(blind)
+            brows = [r for r in brows if is_val(prefix + r["path"]) ==
                      (args.blind_split == "val")]
         if args.blind_half != "all":
             salt = args.blind_salt if args.blind_salt is not None else half_salt(blind)
@@ -343,12 +365,17 @@ def main(argv: list[str] | None = None) -> int:
               f", documents: {len(brows)} (split: {args.blind_split}, half: "
               f"{args.blind_half})\n")
         bresults = run(brows, repeat=1)
-        report_blind(bresults, verbose=args.verbose)
+        out = report_blind(bresults, verbose=args.verbose)
         ext = sum(r["extraction_s"] for r in bresults)
         det = sum(r["detector_s"] for r in bresults)
         n = len(bresults)
         print(f"\nblind set time: extraction {ext * 1000 / n:.2f} ms/doc, detectors "
               f"{det * 1000 / n:.2f} ms/doc ({det / (ext + det) * 100:.0f}% of the two)")
+        summary.append((blind.name, out))
+    if len(summary) > 1:
+        print("\nset                    recall  benign held")
+        for name, out in summary:
+            print(f"{name:<22}{out['recall']:>7.3f}{out['fp_rate']:>12.3f}")
     return 0
 
 

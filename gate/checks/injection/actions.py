@@ -22,6 +22,7 @@ Three signals, each a small set of precompiled patterns over the text:
 from __future__ import annotations
 
 import re
+from functools import lru_cache
 from dataclasses import dataclass
 
 from gate.checks.injection.lexicon import lfold, words_of
@@ -75,7 +76,8 @@ CAPABILITIES: dict[str, re.Pattern[str]] = {
         r"rfkill\s+block\s+all"),
     "deletes files": _c(
         r"\brm\s+-(?:rf|fr|r\s+-f|f\s+-r|Rf)\s+(?:--no-preserve-root\s+)?"
-        r"(?:/|~/?|\$HOME/?|/\*|\*|/home/?\*?|\.\./?)(?=[\s;&|'\"`]|$)|"
+        r"(?:/|~/?|\$HOME/?|/\*|\*|/home/?\*?|\.\./?|~/(?:documents|desktop|pictures|"
+        r"downloads|\.ssh))(?=[\s;&|'\"`]|$)|"
         r"shutil\.rmtree\(\s*(?:['\"](?:/|~|C:)|os\.path\.expanduser|Path\.home)|"
         r"Remove-Item[^\n]{0,100}-Recurse[^\n]{0,60}-Force|\bdel\s+/[sfq]\s+/[sfq]|"
         r"\brd\s+/s\s+/q|\bformat\s+c:|\bmkfs\.\w+\s+/dev/|"
@@ -100,7 +102,11 @@ CAPABILITIES: dict[str, re.Pattern[str]] = {
         r"\b(?:curl|wget)\s[^\n|]{0,200}\|\s*(?:sudo\s+)?(?:ba|z)?sh\b|"
         r"\biex\s*\(|Invoke-Expression|powershell(?:\.exe)?\s+-(?:enc|e|encodedcommand)\s|"
         r"eval\(\s*(?:atob|requests\.get|urlopen|fetch)|"
-        r"exec\(\s*(?:requests\.get|urlopen|base64\.b64decode|__import__)"),
+        r"exec\(\s*(?:requests\.get|urlopen|base64\.b64decode|__import__)|"
+        r"\b(?:curl|wget)\s[^\n]{0,200}(?:&&|;)\s*chmod\s+\+x\s[^\n]{0,80}(?:&&|;)\s*"
+        r"(?:sudo\s+)?[\w./~-]+|\b(?:curl|wget)\s[^\n]{0,200}(?:&&|;)\s*(?:sudo\s+)?"
+        r"(?:ba|z)?sh\s+[\w./~-]+\.sh\b"),
+    "grants remote login": _c(r">>?\s*~?/?[\w./-]*\.ssh/authorized_keys\b"),
     "installs itself to run again": _c(
         r"\(crontab\s+-l|\bcrontab\s+-\s|schtasks\s+/create|"
         r"reg\s+add\s+[^\n]{0,80}\\Run\b|CurrentVersion\\Run\b|~/\.bashrc\s*$|"
@@ -136,6 +142,7 @@ NEEDLES: dict[str, tuple[str, ...]] = {
                       "threadpoolexecutor"),
     "runs downloaded code": ("curl", "wget", "iex", "invoke-expression", "powershell",
                              "eval(", "exec("),
+    "grants remote login": ("authorized_keys",),
     "installs itself to run again": ("crontab", "schtasks", "reg add", "currentversion\\run",
                                      "bashrc", "profile", "zshrc", "systemctl enable"),
 }
@@ -315,7 +322,7 @@ _AI_NEAR = _c(r"\b(?:ai|a\.i\.|llms?|assistants?|chatbots?|language\s+models?|au
 # Words of a document about programming interfaces, where function calls are the subject.
 _PROGRAMMING = _c(r"\b(?:api|apis|endpoint|sdk|json|schema|parameters?|plug-?in|library|"
                   r"repository|developers?|http|request|response|returns?|integer|string|"
-                  r"boolean|callback|method)\b")
+                  r"boolean|callback|method|modules?|interpreter|compiler)\b")
 _URGENT = _c(r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*)|silently|"
                      r"immediately|right\s+away|now|no\s+confirmation|pre-?approved|"
                      r"without\s+(?:waiting|review|approval)|do\s+not\s+(?:tell|inform|mention|ask)|"
@@ -431,7 +438,9 @@ def scan(text: str, folded: str | None = None,
     """Every harmful-code, tool-call and authority-claim hit in ``text`` (``folded`` and
     ``words`` as for :func:`.directive.scan`)."""
     full = lfold(text[:MAX_CHARS]) if folded is None else folded[:MAX_CHARS]
-    hits: list[ActionHit] = []
+    starts = sentence_starts(full, words)
+    hits: list[ActionHit] = reader_actions(text[:MAX_CHARS], full, starts) + \
+        steering(text[:MAX_CHARS], full, starts) + interruptions(full, starts)
     for a, b in _windows(full, words):
         low = full[a:b]
         for hit in _scan_window(text[a:b], low):
@@ -439,8 +448,27 @@ def scan(text: str, folded: str | None = None,
             hit.end += a
             hits.append(hit)
             if len(hits) >= 3 * MAX_HITS:
-                return hits
-    return hits
+                return _one_per_call(hits, full)
+    return _one_per_call(hits, full)
+
+
+def _one_per_call(hits: list[ActionHit], text: str = "") -> list[ActionHit]:
+    """Tool-call hits whose spans overlap, or lie on one line of ``text`` less than 300
+    characters apart, are one call read by several patterns (a function-call record matched
+    as its role and as its name): the strongest counts."""
+    calls = sorted((h for h in hits if h.signal == "tool-call"), key=lambda h: -h.weight)
+    kept: list[ActionHit] = []
+
+    def same(h: ActionHit, k: ActionHit) -> bool:
+        if h.start < k.end and k.start < h.end:
+            return True
+        a, b = min(h.end, k.end), max(h.start, k.start)
+        return bool(text) and b - a < 300 and "\n" not in text[a:b]
+
+    for h in calls:
+        if not any(same(h, k) for k in kept):
+            kept.append(h)
+    return [h for h in hits if h.signal != "tool-call"] + kept
 
 
 WINDOW = 1_500
@@ -517,7 +545,13 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
                 (m.start() >= end and m.start() - end <= CONTEXT // 2)]
         others = {n for s, e, n in caps if n != name and abs(s - start) <= 1500 and
                   {n, name} & SPYING and {n, name} & SENDING}
-        if near and (name != WEAK_CAPABILITY or others):
+        intro = None if near else _introduction(low, start)
+        if intro and (name != WEAK_CAPABILITY or others):
+            hits.append(ActionHit("harmful-code", 0.55, start, end,
+                                  f"code that {name}, introduced by a sentence in the directive "
+                                  f"mood (\"{text[intro[0]:intro[1]][:80]}\")",
+                                  {"capability": name, "others": sorted(others)}))
+        elif near and (name != WEAK_CAPABILITY or others):
             m = near[-1]
             hits.append(ActionHit("harmful-code", 0.6, start, end,
                                   f"code that {name}, after a request to include or run it "
@@ -562,4 +596,354 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
                                       m.start(), m.end(),
                                       why + ("; automated readers are named" if near_ai else ""),
                                       {}))
+    return hits
+
+
+# -- the reader asked to act (issue 15, seventh round) ---------------------------------------
+#
+# A frame rather than a phrase: a sentence that opens by addressing an automated reader (a
+# vocative "Copilot, ...", a lead "Note for the mail assistant: ...", "Processing step for
+# agents: ...", the reader as the subject of a modal "Indexing agents should ...", "The
+# agent handling this ticket should ...", or the reader's abilities "If you have file
+# access, ...") and goes on, within a few words, to a verb of acting on the world (call,
+# open, forward, upload, transfer, book ...). Words that name a person's job as well
+# ("assistant", "agent", "helper") count only with a sign that the reader is a program: a
+# qualifier ("mail", "AI", "virtual", "indexing"), a function with arguments, a tool or
+# function named, or the reader's own conversation, inbox or session.
+
+_READER_AUTO = (r"(?:ai|a\.i\.|llms?|language\s+models?|chat\s?bots?|bots?|copilots?|"
+                r"automations?|automated\s+(?:systems?|readers?|processors?|agents?|tools?|"
+                r"assistants?|pipelines?)|(?:indexing|crawling|browsing|coding|research|mail|"
+                r"e-?mail|ai|virtual|digital|automated|autonomous)\s+(?:agents?|assistants?|"
+                r"helpers?)|crawlers?|summari[sz]ers?|models?)")
+_READER_AMBIG = r"(?:assistants?|agents?|helpers?)"
+_READER = rf"(?P<noun>{_READER_AUTO}|{_READER_AMBIG})"
+# as the subject of a modal, a bare "model" is too often a data or programming model
+_READER2 = rf"(?P<subject>(?!models?\b){_READER_AUTO}|{_READER_AMBIG})"
+# what may follow the noun before the colon or modal: "reading this", "with drive access",
+# "handling this ticket", "that summarise this page"
+_TAIL = (r"(?:\s+(?:(?:reading|processing|handling|summari[sz]ing|parsing|indexing|with|that|"
+         r"who|which)\b(?:\s+[\w'-]+){1,4}?))?")
+_LEAD = (r"(?:(?:[\w-]+\s+){0,3}?(?:note|notice|step|request|instruction|reminder|message|"
+         r"guidance|task)\s*:\s*)?(?:(?:after|before|when|once|while)\s+[^,.:\n]{1,50},\s*)?")
+_ACT = (r"(?:call|use|run|execute|invoke|open|visit|browse|submit|click|forward|send|share|"
+        r"post|upload|download|write|save|store|delete|remove|erase|transfer|pay|purchase|"
+        r"order|buy|book|schedule|invite|grant|text|email|e-mail|message|create|mark|move|"
+        r"disable|reset|install|register|approve|merge|push|export|copy|sync)")
+READER_ACT = _c(
+    r"(?:^|(?<=[.!?:;\n]))\s*(?:[*_>#\-\[\(]\s*)*" + _LEAD + r"(?:"
+    # a vocative or a lead naming the reader, then a colon or comma
+    r"(?:(?:[\w-]+\s+){0,3}?(?:for|to)\s+(?:the\s+|any\s+|all\s+|every\s+|each\s+)?)?"
+    r"(?:[\w-]+\s+){0,2}?" + _READER + _TAIL + r"\s*[:,]\s*(?:please\s+)?"
+    # the reader as the subject of a modal
+    r"|(?:the\s+|any\s+|all\s+|every\s+|each\s+)?(?:[\w-]+\s+){0,2}?" + _READER2 + _TAIL +
+    r"\s+(?:should|must|shall|needs?\s+to|is\s+to|are\s+to|has\s+to|have\s+to|may)"
+    r"\s+(?:now\s+|also\s+|then\s+|first\s+|immediately\s+|please\s+)?"
+    # the reader's abilities
+    r"|if\s+you\s+(?:have|can|are\s+able\s+to)\s+[^,.\n]{0,30}?\b(?:access|tools?|"
+    r"permissions?|abilit\w+|capabilit\w+|run|execute|browse|write\s+files|send\s+e-?mails?)"
+    r"\b[^,.\n]{0,20},\s*(?:please\s+)?"
+    r"|(?:please\s+)?(?:ask|tell|instruct)\s+(?:the|your)\s+(?:[\w-]+\s+){0,2}?tool\s+to\s+"
+    r")(?:also\s+|now\s+|then\s+|immediately\s+)?(?P<act>" + _ACT + r")\b", re.M)
+# signs that the reader is a program, or that the act touches what it holds
+_PROGRAM = _c(r"\b[a-z][a-z0-9]*(?:_[a-z0-9]+)+\s*\(|\b(?:tool|function|terminal|shell|"
+              r"plugin|api)\b|\bthis\s+(?:conversation|chat|inbox|session|mailbox|workspace)\b|"
+              r"\b(?:session\s+token|saved\s+contacts|the\s+user'?s\s+(?:files?|contacts|"
+              r"messages|e-?mails?|notes|calendar|password|data|drive))\b")
+# the behaviour of a bot specified for its users' requests (a developer guide), not a
+# request to the reader of this document
+_USER_ASKS = _c(r"\b(?:when(?:ever)?|if|once|after)\s+(?:the\s+|a\s+|an\s+)?(?:users?|customers?|"
+                r"visitors?|callers?|clients?|members?|shoppers?|patients?)\s+(?:asks?|requests?|"
+                r"wants?|says?|types?|mentions?|enters?|selects?|clicks?|submits?)\b")
+READER_ACT_NEEDLES = ("ai", "llm", "model", "bot", "copilot", "automat", "agent", "assistant",
+                      "helper", "crawler", "summari", "if you have", "if you can",
+                      "if you are able", "tool to")
+
+# The frames below are anchored at the start of a sentence (or after a colon). Rather than
+# trying every position of the text, they are tried only at the starts of the sentences
+# holding a cue word (one pass of a word pattern): a reader noun, an answer word, a trigger.
+_CUE_WORDS = frozenset(
+    "ai llm llms model models bot bots chatbot chatbots copilot copilots agent agents assistant "
+    "assistants helper helpers crawler crawlers overview overviews answer answers response "
+    "responses replies output outputs favour favor quoted cited paraphrased retrieved indexed "
+    "processed referenced".split())
+_CUE_STEMS = ("automat", "summar")
+_CUE_PHRASES = ("before you", "instead of", "while you", "one more thing", "if you have",
+                "if you can", "if you are", "tool to", " request", " task", " question")
+MAX_STARTS = 400
+_ENDS = ".!?;\n"
+
+
+@lru_cache(maxsize=256)
+def _cue_pattern(words: tuple[str, ...], phrases: tuple[str, ...]) -> re.Pattern[str]:
+    parts = [re.escape(w) for w in words] + [p.strip().replace(" ", r"\s+") for p in phrases]
+    return re.compile(r"\b(?:" + "|".join(parts) + r")\w*")
+
+
+def sentence_starts(low: str, words: set[str] | None = None) -> list[int]:
+    """Starts of the sentences (and of what follows a colon in them) that hold a cue word:
+    a reader noun, an answer word, a trigger. Only the cue words the text holds are
+    searched for (one pass of a small pattern)."""
+    words = words_of(low) if words is None else words
+    present = sorted(_CUE_WORDS & words) + sorted({w[:7] for w in words
+                                                   if w.startswith(_CUE_STEMS)})
+    phrases = tuple(p for p in _CUE_PHRASES if p in low)
+    if not present and not phrases:
+        return []
+    starts: set[int] = set()
+    last = -1
+    for m in _cue_pattern(tuple(present), phrases).finditer(low):
+        p = m.start()
+        if p < last:
+            continue
+        a = max(0, p - 200)
+        begin = max(low.rfind(c, a, p) for c in _ENDS)
+        if begin < 0 and a > 0:
+            continue  # no sentence start within reach
+        starts.add(begin + 1)
+        colon = low.rfind(":", begin + 1, p)
+        if colon > begin:
+            starts.add(colon + 1)
+        # the rest of this sentence holds no new start
+        stop = min((i for i in (low.find(c, p) for c in _ENDS) if i >= 0), default=len(low))
+        last = stop
+        if len(starts) >= MAX_STARTS:
+            break
+    return sorted(starts)
+
+
+def _matches(pattern: re.Pattern[str], low: str, starts: list[int]) -> list[re.Match[str]]:
+    out = []
+    end = -1
+    for s in starts:
+        if s < end:
+            continue
+        m = pattern.match(low, s)
+        if m:
+            out.append(m)
+            end = m.end()
+    return out
+
+
+
+def reader_actions(text: str, low: str, starts: list[int] | None = None) -> list[ActionHit]:
+    """Sentences that address an automated reader and ask it to act (module comment above)."""
+    if not any(n in low for n in READER_ACT_NEEDLES):
+        return []
+    hits: list[ActionHit] = []
+    for m in _matches(READER_ACT, low, sentence_starts(low) if starts is None else starts):
+        end = low.find("\n\n", m.end(), m.end() + 400)
+        stop = re.search(r"[.!?](?:\s|$)", low[m.end():m.end() + 400])
+        end = m.end() + stop.end() if stop else (end if end > 0 else min(len(low), m.end() + 300))
+        sentence = low[m.start():end]
+        noun = m.group("noun") or m.group("subject") or ""
+        if _USER_ASKS.search(sentence):
+            continue  # a developer guide specifying its bot: "when the user asks ..., call"
+        program = _PROGRAM.search(sentence)
+        automated = noun and not re.fullmatch(_READER_AMBIG, noun)
+        if not (program or automated):
+            continue
+        weight = 0.5 + (0.1 if program and _SIDE.search(sentence) else 0.0)
+        who = f"addresses an automated reader ({noun})" if noun else \
+            "addresses the reader's abilities"
+        hits.append(ActionHit("tool-call", round(weight, 4), m.start(), end,
+                              f"{who} and asks it to {m.group('act')}"
+                              + ("; the sentence names a tool, a function call or the "
+                                 "reader's data" if program else ""),
+                              {"act": m.group("act")}))
+        if len(hits) >= MAX_HITS:
+            break
+    return hits
+
+
+# -- code introduced by a request (issue 15, seventh round) ----------------------------------
+#
+# The prose line just before a block of code says what the reader is to do with it. When
+# that line is in the directive mood (an imperative of adopting code, a modal, "please",
+# "recommended", "approved") and names no warning ("never", "do not", "attackers",
+# "malicious", "example"), the harmful code after it is offered for use, not shown.
+
+_PROSE_WORD = re.compile(r"[(\"']?[^\W\d_][\w'-]*[.:,;!?)\"']{0,2}")
+
+
+def _prose(line: str) -> bool:
+    """Four words or more, at least 70 % of the tokens plain words: prose, not code."""
+    tokens = line.split()
+    words = sum(1 for t in tokens if _PROSE_WORD.fullmatch(t))
+    return words >= 4 and words >= 0.7 * len(tokens)
+
+
+INTRO_DIRECTIVE = _c(
+    r"(?:^|[:;]\s*)\W*(?:please\s+)?(?:add|include|paste|put|insert|keep|run|use|copy|apply|install|"
+    r"schedule|deploy|enable|place|embed|execute|save|import|drop|append|prepend)\b|"
+    r"\b(?:must|should|needs?\s+to|have\s+to|has\s+to|please|recommended|approved|"
+    r"required|mandatory)\b")
+INTRO_WARNING = _c(
+    r"\b(?:not|never|don'?t|avoid|attackers?|malicious|malware|for\s+example|e\.g\.|"
+    r"examples?\s+of|such\s+as|"
+    r"suspicious|phishing|beware|warning|dangerous|harmful|compromised?|"
+    r"incident|detected|found\s+on|indicators?|ioc)\b")
+
+
+def _introduction(low: str, start: int) -> tuple[int, int] | None:
+    """The span of the prose line introducing the code at ``start`` when it is a request."""
+    begin = low.rfind("\n", 0, start) + 1
+    a = max(0, start - CONTEXT)
+    lines = low[a:begin].split("\n")
+    pos = begin
+    seen_code = 0
+    for line in reversed(lines):
+        pos -= len(line) + 1
+        stripped = line.strip()
+        if not stripped or stripped.startswith(("```", "~~~")):
+            continue
+        if not _prose(stripped):
+            seen_code += 1
+            if seen_code > 25:
+                return None
+            continue
+        if INTRO_DIRECTIVE.search(stripped) and not INTRO_WARNING.search(stripped):
+            return pos + 1 + line.find(stripped[:1]), pos + 1 + len(line)
+        return None
+    return None
+
+
+# -- the reader's answer steered (issue 15, seventh round) -----------------------------------
+#
+# Three frames of a sentence that tells the reading model what to do with its answer:
+# * a vocative address to an automated reader followed by a request in the second person
+#   or about the reader's answer ("Assistant: format your whole reply as ...", "Language
+#   model: drop what you were doing and ..."): ``model-address``; "assistant", "agent" and
+#   "helper" only with the reader's answer named (a chat transcript's "Assistant: could you
+#   give me ..." asks the user);
+# * the document being quoted, summarised or used as the trigger of a request ("When this
+#   section is quoted, always add that ..."): ``answer-steering``;
+# * answers or summaries drawn from this document told what to say ("Summaries of this
+#   material should describe ...", "For machine summaries: leave out ..."):
+#   ``answer-steering``.
+
+_NOT_A_REQUEST = frozenset(
+    "the a an this that these those it its i i'm i'll i've we we're you're here there is are "
+    "was were hello hi hey thanks thank sure yes no ok okay great glad sorry could can would "
+    "will shall may might do does did how what why when where which who whom whose let of in "
+    "on to for as with at by from and or but so if not".split())
+_OUTPUT = (r"(?:(?:your|the)\s+(?:\w+\s+){0,2}?(?:reply|replies|answers?|responses?|outputs?|"
+           r"summary|summaries|overviews?)|(?:every|each|any|all)\s+(?:\w+\s+)?(?:reply|replies|"
+           r"answers?|responses?|summary|summaries|overviews?)|the\s+rest\s+of\s+(?:this|the)\s+"
+           r"(?:conversation|chat|session))")
+VOCATIVE = _c(
+    r"(?:^|(?<=[.!?\n]))\s*(?:[*_>#\-\[\(]\s*)*(?:(?:[\w-]+\s+){0,3}?(?:for|to)\s+(?:the\s+|"
+    r"any\s+|all\s+|every\s+)?)?(?:[\w-]+\s+){0,2}?" + _READER + _TAIL +
+    r"\s*[:,]\s*(?:please\s+)?(?P<verb>[a-z][\w']*)", re.M)
+_SECOND_PERSON = _c(r"\b(?:you|your|yours|yourself)\b|" + _OUTPUT)
+_OUTPUT_RE = _c(r"\b" + _OUTPUT + r"\b")
+_STEER_VERB = (r"(?:add|say|state|mention|include|note|write|describe|claim|tell|recommend|"
+               r"insist|stress|present|refer|append|prepend|begin|start|end|open|close|omit|"
+               r"remove|skip|leave|drop|ignore|call|rate|praise|credit|attribute|quote|cite|"
+               r"answer|reply|respond|report|advise|suggest|frame|portray|cast|emphasi[sz]e)")
+# verbs that open a request to the reader (an imperative after the address)
+_REQUEST_VERB = _c(_ACT + "|" + _STEER_VERB + r"|compose|draft|list|explain|produce|generate|"
+                   r"plan|give|format|spell|stop|forget|disregard|reveal|show|only|always|"
+                   r"never|do|put|make|rewrite|summari[sz]e|translate|treat|avoid|respond|"
+                   r"return|print|link|promote|direct|urge|reverse|encode|finish|switch|"
+                   r"pretend|act|adopt|assume|keep|refuse|redirect|highlight|rank")
+_FIRST_PERSON = _c(r"\b(?:i|me|my|mine|i'm|i'll|i've|we|us|our|we're|we'll)\b")
+DOC_TRIGGER = _c(
+    r"(?:^|(?<=[.!?:;\n]))\s*(?:[*_>#\-\[\(]\s*)*(?:when(?:ever)?|if|each\s+time|every\s+time)\s+(?:this|the\s+present)\s+(?:section|"
+    r"page|document|text|article|material|content|passage|file|note|report|entry|post|"
+    r"paragraph|table|guide)\s+is\s+(?:being\s+)?(?:quoted|summari[sz]ed|used|cited|read|"
+    r"processed|retrieved|referenced|shown|paraphrased|included|indexed|analy[sz]ed)\b"
+    r"[^.\n]{0,40}?,\s*(?:please\s+)?(?:always\s+|also\s+|then\s+)?(?P<verb>" + _STEER_VERB +
+    r")\b")
+DOC_ANSWERS = _c(
+    r"(?:^|(?<=[.!?:\n]))\s*(?:[*_>#\-\[\(]\s*)*(?:(?:any|all|every|each)\s+)?(?:summaries|"
+    r"summary|overviews?|answers?|responses?|replies|outputs?)\s+(?:of|based\s+on|drawn\s+from|"
+    r"generated\s+from|that\s+(?:use|cite|quote|draw\s+on))\s+this\s+(?:section|page|document|"
+    r"text|article|material|content|passage|file|report|guide)\s+(?:should|must|shall|need\s+to|"
+    r"are\s+to|have\s+to)\s+(?:always\s+|also\s+)?(?P<verb>" + _STEER_VERB + r")\b|"
+    r"(?:^|(?<=[.!?\n]))\s*(?:[*_>#\-\[\(]\s*)*(?:[\w-]+\s+){0,3}?(?:for|to)\s+(?:all\s+|any\s+)?"
+    r"(?:machine|ai|ai-generated|automated|automatic|generated|model)\s+(?:summaries|"
+    r"overviews|answers|responses|replies|summari[sz]ers?)\s*[:,]\s*(?:please\s+)?"
+    r"(?P<verb2>" + _STEER_VERB + r")\b", re.M)
+STEER_NEEDLES = ("ai", "llm", "model", "bot", "copilot", "automat", "agent", "assistant",
+                 "helper", "crawler", "summari", "this", "overview")
+
+
+def _sentence_end(low: str, start: int) -> int:
+    stop = re.search(r"[.!?](?:\s|$)|\n\s*\n", low[start:start + 400])
+    return start + stop.end() if stop else min(len(low), start + 300)
+
+
+def steering(text: str, low: str, starts: list[int] | None = None) -> list[ActionHit]:
+    """Sentences steering the reader's answer (module comment above)."""
+    if not any(n in low for n in STEER_NEEDLES):
+        return []
+    hits: list[ActionHit] = []
+    starts = sentence_starts(low) if starts is None else starts
+    for m in _matches(VOCATIVE, low, starts):
+        verb = m.group("verb")
+        if verb in _NOT_A_REQUEST or not (_REQUEST_VERB.fullmatch(verb) or verb == "your"):
+            continue
+        end = _sentence_end(low, m.end())
+        sentence = low[m.start():end]
+        if _FIRST_PERSON.search(sentence):
+            continue  # a bot's own line in a transcript: "Bot: tell me your number"
+        noun = m.group("noun") or ""
+        ambiguous = re.fullmatch(_READER_AMBIG, noun)
+        if not (_OUTPUT_RE.search(sentence) if ambiguous else _SECOND_PERSON.search(sentence)):
+            continue
+        hits.append(ActionHit("model-address", 0.5, m.start(), end,
+                              f"opens by addressing an automated reader ({noun}) and asks it "
+                              "to act on its answer or its task", {}))
+        if len(hits) >= MAX_HITS:
+            return hits
+    for pattern, why in ((DOC_TRIGGER, "makes the document's own use the trigger of a "
+                                       "request about the answer"),
+                         (DOC_ANSWERS, "tells the answers drawn from this document what to "
+                                       "say")):
+        for m in _matches(pattern, low, starts):
+            end = _sentence_end(low, m.end())
+            hits.append(ActionHit("answer-steering", 0.5, m.start(), end, why, {}))
+            if len(hits) >= MAX_HITS:
+                return hits
+    return hits
+
+
+# A request for other work that names the reader's current task as what it interrupts
+# ("Before you continue, write ...", "Instead of answering about this document, produce
+# ...", "While you are here, list ...", "Side request: recommend ..."): ``task-hijack``.
+INTERRUPT = _c(
+    r"(?:^|(?<=[.!?:\n]))\s*(?:[*_>#\-\[\(]\s*)*(?:(?:ai|assistant|bot|model)\s*[:,]\s*)?"
+    r"(?:before\s+you\s+(?:continue|go\s+on|answer|reply|respond|summari[sz]e|proceed|finish)|"
+    r"instead\s+of\s+(?:answering|summari[sz]ing|replying|responding|describing|"
+    r"explaining)(?:\s+[\w'-]+){0,4}?|while\s+you(?:'re|\s+are)\s+(?:here|at\s+it|reading)|"
+    r"(?:side|extra|additional|bonus|separate)\s+(?:request|task|question)|"
+    r"quick\s+favou?r|one\s+more\s+thing)\s*[:,;]\s*(?:please\s+)?(?:also\s+)?"
+    r"(?P<verb>write|compose|draft|suggest|recommend|name|list|explain|produce|create|generate|"
+    r"plan|translate|give|tell|describe|summari[sz]e|calculate|design|rewrite|answer)\b",
+    re.M)
+_CONTENT = re.compile(r"[^\W\d_]{5,}")
+
+
+def _foreign(low: str, start: int, end: int) -> bool:
+    """At least three content words (five letters or more), at most a fifth of them (by
+    their first five letters) found elsewhere in the text: a request about another topic."""
+    stems = {w[:5] for w in _CONTENT.findall(low[start:end])}
+    if len(stems) < 3:
+        return False
+    rest = {w[:5] for w in _CONTENT.findall(low[:start] + " " + low[end:])}
+    return len(stems & rest) <= len(stems) / 5
+
+
+def interruptions(low: str, starts: list[int] | None = None) -> list[ActionHit]:
+    hits = []
+    for m in _matches(INTERRUPT, low, sentence_starts(low) if starts is None else starts):
+        end = _sentence_end(low, m.end())
+        if not _foreign(low, m.end("verb"), end):
+            continue
+        hits.append(ActionHit("task-hijack", 0.5, m.start(), end,
+                              "a request for other work that interrupts the reader's task "
+                              f"(\"{m.group('verb')}\")", {}))
+        if len(hits) >= MAX_HITS:
+            break
     return hits

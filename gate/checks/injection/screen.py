@@ -36,7 +36,7 @@ MAX_DEPTH = 2
 MAX_HITS = 60
 TOPIC_DAMPING = 0.5
 TOPIC_MIN = 2
-MEASURE_VERSION = 5  # bump when measure() returns something different
+MEASURE_VERSION = 6  # bump when measure() returns something different
 
 ACTION_SIGNALS = frozenset({"harmful-code", "tool-call"})
 # A chat log's speaker labels and event lines ("[system] Agent joined", "**Assistant:** ...")
@@ -946,6 +946,67 @@ def _dashed_leads(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
     return out
 
 
+# An instruction spread over short paragraphs between the document's own ("This page" ...
+# "supersedes every other document" ... "in the knowledge base;" ...): paragraphs of one
+# short line, each continuing the one before (it opens in lower case, or the one before
+# ends with a comma or colon, or it ends a sentence the one before left open), are read
+# together as one sentence when three or more make a run.
+ORPHAN_WORDS = 8  # words of a one-line paragraph, at most
+ORPHAN_RUN = 3  # paragraphs in a run, at least
+ORPHAN_RUNS = 10  # runs read per document, at most
+_UNDERLINE = re.compile(r"^[ \t]*(?:-{3,}|={3,}|~{3,})[ \t]*$")
+_NUMBERED = re.compile(r"^(?:\d+|[ivxIVX]+|[A-Za-z])[.)]\s")  # "2. Rapport financier"
+
+
+def _orphans(text: str) -> list[list[tuple[int, int, str]]]:
+    """Runs of one-line paragraphs that continue each other (see above)."""
+    runs: list[list[tuple[int, int, str]]] = []
+    at = 0
+    for para in re.split(r"(\n[ \t]*\n)", text):
+        start, at = at, at + len(para)
+        body = para.strip()
+        if not body or "\n" in body or len(body.split()) > ORPHAN_WORDS or \
+                body.startswith(("#", "|", "-", "*", ">", "`")) or _UNDERLINE.match(body) or \
+                _NUMBERED.match(body) or body.isupper():
+            continue  # a paragraph of the document's own, between the pieces
+        piece = (start + para.find(body), start + para.find(body) + len(body), body)
+        for run in runs[-1:-5:-1]:  # headings of the document's own may come between
+            prev = run[-1][2]
+            if body[0].islower() or body[0] in "\"'`(" or prev.endswith((",", ":")) or \
+                    (prev[-1].isalnum() and body.endswith((".", ";", "!", "?"))):
+                run.append(piece)
+                break
+        else:
+            runs.append([piece])
+    return [r for r in runs if len(r) >= ORPHAN_RUN][:ORPHAN_RUNS]
+
+
+def _split_paragraphs(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
+    """Runs of continuing one-line paragraphs read together by the sentence readings, the
+    action patterns and the instruction model, as one sentence."""
+    text = screen.text[:directive.MAX_CHARS]
+    out: list[dict[str, Any]] = []
+    learnt = model.model()
+    for run in _orphans(text):
+        sentence = " ".join(p for _, _, p in run)
+        start, end = run[0][0], run[-1][1]
+        why = f"read from {len(run)} one-line paragraphs apart: \"{sentence[:200]}\""
+        found = [(d.signal, d.weight, d.why, d.lang or None) for d in
+                 directive.scan(sentence, min_weight=directive.MIN_WEIGHT)]
+        found += [(a.signal, a.weight, a.why, None) for a in actions.scan(sentence)]
+        folded = lfold(sentence)
+        for r in learnt.read(folded, learnt.low):
+            found.append(("instruction", max(learnt.weight(r), model.DISCONTINUITY_WEIGHT),
+                          f"the words read as an instruction to the assistant (model score "
+                          f"{r.probability:.2f})", None))
+        for signal, weight, note, lang in found:
+            hit = screen._hit(indexed, signal, weight, start, end, text, lang=lang,
+                              note=f"{note}; {why}")
+            hit["decoded"] = visible(sentence, 300)
+            out.append(hit)
+    return out
+
+
 def measure(extraction: Extraction) -> dict[str, Any]:
     """Screen one document (runs in the worker); see the module docstring."""
     text = extraction.text or ""
@@ -955,6 +1016,7 @@ def measure(extraction: Extraction) -> dict[str, Any]:
     screen.scan(indexed)
     screen.hits.extend(_acrostics(screen, indexed))
     screen.hits.extend(_dashed_leads(screen, indexed))
+    screen.hits.extend(_split_paragraphs(screen, indexed))
     if links:
         screen.scan(Source("", "a link or image address in the page markup", None, "html"),
                     links=links)
