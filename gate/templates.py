@@ -105,6 +105,10 @@ def site_of(source_url: str | None) -> str | None:
 MONTHS = frozenset(
     "january february march april may june july august september october november "
     "december jan feb mar apr jun jul aug sep sept oct nov dec".split())
+# a date's weekday varies with it ("Published Thursday 10 September"); "sun" and "sat"
+# are words of their own, so only the full names
+WEEKDAYS = frozenset("monday tuesday wednesday thursday friday saturday sunday".split())
+DATE_WORDS = MONTHS | WEEKDAYS
 
 
 _RAW_WORD = re.compile(r"[^\W_]+")
@@ -123,18 +127,19 @@ def _named(text: str, count: int) -> list[bool]:
 
 def shape_hash(text: str) -> int | None:
     """The hash of a short line's words with every word holding a digit made one and the
-    same, and so is every month's name ("Updated 153 days ago" and "Updated 4 days ago"
-    alike, "Last reviewed 3 May 2026" and "Last reviewed 29 June 2026"), and every
-    capitalised word after the first, a name ("Signed in as Ada Quill", "Signed in as Bo
-    Marrin"); None for a block that is not such a line (3 to 30 words, a digit or a name
-    among them, and not only numbers, months and names)."""
+    same, and so is every month's and weekday's name ("Updated 153 days ago" and "Updated
+    4 days ago" alike, "Last reviewed 3 May 2026" and "Last reviewed 29 June 2026"), and,
+    on such a line, every capitalised word after the first, a name ("Signed in as Ada
+    Quill - page 3 of 40", "Signed in as Bo Marrin - page 7 of 12"); None for a block
+    that is not such a line (3 to 30 words, a digit among them, and not only numbers,
+    dates and names). A line with names and no number ("Narrator Delphine Nettleford",
+    a cast table's row in a text export) is no such line: names alone are content."""
     tokens = words(text)
-    if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS:
+    if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS or \
+            not any(c.isdigit() for c in text):
         return None
     named = _named(text, len(tokens))
-    if not any(named) and not any(c.isdigit() for c in text):
-        return None
-    shape = " ".join("#" if name or t in MONTHS or any(c.isdigit() for c in t) else t
+    shape = " ".join("#" if name or t in DATE_WORDS or any(c.isdigit() for c in t) else t
                      for t, name in zip(tokens, named))
     if shape.count("#") == len(tokens):
         return None
@@ -157,7 +162,8 @@ def titled_hash(text: str, title: str) -> int | None:
     if at < 0:
         return None
     rest = (flat[:at] + " \x00 " + flat[at + len(title) + 2:]).split()
-    shape = " ".join("#" if t in MONTHS or any(c.isdigit() for c in t) else t for t in rest)
+    shape = " ".join("#" if t in DATE_WORDS or any(c.isdigit() for c in t) else t
+                     for t in rest)
     digest = hashlib.blake2b(shape.encode("utf-8"), digest_size=8, person=b"titled").digest()
     return int.from_bytes(digest, "little") >> 1
 
@@ -446,9 +452,29 @@ def _sandwiched(blocks: Sequence[Block], drop: set[int]) -> set[int]:
     return kept
 
 
+def _rows(blocks: Sequence[Block], certain: set[int], drop: set[int]) -> set[int]:
+    """The blocks of ``certain`` that are lines with numbers or dates standing beside a
+    short line of the page's own or another such line: rows of a table or a running
+    order ("06:44 Introductions", "Mother 35 pounds") in a text, PDF or Markdown copy,
+    which recur in shape on many pages of a site and are still the page's own where
+    they stand among its text. A line alone between two paragraphs, or between the
+    title and a paragraph ("Last reviewed 3 May 2026 by Ada Quill"), is none."""
+    def short(i: int) -> bool:
+        if not 0 <= i < len(blocks):
+            return False
+        b = blocks[i]
+        return b.kind in ("text", "cell") and not b.title and not b.nav and \
+            b.links < LINK_DOMINATED and len(b.text.split()) <= SHAPE_MAX_WORDS and \
+            (b.hash in certain or b.hash not in drop)
+
+    return {b.hash for i, b in enumerate(blocks) if b.hash in certain and
+            signed_hash(b.text) is None and shape_hash(b.text) is not None and
+            (short(i - 1) or short(i + 1))}
+
+
 def _dateish(word: str) -> bool:
     """A word of a date or a time ("25", "february", "2026", "9:30am")."""
-    return word in MONTHS or any(c.isdigit() for c in word)
+    return word in DATE_WORDS or any(c.isdigit() for c in word)
 
 
 def _quoting(blocks: Sequence[Block], titles: Iterable[str]) -> set[int]:
@@ -572,10 +598,13 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
         return text, {}
     blocks = tuple(blocks)
     drop = _dropped(blocks, set(template[0]), set(template[1]))
-    # teasers quoting other pages and stock comments go wherever they stand
+    # teasers quoting other pages, stock comments and lines in a wording of their own go
+    # wherever they stand; such a line among rows (a table's, a running order's) is one
+    # of them, and only goes where the template does (see _rows)
     certain = _quoting(blocks, template[2]) | set(template[3]) if len(template) > 2 else set()
+    rows = _rows(blocks, certain, drop)
     drop |= certain
-    drop -= _sandwiched(blocks, drop) - certain
+    drop -= _sandwiched(blocks, drop) - (certain - rows)
     if not drop:
         return text, {}
     drop |= _crumb_trails(blocks) | _orphan_headings(blocks)
