@@ -70,7 +70,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import block_hash, words
 
-TEMPLATES_VERSION = 19  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 20  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -86,6 +86,7 @@ SHAPE_MIN_WORDS = 3  # a line with numbers this short (3-30 words) may be a per-
 SHAPE_MAX_WORDS = 30  # template line ("Updated 34 days ago"); a title "Notice 2" is not
 SHAPE_CELL_WORDS = 8  # a table cell this long may be such a line (a layout table's footer)
 MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
+TAGLINE_MAX_WORDS = 12  # template lines this short under the page's title are no text
 SANDWICH_MAX = 6  # template blocks in a row kept between two blocks of the page's own
 TITLE_MIN_WORDS = 3  # a title this long that another page's list quotes makes a teaser
 DATE_MAX_WORDS = 4  # "25 February 2026" after a quoted title: a list of events, of news
@@ -254,7 +255,7 @@ class Page:
 
 
 Learnt = dict[str, tuple[np.ndarray, np.ndarray, frozenset[int], frozenset[str],
-                         frozenset[int]]]
+                         frozenset[int], frozenset[int]]]
 
 
 def learn(pages: Iterable[Page]) -> Learnt:
@@ -262,7 +263,8 @@ def learn(pages: Iterable[Page]) -> Learnt:
     the aside rule only, as sorted uint64 hashes; shapes of numbered lines on most
     pages; its pages' titles of ``TITLE_MIN_WORDS`` words or more, which lists on other
     pages quote; comments signed by different people that recur, as the aside rule
-    counts, on its pages)."""
+    counts, on its pages; shapes of numbered lines on a fifth of the pages, the
+    wordings a site rotates)."""
     by_site: dict[str, dict[bytes, Page]] = {}
     for page in pages:
         by_site.setdefault(page.site, {}).setdefault(page.signature(), page)
@@ -294,6 +296,11 @@ def learn(pages: Iterable[Page]) -> Learnt:
         # ago", "1,849 views"): their shape on most pages, in more than one wording
         shapes = _varied((page.shaped for page in distinct),
                          max(MIN_PAGES, math.ceil(SHARE_ANY * n)))
+        # such lines in several wordings that a site rotates ("Viewed 2,006 times",
+        # "Updated 4 hours ago"): each shape on a fifth of the pages (and five), taken
+        # as template where the template stands, not among the page's own text
+        some = _varied((page.shaped for page in distinct),
+                       max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n))) - shapes
         # titles of three words or more, not one the site gives most of its pages
         named: dict[str, int] = {}
         for p in distinct:
@@ -304,8 +311,8 @@ def learn(pages: Iterable[Page]) -> Learnt:
         # the same comment under different names on many pages: a forum's stock replies
         stems = _varied((page.signed for page in distinct),
                         max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n)))
-        if len(strong) or len(weak) or shapes or titles or stems:
-            learnt[site] = (strong, weak, shapes, titles, stems)
+        if len(strong) or len(weak) or shapes or titles or stems or some:
+            learnt[site] = (strong, weak, shapes, titles, stems, some)
     return learnt
 
 
@@ -370,6 +377,9 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     # Quill") goes wherever it stands, even between two paragraphs of the page's own: it
     # is no stock sentence of the site's notices, which are worded alike on every page
     shaped = {h for shape, h in page.shaped if shape in template[2]} - set(found[0])
+    rotated = {h for shape, h in page.shaped if shape in template[5]} - shaped
+    if rotated:
+        found[0] = tuple(sorted(set(found[0]) | rotated))
     titles = tuple(sorted(template[3] - {page.title}))
     signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]} | shaped))
     if not (found[0] or found[1] or titles or signed):
@@ -445,8 +455,13 @@ def _sandwiched(blocks: Sequence[Block], drop: set[int]) -> set[int]:
         while j < len(blocks) and blocks[j].hash in drop:
             j += 1
         run = blocks[i:j]
+        # short template lines just under the page's title are its dateline or the
+        # site's tagline ("From the Quernstone project wiki", "Updated 4 hours ago"),
+        # not a stock sentence of the text
+        tagline = i > 0 and blocks[i - 1].title and \
+            all(len(b.text.split()) <= TAGLINE_MAX_WORDS for b in run)
         if j - i <= SANDWICH_MAX and i > 0 and j < len(blocks) and own(i - 1) and own(j) \
-                and all(b.links < LINK_DOMINATED and not b.nav for b in run):
+                and not tagline and all(b.links < LINK_DOMINATED and not b.nav for b in run):
             kept.update(b.hash for b in run)
         i = j
     return kept
