@@ -233,6 +233,8 @@ CAUSES = {
               "bodies' (order, splits, joined words: cross-format token differences)",
     "edge": "texts agree with their bodies (5-gram Jaccard >= 0.97 each) yet the pair "
             "falls below the threshold: the small differences left tip a pair at the edge",
+    "label": "the bodies themselves are below the threshold by gate's word 5-grams (the "
+             "corpus measured its Jaccard otherwise)",
     "no text": "a document without text.txt (held before extraction, or no text)",
 }
 
@@ -253,8 +255,11 @@ def causes(missed: list[dict], keeper: dict[str, str], texts: dict[str, str],
         a, b = texts.get(p["a"], ""), texts.get(p["b"], "")
         got = jaccard(a, b) if a and b else 0.0
         sides = [_side(a, bodies.get(p["a"])), _side(b, bodies.get(p["b"]))]
+        x, y = bodies.get(p["a"]), bodies.get(p["b"])
         if not a or not b:
             why = "no text"
+        elif x is not None and y is not None and jaccard(x, y) < THRESHOLD:
+            why = "label"
         elif got >= THRESHOLD:
             why = "keepers"
         elif max(s["extra"] for s in sides) > 0.01:

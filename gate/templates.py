@@ -356,9 +356,11 @@ def stored_pages(state: Any, batch: set[str]) -> list[Page]:
 
 
 # (everywhere, aside-only[, the titles of the site's other pages, blocks that go wherever
-# they stand: signed stock comments, lines in a wording of their own]), or ()
+# they stand: signed stock comments, lines in a wording of their own[, lines in a wording
+# the site rotates, which go where they stand under the page's title]]), or ()
 Removal = tuple[tuple[int, ...], ...] | \
-    tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...], tuple[int, ...]]
+    tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...], tuple[int, ...]] | \
+    tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...], tuple[int, ...], tuple[int, ...]]
 
 
 def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
@@ -377,13 +379,14 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     # Quill") goes wherever it stands, even between two paragraphs of the page's own: it
     # is no stock sentence of the site's notices, which are worded alike on every page
     shaped = {h for shape, h in page.shaped if shape in template[2]} - set(found[0])
-    rotated = {h for shape, h in page.shaped if shape in template[5]} - shaped
-    if rotated:
-        found[0] = tuple(sorted(set(found[0]) | rotated))
+    rotated = tuple(sorted({h for shape, h in page.shaped if shape in template[5]} -
+                           shaped - set(found[0])))
     titles = tuple(sorted(template[3] - {page.title}))
     signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]} | shaped))
-    if not (found[0] or found[1] or titles or signed):
+    if not (found[0] or found[1] or titles or signed or rotated):
         return ()
+    if rotated:
+        return (found[0], found[1], titles, signed, rotated)
     return (found[0], found[1], titles, signed) if titles or signed else (found[0], found[1])
 
 
@@ -394,6 +397,8 @@ def removal_key(template: Removal) -> str:
     if len(template) > 2:
         blob += b"|" + "\n".join(template[2]).encode("utf-8") + b"|" + \
             b"".join(int(h).to_bytes(8, "little") for h in template[3])
+    if len(template) > 4:
+        blob += b"|" + b"".join(int(h).to_bytes(8, "little") for h in template[4])
     return hashlib.sha256(blob).hexdigest()[:16]
 
 
@@ -459,12 +464,31 @@ def _sandwiched(blocks: Sequence[Block], drop: set[int]) -> set[int]:
         # site's tagline ("From the Quernstone project wiki", "Updated 4 hours ago"),
         # not a stock sentence of the text
         tagline = i > 0 and blocks[i - 1].title and \
-            all(len(b.text.split()) <= TAGLINE_MAX_WORDS for b in run)
+            all(b.kind == "text" and len(b.text.split()) <= TAGLINE_MAX_WORDS for b in run)
         if j - i <= SANDWICH_MAX and i > 0 and j < len(blocks) and own(i - 1) and own(j) \
                 and not tagline and all(b.links < LINK_DOMINATED and not b.nav for b in run):
             kept.update(b.hash for b in run)
         i = j
     return kept
+
+
+def _datelines(blocks: Sequence[Block], lines: set[int], drop: set[int]) -> set[int]:
+    """The blocks of ``lines`` (numbered lines in a wording the site rotates: "Viewed
+    2,006 times", "Posted Monday 3 June | 1,204 views") that stand under the page's
+    title, alone or among other short template lines there: a dateline. Elsewhere such
+    a line may be a stock sentence of the page's own ("Normal opening hours resume on
+    Saturday 20 July 2024") and stays."""
+    found: set[int] = set()
+    for i, block in enumerate(blocks):
+        if not block.title:
+            continue
+        for b in blocks[i + 1:i + 1 + SANDWICH_MAX]:
+            if b.kind != "text" or len(b.text.split()) > TAGLINE_MAX_WORDS or \
+                    (b.hash not in lines and b.hash not in drop):
+                break
+            if b.hash in lines:
+                found.add(b.hash)
+    return found
 
 
 def _rows(blocks: Sequence[Block], certain: set[int], drop: set[int]) -> set[int]:
@@ -617,6 +641,8 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
     # wherever they stand; such a line among rows (a table's, a running order's) is one
     # of them, and only goes where the template does (see _rows)
     certain = _quoting(blocks, template[2]) | set(template[3]) if len(template) > 2 else set()
+    if len(template) > 4:
+        certain |= _datelines(blocks, set(template[4]), drop | certain)
     rows = _rows(blocks, certain, drop)
     drop |= certain
     drop -= _sandwiched(blocks, drop) - (certain - rows)
