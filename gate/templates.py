@@ -221,7 +221,31 @@ def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
         summary["signed"] = [list(pair) for pair in signed]
     if len(titles) == 1:
         summary["title"] = titles.pop()
+    dateline = _under_title(blocks)
+    if dateline:
+        summary["dateline"] = dateline
     return summary
+
+
+def _dateline(block: Block) -> bool:
+    """A short unlinked line with a number or a date ("Updated 4 hours ago", "Friday 6
+    March. Viewed 2,006 times.")."""
+    return block.kind == "text" and not block.nav and block.links < LINK_DOMINATED and \
+        len(block.text.split()) <= TAGLINE_MAX_WORDS and shape_hash(block.text) is not None
+
+
+def _under_title(blocks: Sequence[Block]) -> list[int]:
+    """The hashes of the short lines with numbers that stand right under the page's
+    (one) title, before anything else: its dateline, in whatever wording."""
+    at = [i for i, b in enumerate(blocks) if b.title]
+    if len(at) != 1:
+        return []
+    found: list[int] = []
+    for b in blocks[at[0] + 1:at[0] + 1 + SANDWICH_MAX]:
+        if not _dateline(b):
+            break
+        found.append(b.hash)
+    return sorted(set(found))
 
 
 @dataclass(frozen=True)
@@ -234,6 +258,7 @@ class Page:
     shaped: tuple[tuple[int, int], ...] = ()  # (shape hash, block hash) of numbered lines
     title: str = ""  # the words of its title (HTML: its one <h1>), normalised
     signed: tuple[tuple[int, int], ...] = ()  # (stem hash, block hash) of signed comments
+    dateline: tuple[int, ...] = ()  # short lines with numbers right under its title
     nav: np.ndarray = field(  # blocks of its teaser lists
         default_factory=lambda: np.zeros(0, dtype=np.uint64))
 
@@ -244,6 +269,7 @@ class Page:
                    tuple((int(s), int(h)) for s, h in summary.get("shaped", ())),
                    str(summary.get("title") or ""),
                    tuple((int(s), int(h)) for s, h in summary.get("signed", ())),
+                   tuple(int(h) for h in summary.get("dateline", ())),
                    np.array(summary.get("nav", ()), dtype=np.uint64))
 
     @property
@@ -255,7 +281,7 @@ class Page:
 
 
 Learnt = dict[str, tuple[np.ndarray, np.ndarray, frozenset[int], frozenset[str],
-                         frozenset[int], frozenset[int]]]
+                         frozenset[int], frozenset[int], bool]]
 
 
 def learn(pages: Iterable[Page]) -> Learnt:
@@ -264,7 +290,8 @@ def learn(pages: Iterable[Page]) -> Learnt:
     pages; its pages' titles of ``TITLE_MIN_WORDS`` words or more, which lists on other
     pages quote; comments signed by different people that recur, as the aside rule
     counts, on its pages; shapes of numbered lines on a fifth of the pages, the
-    wordings a site rotates)."""
+    wordings a site rotates; whether most pages have a short numbered line under their
+    title, a dateline)."""
     by_site: dict[str, dict[bytes, Page]] = {}
     for page in pages:
         by_site.setdefault(page.site, {}).setdefault(page.signature(), page)
@@ -301,6 +328,10 @@ def learn(pages: Iterable[Page]) -> Learnt:
         # as template where the template stands, not among the page's own text
         some = _varied((page.shaped for page in distinct),
                        max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n))) - shapes
+        # a short line with numbers under the title on most pages, in whatever wording
+        # (a site may rotate four): the site's dateline
+        dated = sum(1 for p in distinct if p.dateline) >= max(MIN_PAGES,
+                                                               math.ceil(SHARE_ANY * n))
         # titles of three words or more, not one the site gives most of its pages
         named: dict[str, int] = {}
         for p in distinct:
@@ -311,8 +342,8 @@ def learn(pages: Iterable[Page]) -> Learnt:
         # the same comment under different names on many pages: a forum's stock replies
         stems = _varied((page.signed for page in distinct),
                         max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n)))
-        if len(strong) or len(weak) or shapes or titles or stems or some:
-            learnt[site] = (strong, weak, shapes, titles, stems, some)
+        if len(strong) or len(weak) or shapes or titles or stems or some or dated:
+            learnt[site] = (strong, weak, shapes, titles, stems, some, dated)
     return learnt
 
 
@@ -379,8 +410,10 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     # Quill") goes wherever it stands, even between two paragraphs of the page's own: it
     # is no stock sentence of the site's notices, which are worded alike on every page
     shaped = {h for shape, h in page.shaped if shape in template[2]} - set(found[0])
-    rotated = tuple(sorted({h for shape, h in page.shaped if shape in template[5]} -
-                           shaped - set(found[0])))
+    rotated = {h for shape, h in page.shaped if shape in template[5]}
+    if template[6]:
+        rotated |= set(page.dateline)
+    rotated = tuple(sorted(rotated - shaped - set(found[0])))
     titles = tuple(sorted(template[3] - {page.title}))
     signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]} | shaped))
     if not (found[0] or found[1] or titles or signed or rotated):
@@ -492,19 +525,20 @@ def _datelines(blocks: Sequence[Block], lines: set[int], drop: set[int]) -> set[
 
 
 def _rows(blocks: Sequence[Block], certain: set[int], drop: set[int]) -> set[int]:
-    """The blocks of ``certain`` that are lines with numbers or dates standing beside a
-    short line of the page's own or another such line: rows of a table or a running
-    order ("06:44 Introductions", "Mother 35 pounds") in a text, PDF or Markdown copy,
-    which recur in shape on many pages of a site and are still the page's own where
-    they stand among its text. A line alone between two paragraphs, or between the
-    title and a paragraph ("Last reviewed 3 May 2026 by Ada Quill"), is none."""
+    """The blocks of ``certain`` that are lines with numbers or dates standing beside
+    another short line with a number (``TAGLINE_MAX_WORDS`` words at most), of the
+    page's own or such a line too: rows of a table or a running order ("06:44
+    Introductions", "16:38 A walk at night") in a text, PDF or Markdown copy, which recur
+    in shape on many pages of a site and are still the page's own where they stand
+    among its text. A line alone between two paragraphs, or between the title and a
+    paragraph ("Last reviewed 3 May 2026 by Ada Quill"), is none."""
     def short(i: int) -> bool:
         if not 0 <= i < len(blocks):
             return False
         b = blocks[i]
         return b.kind in ("text", "cell") and not b.title and not b.nav and \
-            b.links < LINK_DOMINATED and len(b.text.split()) <= SHAPE_MAX_WORDS and \
-            (b.hash in certain or b.hash not in drop)
+            b.links < LINK_DOMINATED and (b.hash in certain or b.hash not in drop) and \
+            len(b.text.split()) <= TAGLINE_MAX_WORDS and shape_hash(b.text) is not None
 
     return {b.hash for i, b in enumerate(blocks) if b.hash in certain and
             signed_hash(b.text) is None and shape_hash(b.text) is not None and
