@@ -498,7 +498,10 @@ def _sandwiched(blocks: Sequence[Block], drop: set[int]) -> set[int]:
         # not a stock sentence of the text
         tagline = i > 0 and blocks[i - 1].title and \
             all(b.kind == "text" and len(b.text.split()) <= TAGLINE_MAX_WORDS for b in run)
-        if j - i <= SANDWICH_MAX and i > 0 and j < len(blocks) and own(i - 1) and own(j) \
+        # a longer run all in trafilatura's main text: stock items of a list the pages
+        # share ("Work safely and follow our written procedures" among a job's duties)
+        longest = SANDWICH_MAX * (2 if all(b.main for b in run) else 1)
+        if j - i <= longest and i > 0 and j < len(blocks) and own(i - 1) and own(j) \
                 and not tagline and all(b.links < LINK_DOMINATED and not b.nav for b in run):
             kept.update(b.hash for b in run)
         i = j
