@@ -548,6 +548,17 @@ def _rows(blocks: Sequence[Block], certain: set[int], drop: set[int]) -> set[int
             (short(i - 1) or short(i + 1))}
 
 
+def _once(lines: list[str], titles: set[int]) -> list[str]:
+    """``lines`` without a line that repeats the one before it when that is the page's
+    title."""
+    out: list[str] = []
+    for line in lines:
+        if out and line.strip() == out[-1].strip() and block_hash(line) in titles:
+            continue
+        out.append(line)
+    return out
+
+
 def _dateish(word: str) -> bool:
     """A word of a date or a time ("25", "february", "2026", "9:30am")."""
     return word in DATE_WORDS or any(c.isdigit() for c in word)
@@ -699,6 +710,10 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
     placed = not unplaced
     own = [b.text for b in blocks
            if b.hash not in drop and b.links < LINK_DOMINATED and not b.nav]
+    # the title said twice once the template between went (a breadcrumb trail's last
+    # crumb, then the heading): once
+    titles = {b.hash for b in blocks if b.title}
+    main_rest, own = _once(main_rest, titles), _once(own, titles)
     main_words, own_words = _word_count(main_rest), _word_count(own)
     if not placed:
         # how much of trafilatura's text is template: the template blocks found in it
