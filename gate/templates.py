@@ -227,11 +227,21 @@ def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
     return summary
 
 
+# words that make a numbered line a date or a time ("4 hours ago", "3 days ago")
+TIME_WORDS = frozenset("minute minutes min mins hour hours hr hrs day days week weeks "
+                       "month months year years ago today yesterday".split())
+_NUMERIC_DATE = re.compile(r"\b\d{1,4}[-/.]\d{1,2}[-/.]\d{1,4}\b")
+
+
 def _dateline(block: Block) -> bool:
-    """A short unlinked line with a number or a date ("Updated 4 hours ago", "Friday 6
-    March. Viewed 2,006 times.")."""
-    return block.kind == "text" and not block.nav and block.links < LINK_DOMINATED and \
-        len(block.text.split()) <= TAGLINE_MAX_WORDS and shape_hash(block.text) is not None
+    """A short unlinked line with a number that tells a date or a time ("Updated 4 hours
+    ago", "Friday 6 March. Viewed 2,006 times.", "Posted 2026-03-06"); a line whose
+    number is another of the page's facts ("Salary 24,000 pounds a year") is none."""
+    if block.kind != "text" or block.nav or block.links >= LINK_DOMINATED or \
+            len(block.text.split()) > TAGLINE_MAX_WORDS or shape_hash(block.text) is None:
+        return False
+    return bool(_NUMERIC_DATE.search(block.text)) or \
+        any(t in DATE_WORDS or t in TIME_WORDS for t in words(block.text))
 
 
 def _under_title(blocks: Sequence[Block]) -> list[int]:
@@ -511,7 +521,8 @@ def _sandwiched(blocks: Sequence[Block], drop: set[int]) -> set[int]:
 def _datelines(blocks: Sequence[Block], lines: set[int], drop: set[int]) -> set[int]:
     """The blocks of ``lines`` (numbered lines in a wording the site rotates: "Viewed
     2,006 times", "Posted Monday 3 June | 1,204 views") that stand under the page's
-    title, alone or among other short template lines there: a dateline. Elsewhere such
+    title, alone or among other short template lines there, and tell a date or a time
+    (:func:`_dateline`): a dateline. Elsewhere such
     a line may be a stock sentence of the page's own ("Normal opening hours resume on
     Saturday 20 July 2024") and stays."""
     found: set[int] = set()
@@ -522,7 +533,7 @@ def _datelines(blocks: Sequence[Block], lines: set[int], drop: set[int]) -> set[
             if b.kind != "text" or len(b.text.split()) > TAGLINE_MAX_WORDS or \
                     (b.hash not in lines and b.hash not in drop):
                 break
-            if b.hash in lines:
+            if b.hash in lines and _dateline(b):
                 found.add(b.hash)
     return found
 

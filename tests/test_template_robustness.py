@@ -181,6 +181,15 @@ def test_a_dateline_in_wordings_the_site_rotates_goes_under_the_title_only():
     mine = templates.Page.of("news.example.org html", templates.block_summary(moved))
     text = "\n".join(b.text for b in moved)
     assert templates.compose(text, moved, templates.removal(mine, learnt))[0] == text
+    # a number that is another of the page's facts makes no dateline
+    from gate.extract.model import Block
+    from gate.tokens import block_hash
+
+    def line(t: str) -> Block:
+        return Block(t, block_hash(t))
+    assert not templates._dateline(line("Salary 24,000 pounds a year, part time"))
+    assert templates._dateline(line("Posted 2026-03-06 by the desk"))
+    assert templates._dateline(line("Last updated 4 hours ago"))
 
 
 def test_lines_with_numbers_among_rows_stay_where_a_lone_one_goes():
