@@ -227,9 +227,11 @@ def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
     return summary
 
 
-# words that make a numbered line a date or a time ("4 hours ago", "3 days ago")
-TIME_WORDS = frozenset("minute minutes min mins hour hours hr hrs day days week weeks "
-                       "month months year years ago today yesterday".split())
+# words that make a numbered line a date or a time: a unit after a number ("4 hours",
+# "3 days ago"; "pounds a year" is no time), or a word that is one on its own
+TIME_UNITS = frozenset("minute minutes min mins hour hours hr hrs day days week weeks "
+                       "month months year years".split())
+TIME_WORDS = frozenset("ago today yesterday".split())
 _NUMERIC_DATE = re.compile(r"\b\d{1,4}[-/.]\d{1,2}[-/.]\d{1,4}\b")
 
 
@@ -240,8 +242,11 @@ def _dateline(block: Block) -> bool:
     if block.kind != "text" or block.nav or block.links >= LINK_DOMINATED or \
             len(block.text.split()) > TAGLINE_MAX_WORDS or shape_hash(block.text) is None:
         return False
+    tokens = words(block.text)
     return bool(_NUMERIC_DATE.search(block.text)) or \
-        any(t in DATE_WORDS or t in TIME_WORDS for t in words(block.text))
+        any(t in DATE_WORDS or t in TIME_WORDS or
+            (t in TIME_UNITS and k > 0 and any(c.isdigit() for c in tokens[k - 1]))
+            for k, t in enumerate(tokens))
 
 
 def _under_title(blocks: Sequence[Block]) -> list[int]:
