@@ -194,13 +194,15 @@ def score(report: dict, out: Path, pairs: list[dict], bodies: dict[str, str | No
                           "body_jaccard": round(jaccard(x, y), 4)})
     kept = template = total_body = total_text = 0
     no_body = 0
+    texts: dict[str, str] = {}
     for path, doc in docs.items():
-        if bodies.get(path) is None:
-            no_body += 1
-            continue
         location = doc.get("location")
         text_file = out / location / "text.txt" if location else None
         text = text_file.read_text(encoding="utf-8") if text_file and text_file.exists() else ""
+        texts[path] = text
+        if bodies.get(path) is None:
+            no_body += 1
+            continue
         body, got = Counter(words(bodies[path] or "")), Counter(words(text))
         common = sum((body & got).values())
         kept += common
@@ -217,11 +219,63 @@ def score(report: dict, out: Path, pairs: list[dict], bodies: dict[str, str | No
             "relations": relations, "formats": formats, "unlabelled": unlabelled,
             "false_unlabelled": false_unlabelled, "no_body": no_body,
             "held_other": dict(held_other), "missed": missed, "wrong": wrong,
-            "keeper": keeper}
+            "keeper": keeper, "causes": causes(missed, keeper, texts, bodies),
+            "texts": texts}
+
+
+# why a pair was missed, in the order they are tried (the first that applies names it)
+CAUSES = {
+    "keepers": "gate's texts are above the threshold, but the two were held under "
+               "different keepers (or one kept, the other held under a third page)",
+    "template": "template left in a text (over 1 % of its words not in its body)",
+    "dropped": "body text dropped (under 99 % of a body's words in its text)",
+    "tokens": "texts hold their bodies' words but their 5-grams differ from their "
+              "bodies' (order, splits, joined words: cross-format token differences)",
+    "edge": "texts agree with their bodies (5-gram Jaccard >= 0.97 each) yet the pair "
+            "falls below the threshold: the small differences left tip a pair at the edge",
+    "label": "the bodies themselves are below the threshold by gate's word 5-grams (the "
+             "corpus measured its Jaccard otherwise)",
+    "no text": "a document without text.txt (held before extraction, or no text)",
+}
+
+
+def _side(text: str, body: str | None) -> dict[str, float]:
+    got, want = Counter(words(text)), Counter(words(body or ""))
+    common = sum((got & want).values())
+    return {"extra": 1 - common / max(1, sum(got.values())),
+            "kept": common / max(1, sum(want.values())),
+            "grams": jaccard(text, body or "")}
+
+
+def causes(missed: list[dict], keeper: dict[str, str], texts: dict[str, str],
+           bodies: dict[str, str | None]) -> dict[str, list[dict]]:
+    """The missed pairs by cause (see ``CAUSES``), each with gate's text Jaccard."""
+    out: dict[str, list[dict]] = {}
+    for p in missed:
+        a, b = texts.get(p["a"], ""), texts.get(p["b"], "")
+        got = jaccard(a, b) if a and b else 0.0
+        sides = [_side(a, bodies.get(p["a"])), _side(b, bodies.get(p["b"]))]
+        x, y = bodies.get(p["a"]), bodies.get(p["b"])
+        if not a or not b:
+            why = "no text"
+        elif x is not None and y is not None and jaccard(x, y) < THRESHOLD:
+            why = "label"
+        elif got >= THRESHOLD:
+            why = "keepers"
+        elif max(s["extra"] for s in sides) > 0.01:
+            why = "template"
+        elif min(s["kept"] for s in sides) < 0.99:
+            why = "dropped"
+        elif min(s["grams"] for s in sides) < 0.97:
+            why = "tokens"
+        else:
+            why = "edge"
+        out.setdefault(why, []).append({**p, "text_jaccard": round(got, 4), "sides": sides})
+    return out
 
 
 def show(name: str, s: dict, seconds: float, timings: dict, documents: int,
-         verbose: bool = False) -> None:
+         verbose: bool = False, why_detail: bool = False) -> None:
     print(f"{name}: {documents} documents, {seconds:.1f} s")
     print(f"  near-duplicate recall   {s['recall']:.3f}  ({s['pairs_near']} pairs with body "
           f"Jaccard >= {THRESHOLD})")
@@ -247,6 +301,18 @@ def show(name: str, s: dict, seconds: float, timings: dict, documents: int,
     if timings:
         parts = ", ".join(f"{k} {v:.2f} s" for k, v in sorted(timings.items()))
         print(f"  worker seconds: {parts}")
+    if s["missed"]:
+        print("  missed pairs by cause (the first that applies):")
+        for why, text in CAUSES.items():
+            if s["causes"].get(why):
+                print(f"    {why:<9} {len(s['causes'][why]):>4}  {text}")
+    if why_detail:
+        for why, found in s["causes"].items():
+            for p in found:
+                sides = "; ".join(f"extra {x['extra']:.3f} kept {x['kept']:.3f} 5-grams "
+                                  f"{x['grams']:.3f}" for x in p["sides"])
+                print(f"  why {why}: {p['a']} ~ {p['b']} body {p['body_jaccard']} text "
+                      f"{p['text_jaccard']} ({sides})")
     if verbose:
         for p in s["missed"]:
             print(f"  missed {p['relation']} ({p['body_jaccard']}): {p['a']} ~ {p['b']}; "
@@ -270,14 +336,18 @@ def gate_manifest(corpus: Path, target: Path) -> Path:
 
 
 def bench(name: str, corpus: Path, work: Path, workers: int, baseline: bool,
-          verbose: bool = False) -> None:
+          verbose: bool = False, why_detail: bool = False) -> None:
     pairs, bodies = load_truth(corpus)
     for learn in ((True, False) if baseline else (True,)):
         label = name if learn else f"{name}, templates not learnt (trafilatura only)"
         out = work / f"{name}-{'learn' if learn else 'plain'}"
         report, seconds, timings = run_gate(corpus, out, workers, learn)
-        show(label, score(report, out, pairs, bodies), seconds, timings,
-             len(report["documents"]), verbose)
+        scored = score(report, out, pairs, bodies)
+        show(label, scored, seconds, timings, len(report["documents"]), verbose, why_detail)
+        if why_detail:  # each document's text against its body, for comparing two runs
+            sides = {path: _side(text, bodies[path]) for path, text in scored["texts"].items()
+                     if bodies.get(path) is not None}
+            (work / f"{name}-sides.json").write_text(json.dumps(sides, indent=0))
 
 
 def generated(source: Path, work: Path) -> Path:
@@ -391,6 +461,9 @@ def main() -> None:
     parser.add_argument("--baseline", action="store_true")
     parser.add_argument("--verbose", action="store_true",
                         help="also name the pairs missed and the false duplicates")
+    parser.add_argument("--why", action="store_true",
+                        help="also name each missed pair with its cause and its texts' "
+                             "agreement with their bodies")
     parser.add_argument("--workers", type=int, default=2)
     parser.add_argument("--work", type=Path, default=ROOT / "bench-out" / "templates")
     parser.add_argument("--cost", type=int, default=0, metavar="N")
@@ -412,14 +485,15 @@ def main() -> None:
         if not (corpus / "pairs.jsonl").exists():
             from benchmarks.template_corpus import make
             make(corpus)
-        bench("tuning", corpus, args.work, args.workers, args.baseline, args.verbose)
+        bench("tuning", corpus, args.work, args.workers, args.baseline, args.verbose,
+              args.why)
     if args.blind:
         args.corpus.insert(0, ROOT / "benchmarks" / "data" / "template_blind")
     for source in args.corpus:
         name = source.resolve().name
         name = "blind" if name == "template_blind" else name
         bench(name, generated(source, args.work), args.work, args.workers, args.baseline,
-              args.verbose)
+              args.verbose, args.why)
 
 
 if __name__ == "__main__":

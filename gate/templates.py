@@ -70,7 +70,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import block_hash, words
 
-TEMPLATES_VERSION = 19  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 20  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -86,6 +86,7 @@ SHAPE_MIN_WORDS = 3  # a line with numbers this short (3-30 words) may be a per-
 SHAPE_MAX_WORDS = 30  # template line ("Updated 34 days ago"); a title "Notice 2" is not
 SHAPE_CELL_WORDS = 8  # a table cell this long may be such a line (a layout table's footer)
 MERGED_MIN_WORDS = 3  # blocks this long found whole in one line make it a merged line
+TAGLINE_MAX_WORDS = 12  # template lines this short under the page's title are no text
 SANDWICH_MAX = 6  # template blocks in a row kept between two blocks of the page's own
 TITLE_MIN_WORDS = 3  # a title this long that another page's list quotes makes a teaser
 DATE_MAX_WORDS = 4  # "25 February 2026" after a quoted title: a list of events, of news
@@ -105,6 +106,10 @@ def site_of(source_url: str | None) -> str | None:
 MONTHS = frozenset(
     "january february march april may june july august september october november "
     "december jan feb mar apr jun jul aug sep sept oct nov dec".split())
+# a date's weekday varies with it ("Published Thursday 10 September"); "sun" and "sat"
+# are words of their own, so only the full names
+WEEKDAYS = frozenset("monday tuesday wednesday thursday friday saturday sunday".split())
+DATE_WORDS = MONTHS | WEEKDAYS
 
 
 _RAW_WORD = re.compile(r"[^\W_]+")
@@ -123,18 +128,19 @@ def _named(text: str, count: int) -> list[bool]:
 
 def shape_hash(text: str) -> int | None:
     """The hash of a short line's words with every word holding a digit made one and the
-    same, and so is every month's name ("Updated 153 days ago" and "Updated 4 days ago"
-    alike, "Last reviewed 3 May 2026" and "Last reviewed 29 June 2026"), and every
-    capitalised word after the first, a name ("Signed in as Ada Quill", "Signed in as Bo
-    Marrin"); None for a block that is not such a line (3 to 30 words, a digit or a name
-    among them, and not only numbers, months and names)."""
+    same, and so is every month's and weekday's name ("Updated 153 days ago" and "Updated
+    4 days ago" alike, "Last reviewed 3 May 2026" and "Last reviewed 29 June 2026"), and,
+    on such a line, every capitalised word after the first, a name ("Signed in as Ada
+    Quill - page 3 of 40", "Signed in as Bo Marrin - page 7 of 12"); None for a block
+    that is not such a line (3 to 30 words, a digit among them, and not only numbers,
+    dates and names). A line with names and no number ("Narrator Delphine Nettleford",
+    a cast table's row in a text export) is no such line: names alone are content."""
     tokens = words(text)
-    if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS:
+    if not SHAPE_MIN_WORDS <= len(tokens) <= SHAPE_MAX_WORDS or \
+            not any(c.isdigit() for c in text):
         return None
     named = _named(text, len(tokens))
-    if not any(named) and not any(c.isdigit() for c in text):
-        return None
-    shape = " ".join("#" if name or t in MONTHS or any(c.isdigit() for c in t) else t
+    shape = " ".join("#" if name or t in DATE_WORDS or any(c.isdigit() for c in t) else t
                      for t, name in zip(tokens, named))
     if shape.count("#") == len(tokens):
         return None
@@ -157,7 +163,8 @@ def titled_hash(text: str, title: str) -> int | None:
     if at < 0:
         return None
     rest = (flat[:at] + " \x00 " + flat[at + len(title) + 2:]).split()
-    shape = " ".join("#" if t in MONTHS or any(c.isdigit() for c in t) else t for t in rest)
+    shape = " ".join("#" if t in DATE_WORDS or any(c.isdigit() for c in t) else t
+                     for t in rest)
     digest = hashlib.blake2b(shape.encode("utf-8"), digest_size=8, person=b"titled").digest()
     return int.from_bytes(digest, "little") >> 1
 
@@ -214,7 +221,46 @@ def block_summary(blocks: Sequence[Block]) -> dict[str, list]:
         summary["signed"] = [list(pair) for pair in signed]
     if len(titles) == 1:
         summary["title"] = titles.pop()
+    dateline = _under_title(blocks)
+    if dateline:
+        summary["dateline"] = dateline
     return summary
+
+
+# words that make a numbered line a date or a time: a unit after a number ("4 hours",
+# "3 days ago"; "pounds a year" is no time), or a word that is one on its own
+TIME_UNITS = frozenset("minute minutes min mins hour hours hr hrs day days week weeks "
+                       "month months year years".split())
+TIME_WORDS = frozenset("ago today yesterday".split())
+_NUMERIC_DATE = re.compile(r"\b\d{1,4}[-/.]\d{1,2}[-/.]\d{1,4}\b")
+
+
+def _dateline(block: Block) -> bool:
+    """A short unlinked line with a number that tells a date or a time ("Updated 4 hours
+    ago", "Friday 6 March. Viewed 2,006 times.", "Posted 2026-03-06"); a line whose
+    number is another of the page's facts ("Salary 24,000 pounds a year") is none."""
+    if block.kind != "text" or block.nav or block.links >= LINK_DOMINATED or \
+            len(block.text.split()) > TAGLINE_MAX_WORDS or shape_hash(block.text) is None:
+        return False
+    tokens = words(block.text)
+    return bool(_NUMERIC_DATE.search(block.text)) or \
+        any(t in DATE_WORDS or t in TIME_WORDS or
+            (t in TIME_UNITS and k > 0 and any(c.isdigit() for c in tokens[k - 1]))
+            for k, t in enumerate(tokens))
+
+
+def _under_title(blocks: Sequence[Block]) -> list[int]:
+    """The hashes of the short lines with numbers that stand right under the page's
+    (one) title, before anything else: its dateline, in whatever wording."""
+    at = [i for i, b in enumerate(blocks) if b.title]
+    if len(at) != 1:
+        return []
+    found: list[int] = []
+    for b in blocks[at[0] + 1:at[0] + 1 + SANDWICH_MAX]:
+        if not _dateline(b):
+            break
+        found.append(b.hash)
+    return sorted(set(found))
 
 
 @dataclass(frozen=True)
@@ -227,6 +273,7 @@ class Page:
     shaped: tuple[tuple[int, int], ...] = ()  # (shape hash, block hash) of numbered lines
     title: str = ""  # the words of its title (HTML: its one <h1>), normalised
     signed: tuple[tuple[int, int], ...] = ()  # (stem hash, block hash) of signed comments
+    dateline: tuple[int, ...] = ()  # short lines with numbers right under its title
     nav: np.ndarray = field(  # blocks of its teaser lists
         default_factory=lambda: np.zeros(0, dtype=np.uint64))
 
@@ -237,6 +284,7 @@ class Page:
                    tuple((int(s), int(h)) for s, h in summary.get("shaped", ())),
                    str(summary.get("title") or ""),
                    tuple((int(s), int(h)) for s, h in summary.get("signed", ())),
+                   tuple(int(h) for h in summary.get("dateline", ())),
                    np.array(summary.get("nav", ()), dtype=np.uint64))
 
     @property
@@ -248,7 +296,7 @@ class Page:
 
 
 Learnt = dict[str, tuple[np.ndarray, np.ndarray, frozenset[int], frozenset[str],
-                         frozenset[int]]]
+                         frozenset[int], frozenset[int], bool]]
 
 
 def learn(pages: Iterable[Page]) -> Learnt:
@@ -256,7 +304,9 @@ def learn(pages: Iterable[Page]) -> Learnt:
     the aside rule only, as sorted uint64 hashes; shapes of numbered lines on most
     pages; its pages' titles of ``TITLE_MIN_WORDS`` words or more, which lists on other
     pages quote; comments signed by different people that recur, as the aside rule
-    counts, on its pages)."""
+    counts, on its pages; shapes of numbered lines on a fifth of the pages, the
+    wordings a site rotates; whether most pages have a short numbered line under their
+    title, a dateline)."""
     by_site: dict[str, dict[bytes, Page]] = {}
     for page in pages:
         by_site.setdefault(page.site, {}).setdefault(page.signature(), page)
@@ -288,6 +338,15 @@ def learn(pages: Iterable[Page]) -> Learnt:
         # ago", "1,849 views"): their shape on most pages, in more than one wording
         shapes = _varied((page.shaped for page in distinct),
                          max(MIN_PAGES, math.ceil(SHARE_ANY * n)))
+        # such lines in several wordings that a site rotates ("Viewed 2,006 times",
+        # "Updated 4 hours ago"): each shape on a fifth of the pages (and five), taken
+        # as template where the template stands, not among the page's own text
+        some = _varied((page.shaped for page in distinct),
+                       max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n))) - shapes
+        # a short line with numbers under the title on most pages, in whatever wording
+        # (a site may rotate four): the site's dateline
+        dated = sum(1 for p in distinct if p.dateline) >= max(MIN_PAGES,
+                                                               math.ceil(SHARE_ANY * n))
         # titles of three words or more, not one the site gives most of its pages
         named: dict[str, int] = {}
         for p in distinct:
@@ -298,8 +357,8 @@ def learn(pages: Iterable[Page]) -> Learnt:
         # the same comment under different names on many pages: a forum's stock replies
         stems = _varied((page.signed for page in distinct),
                         max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n)))
-        if len(strong) or len(weak) or shapes or titles or stems:
-            learnt[site] = (strong, weak, shapes, titles, stems)
+        if len(strong) or len(weak) or shapes or titles or stems or some or dated:
+            learnt[site] = (strong, weak, shapes, titles, stems, some, dated)
     return learnt
 
 
@@ -343,9 +402,11 @@ def stored_pages(state: Any, batch: set[str]) -> list[Page]:
 
 
 # (everywhere, aside-only[, the titles of the site's other pages, blocks that go wherever
-# they stand: signed stock comments, lines in a wording of their own]), or ()
+# they stand: signed stock comments, lines in a wording of their own[, lines in a wording
+# the site rotates, which go where they stand under the page's title]]), or ()
 Removal = tuple[tuple[int, ...], ...] | \
-    tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...], tuple[int, ...]]
+    tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...], tuple[int, ...]] | \
+    tuple[tuple[int, ...], tuple[int, ...], tuple[str, ...], tuple[int, ...], tuple[int, ...]]
 
 
 def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
@@ -364,10 +425,16 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     # Quill") goes wherever it stands, even between two paragraphs of the page's own: it
     # is no stock sentence of the site's notices, which are worded alike on every page
     shaped = {h for shape, h in page.shaped if shape in template[2]} - set(found[0])
+    rotated = {h for shape, h in page.shaped if shape in template[5]}
+    if template[6]:
+        rotated |= set(page.dateline)
+    rotated = tuple(sorted(rotated - shaped - set(found[0])))
     titles = tuple(sorted(template[3] - {page.title}))
     signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]} | shaped))
-    if not (found[0] or found[1] or titles or signed):
+    if not (found[0] or found[1] or titles or signed or rotated):
         return ()
+    if rotated:
+        return (found[0], found[1], titles, signed, rotated)
     return (found[0], found[1], titles, signed) if titles or signed else (found[0], found[1])
 
 
@@ -378,6 +445,8 @@ def removal_key(template: Removal) -> str:
     if len(template) > 2:
         blob += b"|" + "\n".join(template[2]).encode("utf-8") + b"|" + \
             b"".join(int(h).to_bytes(8, "little") for h in template[3])
+    if len(template) > 4:
+        blob += b"|" + b"".join(int(h).to_bytes(8, "little") for h in template[4])
     return hashlib.sha256(blob).hexdigest()[:16]
 
 
@@ -439,16 +508,76 @@ def _sandwiched(blocks: Sequence[Block], drop: set[int]) -> set[int]:
         while j < len(blocks) and blocks[j].hash in drop:
             j += 1
         run = blocks[i:j]
-        if j - i <= SANDWICH_MAX and i > 0 and j < len(blocks) and own(i - 1) and own(j) \
-                and all(b.links < LINK_DOMINATED and not b.nav for b in run):
+        # short template lines just under the page's title are its dateline or the
+        # site's tagline ("From the Quernstone project wiki", "Updated 4 hours ago"),
+        # not a stock sentence of the text
+        tagline = i > 0 and blocks[i - 1].title and \
+            all(b.kind == "text" and len(b.text.split()) <= TAGLINE_MAX_WORDS for b in run)
+        # a longer run all in trafilatura's main text: stock items of a list the pages
+        # share ("Work safely and follow our written procedures" among a job's duties)
+        longest = SANDWICH_MAX * (2 if all(b.main for b in run) else 1)
+        if j - i <= longest and i > 0 and j < len(blocks) and own(i - 1) and own(j) \
+                and not tagline and all(b.links < LINK_DOMINATED and not b.nav for b in run):
             kept.update(b.hash for b in run)
         i = j
     return kept
 
 
+def _datelines(blocks: Sequence[Block], lines: set[int], drop: set[int]) -> set[int]:
+    """The blocks of ``lines`` (numbered lines in a wording the site rotates: "Viewed
+    2,006 times", "Posted Monday 3 June | 1,204 views") that stand under the page's
+    title, alone or among other short template lines there, and tell a date or a time
+    (:func:`_dateline`): a dateline. Elsewhere such
+    a line may be a stock sentence of the page's own ("Normal opening hours resume on
+    Saturday 20 July 2024") and stays."""
+    found: set[int] = set()
+    for i, block in enumerate(blocks):
+        if not block.title:
+            continue
+        for b in blocks[i + 1:i + 1 + SANDWICH_MAX]:
+            if b.kind != "text" or len(b.text.split()) > TAGLINE_MAX_WORDS or \
+                    (b.hash not in lines and b.hash not in drop):
+                break
+            if b.hash in lines and _dateline(b):
+                found.add(b.hash)
+    return found
+
+
+def _rows(blocks: Sequence[Block], certain: set[int], drop: set[int]) -> set[int]:
+    """The blocks of ``certain`` that are lines with numbers or dates standing beside
+    another short line with a number (``TAGLINE_MAX_WORDS`` words at most), of the
+    page's own or such a line too: rows of a table or a running order ("06:44
+    Introductions", "16:38 A walk at night") in a text, PDF or Markdown copy, which recur
+    in shape on many pages of a site and are still the page's own where they stand
+    among its text. A line alone between two paragraphs, or between the title and a
+    paragraph ("Last reviewed 3 May 2026 by Ada Quill"), is none."""
+    def short(i: int) -> bool:
+        if not 0 <= i < len(blocks):
+            return False
+        b = blocks[i]
+        return b.kind in ("text", "cell") and not b.title and not b.nav and \
+            b.links < LINK_DOMINATED and (b.hash in certain or b.hash not in drop) and \
+            len(b.text.split()) <= TAGLINE_MAX_WORDS and shape_hash(b.text) is not None
+
+    return {b.hash for i, b in enumerate(blocks) if b.hash in certain and
+            signed_hash(b.text) is None and shape_hash(b.text) is not None and
+            (short(i - 1) or short(i + 1))}
+
+
+def _once(lines: list[str], titles: set[int]) -> list[str]:
+    """``lines`` without a line that repeats the one before it when that is the page's
+    title."""
+    out: list[str] = []
+    for line in lines:
+        if out and line.strip() == out[-1].strip() and block_hash(line) in titles:
+            continue
+        out.append(line)
+    return out
+
+
 def _dateish(word: str) -> bool:
     """A word of a date or a time ("25", "february", "2026", "9:30am")."""
-    return word in MONTHS or any(c.isdigit() for c in word)
+    return word in DATE_WORDS or any(c.isdigit() for c in word)
 
 
 def _quoting(blocks: Sequence[Block], titles: Iterable[str]) -> set[int]:
@@ -572,10 +701,15 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
         return text, {}
     blocks = tuple(blocks)
     drop = _dropped(blocks, set(template[0]), set(template[1]))
-    # teasers quoting other pages and stock comments go wherever they stand
+    # teasers quoting other pages, stock comments and lines in a wording of their own go
+    # wherever they stand; such a line among rows (a table's, a running order's) is one
+    # of them, and only goes where the template does (see _rows)
     certain = _quoting(blocks, template[2]) | set(template[3]) if len(template) > 2 else set()
+    if len(template) > 4:
+        certain |= _datelines(blocks, set(template[4]), drop | certain)
+    rows = _rows(blocks, certain, drop)
     drop |= certain
-    drop -= _sandwiched(blocks, drop) - certain
+    drop -= _sandwiched(blocks, drop) - (certain - rows)
     if not drop:
         return text, {}
     drop |= _crumb_trails(blocks) | _orphan_headings(blocks)
@@ -592,6 +726,10 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
     placed = not unplaced
     own = [b.text for b in blocks
            if b.hash not in drop and b.links < LINK_DOMINATED and not b.nav]
+    # the title said twice once the template between went (a breadcrumb trail's last
+    # crumb, then the heading): once
+    titles = {b.hash for b in blocks if b.title}
+    main_rest, own = _once(main_rest, titles), _once(own, titles)
     main_words, own_words = _word_count(main_rest), _word_count(own)
     if not placed:
         # how much of trafilatura's text is template: the template blocks found in it

@@ -8,6 +8,8 @@ bytes may hang or exhaust memory, and only a process boundary can stop them.
 
 from __future__ import annotations
 
+import re
+
 from gate.extract.model import Block, Extracted, Extraction, failed
 from gate.extract.office import TYPES as OFFICE_TYPES
 from gate.extract.sniff import sniff
@@ -18,7 +20,7 @@ __all__ = ["EXTRACT_VERSION", "TYPES", "Extracted", "Extraction", "extract"]
 # Every type extraction produces, in the order the policy reference lists them.
 TYPES = ("html", "pdf", "text", *OFFICE_TYPES, "email", "mbox")
 # Part of the cache key: bump when an extractor's output changes for the same bytes.
-EXTRACT_VERSION = 8
+EXTRACT_VERSION = 9
 
 
 def extract(data: bytes, *, max_pages: int, max_nesting: int,
@@ -67,12 +69,19 @@ def extract(data: bytes, *, max_pages: int, max_nesting: int,
     return result
 
 
+# a list item's line: a bullet or a number, then its text ("- Keep daily records",
+# "• Keep daily records", "2. Keep daily records")
+_ITEM = re.compile(r"^\s*(?:[-*+\u2022\u2023\u25e6\u2013]|\d{1,2}[.)])\s+\S")
+
+
 def line_blocks(text: str) -> tuple[Block, ...]:
     """A text's lines as blocks (PDF, plain text, Markdown: a line is the unit a running
-    header, a footer or a repeated notice occupies)."""
+    header, a footer or a repeated notice occupies); a line that opens with a bullet or
+    a number is a list item, as an HTML page's ``<li>`` is."""
     blocks = []
     for line in text.split("\n"):
         digest = block_hash(line)
         if digest is not None:
-            blocks.append(Block(text=line.strip(), hash=digest))
+            blocks.append(Block(text=line.strip(), hash=digest,
+                                kind="item" if _ITEM.match(line) else "text"))
     return tuple(blocks)

@@ -248,15 +248,21 @@ def _title_header(lines: list[str], drop: set[int]) -> bool:
     """Whether the first page's first line is a printed page's header: parts split by a
     dash or a bar ("Invented Office - Notices - Road closures this week") whose last
     parts are the title the page then starts with, so the header is the site's name
-    before the title."""
+    before the title; a title the header cut short ends in an ellipsis, its last word
+    perhaps cut in two ("Invented Office  |  Restoring a narrowboat en...")."""
     filled = [i for i, line in enumerate(lines) if line.strip() and i not in drop]
     if len(filled) < 2 or filled[0] != next(i for i, line in enumerate(lines) if line.strip()):
         return False
     first = lines[filled[0]].strip()
     after = words(" ".join(lines[i] for i in filled[1:4]))
     for m in _HEADER_PARTS.finditer(first):
-        title = words(first[m.end():])
-        if len(title) >= 2 and words(first[:m.start()]) and after[:len(title)] == title:
+        part = first[m.end():].rstrip()
+        cut = part.endswith(("...", "\u2026"))  # a title cut short: "Restoring a narrowb..."
+        title = words(part.rstrip(".\u2026"))
+        if len(title) < 2 or not words(first[:m.start()]) or len(after) < len(title):
+            continue
+        if after[:len(title)] == title or (cut and after[:len(title) - 1] == title[:-1] and
+                                           after[len(title) - 1].startswith(title[-1])):
             return True
     return False
 
