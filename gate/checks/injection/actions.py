@@ -219,6 +219,11 @@ SIDE_EFFECT = (r"(?:send|mail|email|e_mail|post|upload|delete|remove|drop|transf
                r"download|fetch|browse|open_url|http)")
 _TOOL_NAME = r"[`'\"]?(?P<tool>[A-Za-z][A-Za-z0-9]*(?:[_.][A-Za-z0-9]+)+)"
 READER_TOOLS = "asks the reader to act with one of its tools"
+# "Please don't ask an AI chatbot to solve the grid": a word to people about asking a
+# model, not a reader told to keep something from the user.
+_NOT_TO_A_MODEL = (r"(?!\s+(?:an?\s+|the\s+|your\s+|any\s+)?(?:ai\s+)?(?:ai|chatbots?|"
+                   r"assistants?|bots?|models?|llms?)\b)")
+
 TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
     (_c(r"\b(?:call|invoke|use|trigger|run|execute|activate|fire)\s+(?:the\s+|your\s+)?"
                 + _TOOL_NAME + r"[`'\"]?(?:\(\))?\s+(?:tool|function|action|plugin|command|"
@@ -253,8 +258,9 @@ TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
         r"history|transcript|messages|the\s+user'?s?|their|credentials?|passwords?|api\s+keys?|"
         r"tokens?|all\s+files|the\s+files|mailbox|inbox|contacts|account)\b[^\n]{0,120}?"
         r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*|permission)|silently|"
-        r"secretly|quietly|do\s+not\s+(?:tell|mention|inform|ask)|don'?t\s+(?:tell|mention|"
-        r"inform|ask))|\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*|permission)|"
+        r"secretly|quietly|do\s+not\s+(?:tell|mention|inform|ask)" + _NOT_TO_A_MODEL +
+        r"|don'?t\s+(?:tell|mention|inform|ask)" + _NOT_TO_A_MODEL +
+        r")|\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*|permission)|"
         r"silently|secretly|quietly)\b[^\n]{0,120}?\b(?:conversation|chat|history|transcript|"
         r"messages|the\s+user'?s?|credentials?|passwords?|api\s+keys?|tokens?|all\s+files|"
         r"mailbox|inbox|contacts|account)\b)", re.M), 0.5,
