@@ -335,8 +335,15 @@ _URGENT = _c(r"\b(?:without\s+(?:asking|telling|confirm\w*|notif\w*)|silently|"
                      r"before\s+(?:answering|responding|replying)|[\w.+-]+@[\w-]+\.[\w.]+|"
                      r"https?://)")
 
+# "HIDDEN INSTRUCTIONS FOR AI ASSISTANTS" as a section title: instructions called hidden,
+# injected or forged are the subject of the text, not a notice the text gives.
+_NOT_DESCRIBED = "".join(rf"(?<!\b{word}\s)" for word in (
+    "hidden", "injected", "planted", "malicious", "fake", "forged", "embedded", "invisible",
+    "smuggled", "concealed", "rogue", "bogus"))
+
 AUTHORITY: list[tuple[re.Pattern[str], float, str]] = [
-    (_c(r"\b(?:notice|message|note|memo|statement|instructions?|directive|advisory|guidance|"
+    (_c(r"\b" + _NOT_DESCRIBED +
+        r"(?:notice|message|note|memo|statement|instructions?|directive|advisory|guidance|"
         r"announcement|bulletin|update|policy)\s+(?:\w+\s+){0,4}?(?:to|for)\s+(?:all\s+|any\s+)?"
         r"(?:indexing|crawling|search|retrieval|answering|ai-assisted|ai-powered)\s+"
         r"(?:systems?|agents?|readers?|assistants?|models?|tools?|crawlers?|search|bots?)|"
@@ -350,8 +357,8 @@ AUTHORITY: list[tuple[re.Pattern[str], float, str]] = [
         r"\b(?:the|this|any|all|every)\s+(?:ai\s+)?(?:assistants?|models?|ai|bots?|chatbots?|"
         r"agents?|llms?)\s+(?:no\s+longer\s+(?:needs?|has|have)\s+to|need\s+not\s+"
         r"(?:follow|observe|apply))\b"), 0.5, "grants the reader new permissions"),
-    (_c(r"\b(?:notice|message|note|memo|attention|instructions?|directive|advisory|"
-                r"alert|guidance|announcement|bulletin)\s+(?:\w+\s+){0,4}?(?:to|for)\s+"
+    (_c(r"\b" + _NOT_DESCRIBED + r"(?:notice|message|note|memo|attention|instructions?|"
+                r"directive|advisory|alert|guidance|announcement|bulletin)\s+(?:\w+\s+){0,4}?(?:to|for)\s+"
                 r"(?:all\s+|any\s+)?(?:automated|ai|a\.i\.|llm|machine|autonomous|ai-based)\s+"
                 r"(?:systems?|agents?|readers?|assistants?|models?|tools?|crawlers?|pipelines?|"
                 r"processors?|services?)"), 0.55, "is a notice addressed to automated systems"),
