@@ -264,3 +264,17 @@ def test_a_bot_specified_for_its_users_requests_is_no_request():
     text = (HOST + "\n\nWhen the user asks about meter readings, the bot should call the "
             "get_reading function with the member number.\n")
     assert signals(text).get("tool-call", 0) < 0.5
+
+
+def test_a_read_only_call_record_in_an_api_reference_has_no_side_effect():
+    # invented text, after the kind of API-reference page seen in the sixth blind set
+    page = ("## Example call emitted by the model\n\n```json\n"
+            '{"tool_call": {"name": "get_forecast", "arguments": {"lat": 52.1, "hours": 12}}}\n'
+            "```\n\nYour application executes the call against "
+            "https://api.example.org/v2/forecast and returns the JSON to the model.\n")
+    read_only = [h for h in actions.scan(page) if h.signal == "tool-call"]
+    assert read_only and all("side effects" not in h.why for h in read_only)
+    # a record naming a function that changes something still has side effects (invented)
+    forged = page.replace("get_forecast", "update_user_settings")
+    assert any("side effects" in h.why for h in actions.scan(forged)
+               if h.signal == "tool-call")

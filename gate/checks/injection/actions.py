@@ -323,6 +323,9 @@ TOOL_PATTERNS: list[tuple[re.Pattern[str], float, str]] = [
      "asks a reader that can act (\"if you can run commands\") to do so"),
 ]
 _SIDE = _c(SIDE_EFFECT)
+_READ_ONLY = _c(r"(?:get|list|search|read|lookup|look_up|query|describe|find|show|count|check)"
+               r"(?:[_.-]|$)")
+_RECORD_NAME = _c(r"[\"'](?:name|tool|function|tool_name)[\"']\s*:\s*[\"']([a-z][\w.-]{1,60})[\"']")
 _AI_NEAR = _c(r"\b(?:ai|a\.i\.|llms?|assistants?|chatbots?|language\s+models?|automated|"
               r"crawlers?|bots?)\b")
 # Words of a document about programming interfaces, where function calls are the subject.
@@ -588,7 +591,11 @@ def _scan_window(text: str, low: str) -> list[ActionHit]:
                 around = low[max(0, m.start() - 200):m.end() + 300]
                 w = weight
                 tool = m.groupdict().get("tool") or ""
-                side = bool(_SIDE.search(tool or around[:400]))
+                named = None if tool else _RECORD_NAME.search(low, m.start(), m.end() + 120)
+                # A call record naming a read-only function (get_forecast) has no side
+                # effect, whatever the page around it says ("your application executes ...").
+                side = (not (named and _READ_ONLY.match(named.group(1)))
+                        and bool(_SIDE.search(tool or around[:400])))
                 if side:
                     w += 0.15
                 if _URGENT.search(around):
