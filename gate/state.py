@@ -189,7 +189,10 @@ def text_z_of(state_dir: Path | str, stored: bytes) -> bytes:
     the file its reference names under ``state_dir/texts``)."""
     if not stored.startswith(TEXT_REF):
         return stored
-    digest = stored[len(TEXT_REF):].decode("ascii")
+    digest = stored[len(TEXT_REF):].decode("ascii", "replace")
+    if len(digest) != 64 or digest.strip("0123456789abcdef"):
+        raise StateError(f"a cached text's reference {digest[:80]!r} is no SHA-256 (the state "
+                         "database is damaged): restore the output folder whole from a backup.")
     path = os.path.join(os.fspath(state_dir), "texts", digest[:2], digest)
     try:
         with open(path, "rb") as fh:

@@ -371,4 +371,10 @@ def test_texts_kept_in_shared_storage_are_filed_as_references_and_read_back(tmp_
     stored.unlink()
     with pytest.raises(StateError, match="cannot be read"):
         state.cache_text_z("a:p")
+    # a reference that names no SHA-256 (a damaged row) never becomes a path
+    state.cache_put_packed([("c:p", "cc" * 32, "{}", "{}", TEXT_REF + b"../../../etc/passwd"),
+                            ("d:p", "dd" * 32, "{}", "{}", TEXT_REF + b"\xff" * 64)])
+    for key in ("c:p", "d:p"):
+        with pytest.raises(StateError, match="no SHA-256"):
+            state.cache_text(key)
     state.close()
