@@ -31,9 +31,13 @@ import ctypes.util
 import gc
 import multiprocessing
 import os
+import shutil
 from collections import deque
 from collections.abc import Iterable, Iterator
+from pathlib import Path
 from typing import Any
+
+import numpy as np
 
 from gate.errors import UsageError
 from gate.extract.pool import Failure, WorkerPool
@@ -52,6 +56,14 @@ RECYCLE_AFTER = 2000  # tasks per pool process on a node (forked warm, so rarely
 # Dask's client records the code around every submit for its dashboard (a walk up the
 # stack each time); gate's submits are all the same line
 NO_CODE = {"distributed.diagnostics.computations.nframes": 0}
+
+# The client's own periodic work in the coordinator's process (its event loop's tick
+# monitor every 20 ms, the scheduler's information every 2 s) for gate's few large tasks,
+# a second and 10 s are enough: idle, a client then costs 0.23 ms of CPU a second rather
+# than 0.39 (loopback, loaded, one reading of 15 s each)
+CLIENT_SETTINGS = {"distributed.admin.tick.interval": "1s",
+                   "distributed.admin.system-monitor.interval": "5s",
+                   "distributed.client.scheduler-info-interval": "10s"}
 
 _POOL: WorkerPool | None = None
 _POOL_KEY: tuple | None = None
@@ -109,6 +121,7 @@ def run_batch(params: Params, batch: Batch | list[tuple[int, Any]],
     if not items:
         return []
     results = list(_pool(params).run(items))
+    lighten(items, results)
     roots = {root for _index, payload in items if getattr(payload, "sync", False)
              for root in [getattr(payload, "stage_root", None) or getattr(payload, "out", None)]
              if root}
@@ -118,6 +131,50 @@ def run_batch(params: Params, batch: Batch | list[tuple[int, Any]],
     # each file system written to, not of every file (nor of the node's other ones)
     flush(roots)
     return results
+
+
+def lighten(items: list[tuple[int, Any]], results: list[tuple[int, Any]]) -> None:
+    """Leave out of ``results`` what the coordinator does not read, and send what it
+    reads in a form that costs it less to receive (a Dask client unpickles the answers in
+    its own thread of the coordinator's process):
+
+    * a document's measures when the worker evaluated them (``judged``): the coordinator
+      files the cache row (which holds them, encoded here) and uses the verdict; it reads
+      the measures only to evaluate a document itself;
+    * the block summary of a page measured again without its site's template (a
+      :class:`~gate.intake.StagedTask` with ``extra``): the coordinator learnt the
+      template from the first extraction's blocks and files the cache row, which holds
+      them; of a first extraction, the block hashes as 64-bit arrays rather than lists
+      of Python integers (what :meth:`gate.templates.Page.of` makes of them anyway);
+    * the timings (for benchmarks) added up over the batch, in its first answer.
+
+    Decisions are unchanged: what the coordinator files and decides on is the same."""
+    again = {index for index, payload in items if getattr(payload, "extra", None) is not None}
+    total: dict[str, float] = {}
+    first: dict[str, Any] | None = None
+    for index, answer in results:
+        result = answer.get("result", answer) if isinstance(answer, dict) else None
+        if not isinstance(result, dict) or "cache" not in result:
+            continue
+        if "judged" in result and result.get("measures"):
+            result["measures"] = {}
+        blocks = result.get("blocks")
+        if blocks:
+            if index in again:
+                result["blocks"] = {}
+            else:
+                result["blocks"] = {key: (np.array(value, dtype=np.uint64)
+                                          if key in HASH_LISTS else value)
+                                    for key, value in blocks.items()}
+        for stage, seconds in result.pop("timings", {}).items():
+            total[stage] = total.get(stage, 0.0) + seconds
+        if first is None:
+            first = result
+    if first is not None:
+        first["timings"] = total
+
+
+HASH_LISTS = ("main", "other", "nav")  # the block summary's lists of 64-bit hashes
 
 
 def keep_texts(texts: str, results: list[tuple[int, Any]]) -> bool:
@@ -138,6 +195,10 @@ def keep_texts(texts: str, results: list[tuple[int, Any]]) -> bool:
             continue
         wrote = True
     return wrote
+
+
+def remove_tree(folder: str) -> None:
+    shutil.rmtree(folder, ignore_errors=True)
 
 
 _LIBC: Any = None
@@ -183,8 +244,10 @@ class ClusterExecutor:
         except ImportError:
             raise UsageError("--cluster needs the 'distributed' package: pip install "
                              "'gate[cluster]'") from None
+        import dask
         try:
-            self.client = Client(address, timeout=20)
+            with dask.config.set(CLIENT_SETTINGS):
+                self.client = Client(address, timeout=20)
         except (OSError, TimeoutError) as err:
             raise UsageError(f"cannot reach the Dask scheduler at {address} ({err}); start "
                              "it, or run without --cluster.") from None
@@ -207,6 +270,17 @@ class ClusterExecutor:
     def __exit__(self, *exc: object) -> None:
         gc.unfreeze()
         self.client.close()
+
+    def remove_tree(self, folder: Path | str) -> None:
+        """Remove ``folder`` (the staged copies, once placed) on a Dask worker, which sees
+        the same storage: its hundreds of unlinks are no work for the coordinator. Here
+        when the cluster cannot (a worker lost on the way)."""
+        import dask
+        try:
+            with dask.config.set(NO_CODE):
+                self.client.submit(remove_tree, os.fspath(folder), pure=False).result()
+        except Exception:  # noqa: BLE001 - done here instead
+            remove_tree(os.fspath(folder))
 
     def run(self, tasks: Iterable[tuple[Any, Any]]) -> Iterator[tuple[Any, Any]]:
         """Yield (tag, result) as batches complete; a lost batch fails closed per document.

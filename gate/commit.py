@@ -303,6 +303,6 @@ def finish(output: Output, run_id: str, reporter: Reporter, pool: Any = None) ->
     write_atomic(output.out / "changes.jsonl",
                  "".join(line + "\n" for line in state.change_lines()).encode("utf-8"))
     placer.empty_trash()
-    output.blobs.clear()
+    output.blobs.clear(getattr(pool, "remove_tree", None))
     state.complete_run(run_id)
 

@@ -86,8 +86,13 @@ class Blobs:
         write_file(tmp, data, sync=False)  # made durable by one sync before deciding
         os.replace(tmp, target)
 
-    def clear(self) -> None:
-        shutil.rmtree(self.root, ignore_errors=True)
+    def clear(self, remove: Any = None) -> None:
+        """Remove the staged copies (``remove``: a function that removes a folder, where
+        the run's worker pool offers one: :meth:`gate.cluster.ClusterExecutor.remove_tree`)."""
+        if remove is not None:
+            remove(self.root)
+        else:
+            shutil.rmtree(self.root, ignore_errors=True)
         self._made.clear()
 
 
