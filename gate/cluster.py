@@ -28,6 +28,7 @@ from __future__ import annotations
 
 import ctypes
 import ctypes.util
+import dataclasses
 import gc
 import multiprocessing
 import os
@@ -35,14 +36,15 @@ import shutil
 from collections import deque
 from collections.abc import Iterable, Iterator
 from pathlib import Path
+from queue import SimpleQueue
 from typing import Any
 
 import numpy as np
 
 from gate.errors import UsageError
 from gate.extract.pool import Failure, WorkerPool
-from gate.intake import FileTask, work_on
-from gate.state import TEXT_INLINE_BELOW, store_text
+from gate.intake import FileTask, StagedTask, work_on
+from gate.state import TEXT_INLINE_BELOW, TEXT_REF, StateError, store_text, text_z_of
 from gate.work import Params
 
 # A Dask task costs the coordinator's client a few ms of CPU whatever it carries (on
@@ -120,6 +122,8 @@ def run_batch(params: Params, batch: Batch | list[tuple[int, Any]],
     items = batch.items if isinstance(batch, Batch) else batch
     if not items:
         return []
+    if texts is not None:
+        items = [(index, earlier_read(payload, texts)) for index, payload in items]
     results = list(_pool(params).run(items))
     lighten(items, results)
     roots = {root for _index, payload in items if getattr(payload, "sync", False)
@@ -131,6 +135,25 @@ def run_batch(params: Params, batch: Batch | list[tuple[int, Any]],
     # each file system written to, not of every file (nor of the node's other ones)
     flush(roots)
     return results
+
+
+def earlier_read(payload: Any, texts: str) -> Any:
+    """A page measured again without its site's template comes with the text its first
+    extraction gave, or (:class:`ClusterExecutor` knowing the output folder's
+    ``state/texts``) the reference its cache row holds: read here, on the node, checked
+    against its name (:func:`gate.state.text_z_of`), so the text does not pass through
+    the coordinator twice. When the file cannot be read or does not match its name,
+    the page is extracted without it (the text is then computed again, as the first
+    extraction did: the same result at a higher cost)."""
+    extra = getattr(payload, "extra", None)
+    if not isinstance(payload, StagedTask) or extra is None or extra[1] is None or \
+            not extra[1].startswith(TEXT_REF):
+        return payload
+    try:
+        earlier = text_z_of(os.path.dirname(texts), extra[1])
+    except StateError:
+        return dataclasses.replace(payload, extra=(extra[0], None))
+    return dataclasses.replace(payload, extra=(extra[0], earlier))
 
 
 def lighten(items: list[tuple[int, Any]], results: list[tuple[int, Any]]) -> None:
@@ -290,14 +313,16 @@ class ClusterExecutor:
         evenly over the workers, so they finish together instead of one worker taking
         the last full batch while the others wait."""
         import dask
-        from distributed import as_completed
         pending = iter(tasks)
         ahead: deque[tuple[Any, Any]] = deque()
         exhausted = False
         tags: dict[int, Any] = {}
         members: dict[Any, list[int]] = {}
         counter = 0
-        futures = as_completed()
+        # finished tasks, in the order they finish: put there by Dask's callback thread,
+        # waited for without a time-out (Dask's as_completed wakes up ten times a second
+        # to look, a cost that grows with the length of the run, not its work)
+        finished: SimpleQueue[Any] = SimpleQueue()
 
         def read_ahead() -> None:
             nonlocal exhausted
@@ -329,12 +354,13 @@ class ClusterExecutor:
                 future = self.client.submit(run_batch, self.params, Batch(batch),
                                             self.texts, pure=False)
             members[future] = [index for index, _payload in batch]
-            futures.add(future)
+            future.add_done_callback(finished.put)
             return True
 
         while len(members) < self.in_flight and submit():
             pass
-        for future in futures:
+        while members:
+            future = finished.get()
             indices = members.pop(future)
             try:
                 results = future.result()

@@ -329,7 +329,9 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
                 item.judged = None
                 evaluated(item)
                 continue
-            earlier = state.cache_text_z(item.cache_key)
+            # on a cluster, the reference to the text's file: its node reads it there
+            earlier = state.cache_text_stored(item.cache_key) if getattr(pool, "texts", None) \
+                else state.cache_text_z(item.cache_key)
             key = f"{item.cache_key}:t{removal_key(drop)}" if drop else item.cache_key
             cached = state.cache_meta(key) if drop else None
             if cached is not None:

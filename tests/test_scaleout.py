@@ -378,3 +378,67 @@ def test_texts_kept_in_shared_storage_are_filed_as_references_and_read_back(tmp_
         with pytest.raises(StateError, match="no SHA-256"):
             state.cache_text(key)
     state.close()
+
+
+def test_a_page_measured_again_gets_its_earlier_text_read_on_the_node(tmp_path):
+    """The coordinator sends the reference its cache row holds; the node reads the file
+    (checked against its name). A file gone or damaged leaves the page without it, to be
+    extracted as the first time, never with a wrong text (invented texts)."""
+    import zlib
+
+    from gate.cluster import earlier_read, keep_texts
+    from gate.intake import StagedTask
+
+    texts = tmp_path / "state" / "texts"
+    text_z = zlib.compress(" ".join(f"w{n}" for n in range(3000)).encode(), 1)
+    results = [(0, {"cache": ("{}", "{}", text_z)})]
+    assert keep_texts(str(texts), results)
+    ref = results[0][1]["cache"][2]
+    task = StagedTask("a.html", "/nowhere", "ab" * 32, None, extra=(("h",), ref))
+    assert earlier_read(task, str(texts)).extra == (("h",), text_z)
+    inline = StagedTask("a.html", "/nowhere", "ab" * 32, None, extra=(("h",), text_z))
+    assert earlier_read(inline, str(texts)) is inline  # a text in its row travels as is
+    first = StagedTask("a.html", "/nowhere", "ab" * 32, None)
+    assert earlier_read(first, str(texts)) is first
+    stored = next(p for p in texts.rglob("*") if p.is_file())
+    stored.write_bytes(text_z[:-2])
+    assert earlier_read(task, str(texts)).extra == (("h",), None)
+    stored.unlink()
+    assert earlier_read(task, str(texts)).extra == (("h",), None)
+
+
+def test_answers_are_lightened_without_losing_what_the_coordinator_reads():
+    """What a node leaves out of a batch's answers (gate.cluster.lighten) and how it
+    sends the block hashes (invented values; the hashes are 64-bit, as gate.templates
+    makes them)."""
+    import numpy as np
+
+    from gate.cluster import lighten
+    from gate.intake import StagedTask
+    from gate.templates import Page
+
+    big = 2 ** 64 - 5
+    blocks = {"main": [3, big], "other": [7], "shaped": [[1, 2]], "title": "t"}
+
+    def answer(judged: bool) -> dict:
+        result = {"cache": ("{}", "{}", b"x"), "measures": {"quality": {"n": 1}},
+                  "measure_errors": {}, "blocks": {k: list(v) if isinstance(v, list) else v
+                                                   for k, v in blocks.items()},
+                  "timings": {"extract": 0.5, "quality": 0.25}}
+        if judged:
+            result["judged"] = ("{}", None)
+        return {"intake": {}, "result": result}
+
+    again = StagedTask("b.html", "/nowhere", "cd" * 32, None, extra=((), None))
+    items = [(0, None), (1, again), (2, None)]
+    results = [(0, answer(True)), (1, answer(True)), (2, answer(False)), (3, True)]
+    lighten(items, results)
+    first, second, third = (results[i][1]["result"] for i in range(3))
+    assert first["measures"] == {} and third["measures"] == {"quality": {"n": 1}}
+    assert first["blocks"]["main"].dtype == np.uint64
+    assert first["blocks"]["shaped"] == [[1, 2]] and first["blocks"]["title"] == "t"
+    assert Page.of("s html", first["blocks"]).signature() == \
+        Page.of("s html", blocks).signature()
+    assert second["blocks"] == {}
+    assert first["timings"] == {"extract": 1.5, "quality": 0.75}
+    assert "timings" not in second and "timings" not in third
