@@ -171,17 +171,19 @@ class Placer:
                 payload = json.loads(payload) if isinstance(payload, str) else payload
                 built.append((doc_id, target, self.build(doc_id, target, payload)))
         else:
-            tasks = []
+            todo = []
             for doc_id, target, payload in placements:
                 if target == "absent":
                     built.append((doc_id, target, None))
                     continue
                 raw = payload if isinstance(payload, str) else json.dumps(payload)
-                key = _text_key(raw)
-                tasks.append(((doc_id, target, raw), BuildTask(
-                    str(self.out), doc_id, target, raw,
-                    self.state.cache_text_stored(key) if key else None,
-                    sync=getattr(pool, "remote", False))))
+                todo.append((doc_id, target, raw, _text_key(raw)))
+            texts = self.state.cache_texts_stored(key for *_, key in todo if key)
+            out, sync = str(self.out), getattr(pool, "remote", False)
+            tasks = [((doc_id, target, raw),
+                      BuildTask(out, doc_id, target, raw, texts.get(key) if key else None,
+                                sync=sync))
+                     for doc_id, target, raw, key in todo]
             for (doc_id, target, raw), answer in pool.run(tasks):
                 if answer is not True:  # the worker failed: build it here
                     self.build(doc_id, target, json.loads(raw))

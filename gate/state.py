@@ -276,6 +276,18 @@ class State:
         row = self.conn.execute("SELECT text FROM cache WHERE key = ?", (key,)).fetchone()
         return row[0] if row else None
 
+    def cache_texts_stored(self, keys: Iterable[str]) -> dict[str, bytes]:
+        """:meth:`cache_text_stored` of many keys, one query per 500 (the keys without a
+        row are left out)."""
+        wanted = sorted(set(keys))
+        out: dict[str, bytes] = {}
+        for start in range(0, len(wanted), 500):
+            chunk = wanted[start:start + 500]
+            out.update(self.conn.execute(
+                f"SELECT key, text FROM cache WHERE key IN ({', '.join('?' * len(chunk))})",
+                chunk).fetchall())
+        return out
+
     def cache_put_packed(self, rows: Iterable[tuple[str, str, str, str, bytes]]) -> None:
         """Cache rows already encoded (by the worker that produced them): key, digest,
         extraction JSON, measures JSON, compressed text. A key filed again (a site's page
