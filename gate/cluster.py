@@ -22,6 +22,13 @@ that loaded the parsers and language profiles once (:mod:`gate.warm`), so a recy
 worker starts warm. Staged copies are flushed to disk by the node that writes them
 (a coordinator's sync does not reach another machine's cache), once per batch and file
 system (``syncfs``), not per file.
+
+What crosses the coordinator is kept to what it reads: a page measured again once its
+site's template is known gets the reference to its first text's file, which its node
+reads (:func:`earlier_read`); the answers leave out the measures of documents the node
+evaluated and the blocks of pages measured again, and carry block hashes as arrays
+(:func:`lighten`); once the entries are placed, a Dask worker removes the staged copies
+(:meth:`ClusterExecutor.remove_tree`).
 """
 
 from __future__ import annotations
