@@ -601,24 +601,22 @@ def _datelines(blocks: Sequence[Block], lines: set[int], drop: set[int]) -> set[
 
 def _out_of_line(blocks: Sequence[Block], recurring: set[int], drop: set[int]) -> set[int]:
     """The blocks of ``recurring`` (on several distinct documents of the host, see
-    :func:`_recurring`) that stand out of line with the page's text: a paragraph or list
-    item marked up (its holder's tag and class) as none of the page's own blocks of its
-    kind is (a promotion boxed in among the paragraphs), a heading over nothing of the
-    page's own nor in line. The page's title stays; so do a stock sentence among the
-    paragraphs of a notice, a list's stock item, a table's header row where the page has
-    a table of its own, and every line of a text, PDF or Markdown copy (their markup is
-    one and the same)."""
+    :func:`_recurring`) that stand out of line with the page's text: a paragraph marked
+    up (its holder's tag and class) as none of the page's own paragraphs is (a promotion
+    boxed in among them), and a heading over such a paragraph or over nothing of the
+    page's own. The page's title stays; so do a stock sentence written as the notice's
+    paragraphs are, list items and table cells (a stock list of documents, a table of
+    start times: the page's structure, not a box put into it), and every line of a text,
+    PDF or Markdown copy (their markup is one and the same)."""
     gone = drop | recurring
 
     def own(b: Block) -> bool:
         return b.hash not in gone and b.links < LINK_DOMINATED and not b.nav
 
-    mine = {(b.kind, b.markup) for b in blocks if own(b)}
-    cells = any(b.kind == "cell" for b in blocks if own(b))
-    inline = [own(b) or (b.hash in recurring and (
-        b.title or (b.kind == "cell" and cells) or
-        (b.kind not in ("heading", "cell") and (b.kind, b.markup) in mine)))
-        for b in blocks]
+    mine = {b.markup for b in blocks if b.kind == "text" and own(b)}
+    inline = [own(b) or b.title or b.kind in ("item", "cell") or
+              (b.kind == "text" and b.hash in recurring and b.markup in mine)
+              for b in blocks]
     for i in range(len(blocks) - 2, -1, -1):  # a heading over text in line is in line
         b = blocks[i]
         if b.hash in recurring and b.kind == "heading" and inline[i + 1] and \

@@ -930,10 +930,13 @@ def test_a_recurring_block_goes_only_out_of_line_with_the_pages_text():
     promo = ("Ask about the monthly plan for your visits.", {"markup": "div.promo"})
     stock = (STOCK, {"markup": "p"})
     head = ("How to comment", {"kind": "heading", "markup": "h2"})
-    blocks = _blocks(own[0], promo, own[1], head, stock, own[2])
-    recurring = (blocks[1].hash, blocks[3].hash, blocks[4].hash)
+    advice = ("Fill a kettle before the work begins.", {"kind": "item", "markup": "li"})
+    blocks = _blocks(own[0], promo, own[1], head, stock, advice, own[2])
+    # the promotion, the heading, the stock sentence and the stock list item recur
+    recurring = (blocks[1].hash, blocks[3].hash, blocks[4].hash, blocks[5].hash)
     text = "\n".join(b.text for b in blocks)
     cleaned, info = templates.compose(text, blocks, ((), (), (), (), (), recurring))
     assert promo[0] not in cleaned and info["kept"] == "main"
-    # the stock paragraph is marked up as the notice's paragraphs, and its heading heads it
+    # the stock paragraph is marked up as the notice's paragraphs, its heading heads it, and
+    # a list item is the page's structure, not a box put into it
     assert cleaned == "\n".join(b.text for b in blocks if b is not blocks[1])
