@@ -603,8 +603,9 @@ def _out_of_line(blocks: Sequence[Block], recurring: set[int], drop: set[int]) -
     """The blocks of ``recurring`` (on several distinct documents of the host, see
     :func:`_recurring`) that stand out of line with the page's text: a paragraph marked
     up (its holder's tag and class) as none of the page's own paragraphs is (a promotion
-    boxed in among them), and a heading over such a paragraph or over nothing of the
-    page's own. The page's title stays; so do a stock sentence written as the notice's
+    boxed in among them; the markup most of the main text's paragraphs have is the
+    page's own too), and a heading over such a paragraph or over nothing of the page's
+    own. The page's title stays; so do a stock sentence written as the notice's
     paragraphs are, list items and table cells (a stock list of documents, a table of
     start times: the page's structure, not a box put into it), and every line of a text,
     PDF or Markdown copy (their markup is one and the same)."""
@@ -614,6 +615,11 @@ def _out_of_line(blocks: Sequence[Block], recurring: set[int], drop: set[int]) -
         return b.hash not in gone and b.links < LINK_DOMINATED and not b.nav
 
     mine = {b.markup for b in blocks if b.kind == "text" and own(b)}
+    # and the markup most of the main text's paragraphs have, though all of them recur (a
+    # forum's question and answer put together from stock sentences)
+    main = [b.markup for b in blocks if b.kind == "text" and b.main and b.hash not in drop]
+    if main:
+        mine.add(max(sorted(set(main)), key=main.count))
     inline = [own(b) or b.title or b.kind in ("item", "cell") or
               (b.kind == "text" and b.hash in recurring and b.markup in mine)
               for b in blocks]
