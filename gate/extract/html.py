@@ -184,7 +184,8 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
     return _marked(found, _line_digests(main_text, found))
 
 
-# each block's text, hash, links, kind, lead and markup (its holder's tag and class)
+# each block's text, hash, links, kind, lead and markup (its holder's tag and class, after
+# those of the block element holding that: "article>p", "div.ad>p")
 Walked = list[tuple[str, int, float, str, float, str]]
 
 
@@ -210,7 +211,7 @@ def _walk(root: lxml.etree._Element) -> Walked:
     found: Walked = []
     parts: list[str] = []
     holders: list[str] = ["body"]
-    marks: list[str] = ["body"]  # the holders' tags with their classes
+    marks: list[str] = ["", "body"]  # the holders' tags with their classes
     linked = 0
     in_link = 0
     in_pre = 0
@@ -236,7 +237,7 @@ def _walk(root: lxml.etree._Element) -> Walked:
                 if digest is not None:
                     found.append((text, digest, round(min(1.0, linked / len(text)), 3), kind,
                                   round(min(1.0, lead / len(text)), 3)
-                                  if len(pieces) == 1 else 0.0, marks[-1]))
+                                  if len(pieces) == 1 else 0.0, f"{marks[-2]}>{marks[-1]}"))
         linked = lead = 0
         unlinked = False
 
