@@ -32,6 +32,14 @@ comments signed at their end by their words without the signature (:func:`signed
 and each page's title (its ``<h1>``) is learnt so that lists quoting it on other pages
 are known for teasers (:func:`_quoting`).
 
+Whatever its share of the pages, a block (not on most of them) that stands on pages of
+at least ``RECUR_MIN_DOCS`` distinct documents -- pages sharing half their own blocks are
+versions of one document and count once -- is *recurring* (:func:`_recurring`): a
+promotion the template rotates through a pool of variants, each on a few pages. It goes
+only where it stands out of line with the page's text (:func:`_out_of_line`: a paragraph
+marked up unlike the page's own paragraphs, a heading over such a one); a stock sentence
+written as the notice's paragraphs are, list items and table cells stay.
+
 A host with fewer than ``MIN_PAGES`` distinct pages teaches nothing: its pages keep
 trafilatura's text, as before. On the first run of a new site with three or four pages,
 only what is on every page is template. A body shared by a few versions of one page
