@@ -32,6 +32,14 @@ comments signed at their end by their words without the signature (:func:`signed
 and each page's title (its ``<h1>``) is learnt so that lists quoting it on other pages
 are known for teasers (:func:`_quoting`).
 
+Whatever its share of the pages, a block (not on most of them) that stands on pages of
+at least ``RECUR_MIN_DOCS`` distinct documents -- pages sharing half their own blocks are
+versions of one document and count once -- is *recurring* (:func:`_recurring`): a
+promotion the template rotates through a pool of variants, each on a few pages. It goes
+only where it stands out of line with the page's text (:func:`_out_of_line`: a paragraph
+marked up unlike the page's own paragraphs, a heading over such a one); a stock sentence
+written as the notice's paragraphs are, list items and table cells stay.
+
 A host with fewer than ``MIN_PAGES`` distinct pages teaches nothing: its pages keep
 trafilatura's text, as before. On the first run of a new site with three or four pages,
 only what is on every page is template. A body shared by a few versions of one page
@@ -70,7 +78,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import block_hash, words
 
-TEMPLATES_VERSION = 20  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 22  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -90,6 +98,10 @@ TAGLINE_MAX_WORDS = 12  # template lines this short under the page's title are n
 SANDWICH_MAX = 6  # template blocks in a row kept between two blocks of the page's own
 TITLE_MIN_WORDS = 3  # a title this long that another page's list quotes makes a teaser
 DATE_MAX_WORDS = 4  # "25 February 2026" after a quoted title: a list of events, of news
+RECUR_MIN_DOCS = 3  # a block on this many distinct documents of a host, whatever their
+# share of its pages, is template where it stands out of line with the page's text
+VERSION_SHARE = 0.5  # two pages sharing this share of their own blocks are versions
+VERSION_MAX_PAGES = 16  # a block on more pages than this ties no two pages as versions
 
 
 def site_of(source_url: str | None) -> str | None:
@@ -296,7 +308,7 @@ class Page:
 
 
 Learnt = dict[str, tuple[np.ndarray, np.ndarray, frozenset[int], frozenset[str],
-                         frozenset[int], frozenset[int], bool]]
+                         frozenset[int], frozenset[int], bool, np.ndarray]]
 
 
 def learn(pages: Iterable[Page]) -> Learnt:
@@ -357,9 +369,52 @@ def learn(pages: Iterable[Page]) -> Learnt:
         # the same comment under different names on many pages: a forum's stock replies
         stems = _varied((page.signed for page in distinct),
                         max(ASIDE_MIN_PAGES, math.ceil(SHARE_ASIDE * n)))
-        if len(strong) or len(weak) or shapes or titles or stems or some or dated:
-            learnt[site] = (strong, weak, shapes, titles, stems, some, dated)
+        recurring = _recurring(distinct, strong, weak)
+        if len(strong) or len(weak) or shapes or titles or stems or some or dated or \
+                len(recurring):
+            learnt[site] = (strong, weak, shapes, titles, stems, some, dated, recurring)
     return learnt
+
+
+def _recurring(distinct: Sequence[Page], strong: np.ndarray, weak: np.ndarray
+               ) -> np.ndarray:
+    """The blocks, not on most pages (``strong``), that stand on pages of at least
+    ``RECUR_MIN_DOCS`` distinct documents, whatever share of the host's pages that is:
+    a promotion the template rotates through a pool of a few variants, each on an eighth
+    of the pages. Pages are one document when they share ``VERSION_SHARE`` of their own
+    blocks (neither ``strong`` nor ``weak``), counted through blocks on at most
+    ``VERSION_MAX_PAGES`` pages: a body republished as versions (updated, printable)
+    recurs only together with the rest of its page, and counts once. Such a block goes
+    only where it stands out of line with the page's text (:func:`_out_of_line`): a
+    stock sentence that several notices share is marked up as their paragraphs are."""
+    n = len(distinct)
+    template = np.union1d(strong, weak)
+    own = [set(np.setdiff1d(p.hashes, template, assume_unique=True).tolist())
+           for p in distinct]
+    pages_of: dict[int, list[int]] = {}
+    for i, page in enumerate(distinct):
+        for h in np.setdiff1d(page.hashes, strong, assume_unique=True).tolist():
+            pages_of.setdefault(h, []).append(i)
+    shared: dict[tuple[int, int], int] = {}
+    for h, at in pages_of.items():
+        if 2 <= len(at) <= VERSION_MAX_PAGES and h in own[at[0]]:
+            for k, a in enumerate(at):
+                for b in at[k + 1:]:
+                    shared[a, b] = shared.get((a, b), 0) + 1
+    parent = list(range(n))
+
+    def root(i: int) -> int:
+        while parent[i] != i:
+            parent[i] = parent[parent[i]]
+            i = parent[i]
+        return i
+
+    for (a, b), count in shared.items():
+        if count >= 2 and count >= VERSION_SHARE * min(len(own[a]), len(own[b])):
+            parent[root(a)] = root(b)
+    found = [h for h, at in pages_of.items() if len(at) >= RECUR_MIN_DOCS and
+             len({root(i) for i in at}) >= RECUR_MIN_DOCS]
+    return np.array(sorted(found), dtype=np.uint64)
 
 
 def _on_pages(sets: Sequence[np.ndarray], least: int) -> np.ndarray:
@@ -431,11 +486,20 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     rotated = tuple(sorted(rotated - shaped - set(found[0])))
     titles = tuple(sorted(template[3] - {page.title}))
     signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]} | shaped))
-    if not (found[0] or found[1] or titles or signed or rotated):
+    recurring = tuple(int(h) for h in np.setdiff1d(
+        np.intersect1d(mine, template[7], assume_unique=True), part_strong(found)))
+    if not (found[0] or found[1] or titles or signed or rotated or recurring):
         return ()
+    if recurring:
+        return (found[0], found[1], titles, signed, rotated, recurring)
     if rotated:
         return (found[0], found[1], titles, signed, rotated)
     return (found[0], found[1], titles, signed) if titles or signed else (found[0], found[1])
+
+
+def part_strong(found: Sequence[tuple[int, ...]]) -> np.ndarray:
+    """The everywhere-template blocks of a removal's parts, as a uint64 array."""
+    return np.array(found[0], dtype=np.uint64)
 
 
 def removal_key(template: Removal) -> str:
@@ -445,8 +509,8 @@ def removal_key(template: Removal) -> str:
     if len(template) > 2:
         blob += b"|" + "\n".join(template[2]).encode("utf-8") + b"|" + \
             b"".join(int(h).to_bytes(8, "little") for h in template[3])
-    if len(template) > 4:
-        blob += b"|" + b"".join(int(h).to_bytes(8, "little") for h in template[4])
+    for part in template[4:]:
+        blob += b"|" + b"".join(int(h).to_bytes(8, "little") for h in part)
     return hashlib.sha256(blob).hexdigest()[:16]
 
 
@@ -541,6 +605,40 @@ def _datelines(blocks: Sequence[Block], lines: set[int], drop: set[int]) -> set[
             if b.hash in lines and _dateline(b):
                 found.add(b.hash)
     return found
+
+
+def _out_of_line(blocks: Sequence[Block], recurring: set[int], drop: set[int]) -> set[int]:
+    """The blocks of ``recurring`` (on several distinct documents of the host, see
+    :func:`_recurring`) that stand out of line with the page's text: a paragraph marked
+    up (its holder's tag and class) as none of the page's own paragraphs is (a promotion
+    boxed in among them; the markup most of the main text's paragraphs have is the
+    page's own too), and a heading over such a paragraph or over nothing of the page's
+    own. The page's title stays; so do a stock sentence written as the notice's
+    paragraphs are, list items and table cells (a stock list of documents, a table of
+    start times: the page's structure, not a box put into it), and every line of a text,
+    PDF or Markdown copy (their markup is one and the same)."""
+    gone = drop | recurring
+
+    def own(b: Block) -> bool:
+        return b.hash not in gone and b.links < LINK_DOMINATED and not b.nav
+
+    mine = {b.markup for b in blocks if b.kind == "text" and own(b)}
+    # and the markup most of the main text's paragraphs have, though all of them recur (a
+    # forum's question and answer put together from stock sentences)
+    main = [b.markup for b in blocks if b.kind == "text" and b.main and b.hash not in drop]
+    if main:
+        mine.add(max(sorted(set(main)), key=main.count))
+    inline = [own(b) or b.title or b.kind in ("item", "cell") or
+              (b.kind == "text" and b.hash in recurring and b.markup in mine)
+              for b in blocks]
+    for i in range(len(blocks) - 2, -1, -1):  # a heading over text in line is in line
+        b = blocks[i]
+        if b.hash in recurring and b.kind == "heading" and inline[i + 1] and \
+                blocks[i + 1].links < LINK_DOMINATED and not blocks[i + 1].nav:
+            inline[i] = True
+    out = {b.hash for i, b in enumerate(blocks) if b.hash in recurring and not inline[i]}
+    # a block in line on one spot of the page stays on all
+    return out - {b.hash for i, b in enumerate(blocks) if b.hash in recurring and inline[i]}
 
 
 def _rows(blocks: Sequence[Block], certain: set[int], drop: set[int]) -> set[int]:
@@ -707,6 +805,8 @@ def compose(text: str, blocks: Sequence[Block], template: Removal | tuple[()]
     certain = _quoting(blocks, template[2]) | set(template[3]) if len(template) > 2 else set()
     if len(template) > 4:
         certain |= _datelines(blocks, set(template[4]), drop | certain)
+    if len(template) > 5:
+        certain |= _out_of_line(blocks, set(template[5]), drop | certain)
     rows = _rows(blocks, certain, drop)
     drop |= certain
     drop -= _sandwiched(blocks, drop) - (certain - rows)

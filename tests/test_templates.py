@@ -833,3 +833,110 @@ def test_a_pages_title_stays_though_every_page_links_to_it():
     text = "\n".join(b.text for b in blocks[-2:])
     cleaned, _info = templates.compose(text, blocks, templates.removal(mine, learnt))
     assert cleaned == text
+
+
+# -- blocks that recur on a few distinct documents, whatever their share -------------------
+# (invented data: a clinic's notices with a promotion the template rotates through a pool
+# of variants, each on a few pages, and a stock closing sentence that some notices share)
+
+PROMOS = ("Register online in five minutes and choose your nearest invented clinic.",
+          "Ask about the monthly care plan that spreads the cost of your visits.",
+          "Our hygienists can now be booked directly from the invented app.",
+          "Missed appointments cost everyone, so please give a day's notice.")
+STOCK = "This notice will be updated as soon as we know more about the change."
+
+
+def clinic_page(n: int, promo: str | None, stock: bool) -> bytes:
+    own = [prose(700 + 10 * n + k, 30) for k in range(3)]
+    box = f"<div class='promo'><strong>{promo}</strong></div>" if promo else ""
+    return (f"<html><head><title>Clinic notice {n}</title></head><body>"
+            "<nav><a href='/'>Home</a> <a href='/n'>Notices</a> <a href='/c'>Contact</a></nav>"
+            f"<main><h1>Clinic notice {n} {prose(n, 3)}</h1><p>{own[0]}</p>{box}"
+            f"<p>{own[1]}</p><p>{own[2]}</p>" + (f"<p>{STOCK}</p>" if stock else "") +
+            f"</main><footer><p>{prose(9, 30)}</p></footer></body></html>").encode()
+
+
+def make_clinic(inbox, numbers, pool=PROMOS):
+    inbox.mkdir(parents=True)
+    lines = []
+    for n in numbers:
+        (inbox / f"notice-{n}.html").write_bytes(
+            clinic_page(n, pool[n % len(pool)] if pool else None, stock=n % 3 == 0))
+        lines.append(json.dumps({"path": f"notice-{n}.html",
+                                 "source_url": f"https://clinic.example.org/n/{n}"}))
+    (inbox / "manifest.jsonl").write_text("\n".join(lines) + "\n")
+
+
+def clinic_texts(out, report) -> dict[str, str]:
+    return {d["path"]: (out / d["location"] / "text.txt").read_text()
+            for d in report["documents"]}
+
+
+def test_a_rotating_promotion_goes_and_a_stock_sentence_stays(tmp_path):
+    # twelve notices, four promotions each on three of them (a quarter of the pages, below
+    # every share rule), a stock sentence closing four notices as a paragraph of theirs
+    make_clinic(tmp_path / "inbox", range(12))
+    (tmp_path / "p.yaml").write_text("version: 1\nname: clinic\n")
+    result = run(RunOptions(inbox=tmp_path / "inbox", policy=load_policy(tmp_path / "p.yaml"),
+                            out=tmp_path / "out", as_of=AS_OF))
+    report = json.loads(result.report_path.read_text())
+    assert [d["decision"] for d in report["documents"]] == ["accepted"] * 12
+    for path, text in clinic_texts(tmp_path / "out", report).items():
+        n = int(path.split("-")[1].split(".")[0])
+        assert not any(promo in text for promo in PROMOS), path
+        assert all(prose(700 + 10 * n + k, 30) in text for k in range(3)), path
+        assert (STOCK in text) == (n % 3 == 0), path
+
+
+def test_a_first_run_of_few_pages_keeps_a_promotion_a_later_run_learns_it(tmp_path):
+    # four pages, two promotions each on two: too few documents to call either template,
+    # and nothing of the pages' own goes; a later run adds four pages, and the stored
+    # pages' blocks (from the cache) give each promotion its third document
+    pool = PROMOS[:2]
+    make_clinic(tmp_path / "first", range(4), pool)
+    (tmp_path / "p.yaml").write_text("version: 1\nname: clinic\n")
+    loaded, out = load_policy(tmp_path / "p.yaml"), tmp_path / "out"
+    result = run(RunOptions(inbox=tmp_path / "first", policy=loaded, out=out, as_of=AS_OF))
+    report = json.loads(result.report_path.read_text())
+    for path, text in clinic_texts(out, report).items():
+        n = int(path.split("-")[1].split(".")[0])
+        assert pool[n % 2] in text and prose(700 + 10 * n, 30) in text
+    make_clinic(tmp_path / "later", range(4, 8), pool)
+    result = run(RunOptions(inbox=tmp_path / "later", policy=loaded, out=out, as_of=AS_OF,
+                            incremental=True))
+    report = json.loads(result.report_path.read_text())
+    texts = clinic_texts(out, report)
+    assert len(texts) == 4
+    for path, text in texts.items():
+        n = int(path.split("-")[1].split(".")[0])
+        assert not any(promo in text for promo in pool), path
+        assert prose(700 + 10 * n + 1, 30) in text
+
+
+def test_a_block_on_versions_of_one_document_is_not_recurring_template():
+    # a notice republished three times (updated, printable) shares its paragraphs with its
+    # versions: one document, not three, and its blocks stay; a line on three different
+    # notices (own blocks 10.., 20.., 30..) is recurring
+    pages = [page("v.example.org", [50, 51, 52, 53, 60 + i], [1]) for i in range(3)]
+    pages += [page("v.example.org", [100 * k + j for j in range(4)] + [77], [1])
+              for k in range(1, 4)]
+    pages += [page("v.example.org", [1000 + k], [1]) for k in range(4)]
+    recurring = templates.learn(pages)["v.example.org"][7].tolist()
+    assert recurring == [77]
+
+
+def test_a_recurring_block_goes_only_out_of_line_with_the_pages_text():
+    own = [(prose(40 + k, 25), {"markup": "p"}) for k in range(3)]
+    promo = ("Ask about the monthly plan for your visits.", {"markup": "div.promo"})
+    stock = (STOCK, {"markup": "p"})
+    head = ("How to comment", {"kind": "heading", "markup": "h2"})
+    advice = ("Fill a kettle before the work begins.", {"kind": "item", "markup": "li"})
+    blocks = _blocks(own[0], promo, own[1], head, stock, advice, own[2])
+    # the promotion, the heading, the stock sentence and the stock list item recur
+    recurring = (blocks[1].hash, blocks[3].hash, blocks[4].hash, blocks[5].hash)
+    text = "\n".join(b.text for b in blocks)
+    cleaned, info = templates.compose(text, blocks, ((), (), (), (), (), recurring))
+    assert promo[0] not in cleaned and info["kept"] == "main"
+    # the stock paragraph is marked up as the notice's paragraphs, its heading heads it, and
+    # a list item is the page's structure, not a box put into it
+    assert cleaned == "\n".join(b.text for b in blocks if b is not blocks[1])

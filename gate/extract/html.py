@@ -184,7 +184,9 @@ def page_blocks(root: lxml.etree._Element, main_text: str) -> tuple[Block, ...]:
     return _marked(found, _line_digests(main_text, found))
 
 
-Walked = list[tuple[str, int, float, str, float]]  # each block's text, hash, links, kind, lead
+# each block's text, hash, links, kind, lead and markup (its holder's tag and class, after
+# those of the block element holding that: "article>p", "div.ad>p")
+Walked = list[tuple[str, int, float, str, float, str]]
 
 
 def _line_digests(text: str, found: Walked) -> list[int | None]:
@@ -198,7 +200,8 @@ def _marked(found: Walked, digests: list[int | None]) -> tuple[Block, ...]:
     the same words."""
     main = set(digests)
     return tuple(Block(text=text, hash=digest, main=digest in main, links=links, kind=kind,
-                       lead=lead) for text, digest, links, kind, lead in found)
+                       lead=lead, markup=markup)
+                 for text, digest, links, kind, lead, markup in found)
 
 
 def _walk(root: lxml.etree._Element) -> Walked:
@@ -208,6 +211,7 @@ def _walk(root: lxml.etree._Element) -> Walked:
     found: Walked = []
     parts: list[str] = []
     holders: list[str] = ["body"]
+    marks: list[str] = ["", "body"]  # the holders' tags with their classes
     linked = 0
     in_link = 0
     in_pre = 0
@@ -233,7 +237,7 @@ def _walk(root: lxml.etree._Element) -> Walked:
                 if digest is not None:
                     found.append((text, digest, round(min(1.0, linked / len(text)), 3), kind,
                                   round(min(1.0, lead / len(text)), 3)
-                                  if len(pieces) == 1 else 0.0))
+                                  if len(pieces) == 1 else 0.0, f"{marks[-2]}>{marks[-1]}"))
         linked = lead = 0
         unlinked = False
 
@@ -268,6 +272,8 @@ def _walk(root: lxml.etree._Element) -> Walked:
                 if parts:
                     flush()
                 holders.append(tag)
+                classes = node.get("class")
+                marks.append(f"{tag}.{' '.join(sorted(classes.split()))}" if classes else tag)
                 if tag == "pre":
                     in_pre += 1
             if tag == "a":
@@ -284,6 +290,7 @@ def _walk(root: lxml.etree._Element) -> Walked:
                 if parts:
                     flush()
                 holders.pop()
+                marks.pop()
                 if tag == "pre":
                     in_pre -= 1
             if node is start:

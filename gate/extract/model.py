@@ -95,6 +95,10 @@ class Block:
     lead: float = 0.0
     nav: bool = False  # navigation by its structure (a run of teasers), never the text
     title: bool = False  # the page's title (its one ``<h1>``, HTML)
+    # the element holding it and the block element around that, by tag and class
+    # ("article>p", "article>div.promo", "div.ad>p"; HTML, else ""): a block marked up
+    # unlike the paragraphs around it was put there by the template
+    markup: str = ""
 
 
 @dataclass
