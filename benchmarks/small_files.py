@@ -185,6 +185,7 @@ def timed(inbox: Path, policy: Path, out: Path, workers: int, cores: int,
           f"{cores / total:.0f} documents/s on {cores} cores (500/s needs less than "
           f"{cores / 500 * 1000:.1f} ms: some stages run in the parent alone)")
     print("  parent CPU per document by stage: " + clock.per_document(docs))
+    print("  elapsed time per document by stage: " + clock.wall_per_document(docs))
     if result.timings:
         print("  worker CPU per document in extraction and measures (work.process): " +
               ", ".join(f"{name} {spent / docs * 1000:.2f} ms"

@@ -13,12 +13,15 @@ class StageClock:
         self.stages: dict[str, float] = {}
         self.current: str | None = "starting"  # discovery, warming the parsers up
         self.since = time.process_time()
+        self.walls: dict[str, float] = {}  # elapsed time per stage, beside the CPU time
+        self.wall_since = time.perf_counter()
 
     def stage(self, name: str, total: int | None) -> None:
-        now = time.process_time()
+        now, wall = time.process_time(), time.perf_counter()
         if self.current is not None:
             self.stages[self.current] = self.stages.get(self.current, 0.0) + now - self.since
-        self.current, self.since = name, now
+            self.walls[self.current] = self.walls.get(self.current, 0.0) + wall - self.wall_since
+        self.current, self.since, self.wall_since = name, now, wall
 
     def advance(self, path: str | None = None) -> None:
         pass
@@ -30,3 +33,8 @@ class StageClock:
         """``stage x.xx ms, ...`` per document."""
         return ", ".join(f"{name} {spent / docs * 1000:.2f} ms"
                          for name, spent in self.stages.items())
+
+    def wall_per_document(self, docs: int) -> str:
+        """``stage x.xx ms, ...`` of elapsed time per document."""
+        return ", ".join(f"{name} {spent / docs * 1000:.2f} ms"
+                         for name, spent in self.walls.items())
