@@ -251,6 +251,8 @@ class Screen:
                                (source, start, end), kind)
                 for hit in self.scan(inner, depth + 1):
                     hit["decoded"] = visible(message, 300)
+                    if kind in unicode.DISGUISED:  # show the line as written, tricks and all
+                        hit["snippet"] = visible(text[start:end], 240)
                     content.append(hit)
             for payload in encoded.find(text, self.budget):
                 inner = Source(payload.text,
@@ -773,6 +775,9 @@ def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]
             sources.append(Source(piece.text, piece.where, piece.technique, "html"))
         links = collected.links
         markup = extraction.decoded or ""
+        for payload in encoded.markup_references(markup):  # letters written as &#x..;
+            sources.append(Source(payload.text, "HTML character references in the page markup",
+                                  payload.encoding, "html"))
         raw = _raw_text(extraction.tree) if (not markup.isascii() or "&#" in markup) else ""
         if raw and not raw.isascii() and _invisible_message(raw) and \
                 not _invisible_message(extraction.text or ""):
