@@ -265,7 +265,11 @@ def find(text: str, budget: list[int], _joined: bool = False) -> list[Payload]:
             tried += 1
             start = m.end()
             chunk = text[start:start + 2000]
-            keep("rot13", start, start + len(chunk), codecs.decode(chunk, "rot13"))
+            words = _LETTERS.findall(chunk.lower())
+            if sum(w in _ROT13_COMMON for w in words) > sum(w in COMMON for w in words):
+                # only when the rotated text reads better: plain text after a mention of
+                # ROT13 (a lesson, a codec's manual) turns into gibberish and is left
+                keep("rot13", start, start + len(chunk), codecs.decode(chunk, "rot13"))
             break
     return found
 

@@ -84,6 +84,27 @@ DATA_CUE = re.compile(
     r"kullanici|kullanıcı|sohbet|pengguna|percakapan)", re.I)
 
 
+# Words around an address with a placeholder that ask for the placeholder to be filled
+# with the user's data ("where USER_QUESTION is the user's last message", "with the real
+# values filled in", "replace USER_EMAIL with ...").
+FILL_CUE = re.compile(
+    r"\b(?:replac\w*|fill\w*|substitut\w*|real\s+(?:value|data|text)|actual\s+(?:value|data|"
+    r"text)|url-?encoded|where\s+\S+\s+(?:is|are)\b|from\s+the\s+(?:conversation|chat)|"
+    r"ersetz\w*|remplac\w*|reemplaz\w*|sostitui\w*|substitu\w*|vervang\w*|zastap\w*|"
+    r"заменит\w*|подстав\w*)", re.I)
+FILLED_BOOST = 0.25
+IMAGE_EXT = re.compile(r"\.(?:png|gif|jpe?g|svg|webp|bmp|ico)$", re.I)
+
+
+def filled(context: str) -> str | None:
+    """The cue when the words around an address ask for its placeholder to be filled with
+    the user's or the conversation's data; None otherwise."""
+    cue = FILL_CUE.search(context)
+    if cue and DATA_CUE.search(context):
+        return cue.group()
+    return None
+
+
 def slot(url: str, context: str) -> tuple[float, str] | None:
     """An empty last query parameter that the words around it (or the address) give to the
     model to fill with the user's data; None otherwise."""
@@ -121,6 +142,8 @@ def judge(url: str, kind: str) -> tuple[float, str] | None:
     weak = None
     for m in _PLACEHOLDER.finditer(url):
         name = unquote(next((g for g in m.groups() if g), ""))
+        if IDENTIFIER.search(name):
+            continue  # {conversation_id}, {message_id}: how API paths look
         if _CAPITALS.match(m.group()):
             if CREDENTIAL.search(name):
                 continue
@@ -133,7 +156,7 @@ def judge(url: str, kind: str) -> tuple[float, str] | None:
             return (0.55 if image else 0.4,
                     f"the address has a placeholder for conversation content or secrets "
                     f"({m.group()[:60]})")
-        if weak is None and WEAK_NAME.search(name) and not IDENTIFIER.search(name):
+        if weak is None and WEAK_NAME.search(name):
             weak = (0.3 if image else 0.2,
                     f"the address has a placeholder for user data ({m.group()[:60]})")
     if weak is not None:
@@ -170,10 +193,18 @@ def scan(text: str, links: list[tuple[str, str]] | None = None,
         verdict = judge(url, kind)
         if verdict is None and start >= 0:
             verdict = slot(url, text[max(0, start - SLOT_CONTEXT):end + SLOT_CONTEXT])
-        elif verdict is not None and verdict[0] < 0.5 and start >= 0:
-            asked = slot(url, text[max(0, start - SLOT_CONTEXT):end + SLOT_CONTEXT])
+        elif verdict is not None and verdict[0] < 0.7 and start >= 0:
+            asked = verdict[0] < 0.5 and slot(url, text[max(0, start - SLOT_CONTEXT):
+                                                        end + SLOT_CONTEXT])
+            cue = None if asked else filled(text[max(0, start - SLOT_CONTEXT):start] + " " +
+                                            text[end:end + SLOT_CONTEXT])
             if asked:  # a slot named for chat data, and the words around ask to fill it
                 verdict = (min(verdict[0] + 0.25, 0.55), verdict[1] + "; " + asked[1])
+            elif cue and verdict[0] < (0.7 if kind == "image" else 0.6):  # a placeholder, and the words around ask for it to be filled
+                cap = 0.7 if kind == "image" else 0.6
+                verdict = (min(verdict[0] + FILLED_BOOST, cap),
+                           f"{verdict[1]}; the text around it asks for it to be filled with "
+                           f"the user's data ({cue!r})")
         elif verdict is None:
             verdict = slot(url, "")
         if verdict is not None:
@@ -190,7 +221,9 @@ def scan(text: str, links: list[tuple[str, str]] | None = None,
                      m.start(), m.end())
     if "://" in text:
         for m in _BARE_URL.finditer(text):
-            consider(m.group(), "address", m.start(), m.end())
+            path = m.group().split("?", 1)[0].split("#", 1)[0]
+            consider(m.group(), "image" if IMAGE_EXT.search(path) else "address", m.start(),
+                     m.end())
     if "mailto:" in text.lower():
         for m in _MAILTO.finditer(text):
             consider(m.group(), "link", m.start(), m.end())
