@@ -422,3 +422,33 @@ def collect(root: lxml.etree._Element | None) -> Collected:
     return Collected(pieces, links, hidden_chars)
 
 
+
+
+# Markdown that renders without showing some of its text: the title of a link or image
+# (shown only on hover), and the title of a link reference definition (the definition line
+# is not rendered at all).
+_MD_TITLE = re.compile(r"\]\(\s*<?[^)\s>]{1,2048}>?\s+(?:\"([^\"\n]{8,400})\"|'([^'\n]{8,400})')"
+                       r"\s*\)")
+_MD_REFERENCE = re.compile(r"^ {0,3}\[[^\]\n]{1,100}\]:\s*<?\S{1,2048}>?\s+(?:\"([^\"\n]{8,400})\"|"
+                           r"'([^'\n]{8,400})'|\(([^()\n]{8,400})\))[ \t]*$", re.M)
+MAX_MARKDOWN_PIECES = 200
+
+
+def markdown_pieces(text: str) -> list[tuple[str, str, str]]:
+    """``(text, where, technique)`` for each Markdown link title and reference-definition
+    title of ``text`` (see above); at most :data:`MAX_MARKDOWN_PIECES`."""
+    out: list[tuple[str, str, str]] = []
+    if "](" in text:
+        for m in _MD_TITLE.finditer(text[:MAX_CHARS]):
+            out.append((m.group(1) or m.group(2),
+                        "the title of a Markdown link (shown only on hover)", "link-title"))
+            if len(out) >= MAX_MARKDOWN_PIECES:
+                return out
+    if "]:" in text:
+        for m in _MD_REFERENCE.finditer(text[:MAX_CHARS]):
+            out.append((m.group(1) or m.group(2) or m.group(3),
+                        "the title of a Markdown link reference definition (not rendered)",
+                        "link-title"))
+            if len(out) >= MAX_MARKDOWN_PIECES:
+                break
+    return out

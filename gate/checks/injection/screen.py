@@ -804,6 +804,8 @@ def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]
         if front and front.group(1).strip():  # YAML front matter: metadata, not rendered
             sources.append(Source(front.group(1), "the YAML front matter", "front-matter",
                                   "text"))
+        for piece, where, technique in html_hidden.markdown_pieces(raw):  # link titles
+            sources.append(Source(piece, where, technique, "text"))
         if "<!--" in raw:
             for i, m in enumerate(_MD_COMMENT.finditer(raw[:MAX_TEXT])):
                 if i >= 200:
