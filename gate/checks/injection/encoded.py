@@ -21,6 +21,7 @@ from __future__ import annotations
 import base64
 import binascii
 import codecs
+import functools
 import html
 import quopri
 import re
@@ -41,7 +42,7 @@ _PERCENT = re.compile(r"(?:%[0-9A-Fa-f]{2}[A-Za-z0-9._~+\-]{0,16}){6,}")
 _ESCAPES = re.compile(r"(?:\\x[0-9A-Fa-f]{2}){8,}|"
                       r"(?:\\u[0-9A-Fa-f]{4}[^\\\n]{0,12}){6,}")
 _ENTITIES = re.compile(r"(?:&#(?:[xX][0-9A-Fa-f]{1,6}|\d{1,7});[^&<\n]{0,12}){6,}")
-_QP = re.compile(r"(?:=[0-9A-F]{2}[^=\n]{0,12}|=\r?\n){6,}")
+_QP = re.compile(r"(?:=[0-9A-F]{2}[^=\n]{0,20}|=\r?\n){6,}")
 _UESC = re.compile(r"\\u([0-9A-Fa-f]{4})")
 _ARMOUR = re.compile(r"-----BEGIN [A-Z0-9 ]{3,40}-----.{0,200000}?-----END [A-Z0-9 ]{3,40}-----",
                      re.S)
@@ -144,10 +145,10 @@ def _inside(pos: int, ranges: list[tuple[int, int]]) -> bool:
 
 # A run hard-wrapped over lines (a PDF's text lines, a mail body at 76 columns): two or more
 # consecutive lines that are each one token of an encoding's alphabet, joined before decoding.
-_WRAPPED = re.compile(r"^[ \t]*[A-Za-z0-9+/=%\\&#;_~.\-]{16,}[ \t]*\r?\n"
-                      r"(?:[ \t]*[A-Za-z0-9+/=%\\&#;_~.\-]{16,}[ \t]*\r?\n){0,400}"
-                      r"[ \t]*[A-Za-z0-9+/=%\\&#;_~.\-]{1,}[ \t]*$", re.M)
-_WRAP_MARKS = re.compile(r"[0-9A-Za-z+/]{16}|%[0-9A-Fa-f]{2}|\\[ux]|&#")
+_WRAPPED = re.compile(r"^[ \t]*[A-Za-z0-9+/=%\\&#;:,_~.\-]{16,}[ \t]*\r?\n"
+                      r"(?:[ \t]*[A-Za-z0-9+/=%\\&#;:,_~.\-]{16,}[ \t]*\r?\n){0,400}"
+                      r"[ \t]*[A-Za-z0-9+/=%\\&#;:,_~.\-]{1,}[ \t]*$", re.M)
+_WRAP_MARKS = re.compile(r"[0-9A-Za-z+/]{16}|%[0-9A-Fa-f]{2}|=[0-9A-F]{2}|\\[ux]|&#")
 MAX_WRAPPED = 20
 
 
@@ -157,7 +158,11 @@ def _wrapped(text: str) -> list[tuple[int, int, str]]:
         return []
     out = []
     for m in _WRAPPED.finditer(text):
-        joined = "".join(line.strip() for line in m.group().splitlines())
+        lines = [line.strip() for line in m.group().splitlines()]
+        # "=" closing a line is a quoted-printable soft break (RFC 2045 §6.7 rule 5); base64
+        # pads only its last line
+        joined = "".join(line[:-1] if line.endswith("=") else line for line in lines[:-1]) + \
+            lines[-1]
         out.append((m.start(), m.end(), joined))
         if len(out) >= MAX_WRAPPED:
             break
@@ -241,7 +246,7 @@ def find(text: str, budget: list[int], _joined: bool = False) -> list[Payload]:
             if m.group().startswith("\\x"):
                 end = m.end()
             keep(encoding, start, end, _decode(encoding, text[start:end][:MAX_RUN]))
-    if _REVERSED_CUE.search(text, 0, 200_000):
+    if _REVERSED_CUE.search(text, 0, 200_000) or _reversed_cue().search(text, 0, 200_000):
         for start, end in _reversed_lines(text[:200_000]):
             if tried >= MAX_CANDIDATES:
                 break
@@ -295,6 +300,25 @@ def markup_references(markup: str, limit: int = 20) -> list[Payload]:
         if text:
             out.append(Payload("HTML character references", m.start(), m.end(), text))
     return out
+
+
+# A decoded text that opens by calling an automated reader ("Assistant: ...", "AI helper,
+# ..."): encoding hides it from people, so it can only be meant for the model.
+_READER_OPENING = re.compile(
+    r"\s*(?:(?:dear|note\s+(?:to|for)|attention|for\s+the)\s+)?(?:the\s+)?(?:ai|assistant|"
+    r"(?:ai\s+|language\s+)?(?:model|helper|system|agent|assistant)s?|llm|bot|chatbot|"
+    r"copilot|summari[sz]er)\s*[:,\u2014-]\s", re.I)
+ADDRESSED_WORDS = 6  # words the rest of the decoded text needs
+
+
+def addressed(decoded: str) -> tuple[int, str] | None:
+    """(end of its first sentence, the address) when a decoded payload opens by calling
+    an automated reader and goes on for :data:`ADDRESSED_WORDS` words or more."""
+    m = _READER_OPENING.match(decoded[:200])
+    if not m or len(decoded[m.end():].split()) < ADDRESSED_WORDS:
+        return None
+    end = decoded.find(".", m.end())
+    return (len(decoded) if end < 0 else end + 1), m.group().strip()
 
 
 # English written backwards: its commonest words reversed ("eht", "dna", "ot", "fo" ...).
@@ -427,23 +451,42 @@ def _leet_lines(text: str) -> list[tuple[int, int, str]]:
     return out
 
 
+@functools.lru_cache(maxsize=1)
+def _reversed_words() -> frozenset[str]:
+    """The common words (:data:`COMMON`) written backwards, less those that read as a
+    common word either way ("on"/"no", "saw"/"was")."""
+    return _REVERSED | (frozenset(w[::-1] for w in COMMON if len(w) > 2) - COMMON)
+
+
+@functools.lru_cache(maxsize=1)
+def _reversed_cue() -> re.Pattern[str]:
+    return re.compile(r"(?<![\w.])(?:" + "|".join(sorted(w for w in _reversed_words()
+                                                           if len(w) > 3)) + r")(?!\w)")
+
+
 def _reversed_lines(text: str) -> list[tuple[int, int]]:
-    """Lines of English written backwards: at least three reversed common words (or one,
-    when the line starts with a full stop and ends with a capital), more than forwards, and
-    at least 15 % of the line's words."""
+    """Lines (or the part of a line after a label, "Ref: .ylno hctuD ...") of English
+    written backwards: at least three reversed common words (or one, when the line starts
+    with a full stop and ends with a capital), more than forwards, and at least 15 % of
+    the line's words."""
     out: list[tuple[int, int]] = []
     at = 0
+    backwards = _reversed_words()
     for line in text.split("\n"):
         start, at = at, at + len(line) + 1
         if not 20 <= len(line) <= 2000 or " " not in line:
             continue
+        label = _LABEL.search(line[:60])
+        if label and line[label.end():].lstrip()[:1] in ".!?":
+            start, line = start + label.end(), line[label.end():]
         words = _LETTERS.findall(line.lower())
-        back = sum(w in _REVERSED or w.startswith("gni") for w in words)
+        # two-letter words ("si", "ni", "on") are Spanish, French or Italian as often
+        back = sum(len(w) > 2 and w in backwards or w.startswith("gni") for w in words)
         body = line.strip()
         # A sentence turned round starts with its full stop and ends with its capital.
         turned = body[:1] in ".!?" and body[-1:].isupper() and body[-2:-1].islower()
         if (back >= 3 or turned and back >= 1) and back >= 0.15 * len(words) and \
-                back > sum(w in _FORWARD for w in words):
+                back > sum(w in COMMON for w in words):
             lead = len(line) - len(line.lstrip())
             out.append((start + lead, start + len(line.rstrip())))
             if len(out) >= 5:

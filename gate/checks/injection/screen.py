@@ -261,11 +261,13 @@ class Screen:
                                (source, payload.start, payload.end), payload.encoding)
                 inner_hits = self.scan(inner, depth + 1)
                 opening = None if inner_hits else _imperative(payload.text)
-                if opening:
+                called = None if inner_hits or opening else encoded.addressed(payload.text)
+                if opening or called:
+                    end, what = (opening[0], f"the imperative \"{opening[1]}\"") if opening \
+                        else (called[0], f"an address to the AI reader \"{called[1]}\"")
                     inner_hits = [self._hit(inner, "instruction", IMPERATIVE_WEIGHT, 0,
-                                            opening[0], payload.text, lang="en",
-                                            note=f"the decoded text opens with the imperative "
-                                                 f"\"{opening[1]}\"")]
+                                            end, payload.text, lang="en",
+                                            note=f"the decoded text opens with {what}")]
                     self.hits.extend(inner_hits)
                 if inner_hits:
                     for hit in inner_hits:
