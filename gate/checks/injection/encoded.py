@@ -442,6 +442,9 @@ def _leet_lines(text: str) -> list[tuple[int, int, str]]:
         words = [w for w in read if len(w) > 1 and w.replace("'", "").isalpha()]
         if sum(len(w) > 2 for w in words) < LEET_MIN or sum(w in COMMON for w in words) < 2:
             continue  # digits that read as no words: part numbers, versions, hashes
+        label = _LABEL.search(body[:60])
+        if label and not _LEET_CUE.search(body, 0, label.start()):
+            line, body = line + label.end(), body[label.end():]  # a plain label ("Ref: ")
         plain = _LEET_WORD.sub(lambda m: m.group() if m.group().isdigit() and
                                len(m.group()) > 2 else _leet_word(m.group()), body)
         lead = len(body) - len(body.lstrip())
