@@ -154,10 +154,12 @@ MAX_WRAPPED = 20
 
 def _wrapped(text: str) -> list[tuple[int, int, str]]:
     """(start, end, joined) for each hard-wrapped run of two or more lines."""
-    if "\n" not in text or not _WRAP_MARKS.search(text):
+    if "\n" not in text:
         return []
     out = []
     for m in _WRAPPED.finditer(text):
+        if not _WRAP_MARKS.search(m.group()):
+            continue
         lines = [line.strip() for line in m.group().splitlines()]
         # "=" closing a line is a quoted-printable soft break (RFC 2045 §6.7 rule 5); base64
         # pads only its last line
@@ -246,7 +248,7 @@ def find(text: str, budget: list[int], _joined: bool = False) -> list[Payload]:
             if m.group().startswith("\\x"):
                 end = m.end()
             keep(encoding, start, end, _decode(encoding, text[start:end][:MAX_RUN]))
-    if _REVERSED_CUE.search(text, 0, 200_000) or _reversed_cue().search(text, 0, 200_000):
+    if _REVERSED_CUE.search(text, 0, 200_000) or _turned(text[:200_000]):
         for start, end in _reversed_lines(text[:200_000]):
             if tried >= MAX_CANDIDATES:
                 break
@@ -326,7 +328,19 @@ _REVERSED = frozenset("eht dna ot fo ni si uoy ruoy rof taht htiw eb siht no sa 
                       "resu eseht lla ton od nehw".split())
 _FORWARD = frozenset("the and to of in is you your for that with be this on as at or by it are "
                      "user these all not do when".split())
-_REVERSED_CUE = re.compile(r" (?:eht|dna|ot|fo|uoy|ni|si) ")
+_REVERSED_CUE = re.compile(r" (?:eht|dna|ot|fo|uoy|ruoy|ni|si|lla|siht|yas|htiw|rof|taht|"
+                           r"dluohs|tsum|nehw|ton) ")
+_TURNED = re.compile(r"[A-Z][ \t]*\n")  # opens with a capital: cheap to search
+
+
+def _turned(text: str) -> bool:
+    """Does a line end in a capital after a small letter (a sentence turned round)?"""
+    for n, m in enumerate(_TURNED.finditer(text + "\n")):
+        if m.start() > 0 and text[m.start() - 1].islower():
+            return True
+        if n > 2000:
+            break
+    return False
 _LETTERS = re.compile(r"[a-z]+")
 
 
@@ -349,6 +363,9 @@ _ROT13_COMMON = frozenset(codecs.encode(w, "rot13") for w in COMMON if len(w) > 
 _ROT13_CUE = re.compile(r"\b(?:" + "|".join(sorted(w for w in _ROT13_COMMON if len(w) > 2))
                         + r"|gb|va|vf|bs|ab|vg|jr|ur|zr)\b")
 ROT13_MIN = 3  # ROT13 words of common English in one line, at least
+# ROT13 English holds one of these almost always ("the", "to", "and", "a", "you" ...).
+_ROT13_GATE = (" gur ", " gb ", " naq ", " n ", " lbh", " bs ", " vf ", " va ", " sbe ",
+               " nobhg ", " jvgu ", " guvf ", " nyy ")
 _LABEL = re.compile(r"[:\u2014\u2013]\s")  # "Build id: <rot13>", "For the assistant — <rot13>"
 
 
@@ -365,6 +382,8 @@ def _rot13_lines(text: str) -> list[tuple[int, int]]:
     least three common English words once rotated, a quarter of its words, and more than
     twice as many as it has as it stands."""
     lowered = text.lower()
+    if not any(cue in lowered for cue in _ROT13_GATE):
+        return []
     cues: dict[int, set[str]] = {}
     for n, m in enumerate(_ROT13_CUE.finditer(lowered)):
         if n > 4000:
@@ -404,6 +423,9 @@ _LEET_WORD = re.compile(r"[A-Za-z0-9@$|!+]*[0-9@$|!+][A-Za-z0-9@$|!+']*")
 _LEET_CUE = re.compile(r"(?<![\w.,:/-])(?=[a-z0-9@$]*[a-z])(?=[a-z@$]*[013457])"
                        r"[a-z0-9@$]{2,20}(?![\w/-])", re.I)
 LEET_MIN = 3  # leet words in one line, at least
+# A digit read as a letter before a letter ("7h", "0c", "3n"): every leet word of two
+# letters or more has one; a pattern that opens with digits is cheap to search.
+_LEET_PAIR = re.compile(r"[013457][A-Za-z]")
 
 
 def _leet_word(token: str) -> str:
@@ -420,12 +442,17 @@ def _leet_lines(text: str) -> list[tuple[int, int, str]]:
     """Lines in leetspeak: at least three tokens mixing letters with digits read as letters,
     making up at least a third of the line's words, at least three of them reading as words
     and two of those common English words (a part number or a version list reads as none)."""
-    lines: dict[int, int] = {}
-    for n, m in enumerate(_LEET_CUE.finditer(text)):
+    pairs: dict[int, int] = {}
+    for n, m in enumerate(_LEET_PAIR.finditer(text)):
         if n > 4000:
             break
         line = text.rfind("\n", 0, m.start()) + 1
-        lines[line] = lines.get(line, 0) + 1
+        pairs[line] = pairs.get(line, 0) + 1
+    lines: dict[int, int] = {}
+    for line, count in pairs.items():
+        if count >= 2:
+            end = text.find("\n", line)
+            lines[line] = len(_LEET_CUE.findall(text, line, len(text) if end < 0 else end))
     out: list[tuple[int, int, str]] = []
     for line, count in lines.items():
         if count < 2:
@@ -459,12 +486,6 @@ def _reversed_words() -> frozenset[str]:
     """The common words (:data:`COMMON`) written backwards, less those that read as a
     common word either way ("on"/"no", "saw"/"was")."""
     return _REVERSED | (frozenset(w[::-1] for w in COMMON if len(w) > 2) - COMMON)
-
-
-@functools.lru_cache(maxsize=1)
-def _reversed_cue() -> re.Pattern[str]:
-    return re.compile(r"(?<![\w.])(?:" + "|".join(sorted(w for w in _reversed_words()
-                                                           if len(w) > 3)) + r")(?!\w)")
 
 
 def _reversed_lines(text: str) -> list[tuple[int, int]]:
