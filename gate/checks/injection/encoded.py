@@ -248,7 +248,7 @@ def find(text: str, budget: list[int], _joined: bool = False) -> list[Payload]:
             if m.group().startswith("\\x"):
                 end = m.end()
             keep(encoding, start, end, _decode(encoding, text[start:end][:MAX_RUN]))
-    if _REVERSED_CUE.search(text, 0, 200_000) or _turned(text[:200_000]):
+    if _REVERSED_CUE.search(text, 0, 200_000):
         for start, end in _reversed_lines(text[:200_000]):
             if tried >= MAX_CANDIDATES:
                 break
@@ -330,17 +330,6 @@ _FORWARD = frozenset("the and to of in is you your for that with be this on as a
                      "user these all not do when".split())
 _REVERSED_CUE = re.compile(r" (?:eht|dna|ot|fo|uoy|ruoy|ni|si|lla|siht|yas|htiw|rof|taht|"
                            r"dluohs|tsum|nehw|ton) ")
-_TURNED = re.compile(r"[A-Z][ \t]*\n")  # opens with a capital: cheap to search
-
-
-def _turned(text: str) -> bool:
-    """Does a line end in a capital after a small letter (a sentence turned round)?"""
-    for n, m in enumerate(_TURNED.finditer(text + "\n")):
-        if m.start() > 0 and text[m.start() - 1].islower():
-            return True
-        if n > 2000:
-            break
-    return False
 _LETTERS = re.compile(r"[a-z]+")
 
 
@@ -364,8 +353,7 @@ _ROT13_CUE = re.compile(r"\b(?:" + "|".join(sorted(w for w in _ROT13_COMMON if l
                         + r"|gb|va|vf|bs|ab|vg|jr|ur|zr)\b")
 ROT13_MIN = 3  # ROT13 words of common English in one line, at least
 # ROT13 English holds one of these almost always ("the", "to", "and", "a", "you" ...).
-_ROT13_GATE = (" gur ", " gb ", " naq ", " n ", " lbh", " bs ", " vf ", " va ", " sbe ",
-               " nobhg ", " jvgu ", " guvf ", " nyy ")
+_ROT13_GATE = re.compile(r" (?:gur|gb|naq|n|lbh|lbhe|bs|vf|va|sbe|nobhg|jvgu|guvf|nyy) ")
 _LABEL = re.compile(r"[:\u2014\u2013]\s")  # "Build id: <rot13>", "For the assistant — <rot13>"
 
 
@@ -381,9 +369,9 @@ def _rot13_lines(text: str) -> list[tuple[int, int]]:
     """Lines (or the part of a line after a label) written in ROT13 without a hint: at
     least three common English words once rotated, a quarter of its words, and more than
     twice as many as it has as it stands."""
-    lowered = text.lower()
-    if not any(cue in lowered for cue in _ROT13_GATE):
+    if not _ROT13_GATE.search(text):
         return []
+    lowered = text.lower()
     cues: dict[int, set[str]] = {}
     for n, m in enumerate(_ROT13_CUE.finditer(lowered)):
         if n > 4000:
