@@ -14,7 +14,8 @@ What counts as hidden (technique slugs in parentheses):
   closed ``<details>`` (closed-details), ``<noscript>`` (noscript), non-JavaScript
   ``<script>`` data such as JSON-LD (script-data), ``<input type=hidden>`` values
   (hidden-input);
-* the page ``<title>``, shown in the browser tab only (title-element);
+* the page ``<title>``, shown in the browser tab only, unless a heading repeats it
+  (title-element);
 * HTML comments (comment), attribute text: ``alt``, ``title``, ``aria-label``,
   ``aria-description``, ``placeholder`` (attribute), ``<meta content>`` (meta);
 * text an extractor may drop or a browser draws without it being page text: inline SVG
@@ -392,8 +393,12 @@ def collect(root: lxml.etree._Element | None) -> Collected:
         key = meta.get("name") or meta.get("property") or meta.get("itemprop") or ""
         if content.count(" ") >= 2 and key.lower() not in ("viewport", "robots"):
             add(content, "meta", f"<meta {('name=' + key[:40]) if key else ''}>")
+    headings = {" ".join(_text_of(h, 2_000).split()) for h in
+                root.xpath("//h1|//h2|//h3")[:30]}
     for el in root.xpath("//title[not(ancestor::*[local-name()='svg'])]")[:3]:
-        add(_text_of(el, 2_000), "title-element", "the page <title> (shown in the browser tab)")
+        title = _text_of(el, 2_000)
+        if " ".join(title.split()) not in headings:  # a title the page shows is no secret
+            add(title, "title-element", "the page <title> (shown in the browser tab)")
     for el in root.xpath("//*[local-name()='svg']//*[local-name()='text' or "
                          "local-name()='title' or local-name()='desc']")[:MAX_NODES]:
         add(_text_of(el, 20_000), "svg-text", f"<svg> <{el.tag}>")
