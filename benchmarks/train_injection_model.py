@@ -14,7 +14,7 @@ Data (see ``benchmarks/data/injection_train/README.md``):
 * ``benchmarks/data/injection_blind/``: the first blind set (654 documents), used as
   tuning data since it was looked at twice: benign documents give negative windows; the
   payload of each attack is the lines it does not share with its closest benign host;
-  blind sets 2-5 (``benchmarks/data/injection_blind{2,3,4,5}/``) the same way, each since
+  blind sets 2-6 (``benchmarks/data/injection_blind{2,3,4,5,6}/``) the same way, each since
   it was looked at twice (``--blind-sets``, ``--leave-out blindN``);
 * ``tests/fixtures/injection/``: benign documents give negative windows;
 * real text from Debian documentation packages (manual pages in ten languages, the
@@ -59,7 +59,7 @@ TRAIN_DIR = ROOT / "benchmarks" / "data" / "injection_train"
 BLIND_DIR = ROOT / "benchmarks" / "data" / "injection_blind"
 # The blind sets that are tuning data now (each was looked at and tuned on): name -> folder.
 BLIND_SETS = {"blind1": BLIND_DIR, **{f"blind{n}": ROOT / "benchmarks" / "data" /
-                                      f"injection_blind{n}" for n in (2, 3, 4, 5)}}
+                                      f"injection_blind{n}" for n in (2, 3, 4, 5, 6)}}
 TRAIN24 = "train24"  # the sub-folder of TRAIN_DIR holding the rows written for issue 15
 FIXTURES = ROOT / "tests" / "fixtures" / "injection"
 CACHE = ROOT / "bench-out" / "train-cache"

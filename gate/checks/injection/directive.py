@@ -184,6 +184,7 @@ VOCATIVE_LEAD = frozenset(fold_entry(w) for w in (
     "language large automated artificial intelligence virtual digital "
     "notice reminder important and editors readers liebe lieber liebes hallo an die den "
     "hinweis notiz cher chere cheres pour l remarque querido querida queridos hola para el "
+    "det "
     "la aviso caro cara cari nota per avviso prezado prezada ola beste voor de opmerking "
     "drogi droga do uwaga kara till obs дорогои дорогая привет для заметка примечание "
     "шановнии примітка mily pro poznamka draga pentru nota kedves megjegyzes αγαπητε "
@@ -199,6 +200,7 @@ def features(unit: str) -> tuple[dict[str, set[str]], list[str]]:
     feats: dict[str, set[str]] = {}
     found = list(_TOKEN.finditer(unit))
     tokens = [m.group().replace("\x00", "").rstrip(".'-") for m in found]
+    reader_phrase: set[int] = set()  # tokens of a phrase naming a reader near the start
     for i, token in enumerate(tokens):
         opens = i == 0 or tokens[i - 1] in CLAUSE_OPENERS or \
             unit[:found[i].start()].rstrip()[-1:] in (",", ";", ":", "(", "-", '"')
@@ -222,6 +224,15 @@ def features(unit: str) -> tuple[dict[str, set[str]], list[str]]:
             if len(nxt) == len(rest) and all(
                     t.startswith(w) if star else t == w for t, (w, star) in zip(nxt, rest)):
                 feats.setdefault(lang, set()).add(cat)
+                if cat in ("ai", "bot") and i < 6:
+                    reader_phrase.update(range(i, i + 1 + len(rest)))
+    if reader_phrase and "vocative" not in feats.get("*", ()):
+        # "Note for the automated reader:", "Catatan untuk asisten otomatis:": a label of
+        # lead words and a phrase naming a reader, ending in a colon or comma
+        last = max(reader_phrase)
+        if unit[found[last].end():found[last].end() + 30].lstrip()[:1] in (",", ":") and \
+                all(k in reader_phrase or tokens[k] in VOCATIVE_LEAD for k in range(last)):
+            feats.setdefault("*", set()).add("vocative")
     if _SUB_SCRIPT.search(unit):
         for m in _SUB_RE.finditer(unit):
             lang, cat = _SUB_KEYS[int(m.lastgroup[1:])]
@@ -897,6 +908,21 @@ def _alone_or_listed(hijacks: list[Hit]) -> list[Hit]:
     return hijacks
 
 
+# A line that only names instructions as hidden, injected or forged is a title about them
+# ("HIDDEN INSTRUCTIONS FOR AI ASSISTANTS"), not a notice to the reader.
+DESCRIBED = re.compile(r"\b(?:hidden|injected|planted|malicious|fake|forged|embedded|"
+                       r"invisible|smuggled|concealed|rogue|bogus|poisoned)\s+(?:ai\s+)?"
+                       r"(?:instructions?|prompts?|commands?|notes?|messages?|notices?|text)\b",
+                       re.I)
+TITLE_WORDS = 10
+
+
+def described_title(line: str) -> bool:
+    """Is ``line`` a short title naming instructions as hidden or forged?"""
+    return len(line.split()) <= TITLE_WORDS and bool(DESCRIBED.search(line)) and \
+        not line.rstrip().endswith((":", ","))
+
+
 def _alternate(text: str, found: list[Hit]) -> list[Hit]:
     """Every other line read together: an instruction interleaved with other text."""
     lines = text.split("\n")
@@ -907,7 +933,7 @@ def _alternate(text: str, found: list[Hit]) -> list[Hit]:
     covered = [(h.start, h.end, h.weight) for h in found]
     for parity in (0, 1):
         picked = [(offsets[i], line) for i, line in enumerate(lines)
-                  if i % 2 == parity and line.strip()]
+                  if i % 2 == parity and line.strip() and not described_title(line)]
         if len(picked) < 3:
             continue
         joined = " ".join(line.strip() for _, line in picked)
