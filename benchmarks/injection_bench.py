@@ -73,7 +73,8 @@ def load_corpus(split: str = "all") -> list[dict]:
 
 BLIND = ROOT / "benchmarks" / "data" / "injection_blind"
 # Every blind set so far (all tuning data now): ``--blind all`` measures them in turn.
-BLIND_SETS = [BLIND] + [ROOT / "benchmarks" / "data" / f"injection_blind{n}" for n in (2, 3, 4, 5, 6)]
+BLIND_SETS = [BLIND] + [ROOT / "benchmarks" / "data" / f"injection_blind{n}"
+                        for n in (2, 3, 4, 5, 6)]
 VAL_BYTE = 52  # the instruction model's validation split: about 20 % (52/256)
 
 

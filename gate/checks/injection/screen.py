@@ -945,8 +945,9 @@ def _acrostics(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
 
 
 # "Say — exported transcript. / that — times are local. / the — ...": an instruction spelt
-# by the first word (or first two or three words) of each line, set off from the rest of its line by a dash. Lines that
-# do not open with "word —" (a wrapped continuation) are passed over, long lines count.
+# by the first word (or two or three words: "Note for — ...") of each line, set off from the
+# rest of its line by a dash. Lines that do not open with "word —" (a wrapped continuation)
+# are passed over, long lines count.
 _DASHED = re.compile(r"^[ \t]*([^\s\u2014\u2013]{1,40}(?:[ \t]+[^\s\u2014\u2013]{1,40}){0,2})"
                      r"[ \t]+[\u2014\u2013][ \t]", re.M)
 DASHED_MIN = 4  # dashed lines in a run
@@ -1066,8 +1067,8 @@ FRAGMENT_GAP = 12  # lines of the document's own between two fragments of a chai
 FRAGMENT_CHAINS = 12  # chains read per document, at most
 LONG_LINE_WORDS = 9  # a line of this many words that ends unterminated wraps into the next
 _ITEM_MARK = re.compile(r"^[ \t]*(?:[-*+\u2022>]+[ \t]+|\d{1,3}[.)][ \t]+)")
-_CODE_LINE = re.compile(r"[(){}\[\]=<>$;]\s*$|^\s*(?:import|def|from|return|#include)\b|^\s*[{\[]|\":|"
-                        r"\w\(|\)\s*[:{]|^\s*[\w.]+\s*=\s")
+_CODE_LINE = re.compile(r"[(){}\[\]=<>$;]\s*$|^\s*(?:import|def|from|return|#include)\b|"
+                        r"^\s*[{\[]|\":|\w\(|\)\s*[:{]|^\s*[\w.]+\s*=\s")
 _FENCE = re.compile(r"^[ \t]*(?:```|~~~)")
 _CONTINUED = (":", ",", ";", "\uff1a", "\uff0c", "\u3001")
 _TERMINAL = (".", "!", "?", "\u3002", "\uff01", "\uff1f")
