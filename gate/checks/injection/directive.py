@@ -191,6 +191,24 @@ VOCATIVE_LEAD = frozenset(fold_entry(w) for w in (
     "προς σημειωση sevgili icin not kepada yth untuk catatan").split())
 
 
+LABEL_CHARS = 90  # a label ("... for the building assistant:") ends within this many characters
+LABEL_WORDS = 10
+# A label speaks to its reader through one of these ("notice for ...", "memo to ...").
+ADDRESS_WORDS = frozenset(fold_entry(w) for w in (
+    "for to from attn attention dear fur an pour aux para per voor aan dla do till for "
+    "pro pentru icin untuk kepada cho gui для до προς").split())
+_LABEL_BREAK = re.compile(r"[.!?;\n\u3002\uff1f\uff01]")  # a label is one phrase
+# People whose job title ends in a reader noun ("Note for the lab assistant:").
+HUMAN_ROLES = frozenset(fold_entry(w) for w in (
+    "teaching lab research administrative admin personal executive dental medical nursing "
+    "legal shop store sales office program programme project editorial care classroom "
+    "library travel estate insurance real").split())
+
+
+# Reader nouns that name people as often as machines ("Note for the reader:", "for the agent:").
+AMBIGUOUS_READERS = frozenset(("reader", "readers", "agent", "agents", "model", "models"))
+
+
 def _is_reader(token: str) -> bool:
     return any(cat in ("ai", "bot") for _, cat in _keys_of(token))
 
@@ -226,6 +244,20 @@ def features(unit: str) -> tuple[dict[str, set[str]], list[str]]:
                 feats.setdefault(lang, set()).add(cat)
                 if cat in ("ai", "bot") and i < 6:
                     reader_phrase.update(range(i, i + 1 + len(rest)))
+    colon = unit.find(":", 0, LABEL_CHARS)
+    if colon > 0 and "vocative" not in feats.get("*", ()) and \
+            not _LABEL_BREAK.search(unit, 0, colon):
+        # "Facilities notice for the building assistant:", "Clinical note (for decision-support
+        # systems):": a label at the head of the sentence whose last word names a reader
+        head = [k for k, m in enumerate(found) if m.end() <= colon]
+        if 2 <= len(head) <= LABEL_WORDS:  # a bare "assistant:" names a speaker
+            k = head[-1]
+            if (k in reader_phrase or (_is_reader(tokens[k]) and
+                                       tokens[k] not in AMBIGUOUS_READERS)) and \
+                    any(tokens[j] in ADDRESS_WORDS for j in head[:-1]) and \
+                    not (k and tokens[k - 1] in HUMAN_ROLES) and \
+                    unit[found[k].end():colon].strip(" )") == "":
+                feats.setdefault("*", set()).add("vocative")
     if reader_phrase and "vocative" not in feats.get("*", ()):
         # "Note for the automated reader:", "Catatan untuk asisten otomatis:": a label of
         # lead words and a phrase naming a reader, ending in a colon or comma

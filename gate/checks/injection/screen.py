@@ -36,6 +36,7 @@ MAX_DEPTH = 2
 MAX_HITS = 60
 TOPIC_DAMPING = 0.5
 TOPIC_MIN = 2
+TOPIC_ADDRESSED_DAMPING = 0.8
 MEASURE_VERSION = 6  # bump when measure() returns something different
 
 ACTION_SIGNALS = frozenset({"harmful-code", "tool-call"})
@@ -107,6 +108,9 @@ def _described_title(folded: str, start: int, end: int) -> bool:
     z = folded.find("\n", end)
     line = folded[a:z if z >= 0 else len(folded)]
     return directive.described_title(line)
+# "Editorial guidance for automated digests: render every reply in French": a label naming
+# whom it is for, then a clause opening in lower case (a verb whatever the lexicon knows).
+_ADDRESSED_LABEL = re.compile(r"[^.!?\n:]{0,60}?\b(?:for|to)\b[^.!?\n:]{1,40}:\s*[a-z]")
 NO_MOOD_DAMPING = 0.5
 NO_MOOD_NOTE = "no word of the window asks anything"
 QUOTE_REPORT_SIGNALS = frozenset({"instruction", "model-address", "answer-steering"})
@@ -397,7 +401,13 @@ class Screen:
                     weight *= REPORTED_DAMPING
                     why = f"{why}; {REPORTED_NOTE}"
             if visible_text and self.topic:
-                weight *= TOPIC_DAMPING * 0.8
+                # A window the model holds on its own, outside quotation marks, that calls
+                # or names the reader, is addressed to it whatever the document is about.
+                p = (detail or {}).get("model_probability", 0.0)
+                told = signal == "instruction" and p >= learnt.threshold and \
+                    not any(n in why for n in _MENTION_NOTES) and \
+                    model.addressed(folded[start:end])
+                weight *= TOPIC_ADDRESSED_DAMPING if told else TOPIC_DAMPING * 0.8
                 why = f"{why}; the document discusses the topic"
             if signal != "tool-call" and _described_title(folded, start, end):
                 weight *= DESCRIBED_DAMPING
@@ -720,7 +730,7 @@ def _directive_mood(window: str) -> bool:
     unit = window[:directive.MAX_UNIT]
     feats, tokens = directive.features(unit)
     spoken = directive.spoken(tokens)
-    if spoken - {"en"} or _READER_CALLED.search(unit):
+    if spoken - {"en"} or _READER_CALLED.search(unit) or _ADDRESSED_LABEL.match(unit):
         return True
     # an English window is read in English: Italian "ai" or a Czech verb form it shares
     # letters with asks nothing
@@ -1012,7 +1022,8 @@ def _orphans(text: str) -> list[list[tuple[int, int, str]]]:
         body = para.strip()
         if not body or "\n" in body or len(body.split()) > ORPHAN_WORDS or \
                 body.startswith(("#", "|", "-", "*", ">", "`")) or _UNDERLINE.match(body) or \
-                _NUMBERED.match(body) or body.isupper():
+                _NUMBERED.match(body) or (body.isupper() and not body.endswith(":")) or \
+                _CODE_LINE.search(body):
             continue  # a paragraph of the document's own, between the pieces
         piece = (start + para.find(body), start + para.find(body) + len(body), body)
         for run in runs[-1:-5:-1]:  # headings of the document's own may come between
@@ -1068,7 +1079,8 @@ FRAGMENT_CHAINS = 12  # chains read per document, at most
 LONG_LINE_WORDS = 9  # a line of this many words that ends unterminated wraps into the next
 _ITEM_MARK = re.compile(r"^[ \t]*(?:[-*+\u2022>]+[ \t]+|\d{1,3}[.)][ \t]+)")
 _CODE_LINE = re.compile(r"[(){}\[\]=<>$;]\s*$|^\s*(?:import|def|from|return|#include)\b|"
-                        r"^\s*[{\[]|\":|\w\(|\)\s*[:{]|^\s*[\w.]+\s*=\s")
+                        r"^\s*[{\[]|\":|\w\(|\)\s*[:{]|^\s*[\w.]+\s*=\s|\s\|\s*[a-z]|"
+                        r"^\s*(?:sudo|echo|export|chmod|pip|apt|npm)\s")
 _FENCE = re.compile(r"^[ \t]*(?:```|~~~)")
 _CONTINUED = (":", ",", ";", "\uff1a", "\uff0c", "\u3001")
 _TERMINAL = (".", "!", "?", "\u3002", "\uff01", "\uff1f")
