@@ -1080,7 +1080,7 @@ LONG_LINE_WORDS = 9  # a line of this many words that ends unterminated wraps in
 _ITEM_MARK = re.compile(r"^[ \t]*(?:[-*+\u2022>]+[ \t]+|\d{1,3}[.)][ \t]+)")
 _CODE_LINE = re.compile(r"[(){}\[\]=<>$;]\s*$|^\s*(?:import|def|from|return|#include)\b|"
                         r"^\s*[{\[]|\":|\w\(|\)\s*[:{]|^\s*[\w.]+\s*=\s|\s\|\s*[a-z]|"
-                        r"^\s*(?:sudo|echo|export|chmod|pip|apt|npm)\s")
+                        r"^\s*(?:sudo|echo|export|chmod|pip|apt|npm)\s|^\s*--?[a-z]|\s=\s")
 _FENCE = re.compile(r"^[ \t]*(?:```|~~~)")
 _CONTINUED = (":", ",", ";", "\uff1a", "\uff0c", "\u3001")
 _TERMINAL = (".", "!", "?", "\u3002", "\uff01", "\uff1f")
@@ -1208,6 +1208,8 @@ def _split_fragments(screen: Screen, indexed: Source) -> list[dict[str, Any]]:
     learnt = model.model()
     for chain in _fragment_chains(text):
         sentence = " ".join(p for _, _, p in chain)
+        if _repetitive(lfold(sentence)):
+            continue  # a table of tokens ("any-any-any = any ..."), not a sentence
         start, end = chain[0][0], chain[-1][1]
         why = f"read from {len(chain)} fragments apart: \"{sentence[:200]}\""
         found = [(d.signal, d.weight, d.why, d.lang or None) for d in
