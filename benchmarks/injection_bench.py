@@ -176,6 +176,72 @@ def report_blind(results: list[dict], verbose: bool = False) -> dict:
     return out
 
 
+WHY_CLASSES = ("encoded", "exfiltration", "hidden-placement", "multilingual")
+_ANY_URL = re.compile(r"(?:https?://|mailto:|//)[^\s<>\"')\]]{3,300}|<form\b[^>]{0,300}>", re.I)
+
+
+def why_missed(row: dict) -> str:
+    """The cause of a missed encoded, exfiltration or hidden-placement attack, read from the
+    detectors' parts: was an encoding decoded and its text scored, was an address read and
+    judged, was hidden text extracted and scored? (Tuning sets only: it names documents.)"""
+    from gate.checks.injection import encoded, exfil, screen
+    from gate.extract import extract
+
+    m = row.get("measured") or {}
+    signals = m.get("signals", [])
+    top = ", ".join(f"{h['signal']}:{h['weight']:.2f}" for h in signals[:3]) or "no signal"
+    extraction = extract(row["data"], max_pages=500, max_nesting=250)
+    if not extraction.summary.ok:
+        return f"not extracted ({extraction.summary.problem})"
+    text = extraction.text or ""
+    sources, links, _ = screen._sources(extraction)
+    hidden = [h for h in signals if h.get("technique")]
+    cls = row["technique"]
+    if cls in ("encoded", "multilingual"):
+        budget = [encoded.MAX_DECODED]
+        payloads = [(p.encoding, p.text) for src in [text] + [s.text for s in sources]
+                    for p in encoded.find(src, budget)]
+        if not payloads:
+            return f"encoding not decoded [{row.get('where')}]; score {m.get('score')} ({top})"
+        decoded_hits = [h for h in signals if h.get("decoded")]
+        enc, plain = payloads[0]
+        if not decoded_hits:
+            return (f"decoded ({enc}) but not scored: {plain[:90]!r}; score "
+                    f"{m.get('score')} ({top})")
+        return f"decoded ({enc}), scored low: {m.get('score')} ({top})"
+    if cls == "exfiltration":
+        urls = [u.group() for u in _ANY_URL.finditer(text + " " + " ".join(s.text for s in
+                                                                            sources))]
+        urls += [u for u, _ in links]
+        hits = exfil.scan(text, links)
+        if not urls:
+            return f"no address read; score {m.get('score')} ({top})"
+        if not hits:
+            return (f"address form not recognised: {urls[0][:100]!r} (+{len(urls) - 1}); "
+                    f"score {m.get('score')} ({top})")
+        return f"address recognised ({hits[0].why[:60]}), scored low: {m.get('score')} ({top})"
+    if cls == "hidden-placement":
+        if not sources:
+            return f"no hidden text extracted [{row.get('where')}]; score {m.get('score')} ({top})"
+        techniques = sorted({s.technique or "?" for s in sources})
+        if not hidden:
+            return (f"hidden text read ({', '.join(techniques)[:80]}) but not scored "
+                    f"[{row.get('where')}]; score {m.get('score')} ({top})")
+        return f"hidden text scored low [{row.get('where')}]: {m.get('score')} ({top})"
+    return f"score {m.get('score')} ({top})"
+
+
+def print_why(results: list[dict]) -> None:
+    """One line per missed attack of :data:`WHY_CLASSES`: its cause (see :func:`why_missed`)."""
+    missed = [r for r in results if r["label"] == "attack" and not r["flagged"] and
+              r["technique"] in WHY_CLASSES]
+    if not missed:
+        return
+    print("\nmissed attacks by cause (--why):")
+    for r in sorted(missed, key=lambda r: (r["technique"], r["path"])):
+        print(f"  WHY {r['technique']:<17}{r['path']:<22}{why_missed(r)}")
+
+
 def run(rows: list[dict], repeat: int = 1, threshold: float = 0.5) -> list[dict]:
     from gate.checks.base import Document, RunContext
     from gate.checks.injection import CHECK, InjectionSettings
@@ -325,9 +391,13 @@ def main(argv: list[str] | None = None) -> int:
                         "(e.g. bench-out/leave-out-blind4.npz from train_injection_model.py "
                         "--leave-out blind4: the check on a set its model never saw)")
     parser.add_argument("--verbose", action="store_true")
+    parser.add_argument("--why", action="store_true",
+                        help="for each missed encoded, exfiltration, hidden-placement or "
+                        "multilingual attack of a blind set, print its cause (tuning sets only)")
     args = parser.parse_args(argv)
-    if args.verbose and args.blind_half == "held":
-        parser.error("--verbose lists documents; the held half is read in aggregate only")
+    if (args.verbose or args.why) and args.blind_half == "held":
+        parser.error("--verbose and --why list documents; the held half is read in aggregate "
+                     "only")
     sys.path.insert(0, str(ROOT))
     if args.weights:
         from gate.checks.injection import model as learnt
@@ -367,6 +437,8 @@ def main(argv: list[str] | None = None) -> int:
               f"{args.blind_half})\n")
         bresults = run(brows, repeat=1)
         out = report_blind(bresults, verbose=args.verbose)
+        if args.why:
+            print_why(bresults)
         ext = sum(r["extraction_s"] for r in bresults)
         det = sum(r["detector_s"] for r in bresults)
         n = len(bresults)

@@ -21,6 +21,7 @@ from __future__ import annotations
 import base64
 import binascii
 import codecs
+import functools
 import html
 import quopri
 import re
@@ -41,7 +42,7 @@ _PERCENT = re.compile(r"(?:%[0-9A-Fa-f]{2}[A-Za-z0-9._~+\-]{0,16}){6,}")
 _ESCAPES = re.compile(r"(?:\\x[0-9A-Fa-f]{2}){8,}|"
                       r"(?:\\u[0-9A-Fa-f]{4}[^\\\n]{0,12}){6,}")
 _ENTITIES = re.compile(r"(?:&#(?:[xX][0-9A-Fa-f]{1,6}|\d{1,7});[^&<\n]{0,12}){6,}")
-_QP = re.compile(r"(?:=[0-9A-F]{2}[^=\n]{0,12}|=\r?\n){6,}")
+_QP = re.compile(r"(?:=[0-9A-F]{2}[^=\n]{0,20}|=\r?\n){6,}")
 _UESC = re.compile(r"\\u([0-9A-Fa-f]{4})")
 _ARMOUR = re.compile(r"-----BEGIN [A-Z0-9 ]{3,40}-----.{0,200000}?-----END [A-Z0-9 ]{3,40}-----",
                      re.S)
@@ -142,13 +143,46 @@ def _inside(pos: int, ranges: list[tuple[int, int]]) -> bool:
     return any(a <= pos < b for a, b in ranges)
 
 
-def find(text: str, budget: list[int]) -> list[Payload]:
+# A run hard-wrapped over lines (a PDF's text lines, a mail body at 76 columns): two or more
+# consecutive lines that are each one token of an encoding's alphabet, joined before decoding.
+_WRAPPED = re.compile(r"^[ \t]*[A-Za-z0-9+/=%\\&#;:,_~.\-]{16,}[ \t]*\r?\n"
+                      r"(?:[ \t]*[A-Za-z0-9+/=%\\&#;:,_~.\-]{16,}[ \t]*\r?\n){0,400}"
+                      r"[ \t]*[A-Za-z0-9+/=%\\&#;:,_~.\-]{1,}[ \t]*$", re.M)
+_WRAP_MARKS = re.compile(r"[0-9A-Za-z+/]{16}|%[0-9A-Fa-f]{2}|=[0-9A-F]{2}|\\[ux]|&#")
+MAX_WRAPPED = 20
+
+
+def _wrapped(text: str) -> list[tuple[int, int, str]]:
+    """(start, end, joined) for each hard-wrapped run of two or more lines."""
+    if "\n" not in text or not _WRAP_MARKS.search(text):
+        return []
+    out = []
+    for m in _WRAPPED.finditer(text):
+        lines = [line.strip() for line in m.group().splitlines()]
+        # "=" closing a line is a quoted-printable soft break (RFC 2045 §6.7 rule 5); base64
+        # pads only its last line
+        joined = "".join(line[:-1] if line.endswith("=") else line for line in lines[:-1]) + \
+            lines[-1]
+        out.append((m.start(), m.end(), joined))
+        if len(out) >= MAX_WRAPPED:
+            break
+    return out
+
+
+def find(text: str, budget: list[int], _joined: bool = False) -> list[Payload]:
     """Decoded payloads in ``text``. ``budget`` is ``[decoded characters left]``, shared."""
     found: list[Payload] = []
     if budget[0] <= 0:
         return found
     skip = _skip_ranges(text)
     tried = 0
+    if not _joined:
+        for start, end, joined in _wrapped(text):
+            inner = find(joined, budget, _joined=True)
+            for p in inner:
+                found.append(Payload(p.encoding + " (wrapped over lines)", start, end, p.text))
+            if inner:
+                skip.append((start, end))  # its lines read one by one decode only pieces
 
     def keep(encoding: str, start: int, end: int, decoded: str | None) -> None:
         if decoded is None or budget[0] <= 0:
@@ -199,6 +233,8 @@ def find(text: str, budget: list[int]) -> list[Payload]:
         for m in pattern.finditer(text):
             if tried >= MAX_CANDIDATES:
                 break
+            if _inside(m.start(), skip):
+                continue
             tried += 1
             start = m.start()
             if encoding in ("percent-encoding", "quoted-printable"):
@@ -210,22 +246,79 @@ def find(text: str, budget: list[int]) -> list[Payload]:
             if m.group().startswith("\\x"):
                 end = m.end()
             keep(encoding, start, end, _decode(encoding, text[start:end][:MAX_RUN]))
-    if _REVERSED_CUE.search(text, 0, 200_000):
+    if _REVERSED_CUE.search(text, 0, 200_000) or _reversed_cue().search(text, 0, 200_000):
         for start, end in _reversed_lines(text[:200_000]):
             if tried >= MAX_CANDIDATES:
                 break
             tried += 1
             keep("reversed text", start, end, text[start:end][::-1])
-    if "rot" in text[:200_000].lower() and _ROT13_HINT.search(text[:200_000]):
+    for start, end in _rot13_lines(text[:200_000]):
+        if tried >= MAX_CANDIDATES:
+            break
+        tried += 1
+        keep("rot13", start, end, codecs.decode(text[start:end], "rot13"))
+    for start, end, plain in _leet_lines(text[:200_000]):
+        if tried >= MAX_CANDIDATES:
+            break
+        tried += 1
+        keep("leetspeak", start, end, plain)
+    if "rot" in text[:200_000].lower() and _ROT13_HINT.search(text[:200_000]) and \
+            not any(p.encoding == "rot13" for p in found):
         for m in _ROT13_HINT.finditer(text[:200_000]):
             if tried >= MAX_CANDIDATES:
                 break
             tried += 1
             start = m.end()
             chunk = text[start:start + 2000]
-            keep("rot13", start, start + len(chunk), codecs.decode(chunk, "rot13"))
+            words = _LETTERS.findall(chunk.lower())
+            if sum(w in _ROT13_COMMON for w in words) > sum(w in COMMON for w in words):
+                # only when the rotated text reads better: plain text after a mention of
+                # ROT13 (a lesson, a codec's manual) turns into gibberish and is left
+                keep("rot13", start, start + len(chunk), codecs.decode(chunk, "rot13"))
             break
     return found
+
+
+def markup_references(markup: str, limit: int = 20) -> list[Payload]:
+    """Runs of numeric character references in HTML markup that spell readable text in
+    plain ASCII letters. A page never needs "&#x54;&#x65;..." for letters it could write
+    as they are: the parser decodes them before anyone reads the text, so the indexed text
+    shows the words while a filter reading the markup sees none. E-mail addresses written
+    this way against harvesters read as no sentence and are not kept."""
+    out: list[Payload] = []
+    if "&#" not in markup:
+        return out
+    for n, m in enumerate(_ENTITIES.finditer(markup)):
+        if n >= MAX_CANDIDATES or len(out) >= limit:
+            break
+        run = m.group()[:MAX_RUN]
+        decoded = html.unescape(run)
+        letters = sum(c.isascii() and c.isalpha() for c in decoded)
+        if letters < 0.5 * len(decoded) or " " not in decoded.strip() or "@" in decoded:
+            continue
+        text = readable(decoded.encode("utf-8", "surrogatepass"))
+        if text:
+            out.append(Payload("HTML character references", m.start(), m.end(), text))
+    return out
+
+
+# A decoded text that opens by calling an automated reader ("Assistant: ...", "AI helper,
+# ..."): encoding hides it from people, so it can only be meant for the model.
+_READER_OPENING = re.compile(
+    r"\s*(?:(?:dear|note\s+(?:to|for)|attention|for\s+the)\s+)?(?:the\s+)?(?:ai|assistant|"
+    r"(?:ai\s+|language\s+)?(?:model|helper|system|agent|assistant)s?|llm|bot|chatbot|"
+    r"copilot|summari[sz]er)\s*[:,\u2014-]\s", re.I)
+ADDRESSED_WORDS = 6  # words the rest of the decoded text needs
+
+
+def addressed(decoded: str) -> tuple[int, str] | None:
+    """(end of its first sentence, the address) when a decoded payload opens by calling
+    an automated reader and goes on for :data:`ADDRESSED_WORDS` words or more."""
+    m = _READER_OPENING.match(decoded[:200])
+    if not m or len(decoded[m.end():].split()) < ADDRESSED_WORDS:
+        return None
+    end = decoded.find(".", m.end())
+    return (len(decoded) if end < 0 else end + 1), m.group().strip()
 
 
 # English written backwards: its commonest words reversed ("eht", "dna", "ot", "fo" ...).
@@ -237,23 +330,163 @@ _REVERSED_CUE = re.compile(r" (?:eht|dna|ot|fo|uoy|ni|si) ")
 _LETTERS = re.compile(r"[a-z]+")
 
 
+# Common English words (from memory: the commonest words of English prose, and the words
+# an instruction to a reader uses), and the same words in ROT13 ("gur" = "the", "lbh" = "you").
+COMMON = frozenset(_FORWARD | set(
+    "a an if any every all from into about before after than instead always never must "
+    "should will would can could may might tell say says ask asked answer answering reply "
+    "user users reader readers assistant ai model document page pages other my me our us "
+    "them they their its include add mention write only now when where what which who how "
+    "why there here then so no yes but also just more most some such each first last next "
+    "new old one two three ten list show give make take send use using get see know need "
+    "needed keep find call like time day people way year good well very much many same "
+    "anything everything something nothing else still again over under out up down off "
+    "was were been being have has had does did done go going come made said was his her "
+    "him she he we i an link links number text words reply summary summarise summarize "
+    "recommend describe begin start end answers question questions information instead "
+    "before without within while because please free only safe".split()))
+_ROT13_COMMON = frozenset(codecs.encode(w, "rot13") for w in COMMON if len(w) > 1) - COMMON
+_ROT13_CUE = re.compile(r"\b(?:" + "|".join(sorted(w for w in _ROT13_COMMON if len(w) > 2))
+                        + r"|gb|va|vf|bs|ab|vg|jr|ur|zr)\b")
+ROT13_MIN = 3  # ROT13 words of common English in one line, at least
+_LABEL = re.compile(r"[:\u2014\u2013]\s")  # "Build id: <rot13>", "For the assistant — <rot13>"
+
+
+def _rot13_text(segment: str) -> bool:
+    """Does ``segment`` read as common English once rotated, and not as it stands?"""
+    words = _LETTERS.findall(segment.lower())
+    rotated = sum(w in _ROT13_COMMON for w in words)
+    plain = sum(w in COMMON for w in words)
+    return rotated >= ROT13_MIN and rotated >= 0.25 * len(words) and rotated > 2 * plain
+
+
+def _rot13_lines(text: str) -> list[tuple[int, int]]:
+    """Lines (or the part of a line after a label) written in ROT13 without a hint: at
+    least three common English words once rotated, a quarter of its words, and more than
+    twice as many as it has as it stands."""
+    lowered = text.lower()
+    cues: dict[int, set[str]] = {}
+    for n, m in enumerate(_ROT13_CUE.finditer(lowered)):
+        if n > 4000:
+            break
+        line = lowered.rfind("\n", 0, m.start()) + 1
+        cues.setdefault(line, set()).add(m.group())
+    out: list[tuple[int, int]] = []
+    for line, seen in cues.items():
+        if len(seen) < 2:
+            continue
+        end = lowered.find("\n", line)
+        end = len(text) if end < 0 else end
+        at = -1
+        for label in list(_LABEL.finditer(lowered, line, end))[:4]:
+            words = _LETTERS.findall(lowered[line:label.start()])
+            if _rot13_text(lowered[label.end():end]) and \
+                    sum(w in _ROT13_COMMON for w in words) <= sum(w in COMMON for w in words):
+                at = label.end()  # a plain label ("Build id:") before the rotated text
+                break
+        if at < 0 and _rot13_text(lowered[line:end]):
+            at = line
+        if at < 0:
+            continue
+        body = text[at:end]
+        lead = len(body) - len(body.lstrip())
+        out.append((at + lead, at + len(body.rstrip())))
+        if len(out) >= 5:
+            break
+    return out
+
+
+# Leetspeak: letters written as digits or symbols ("7h15 d0cum3n7 5up3r53d35 4ll ...").
+_LEET_I = str.maketrans({"0": "o", "1": "i", "3": "e", "4": "a", "5": "s", "7": "t",
+                         "8": "b", "@": "a", "$": "s", "|": "l", "!": "i", "+": "t"})
+_LEET_L = str.maketrans({"1": "l", "!": "l", "|": "l"})
+_LEET_WORD = re.compile(r"[A-Za-z0-9@$|!+]*[0-9@$|!+][A-Za-z0-9@$|!+']*")
+_LEET_CUE = re.compile(r"(?<![\w.,:/-])(?=[a-z0-9@$]*[a-z])(?=[a-z@$]*[013457])"
+                       r"[a-z0-9@$]{2,20}(?![\w/-])", re.I)
+LEET_MIN = 3  # leet words in one line, at least
+
+
+def _leet_word(token: str) -> str:
+    """A token read with digits as letters; "1" as "l" when that makes a common word."""
+    plain = token.lower().translate(_LEET_I)
+    if plain not in COMMON:
+        other = token.lower().translate(_LEET_L).translate(_LEET_I)
+        if other in COMMON:
+            return other
+    return plain
+
+
+def _leet_lines(text: str) -> list[tuple[int, int, str]]:
+    """Lines in leetspeak: at least three tokens mixing letters with digits read as letters,
+    making up at least a third of the line's words, at least three of them reading as words
+    and two of those common English words (a part number or a version list reads as none)."""
+    lines: dict[int, int] = {}
+    for n, m in enumerate(_LEET_CUE.finditer(text)):
+        if n > 4000:
+            break
+        line = text.rfind("\n", 0, m.start()) + 1
+        lines[line] = lines.get(line, 0) + 1
+    out: list[tuple[int, int, str]] = []
+    for line, count in lines.items():
+        if count < 2:
+            continue
+        end = text.find("\n", line)
+        end = len(text) if end < 0 else end
+        body = text[line:end]
+        tokens = re.findall(r"[\w@$|!+']+", body)
+        leet = [t for t in tokens if _LEET_WORD.fullmatch(t) and not t.isdigit() or
+                t in ("4", "1")]
+        if len(leet) < LEET_MIN or len(leet) < len(tokens) / 3:
+            continue
+        read = [_leet_word(t) for t in leet]
+        words = [w for w in read if len(w) > 1 and w.replace("'", "").isalpha()]
+        if sum(len(w) > 2 for w in words) < LEET_MIN or sum(w in COMMON for w in words) < 2:
+            continue  # digits that read as no words: part numbers, versions, hashes
+        plain = _LEET_WORD.sub(lambda m: m.group() if m.group().isdigit() and
+                               len(m.group()) > 2 else _leet_word(m.group()), body)
+        lead = len(body) - len(body.lstrip())
+        out.append((line + lead, line + len(body.rstrip()), plain.strip()))
+        if len(out) >= 5:
+            break
+    return out
+
+
+@functools.lru_cache(maxsize=1)
+def _reversed_words() -> frozenset[str]:
+    """The common words (:data:`COMMON`) written backwards, less those that read as a
+    common word either way ("on"/"no", "saw"/"was")."""
+    return _REVERSED | (frozenset(w[::-1] for w in COMMON if len(w) > 2) - COMMON)
+
+
+@functools.lru_cache(maxsize=1)
+def _reversed_cue() -> re.Pattern[str]:
+    return re.compile(r"(?<![\w.])(?:" + "|".join(sorted(w for w in _reversed_words()
+                                                           if len(w) > 3)) + r")(?!\w)")
+
+
 def _reversed_lines(text: str) -> list[tuple[int, int]]:
-    """Lines of English written backwards: at least three reversed common words (or one,
-    when the line starts with a full stop and ends with a capital), more than forwards, and
-    at least 15 % of the line's words."""
+    """Lines (or the part of a line after a label, "Ref: .ylno hctuD ...") of English
+    written backwards: at least three reversed common words (or one, when the line starts
+    with a full stop and ends with a capital), more than forwards, and at least 15 % of
+    the line's words."""
     out: list[tuple[int, int]] = []
     at = 0
+    backwards = _reversed_words()
     for line in text.split("\n"):
         start, at = at, at + len(line) + 1
         if not 20 <= len(line) <= 2000 or " " not in line:
             continue
+        label = _LABEL.search(line[:60])
+        if label and line[label.end():].lstrip()[:1] in ".!?":
+            start, line = start + label.end(), line[label.end():]
         words = _LETTERS.findall(line.lower())
-        back = sum(w in _REVERSED or w.startswith("gni") for w in words)
+        # two-letter words ("si", "ni", "on") are Spanish, French or Italian as often
+        back = sum(len(w) > 2 and w in backwards or w.startswith("gni") for w in words)
         body = line.strip()
         # A sentence turned round starts with its full stop and ends with its capital.
         turned = body[:1] in ".!?" and body[-1:].isupper() and body[-2:-1].islower()
         if (back >= 3 or turned and back >= 1) and back >= 0.15 * len(words) and \
-                back > sum(w in _FORWARD for w in words):
+                back > sum(w in COMMON for w in words):
             lead = len(line) - len(line.lstrip())
             out.append((start + lead, start + len(line.rstrip())))
             if len(out) >= 5:

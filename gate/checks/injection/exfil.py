@@ -26,10 +26,23 @@ _MD_LINK = re.compile(r"(!?)\[([^\]\[\n]{0,300})\]\(\s*<?"
 _HTML_URL = re.compile(r"<(img|a|iframe|source|embed|object|form|link|script)\b[^>]{0,800}?"
                        r"\b(?:src|href|data|action)\s*=\s*[\"']?([^\"'\s>]{1,4096})", re.I)
 _BARE_URL = re.compile(r"https?://[^\s<>\"')\]]{1,4096}")
+# A mail address with a prefilled subject or body; "<...>" placeholders are part of it.
+_MAILTO = re.compile(r"mailto:[^\s<>\"')\]?]{1,200}\?(?:[^\s<>\"')\]]|<[^<>\n]{1,80}>)"
+                     r"{1,2000}", re.I)
 _PLACEHOLDER = re.compile(r"\{\{?\s*([A-Za-z_][\w .-]{0,40}?)\s*\}\}?|"
                           r"\[([A-Za-z_][A-Za-z0-9_ ]{1,40})\]|"
                           r"<([A-Za-z_][A-Za-z0-9_ ]{1,40})>|\$\{?([A-Za-z_][A-Za-z0-9_]{1,40})\}?|"
-                          r"%7[bB]([\w%.-]{1,60}?)%7[dD]|(X{4,})")
+                          r"%7[bB]([\w%.-]{1,60}?)%7[dD]|(X{4,})|"
+                          r"%([A-Za-z][A-Za-z_]{2,40})%|"
+                          r"(?<==)((?:[A-Z][A-Z0-9]*_)*[A-Z]{4,}(?:_[A-Z0-9]+)*)(?=[&#;]|$)")
+# A placeholder written in capitals or between percent signs ("?q=USER_QUESTION",
+# "%HISTORY%") is how API pages show a credential to fill in ("?key=YOUR_API_KEY"): in that
+# form only names of conversation content and personal data count, never credentials.
+_CAPITALS = re.compile(r"^(?:%[A-Za-z_]+%|[A-Z0-9_]+)$")
+CREDENTIAL = re.compile(r"key|token|secret|passw|credential|creds|session|cookie|auth|"
+                        r"signature|sig$|^id$|_id$", re.I)
+CAPITAL_WEAK = re.compile(r"e_?mail|phone|personal|pii|ssn|user|address|child|parent|name",
+                          re.I)
 # Names of placeholders or parameters that stand for conversation content or secrets
 # (strong), or for personal data a template may legitimately fill (weak).
 STRONG_NAME = re.compile(
@@ -57,7 +70,8 @@ READER_REF = re.compile(r"[?&][\w.\-]{1,30}=(?:assistant|ai|llm|bot|agent|model|
                         r"copilot|gpt)(?:&|$)", re.I)
 SLOT_CONTEXT = 250
 APPEND_CUE = re.compile(
-    r"\b(?:append|add|attach|fill(?:ing)?\s+in|include|insert|put|followed\s+by|after\s+the|"
+    r"\b(?:append|add|attach|fill(?:ing)?\s+in|include|insert|put|place|paste|enter|"
+    r"followed\s+by|after\s+the|"
     r"at\s+the\s+end|acrescent|inclua|adicion|anad|agreg|incluy|ajout|inclu|hang|fug|"
     r"aggiung|includ|voeg|dodaj|lagg\w*\s+till|dobav|pripis|vstav|ekle|tambahkan|"
     r"sertakan)\w*", re.I)
@@ -68,6 +82,27 @@ DATA_CUE = re.compile(
     r"unterhaltung|verlauf|utente|conversazione|gebruiker|gesprek|uzytkownik|użytkownik|"
     r"rozmow|anvandar|användar|konversation|пользовател|разговор|переписк|диалог|"
     r"kullanici|kullanıcı|sohbet|pengguna|percakapan)", re.I)
+
+
+# Words around an address with a placeholder that ask for the placeholder to be filled
+# with the user's data ("where USER_QUESTION is the user's last message", "with the real
+# values filled in", "replace USER_EMAIL with ...").
+FILL_CUE = re.compile(
+    r"\b(?:replac\w*|fill\w*|substitut\w*|real\s+(?:value|data|text)|actual\s+(?:value|data|"
+    r"text)|url-?encoded|where\s+\S+\s+(?:is|are)\b|from\s+the\s+(?:conversation|chat)|"
+    r"ersetz\w*|remplac\w*|reemplaz\w*|sostitui\w*|substitu\w*|vervang\w*|zastap\w*|"
+    r"заменит\w*|подстав\w*)", re.I)
+FILLED_BOOST = 0.25
+IMAGE_EXT = re.compile(r"\.(?:png|gif|jpe?g|svg|webp|bmp|ico)$", re.I)
+
+
+def filled(context: str) -> str | None:
+    """The cue when the words around an address ask for its placeholder to be filled with
+    the user's or the conversation's data; None otherwise."""
+    cue = FILL_CUE.search(context)
+    if cue and DATA_CUE.search(context):
+        return cue.group()
+    return None
 
 
 def slot(url: str, context: str) -> tuple[float, str] | None:
@@ -97,7 +132,8 @@ class UrlHit:
 def judge(url: str, kind: str) -> tuple[float, str] | None:
     """How suspicious one address is, and why; None when it looks ordinary."""
     url = url[:MAX_URL]
-    if url.lower().startswith(("data:", "mailto:", "tel:", "#", "javascript:")):
+    if url.lower().startswith(("data:", "tel:", "#", "javascript:")) or \
+            url.lower().startswith("mailto:") and "?" not in url:
         return None
     if "{" not in url and "%7b" not in url.lower() and "[" not in url and "$" not in url \
             and "<" not in url and "XXXX" not in url and "?" not in url:
@@ -106,11 +142,21 @@ def judge(url: str, kind: str) -> tuple[float, str] | None:
     weak = None
     for m in _PLACEHOLDER.finditer(url):
         name = unquote(next((g for g in m.groups() if g), ""))
+        if IDENTIFIER.search(name):
+            continue  # {conversation_id}, {message_id}: how API paths look
+        if _CAPITALS.match(m.group()):
+            if CREDENTIAL.search(name):
+                continue
+            if not STRONG_NAME.search(name):
+                if weak is None and CAPITAL_WEAK.search(name):
+                    weak = (0.3 if image else 0.2,
+                            f"the address has a placeholder for user data ({m.group()[:60]})")
+                continue
         if STRONG_NAME.search(name):
             return (0.55 if image else 0.4,
                     f"the address has a placeholder for conversation content or secrets "
                     f"({m.group()[:60]})")
-        if weak is None and WEAK_NAME.search(name) and not IDENTIFIER.search(name):
+        if weak is None and WEAK_NAME.search(name):
             weak = (0.3 if image else 0.2,
                     f"the address has a placeholder for user data ({m.group()[:60]})")
     if weak is not None:
@@ -147,10 +193,19 @@ def scan(text: str, links: list[tuple[str, str]] | None = None,
         verdict = judge(url, kind)
         if verdict is None and start >= 0:
             verdict = slot(url, text[max(0, start - SLOT_CONTEXT):end + SLOT_CONTEXT])
-        elif verdict is not None and verdict[0] < 0.5 and start >= 0:
-            asked = slot(url, text[max(0, start - SLOT_CONTEXT):end + SLOT_CONTEXT])
+        elif verdict is not None and verdict[0] < 0.7 and start >= 0:
+            asked = verdict[0] < 0.5 and slot(url, text[max(0, start - SLOT_CONTEXT):
+                                                        end + SLOT_CONTEXT])
+            cue = None if asked else filled(text[max(0, start - SLOT_CONTEXT):start] + " " +
+                                            text[end:end + SLOT_CONTEXT])
             if asked:  # a slot named for chat data, and the words around ask to fill it
                 verdict = (min(verdict[0] + 0.25, 0.55), verdict[1] + "; " + asked[1])
+            elif cue and verdict[0] < (0.7 if kind == "image" else 0.6):
+                # a placeholder, and the words around ask for it to be filled
+                cap = 0.7 if kind == "image" else 0.6
+                verdict = (min(verdict[0] + FILLED_BOOST, cap),
+                           f"{verdict[1]}; the text around it asks for it to be filled with "
+                           f"the user's data ({cue!r})")
         elif verdict is None:
             verdict = slot(url, "")
         if verdict is not None:
@@ -167,7 +222,12 @@ def scan(text: str, links: list[tuple[str, str]] | None = None,
                      m.start(), m.end())
     if "://" in text:
         for m in _BARE_URL.finditer(text):
-            consider(m.group(), "address", m.start(), m.end())
+            path = m.group().split("?", 1)[0].split("#", 1)[0]
+            consider(m.group(), "image" if IMAGE_EXT.search(path) else "address", m.start(),
+                     m.end())
+    if "mailto:" in text.lower():
+        for m in _MAILTO.finditer(text):
+            consider(m.group(), "link", m.start(), m.end())
     for url, kind in links or []:
         consider(url, kind, -1, -1)
     return hits

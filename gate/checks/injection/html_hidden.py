@@ -14,6 +14,7 @@ What counts as hidden (technique slugs in parentheses):
   closed ``<details>`` (closed-details), ``<noscript>`` (noscript), non-JavaScript
   ``<script>`` data such as JSON-LD (script-data), ``<input type=hidden>`` values
   (hidden-input);
+* the page ``<title>``, shown in the browser tab only (title-element);
 * HTML comments (comment), attribute text: ``alt``, ``title``, ``aria-label``,
   ``aria-description``, ``placeholder`` (attribute), ``<meta content>`` (meta);
 * text an extractor may drop or a browser draws without it being page text: inline SVG
@@ -391,6 +392,8 @@ def collect(root: lxml.etree._Element | None) -> Collected:
         key = meta.get("name") or meta.get("property") or meta.get("itemprop") or ""
         if content.count(" ") >= 2 and key.lower() not in ("viewport", "robots"):
             add(content, "meta", f"<meta {('name=' + key[:40]) if key else ''}>")
+    for el in root.xpath("//title[not(ancestor::*[local-name()='svg'])]")[:3]:
+        add(_text_of(el, 2_000), "title-element", "the page <title> (shown in the browser tab)")
     for el in root.xpath("//*[local-name()='svg']//*[local-name()='text' or "
                          "local-name()='title' or local-name()='desc']")[:MAX_NODES]:
         add(_text_of(el, 20_000), "svg-text", f"<svg> <{el.tag}>")
@@ -422,3 +425,31 @@ def collect(root: lxml.etree._Element | None) -> Collected:
     return Collected(pieces, links, hidden_chars)
 
 
+# Markdown that renders without showing some of its text: the title of a link or image
+# (shown only on hover), and the title of a link reference definition (the definition line
+# is not rendered at all).
+_MD_TITLE = re.compile(r"\]\(\s*<?[^)\s>]{1,2048}>?\s+(?:\"([^\"\n]{8,400})\"|'([^'\n]{8,400})')"
+                       r"\s*\)")
+_MD_REFERENCE = re.compile(r"^ {0,3}\[[^\]\n]{1,100}\]:\s*<?\S{1,2048}>?\s+(?:\"([^\"\n]{8,400})\"|"
+                           r"'([^'\n]{8,400})'|\(([^()\n]{8,400})\))[ \t]*$", re.M)
+MAX_MARKDOWN_PIECES = 200
+
+
+def markdown_pieces(text: str) -> list[tuple[str, str, str]]:
+    """``(text, where, technique)`` for each Markdown link title and reference-definition
+    title of ``text`` (see above); at most :data:`MAX_MARKDOWN_PIECES`."""
+    out: list[tuple[str, str, str]] = []
+    if "](" in text:
+        for m in _MD_TITLE.finditer(text[:MAX_CHARS]):
+            out.append((m.group(1) or m.group(2),
+                        "the title of a Markdown link (shown only on hover)", "link-title"))
+            if len(out) >= MAX_MARKDOWN_PIECES:
+                return out
+    if "]:" in text:
+        for m in _MD_REFERENCE.finditer(text[:MAX_CHARS]):
+            out.append((m.group(1) or m.group(2) or m.group(3),
+                        "the title of a Markdown link reference definition (not rendered)",
+                        "link-title"))
+            if len(out) >= MAX_MARKDOWN_PIECES:
+                break
+    return out

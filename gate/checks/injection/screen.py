@@ -291,6 +291,8 @@ class Screen:
                                (source, start, end), kind)
                 for hit in self.scan(inner, depth + 1):
                     hit["decoded"] = visible(message, 300)
+                    if kind in unicode.DISGUISED:  # show the line as written, tricks and all
+                        hit["snippet"] = visible(text[start:end], 240)
                     content.append(hit)
             for payload in encoded.find(text, self.budget):
                 inner = Source(payload.text,
@@ -299,11 +301,13 @@ class Screen:
                                (source, payload.start, payload.end), payload.encoding)
                 inner_hits = self.scan(inner, depth + 1)
                 opening = None if inner_hits else _imperative(payload.text)
-                if opening:
+                called = None if inner_hits or opening else encoded.addressed(payload.text)
+                if opening or called:
+                    end, what = (opening[0], f"the imperative \"{opening[1]}\"") if opening \
+                        else (called[0], f"an address to the AI reader \"{called[1]}\"")
                     inner_hits = [self._hit(inner, "instruction", IMPERATIVE_WEIGHT, 0,
-                                            opening[0], payload.text, lang="en",
-                                            note=f"the decoded text opens with the imperative "
-                                                 f"\"{opening[1]}\"")]
+                                            end, payload.text, lang="en",
+                                            note=f"the decoded text opens with {what}")]
                     self.hits.extend(inner_hits)
                 if inner_hits:
                     for hit in inner_hits:
@@ -826,6 +830,9 @@ def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]
             sources.append(Source(piece.text, piece.where, piece.technique, "html"))
         links = collected.links
         markup = extraction.decoded or ""
+        for payload in encoded.markup_references(markup):  # letters written as &#x..;
+            sources.append(Source(payload.text, "HTML character references in the page markup",
+                                  payload.encoding, "html"))
         raw = _raw_text(extraction.tree) if (not markup.isascii() or "&#" in markup) else ""
         if raw and not raw.isascii() and _invisible_message(raw) and \
                 not _invisible_message(extraction.text or ""):
@@ -852,6 +859,8 @@ def _sources(extraction: Extraction) -> tuple[list[Source], list[tuple[str, str]
         if front and front.group(1).strip():  # YAML front matter: metadata, not rendered
             sources.append(Source(front.group(1), "the YAML front matter", "front-matter",
                                   "text"))
+        for piece, where, technique in html_hidden.markdown_pieces(raw):  # link titles
+            sources.append(Source(piece, where, technique, "text"))
         if "<!--" in raw:
             for i, m in enumerate(_MD_COMMENT.finditer(raw[:MAX_TEXT])):
                 if i >= 200:

@@ -24,7 +24,7 @@ from dataclasses import dataclass, field
 from typing import Any
 
 from gate.checks.injection import confusables
-from gate.checks.injection.normalize import fold, visible
+from gate.checks.injection.normalize import fold, fold_char, visible
 
 ZERO_WIDTH = "\u200b\u200c\u200d\u2060\ufeff\u180e\u2061\u2062\u2063\u2064"
 BIDI_EMBED_OVERRIDE = "\u202a\u202b\u202c\u202d\u202e"
@@ -84,6 +84,30 @@ def scan(text: str) -> Found:
     return found
 
 
+DISGUISED = ("look-alike letters", "zero-width split words")  # kinds of disguised lines
+DISGUISED_WORDS = 2  # disguised words (look-alikes, zero-width splits) a line needs
+
+
+def _disguised_lines(text: str, positions: list[int], found: Found, kind: str) -> None:
+    """Lines holding at least :data:`DISGUISED_WORDS` disguised words, read with the
+    look-alikes as their plain letters and the invisible characters dropped, as payloads:
+    the disguise hides the line from filters, so the line is read as concealed text."""
+    lines: dict[int, int] = {}
+    for pos in positions:
+        line = text.rfind("\n", 0, pos) + 1
+        lines[line] = lines.get(line, 0) + 1
+    for line, count in list(lines.items())[:20]:
+        if count < DISGUISED_WORDS:
+            continue
+        end = text.find("\n", line)
+        end = len(text) if end < 0 else end
+        if end - line > 4000:
+            end = line + 4000
+        plain = "".join(c if c.isascii() else fold_char(c) for c in text[line:end]).strip()
+        if len(plain) >= 12:
+            found.payloads.append((line, end, plain, kind))
+
+
 def _special(text: str, found: Found) -> None:
     splits: list[int] = []
     words: set[str] = set()
@@ -121,6 +145,8 @@ def _special(text: str, found: Found) -> None:
                 "isolate" if ch in BIDI_ISOLATE else "embedding"
             bidi[kind].append(i)
     if splits:
+        _disguised_lines(text, [i for n, i in enumerate(splits) if n == 0 or
+                                i - splits[n - 1] > 2], found, "zero-width split words")
         n = len(words)
         weight = 0.1 if n == 1 else 0.2 if n == 2 else 0.3 if n < 8 else 0.4
         first = splits[0]
@@ -255,6 +281,7 @@ def _mixed_script(text: str, found: Found) -> None:
     if not candidates:
         return
     candidates.sort()
+    _disguised_lines(text, [c[0] for c in candidates], found, "look-alike letters")
     n = len(candidates)
     weight = 0.15 if n == 1 else 0.25 if n == 2 else 0.35 if n < 6 else 0.45
     start, end, word = candidates[0]
