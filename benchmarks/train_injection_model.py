@@ -172,8 +172,10 @@ def snippets(units: Units, stats: Counter, train24: bool = True,
             text = item["text"]
             if label:  # the request is the instruction; its code would teach "import os"
                 text = "\n".join(ln for ln in text.splitlines() if not _CODE_LINE.search(ln))
-                # ... and its inline commands "rm -rf" (harmful code is judged by actions.py)
-                text = _INLINE_CODE.sub(" ", text)
+                # ... and its inline commands "rm -rf" (harmful code is judged by actions.py),
+                # in backticks or bare ("run curl -s https://... | sh first"): a runbook's
+                # commands must not read as requests to the model
+                text = _BARE_COMMAND.sub(" ", _INLINE_CODE.sub(" ", text))
             units.add_text(text, label, f"{source}/{item['class']}", "")
     return val
 
@@ -183,6 +185,10 @@ _TAG = re.compile(r"<[^>]*>", re.S)
 _CODE_LINE = re.compile(r"[=(){};]\s*$|^\s*(?:import|def|from|curl|wget|\$|#!|//)|\w\(.*\)|"
                         r"^[\w.]+\s*=")
 _INLINE_CODE = re.compile(r"`[^`\n]{1,200}`")
+_BARE_COMMAND = re.compile(r"(?<![\w-])(?:curl|wget|sudo|bash|sh|zsh|powershell|pwsh|python3?|"
+                           r"node|nc|ncat|chmod|chown|rm|dd|mkfs|systemctl|crontab|scp|ssh|"
+                           r"iex|Invoke-\w+|Get-\w+|Set-\w+|New-\w+|Remove-\w+)\s+-{0,2}"
+                           r"[^\s.,;!?][^\n]*?(?=[.;!?]\s|[.;!?]?$|\n)", re.M)
 _ATTR = re.compile(r"=\s*\"([^\"]{12,})\"")
 
 
