@@ -1085,12 +1085,12 @@ FRAGMENT_WORDS = 8  # words of a fragment, at most
 FRAGMENT_CHAIN = 3  # fragments in a chain, at least
 FRAGMENT_GAP = 12  # lines of the document's own between two fragments of a chain, at most
 FRAGMENT_CHAINS = 12  # chains read per document, at most
+FRAGMENT_CHARS = 120  # a line longer than this holds more than FRAGMENT_WORDS words
 LONG_LINE_WORDS = 9  # a line of this many words that ends unterminated wraps into the next
 _ITEM_MARK = re.compile(r"^[ \t]*(?:[-*+\u2022>]+[ \t]+|\d{1,3}[.)][ \t]+)")
 _CODE_LINE = re.compile(r"[(){}\[\]=<>$;]\s*$|^\s*(?:import|def|from|return|#include)\b|"
                         r"^\s*[{\[]|\":|\w\(|\)\s*[:{]|^\s*[\w.]+\s*=\s|\s\|\s*[a-z]|"
                         r"^\s*(?:sudo|echo|export|chmod|pip|apt|npm)\s|^\s*--?[a-z]|\s=\s")
-_FENCE = re.compile(r"^[ \t]*(?:```|~~~)")
 _CONTINUED = (":", ",", ";", "\uff1a", "\uff0c", "\u3001")
 _TERMINAL = (".", "!", "?", "\u3002", "\uff01", "\uff1f")
 
@@ -1106,12 +1106,13 @@ def _ends_sentence(piece: str) -> bool:
 
 def _fragment(piece: str) -> bool:
     """A short piece that is not a sentence, heading or code of its own."""
-    words = piece.split()
-    if not words or len(words) > FRAGMENT_WORDS or _CODE_LINE.search(piece):
+    if not (_opens_lower(piece) or not _ends_sentence(piece)):
+        return False  # a sentence of its own
+    if piece.count(" ") >= FRAGMENT_WORDS and len(piece.split()) > FRAGMENT_WORDS:
         return False
     if piece.isupper() and not piece.endswith(_CONTINUED):
         return False  # a heading in capitals ("INGREDIENTS"); "AI:" calls a reader
-    return _opens_lower(piece) or not _ends_sentence(piece)
+    return bool(piece.strip()) and not _CODE_LINE.search(piece)
 
 
 def _chains(pieces: list[tuple[int, int, str, int]], gap: int) -> list[list[tuple[int, int, str]]]:
@@ -1163,8 +1164,16 @@ def _fragment_chains(text: str) -> list[list[tuple[int, int, str]]]:
     wraps = False
     for raw in text.split("\n"):
         start, at = at, at + len(raw) + 1
+        if len(raw) > FRAGMENT_CHARS and not fenced and "|" not in raw:
+            # a long line (most of a text): no fragment, and it wraps when unterminated
+            n += 1
+            wraps = not raw.rstrip().endswith(_TERMINAL)
+            if columns:
+                tables.append(columns)
+                columns = {}
+            continue
         body = raw.strip()
-        if _FENCE.match(raw):
+        if body[:3] in ("```", "~~~"):
             fenced = not fenced
             continue
         if not body or fenced:
@@ -1174,7 +1183,8 @@ def _fragment_chains(text: str) -> list[list[tuple[int, int, str]]]:
                 columns = {}
             continue
         n += 1
-        if body.count("|") >= 2 or (body.count("|") == 1 and columns):
+        bars = body.count("|")
+        if bars >= 2 or (bars == 1 and columns):
             cells = body.strip("|").split("|")
             off = start + raw.find(body)
             pos = 0
@@ -1200,7 +1210,9 @@ def _fragment_chains(text: str) -> list[list[tuple[int, int, str]]]:
             pieces.append((ps, ps + len(piece), piece, n))
     if columns:
         tables.append(columns)
-    out = _chains(pieces, FRAGMENT_GAP)
+    # a chain needs fragments that continue it (they open in lower case)
+    out = _chains(pieces, FRAGMENT_GAP) if sum(
+        _opens_lower(p) for _, _, p, _ in pieces) >= FRAGMENT_CHAIN - 1 else []
     for table in tables:
         for col in table.values():
             # down a column every cell is a line of its own: no gap needed
