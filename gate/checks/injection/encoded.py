@@ -154,10 +154,12 @@ MAX_WRAPPED = 20
 
 def _wrapped(text: str) -> list[tuple[int, int, str]]:
     """(start, end, joined) for each hard-wrapped run of two or more lines."""
-    if "\n" not in text or not _WRAP_MARKS.search(text):
+    if "\n" not in text:
         return []
     out = []
     for m in _WRAPPED.finditer(text):
+        if not _WRAP_MARKS.search(m.group()):
+            continue
         lines = [line.strip() for line in m.group().splitlines()]
         # "=" closing a line is a quoted-printable soft break (RFC 2045 §6.7 rule 5); base64
         # pads only its last line
@@ -246,7 +248,7 @@ def find(text: str, budget: list[int], _joined: bool = False) -> list[Payload]:
             if m.group().startswith("\\x"):
                 end = m.end()
             keep(encoding, start, end, _decode(encoding, text[start:end][:MAX_RUN]))
-    if _REVERSED_CUE.search(text, 0, 200_000) or _reversed_cue().search(text, 0, 200_000):
+    if _REVERSED_CUE.search(text, 0, 200_000):
         for start, end in _reversed_lines(text[:200_000]):
             if tried >= MAX_CANDIDATES:
                 break
@@ -326,7 +328,8 @@ _REVERSED = frozenset("eht dna ot fo ni si uoy ruoy rof taht htiw eb siht no sa 
                       "resu eseht lla ton od nehw".split())
 _FORWARD = frozenset("the and to of in is you your for that with be this on as at or by it are "
                      "user these all not do when".split())
-_REVERSED_CUE = re.compile(r" (?:eht|dna|ot|fo|uoy|ni|si) ")
+_REVERSED_CUE = re.compile(r" (?:eht|dna|ot|fo|uoy|ruoy|ni|si|lla|siht|yas|htiw|rof|taht|"
+                           r"dluohs|tsum|nehw|ton) ")
 _LETTERS = re.compile(r"[a-z]+")
 
 
@@ -349,6 +352,8 @@ _ROT13_COMMON = frozenset(codecs.encode(w, "rot13") for w in COMMON if len(w) > 
 _ROT13_CUE = re.compile(r"\b(?:" + "|".join(sorted(w for w in _ROT13_COMMON if len(w) > 2))
                         + r"|gb|va|vf|bs|ab|vg|jr|ur|zr)\b")
 ROT13_MIN = 3  # ROT13 words of common English in one line, at least
+# ROT13 English holds one of these almost always ("the", "to", "and", "a", "you" ...).
+_ROT13_GATE = re.compile(r" (?:gur|gb|naq|n|lbh|lbhe|bs|vf|va|sbe|nobhg|jvgu|guvf|nyy) ")
 _LABEL = re.compile(r"[:\u2014\u2013]\s")  # "Build id: <rot13>", "For the assistant — <rot13>"
 
 
@@ -364,6 +369,8 @@ def _rot13_lines(text: str) -> list[tuple[int, int]]:
     """Lines (or the part of a line after a label) written in ROT13 without a hint: at
     least three common English words once rotated, a quarter of its words, and more than
     twice as many as it has as it stands."""
+    if not _ROT13_GATE.search(text):
+        return []
     lowered = text.lower()
     cues: dict[int, set[str]] = {}
     for n, m in enumerate(_ROT13_CUE.finditer(lowered)):
@@ -404,6 +411,9 @@ _LEET_WORD = re.compile(r"[A-Za-z0-9@$|!+]*[0-9@$|!+][A-Za-z0-9@$|!+']*")
 _LEET_CUE = re.compile(r"(?<![\w.,:/-])(?=[a-z0-9@$]*[a-z])(?=[a-z@$]*[013457])"
                        r"[a-z0-9@$]{2,20}(?![\w/-])", re.I)
 LEET_MIN = 3  # leet words in one line, at least
+# A digit read as a letter before a letter ("7h", "0c", "3n"): every leet word of two
+# letters or more has one; a pattern that opens with digits is cheap to search.
+_LEET_PAIR = re.compile(r"[013457][A-Za-z]")
 
 
 def _leet_word(token: str) -> str:
@@ -420,12 +430,17 @@ def _leet_lines(text: str) -> list[tuple[int, int, str]]:
     """Lines in leetspeak: at least three tokens mixing letters with digits read as letters,
     making up at least a third of the line's words, at least three of them reading as words
     and two of those common English words (a part number or a version list reads as none)."""
-    lines: dict[int, int] = {}
-    for n, m in enumerate(_LEET_CUE.finditer(text)):
+    pairs: dict[int, int] = {}
+    for n, m in enumerate(_LEET_PAIR.finditer(text)):
         if n > 4000:
             break
         line = text.rfind("\n", 0, m.start()) + 1
-        lines[line] = lines.get(line, 0) + 1
+        pairs[line] = pairs.get(line, 0) + 1
+    lines: dict[int, int] = {}
+    for line, count in pairs.items():
+        if count >= 2:
+            end = text.find("\n", line)
+            lines[line] = len(_LEET_CUE.findall(text, line, len(text) if end < 0 else end))
     out: list[tuple[int, int, str]] = []
     for line, count in lines.items():
         if count < 2:
@@ -442,6 +457,9 @@ def _leet_lines(text: str) -> list[tuple[int, int, str]]:
         words = [w for w in read if len(w) > 1 and w.replace("'", "").isalpha()]
         if sum(len(w) > 2 for w in words) < LEET_MIN or sum(w in COMMON for w in words) < 2:
             continue  # digits that read as no words: part numbers, versions, hashes
+        label = _LABEL.search(body[:60])
+        if label and not _LEET_CUE.search(body, 0, label.start()):
+            line, body = line + label.end(), body[label.end():]  # a plain label ("Ref: ")
         plain = _LEET_WORD.sub(lambda m: m.group() if m.group().isdigit() and
                                len(m.group()) > 2 else _leet_word(m.group()), body)
         lead = len(body) - len(body.lstrip())
@@ -456,12 +474,6 @@ def _reversed_words() -> frozenset[str]:
     """The common words (:data:`COMMON`) written backwards, less those that read as a
     common word either way ("on"/"no", "saw"/"was")."""
     return _REVERSED | (frozenset(w[::-1] for w in COMMON if len(w) > 2) - COMMON)
-
-
-@functools.lru_cache(maxsize=1)
-def _reversed_cue() -> re.Pattern[str]:
-    return re.compile(r"(?<![\w.])(?:" + "|".join(sorted(w for w in _reversed_words()
-                                                           if len(w) > 3)) + r")(?!\w)")
 
 
 def _reversed_lines(text: str) -> list[tuple[int, int]]:
