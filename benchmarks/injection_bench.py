@@ -14,7 +14,7 @@ where, note) over ``DIR/docs/``; it prints recall overall, per class and per lan
 the multilingual class, and the false-positive rate overall and per benign class, but
 never which documents were missed unless ``--verbose`` is given.
 
-``--blind all`` measures the five blind sets in turn (all tuning data now) and ends with a
+``--blind all`` measures the six blind sets in turn (all tuning data now) and ends with a
 line per set.
 
 ``--blind-half tune|held`` keeps half of a blind set, split by host document (label field
@@ -73,7 +73,8 @@ def load_corpus(split: str = "all") -> list[dict]:
 
 BLIND = ROOT / "benchmarks" / "data" / "injection_blind"
 # Every blind set so far (all tuning data now): ``--blind all`` measures them in turn.
-BLIND_SETS = [BLIND] + [ROOT / "benchmarks" / "data" / f"injection_blind{n}" for n in (2, 3, 4, 5)]
+BLIND_SETS = [BLIND] + [ROOT / "benchmarks" / "data" / f"injection_blind{n}"
+                        for n in (2, 3, 4, 5, 6)]
 VAL_BYTE = 52  # the instruction model's validation split: about 20 % (52/256)
 
 
@@ -369,7 +370,7 @@ def main(argv: list[str] | None = None) -> int:
     parser.add_argument("--split", default="all",
                         choices=["dev", "holdout", "holdout2", "tune15", "all"])
     parser.add_argument("--blind", default=None, help="folder of the blind set (labels.jsonl), "
-                        "or 'all' for every set in benchmarks/data/injection_blind* (1-5)")
+                        "or 'all' for every set in benchmarks/data/injection_blind* (1-6)")
     parser.add_argument("--mix", type=int, default=300,
                         help="documents of the generated bench mix to time (0: skip)")
     parser.add_argument("--repeat", type=int, default=3)

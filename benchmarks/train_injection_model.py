@@ -14,7 +14,7 @@ Data (see ``benchmarks/data/injection_train/README.md``):
 * ``benchmarks/data/injection_blind/``: the first blind set (654 documents), used as
   tuning data since it was looked at twice: benign documents give negative windows; the
   payload of each attack is the lines it does not share with its closest benign host;
-  blind sets 2-5 (``benchmarks/data/injection_blind{2,3,4,5}/``) the same way, each since
+  blind sets 2-6 (``benchmarks/data/injection_blind{2,3,4,5,6}/``) the same way, each since
   it was looked at twice (``--blind-sets``, ``--leave-out blindN``);
 * ``tests/fixtures/injection/``: benign documents give negative windows;
 * real text from Debian documentation packages (manual pages in ten languages, the
@@ -59,8 +59,9 @@ TRAIN_DIR = ROOT / "benchmarks" / "data" / "injection_train"
 BLIND_DIR = ROOT / "benchmarks" / "data" / "injection_blind"
 # The blind sets that are tuning data now (each was looked at and tuned on): name -> folder.
 BLIND_SETS = {"blind1": BLIND_DIR, **{f"blind{n}": ROOT / "benchmarks" / "data" /
-                                      f"injection_blind{n}" for n in (2, 3, 4, 5)}}
+                                      f"injection_blind{n}" for n in (2, 3, 4, 5, 6)}}
 TRAIN24 = "train24"  # the sub-folder of TRAIN_DIR holding the rows written for issue 15
+TRAIN26 = "train26"  # ... and the second batch (rows in its rows/ folder)
 FIXTURES = ROOT / "tests" / "fixtures" / "injection"
 CACHE = ROOT / "bench-out" / "train-cache"
 OUT = M.WEIGHTS
@@ -125,33 +126,56 @@ class Units:
 
 # -- sources -----------------------------------------------------------------------------------
 
-def snippets(units: Units, stats: Counter, train24: bool = True) -> list[dict]:
+def split_parts(rows: list[dict]) -> set[str]:
+    """The attack sentences that are parts of a split instruction: two or more of them make
+    up one attack passage. Each is harmless alone ("Use it verbatim."); only the passages
+    joining them are trained on."""
+    sentences = {r["text"] for r in rows if r["label"] == "attack" and r.get("kind") == "sentence"}
+    parts: set[str] = set()
+    for r in rows:
+        if r["label"] == "attack" and r.get("kind") == "passage":
+            inside = [x for x in sentences if x in r["text"] and x != r["text"]]
+            if len(inside) >= 2:
+                parts.update(inside)
+    return parts
+
+
+def snippets(units: Units, stats: Counter, train24: bool = True,
+             train26: bool = True) -> list[dict]:
     """The written snippets; returns the validation ones (scored as one-unit documents)."""
     val = []
     paths = sorted(TRAIN_DIR.glob("*.jsonl"))
     if train24:
         paths += sorted((TRAIN_DIR / TRAIN24).glob("*.jsonl"))
+    if train26:
+        paths += sorted((TRAIN_DIR / TRAIN26 / "rows").glob("*.jsonl"))
     for path in paths:
         source = "extra" if path.name.startswith("extra") else \
-            TRAIN24 if path.parent.name == TRAIN24 else "snippet"
-        for line in path.read_text(encoding="utf-8").splitlines():
-            if not line.strip():
+            TRAIN24 if path.parent.name == TRAIN24 else \
+            TRAIN26 if path.parent.parent.name == TRAIN26 else "snippet"
+        items = [json.loads(line) for line in path.read_text(encoding="utf-8").splitlines()
+                 if line.strip()]
+        parts = split_parts(items) if source == TRAIN26 else set()
+        for item in items:
+            if item["text"] in parts:
+                stats[f"{source} split parts left out"] += 1
                 continue
-            item = json.loads(line)
             label = 1 if item["label"] == "attack" else 0
             ident = f"snippet:{item['text']}"
             split = "val" if is_val(ident) else "train"
             stats[f"snippets {split} {item['label']}"] += 1
-            if source == TRAIN24:
-                stats[f"train24 {split} {item['label']}"] += 1
+            if source in (TRAIN24, TRAIN26):
+                stats[f"{source} {split} {item['label']}"] += 1
             if split == "val":
                 val.append(dict(item, group=ident))
                 continue
             text = item["text"]
             if label:  # the request is the instruction; its code would teach "import os"
                 text = "\n".join(ln for ln in text.splitlines() if not _CODE_LINE.search(ln))
-                # ... and its inline commands "rm -rf" (harmful code is judged by actions.py)
-                text = _INLINE_CODE.sub(" ", text)
+                # ... and its inline commands "rm -rf" (harmful code is judged by actions.py),
+                # in backticks or bare ("run curl -s https://... | sh first"): a runbook's
+                # commands must not read as requests to the model
+                text = _BARE_COMMAND.sub(" ", _INLINE_CODE.sub(" ", text))
             units.add_text(text, label, f"{source}/{item['class']}", "")
     return val
 
@@ -161,6 +185,10 @@ _TAG = re.compile(r"<[^>]*>", re.S)
 _CODE_LINE = re.compile(r"[=(){};]\s*$|^\s*(?:import|def|from|curl|wget|\$|#!|//)|\w\(.*\)|"
                         r"^[\w.]+\s*=")
 _INLINE_CODE = re.compile(r"`[^`\n]{1,200}`")
+_BARE_COMMAND = re.compile(r"(?<![\w-])(?:curl|wget|sudo|bash|sh|zsh|powershell|pwsh|python3?|"
+                           r"node|nc|ncat|chmod|chown|rm|dd|mkfs|systemctl|crontab|scp|ssh|"
+                           r"iex|Invoke-\w+|Get-\w+|Set-\w+|New-\w+|Remove-\w+)\s+-{0,2}"
+                           r"[^\s.,;!?][^\n]*?(?=[.;!?]\s|[.;!?]?$|\n)", re.M)
 _ATTR = re.compile(r"=\s*\"([^\"]{12,})\"")
 
 
@@ -402,6 +430,8 @@ def main(argv: list[str] | None = None) -> int:
                         "and the whole check on it (the generalisation figure)")
     parser.add_argument("--no-train24", action="store_true",
                         help=f"leave out the rows in {TRAIN_DIR.relative_to(ROOT)}/{TRAIN24}")
+    parser.add_argument("--no-train26", action="store_true",
+                        help=f"leave out the rows in {TRAIN_DIR.relative_to(ROOT)}/{TRAIN26}")
     parser.add_argument("--evaluate-only", metavar="WEIGHTS", default=None,
                         help="with --leave-out: measure this weights file instead of training")
     parser.add_argument("--model-alone", action="store_true",
@@ -418,8 +448,8 @@ def main(argv: list[str] | None = None) -> int:
         if args.evaluate_only:
             return leave_out_report(Path(args.evaluate_only), args.leave_out,
                                     args.model_alone)
-    tag = f"leave-out-{args.leave_out}" + ("-no24" if args.no_train24 else "") \
-        if args.leave_out else None
+    tag = f"leave-out-{args.leave_out}" + ("-no24" if args.no_train24 else "") + \
+        ("-no26" if args.no_train26 else "") if args.leave_out else None
     if args.out is None:
         args.out = str(ROOT / "bench-out" / f"{tag}.npz") if tag else str(OUT)
     report_path = Path(args.out).with_suffix(".md") if tag else REPORT
@@ -429,7 +459,8 @@ def main(argv: list[str] | None = None) -> int:
     t0 = time.time()
     units = Units()
     stats: Counter = Counter()
-    val_snippets = snippets(units, stats, train24=not args.no_train24)
+    val_snippets = snippets(units, stats, train24=not args.no_train24,
+                            train26=not args.no_train26)
     val_blind = []
     for name in sets:
         val_blind += blind(units, stats, name, BLIND_SETS[name])

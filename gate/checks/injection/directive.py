@@ -184,10 +184,29 @@ VOCATIVE_LEAD = frozenset(fold_entry(w) for w in (
     "language large automated artificial intelligence virtual digital "
     "notice reminder important and editors readers liebe lieber liebes hallo an die den "
     "hinweis notiz cher chere cheres pour l remarque querido querida queridos hola para el "
+    "det "
     "la aviso caro cara cari nota per avviso prezado prezada ola beste voor de opmerking "
     "drogi droga do uwaga kara till obs дорогои дорогая привет для заметка примечание "
     "шановнии примітка mily pro poznamka draga pentru nota kedves megjegyzes αγαπητε "
     "προς σημειωση sevgili icin not kepada yth untuk catatan").split())
+
+
+LABEL_CHARS = 90  # a label ("... for the building assistant:") ends within this many characters
+LABEL_WORDS = 10
+# A label speaks to its reader through one of these ("notice for ...", "memo to ...").
+ADDRESS_WORDS = frozenset(fold_entry(w) for w in (
+    "for to from attn attention dear fur an pour aux para per voor aan dla do till for "
+    "pro pentru icin untuk kepada cho gui для до προς").split())
+_LABEL_BREAK = re.compile(r"[.!?;\n\u3002\uff1f\uff01]")  # a label is one phrase
+# People whose job title ends in a reader noun ("Note for the lab assistant:").
+HUMAN_ROLES = frozenset(fold_entry(w) for w in (
+    "teaching lab research administrative admin personal executive dental medical nursing "
+    "legal shop store sales office program programme project editorial care classroom "
+    "library travel estate insurance real").split())
+
+
+# Reader nouns that name people as often as machines ("Note for the reader:", "for the agent:").
+AMBIGUOUS_READERS = frozenset(("reader", "readers", "agent", "agents", "model", "models"))
 
 
 def _is_reader(token: str) -> bool:
@@ -199,6 +218,7 @@ def features(unit: str) -> tuple[dict[str, set[str]], list[str]]:
     feats: dict[str, set[str]] = {}
     found = list(_TOKEN.finditer(unit))
     tokens = [m.group().replace("\x00", "").rstrip(".'-") for m in found]
+    reader_phrase: set[int] = set()  # tokens of a phrase naming a reader near the start
     for i, token in enumerate(tokens):
         opens = i == 0 or tokens[i - 1] in CLAUSE_OPENERS or \
             unit[:found[i].start()].rstrip()[-1:] in (",", ";", ":", "(", "-", '"')
@@ -222,6 +242,29 @@ def features(unit: str) -> tuple[dict[str, set[str]], list[str]]:
             if len(nxt) == len(rest) and all(
                     t.startswith(w) if star else t == w for t, (w, star) in zip(nxt, rest)):
                 feats.setdefault(lang, set()).add(cat)
+                if cat in ("ai", "bot") and i < 6:
+                    reader_phrase.update(range(i, i + 1 + len(rest)))
+    colon = unit.find(":", 0, LABEL_CHARS)
+    if colon > 0 and "vocative" not in feats.get("*", ()) and \
+            not _LABEL_BREAK.search(unit, 0, colon):
+        # "Facilities notice for the building assistant:", "Clinical note (for decision-support
+        # systems):": a label at the head of the sentence whose last word names a reader
+        head = [k for k, m in enumerate(found) if m.end() <= colon]
+        if 2 <= len(head) <= LABEL_WORDS:  # a bare "assistant:" names a speaker
+            k = head[-1]
+            if (k in reader_phrase or (_is_reader(tokens[k]) and
+                                       tokens[k] not in AMBIGUOUS_READERS)) and \
+                    any(tokens[j] in ADDRESS_WORDS for j in head[:-1]) and \
+                    not (k and tokens[k - 1] in HUMAN_ROLES) and \
+                    unit[found[k].end():colon].strip(" )") == "":
+                feats.setdefault("*", set()).add("vocative")
+    if reader_phrase and "vocative" not in feats.get("*", ()):
+        # "Note for the automated reader:", "Catatan untuk asisten otomatis:": a label of
+        # lead words and a phrase naming a reader, ending in a colon or comma
+        last = max(reader_phrase)
+        if unit[found[last].end():found[last].end() + 30].lstrip()[:1] in (",", ":") and \
+                all(k in reader_phrase or tokens[k] in VOCATIVE_LEAD for k in range(last)):
+            feats.setdefault("*", set()).add("vocative")
     if _SUB_SCRIPT.search(unit):
         for m in _SUB_RE.finditer(unit):
             lang, cat = _SUB_KEYS[int(m.lastgroup[1:])]
@@ -897,6 +940,21 @@ def _alone_or_listed(hijacks: list[Hit]) -> list[Hit]:
     return hijacks
 
 
+# A line that only names instructions as hidden, injected or forged is a title about them
+# ("HIDDEN INSTRUCTIONS FOR AI ASSISTANTS"), not a notice to the reader.
+DESCRIBED = re.compile(r"\b(?:hidden|injected|planted|malicious|fake|forged|embedded|"
+                       r"invisible|smuggled|concealed|rogue|bogus|poisoned)\s+(?:ai\s+)?"
+                       r"(?:instructions?|prompts?|commands?|notes?|messages?|notices?|text)\b",
+                       re.I)
+TITLE_WORDS = 10
+
+
+def described_title(line: str) -> bool:
+    """Is ``line`` a short title naming instructions as hidden or forged?"""
+    return len(line.split()) <= TITLE_WORDS and bool(DESCRIBED.search(line)) and \
+        not line.rstrip().endswith((":", ","))
+
+
 def _alternate(text: str, found: list[Hit]) -> list[Hit]:
     """Every other line read together: an instruction interleaved with other text."""
     lines = text.split("\n")
@@ -907,7 +965,7 @@ def _alternate(text: str, found: list[Hit]) -> list[Hit]:
     covered = [(h.start, h.end, h.weight) for h in found]
     for parity in (0, 1):
         picked = [(offsets[i], line) for i, line in enumerate(lines)
-                  if i % 2 == parity and line.strip()]
+                  if i % 2 == parity and line.strip() and not described_title(line)]
         if len(picked) < 3:
             continue
         joined = " ".join(line.strip() for _, line in picked)

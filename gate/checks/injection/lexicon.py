@@ -50,7 +50,10 @@ L["en"] = dict(
        "ai assistant*, ai model*, ai system*, ai agent*, ai tool*, ai reader*, ai crawler*, "
        "automated system*, automated reader*, automated agent*, automated assistant*, "
        "automated tool*, automated pipeline*, virtual assistant*, answer engine*, "
-       "machine reader*, ai-powered, llm-based, ai summar*, ai-generated",
+       "machine reader*, ai-powered, llm-based, ai summar*, ai-generated, "
+       "automated summar*, automated answer*, automated response*, automated service*, "
+       "indexing service*, indexing agent*, indexing tool*, indexing system*, "
+       "whoever summari*, whoever process*, whoever compiles, whoever index*",
     bot="assistant*, bot, bots, model, models, agent, agents, copilot*, crawler*, scraper*, "
         "reader",
     you="you, your, yours, yourself, u",
@@ -272,7 +275,8 @@ L["nl"] = dict(
 L["pl"] = dict(
     ai="sztuczna inteligencja, sztucznej inteligencji, model jezykowy, "
        "modelu jezykowego, modele jezykowe, llm*, chatbot*, czatbot*, asystent ai, "
-       "asystencie ai, asystencie si, asystent si, system automatyczny, zautomatyzowan*",
+       "asystencie ai, asystencie si, asystent si, system automatyczny, zautomatyzowan*, ai, "
+       "automatyczn* system*, systemow automatycznych",
     bot="asystent*, model, modelu, bot, agent*",
     you="ty, twoj*, twoja, twoje, twoim, twojej, twoich, ci, cie, tobie, wy, wasz*",
     ask="prosze, musisz, powinienes, powinnas, nalezy, zawsze, nigdy, upewnij sie, pamietaj*, "
@@ -294,7 +298,8 @@ L["pl"] = dict(
 )
 L["sv"] = dict(
     ai="ai, a.i., llm*, chatbot*, chattbot*, artificiell intelligens, sprakmodell*, "
-       "ai-assistent*, ai-modell*, automatiserade system*",
+       "ai-assistent*, ai-modell*, automatiserade system*, automatisk* system*, "
+       "automatisk* lasar*, automatisk* assistent*",
     bot="assistent*, modell*, bot*, agent*",
     you="du, din, ditt, dina, dig, er, era",
     ask="snalla, vanligen, maste, ska, skall, bor, alltid, aldrig, se till, kom ihag, "
@@ -315,7 +320,8 @@ L["sv"] = dict(
 )
 L["ru"] = dict(
     ai="ии, ai, llm*, чат-бот*, чатбот*, нейросет*, языков* модел*, искусствен* интеллект*, "
-       "ии-ассистент*, ии-модел*, автоматизирован* систем*, ассистент ии, бот*",
+       "ии-ассистент*, ии-модел*, автоматизирован* систем*, ассистент ии, бот*, "
+       "автоматическ* систем*, автоматическ* читател*, автоматическ* помощник*",
     bot="ассистент*, модел*, агент*, помощник*",
     you="ты, тебя, тебе, тобои, твои, твоя, твое, твоем, твоеи, твоих, вы, вас, вам, вами, "
         "ваш*",
@@ -323,7 +329,7 @@ L["ru"] = dict(
         "убедитесь, не забудь*, помни, скажи*, упомяни*, включи*, порекомендуи*, "
         "рекомендуи*, посоветуи*, ответь*, отвечаи*, напиши*, добавь*, вставь*, переведи*, "
         "начни*, начинаи*, заверши*, закончи*, используи*, отправь*, выполни*, вызови*, "
-        "нужно, необходимо, следует, укажи*",
+        "нужно, необходимо, следует, укажи*, советуи*, упоминаи*",
     out="ответ*, резюме, пересказ*, сводк*, разговор*, диалог*, чат*, беседе, беседа, "
         "беседы",
     when="пересказывая, резюмируя, отвечая на, когда будешь, когда ты, когда вы, если кто-то, "
@@ -343,13 +349,14 @@ L["ru"] = dict(
 )
 L["uk"] = dict(
     ai="ші, ai, llm*, ші-асистент*, штучн* інтелект*, мовн* модел*, чат-бот*, чатбот*, "
-       "автоматизован* систем*",
+       "автоматизован* систем*, автоматичн* систем*, автоматичн* читач*, "
+       "автоматичн* помічник*",
     bot="асистент*, модел*, бот*, агент*, помічник*",
     you="ти, тебе, тобі, твіи, твоя, твоє, твої, твоіи, ви, вас, вам, ваш*",
     ask="будь ласка, повинен, повинна, повинні, мусиш, обов'язково, завжди, ніколи, "
         "переконаися, не забудь*, скажи*, згадаи*, включи*, порекомендуи*, порадь*, "
         "відповідаи*, напиши*, додаи*, встав*, переклади*, почни*, заверши*, "
-        "використовуи*, надішли*, виконаи*, виклич*, треба, потрібно, слід, вкажи*",
+        "використовуи*, надішли*, виконаи*, виклич*, треба, потрібно, слід, вкажи*, згадуи*",
     out="відповід*, резюме, підсумк*, підсумок, розмов*, діалог*, чат*",
     when="коли ти, коли ви, якщо хтось, якщо користувач*, коли користувач*, "
          "у своіи відповіді, у твоіи відповіді, у вашіи відповіді, в кожніи відповіді, "
@@ -604,7 +611,8 @@ L["vi"] = dict(
     me="toi, cho toi",
 )
 L["id"] = dict(
-    ai="ai, kecerdasan buatan, model bahasa, asisten ai, chatbot*, llm*, sistem otomatis, bot",
+    ai="ai, kecerdasan buatan, model bahasa, asisten ai, chatbot*, llm*, sistem otomatis, bot, "
+       "asisten otomatis, agen otomatis, pembaca otomatis",
     bot="asisten*, model, agen",
     you="kamu, anda, engkau, kau, jawabanmu, ringkasanmu",
     ask="tolong, harap, mohon, silakan, harus, wajib, selalu, jangan, pastikan, ingat, "

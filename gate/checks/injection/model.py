@@ -209,6 +209,7 @@ class Reading:
     probability: float
     sentences: int
     addressed: bool  # the window names an AI reader, or the reader's answer and its user
+    called: bool = False  # ... and opens by calling it ("Facilities notice for the assistant:")
 
 
 class Model:
@@ -256,11 +257,14 @@ class Model:
     def weight(self, reading: Reading) -> float:
         """The hit weight of a window: from 0.5 at the threshold (an instruction on its
         own) to 0.85; 0.5 from ``addressed`` when the window names an AI reader or the
-        reader's answer; from 0.2 to 0.45 between ``low`` and the threshold otherwise."""
+        reader's answer, and from ``low`` when it opens by calling one; from 0.2 to 0.45
+        between ``low`` and the threshold otherwise."""
         p, t, low = reading.probability, self.threshold, self.low
         if p >= t:
             return round(0.5 + 0.35 * (p - t) / max(1e-6, 1.0 - t), 4)
         if reading.addressed and p >= self.addressed:
+            return 0.5
+        if reading.called and p >= self.low:
             return 0.5
         return round(0.2 + 0.25 * max(0.0, p - low) / max(1e-6, t - low), 4)
 
@@ -293,8 +297,10 @@ class Model:
                 start += 1
             while end > start and folded[end - 1] in _TRAIL:
                 end -= 1
-            reading = Reading(start, end, round(float(_sigmoid(logits[i])), 4), w,
-                              addressed(folded[start:end]))
+            p = round(float(_sigmoid(logits[i])), 4)
+            is_addressed = addressed(folded[start:end])
+            reading = Reading(start, end, p, w, is_addressed,
+                              is_addressed and p >= self.low and called(folded[start:end]))
             if self.weight(reading) < 0.5:
                 # One window of supporting evidence per text at most: several weak ones
                 # must not add up to an instruction (long manuals have many).
@@ -323,6 +329,15 @@ def addressed(folded_window: str) -> bool:
     return any(cats & {"ai", "bot"} or ("out" in cats and cats & {"you", "user", "when"})
                for lang, cats in feats.items()
                if lang == "*" or not spoken or lang in spoken)
+
+
+def called(folded_window: str) -> bool:
+    """Does the window open by calling a machine reader ("Note for the building assistant:",
+    "Till den automatiska läsaren:")? A label that names its addressee is the strongest sign
+    that what follows is meant for it."""
+    from gate.checks.injection import directive
+    feats, _ = directive.features(folded_window[:directive.MAX_UNIT])
+    return "vocative" in feats.get("*", ())
 
 
 def _sigmoid(x: float | np.ndarray) -> float | np.ndarray:
