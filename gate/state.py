@@ -260,14 +260,13 @@ class State:
         return (loads(row[0]), loads(row[1])) if row else None
 
     def cache_text(self, key: str) -> str | None:
-        row = self.conn.execute("SELECT text FROM cache WHERE key = ?", (key,)).fetchone()
-        return zlib.decompress(text_z_of(self.path.parent, row[0])).decode("utf-8") \
-            if row else None
+        text_z = self.cache_text_z(key)
+        return zlib.decompress(text_z).decode("utf-8") if text_z is not None else None
 
     def cache_text_z(self, key: str) -> bytes | None:
         """A cached text (zlib-compressed UTF-8), for a worker to unpack."""
-        row = self.conn.execute("SELECT text FROM cache WHERE key = ?", (key,)).fetchone()
-        return text_z_of(self.path.parent, row[0]) if row else None
+        stored = self.cache_text_stored(key)
+        return text_z_of(self.path.parent, stored) if stored is not None else None
 
     def cache_text_stored(self, key: str) -> bytes | None:
         """A cached text as the row holds it: the compressed text, or the reference to

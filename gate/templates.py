@@ -487,7 +487,8 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     titles = tuple(sorted(template[3] - {page.title}))
     signed = tuple(sorted({h for stem, h in page.signed if stem in template[4]} | shaped))
     recurring = tuple(int(h) for h in np.setdiff1d(
-        np.intersect1d(mine, template[7], assume_unique=True), part_strong(found)))
+        np.intersect1d(mine, template[7], assume_unique=True),
+        np.array(found[0], dtype=np.uint64)))  # less the everywhere-template blocks
     if not (found[0] or found[1] or titles or signed or rotated or recurring):
         return ()
     if recurring:
@@ -495,11 +496,6 @@ def removal(page: Page, learnt: Learnt) -> Removal | tuple[()]:
     if rotated:
         return (found[0], found[1], titles, signed, rotated)
     return (found[0], found[1], titles, signed) if titles or signed else (found[0], found[1])
-
-
-def part_strong(found: Sequence[tuple[int, ...]]) -> np.ndarray:
-    """The everywhere-template blocks of a removal's parts, as a uint64 array."""
-    return np.array(found[0], dtype=np.uint64)
 
 
 def removal_key(template: Removal) -> str:

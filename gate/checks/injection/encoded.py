@@ -272,8 +272,8 @@ def find(text: str, budget: list[int], _joined: bool = False) -> list[Payload]:
             tried += 1
             start = m.end()
             chunk = text[start:start + 2000]
-            words = _LETTERS.findall(chunk.lower())
-            if sum(w in _ROT13_COMMON for w in words) > sum(w in COMMON for w in words):
+            rotated, plain, _ = _rot13_votes(chunk.lower())
+            if rotated > plain:
                 # only when the rotated text reads better: plain text after a mention of
                 # ROT13 (a lesson, a codec's manual) turns into gibberish and is left
                 keep("rot13", start, start + len(chunk), codecs.decode(chunk, "rot13"))
@@ -357,12 +357,24 @@ _ROT13_GATE = re.compile(r" (?:gur|gb|naq|n|lbh|lbhe|bs|vf|va|sbe|nobhg|jvgu|guv
 _LABEL = re.compile(r"[:\u2014\u2013]\s")  # "Build id: <rot13>", "For the assistant — <rot13>"
 
 
+def _rot13_votes(lowered: str) -> tuple[int, int, int]:
+    """(words of common English once rotated, words of it as they stand, words) of a
+    lower-cased text."""
+    words = _LETTERS.findall(lowered)
+    return (sum(w in _ROT13_COMMON for w in words), sum(w in COMMON for w in words),
+            len(words))
+
+
+def _line_end(text: str, line: int) -> int:
+    """Where the line starting at ``line`` ends (its newline, or the end of ``text``)."""
+    end = text.find("\n", line)
+    return len(text) if end < 0 else end
+
+
 def _rot13_text(segment: str) -> bool:
     """Does ``segment`` read as common English once rotated, and not as it stands?"""
-    words = _LETTERS.findall(segment.lower())
-    rotated = sum(w in _ROT13_COMMON for w in words)
-    plain = sum(w in COMMON for w in words)
-    return rotated >= ROT13_MIN and rotated >= 0.25 * len(words) and rotated > 2 * plain
+    rotated, plain, n = _rot13_votes(segment.lower())
+    return rotated >= ROT13_MIN and rotated >= 0.25 * n and rotated > 2 * plain
 
 
 def _rot13_lines(text: str) -> list[tuple[int, int]]:
@@ -386,9 +398,8 @@ def _rot13_lines(text: str) -> list[tuple[int, int]]:
         end = len(text) if end < 0 else end
         at = -1
         for label in list(_LABEL.finditer(lowered, line, end))[:4]:
-            words = _LETTERS.findall(lowered[line:label.start()])
-            if _rot13_text(lowered[label.end():end]) and \
-                    sum(w in _ROT13_COMMON for w in words) <= sum(w in COMMON for w in words):
+            rotated, plain, _ = _rot13_votes(lowered[line:label.start()])
+            if _rot13_text(lowered[label.end():end]) and rotated <= plain:
                 at = label.end()  # a plain label ("Build id:") before the rotated text
                 break
         if at < 0 and _rot13_text(lowered[line:end]):
@@ -439,14 +450,12 @@ def _leet_lines(text: str) -> list[tuple[int, int, str]]:
     lines: dict[int, int] = {}
     for line, count in pairs.items():
         if count >= 2:
-            end = text.find("\n", line)
-            lines[line] = len(_LEET_CUE.findall(text, line, len(text) if end < 0 else end))
+            lines[line] = len(_LEET_CUE.findall(text, line, _line_end(text, line)))
     out: list[tuple[int, int, str]] = []
     for line, count in lines.items():
         if count < 2:
             continue
-        end = text.find("\n", line)
-        end = len(text) if end < 0 else end
+        end = _line_end(text, line)
         body = text[line:end]
         tokens = re.findall(r"[\w@$|!+']+", body)
         leet = [t for t in tokens if _LEET_WORD.fullmatch(t) and not t.isdigit() or

@@ -200,9 +200,8 @@ def scan(text: str, links: list[tuple[str, str]] | None = None,
                                             text[end:end + SLOT_CONTEXT])
             if asked:  # a slot named for chat data, and the words around ask to fill it
                 verdict = (min(verdict[0] + 0.25, 0.55), verdict[1] + "; " + asked[1])
-            elif cue and verdict[0] < (0.7 if kind == "image" else 0.6):
+            elif cue and verdict[0] < (cap := 0.7 if kind == "image" else 0.6):
                 # a placeholder, and the words around ask for it to be filled
-                cap = 0.7 if kind == "image" else 0.6
                 verdict = (min(verdict[0] + FILLED_BOOST, cap),
                            f"{verdict[1]}; the text around it asks for it to be filled with "
                            f"the user's data ({cue!r})")
