@@ -940,3 +940,39 @@ def test_a_recurring_block_goes_only_out_of_line_with_the_pages_text():
     # the stock paragraph is marked up as the notice's paragraphs, its heading heads it, and
     # a list item is the page's structure, not a box put into it
     assert cleaned == "\n".join(b.text for b in blocks if b is not blocks[1])
+
+
+def test_a_header_naming_the_source_above_the_texts_own_title_is_not_text():
+    """Invented data: an exporter's header in free wording (the organisation, "Text export
+    of <address>", the export date) over a blank line and the text's own underlined
+    title goes; short lines above a title that name no address stay (they may be the
+    document's own), and so does a header with no title of the text's own after it."""
+    from gate.extract.text import without_export_header
+
+    body = ("Lamp repairs on Elm Street\n==========================\n\n"
+            "The lamps on Elm Street are repaired on Monday.")
+    header = ("INVENTED LAMP TRUST\nText export of https://lamps.example.org/news/elm\n"
+              "Exported 6 June 2026 (plain text version)\n\n")
+    assert without_export_header(header + body) == body
+    atx = "# Lamp repairs on Elm Street\n\nThe lamps are repaired on Monday."
+    assert without_export_header(header + atx) == atx
+    no_address = "INVENTED LAMP TRUST\nNotice to residents\n\n" + body
+    assert without_export_header(no_address) == no_address
+    untitled = header + "The lamps on Elm Street are repaired on Monday."
+    assert without_export_header(untitled) == untitled
+    longer = "".join(f"Line {i} of www.lamps.example.org/{i}\n" for i in range(5))
+    assert without_export_header(longer + "\n" + body) == longer + "\n" + body
+
+
+def test_a_pdf_header_of_the_sites_name_and_the_title_without_a_mark_between_is_furniture():
+    # invented data: the header sets the site's name and the title side by side, and
+    # the page goes on with the title alone
+    from gate.extract.pdf import without_furniture
+
+    page = ("Invented Records Office Road closures this week\nRoad closures this week\n"
+            "Elm Street is closed on Monday.")
+    assert without_furniture([page]) == [
+        "Road closures this week\nElm Street is closed on Monday."]
+    # a two-word title at a first line's end is too little to call the line a header
+    short = "Report of the Annual Meeting\nAnnual Meeting\nThe meeting opened at 7pm."
+    assert without_furniture([short]) == [short]
