@@ -269,6 +269,9 @@ def _title_header(lines: list[str], drop: set[int]) -> bool:
         title = words(part.rstrip(".\u2026"))
         if len(title) < 2 or not words(first[:m.start()]) or len(after) < len(title):
             continue
+        # a title cut short at a set width without an ellipsis ("... with roof lante"):
+        # three words or more, its last a part of the title's word
+        cut = cut or len(title) >= TITLE_MIN_WORDS
         if after[:len(title)] == title or (cut and after[:len(title) - 1] == title[:-1] and
                                            after[len(title) - 1].startswith(title[-1])):
             return True

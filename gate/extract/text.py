@@ -104,11 +104,21 @@ def without_export_header(text: str) -> str:
         end -= 1
     if end > start + 1 and _MARKER.match(lines[end - 1]):
         end -= 1
+    # a closing line that is one Markdown link and nothing else ("[Read the original
+    # notice][src]", then its reference): a link back, navigation as a link-dominated
+    # block of an HTML page is, which the HTML copy does not give as text
+    last = end
+    while last > start and (not lines[last - 1].strip() or _LINK_REFERENCE.match(lines[last - 1])):
+        last -= 1
+    if last > start + 1 and last < end and _LINK_ONLY.match(lines[last - 1]):
+        end = last - 1
     if start == 0 and end == len(lines):
         return text
     return "\n".join(lines[start:end]).strip("\n")
 
 
+_LINK_REFERENCE = re.compile(r"^\s{0,3}\[[^\]]+\]:\s*\S+")  # "[src]: https://..."
+_LINK_ONLY = re.compile(r"^\s*\[[^\]]+\](?:\[[^\]]*\]|\([^)\s]+\))\s*$")
 _ADDRESS = re.compile(r"\b(?:https?|ftp)://\S+|\bwww\.\S+\.\S+", re.IGNORECASE)
 SOURCE_HEADER_MAX_LINES = 4
 SOURCE_HEADER_MAX_WORDS = 14
