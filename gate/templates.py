@@ -22,7 +22,11 @@ template when it occurs
   by section, teasers that rotate), or on at least ``SHARE_ROTATING`` of them wherever it
   stands (a forum's stock answers) -- removed from a page only where it sits next to a
   link-dominated or an everywhere-template block, so a stock paragraph that several
-  notices of a site share (and that trafilatura missed) is not taken for a teaser.
+  notices of a site share (and that trafilatura missed) is not taken for a teaser. Such
+  a run does not cross into or out of a table (a newsletter box above a table of the
+  page's own), and a paragraph in trafilatura's main text marked up as the page's
+  opening paragraph is (its stock paragraphs, or the opening itself, which teasers on
+  other pages quote) is not part of one.
 
 Short lines with numbers, dates and names are counted by their shape (:func:`shape_hash`,
 and :func:`titled_hash` for a line naming the page's own title) and go wherever they
@@ -78,7 +82,7 @@ from gate import urls
 from gate.extract.model import Block, line_hashes, row_cells
 from gate.tokens import block_hash, words
 
-TEMPLATES_VERSION = 22  # part of the cache key: bump when blocks or composition change
+TEMPLATES_VERSION = 23  # part of the cache key: bump when blocks or composition change
 MIN_PAGES = 3
 ASIDE_MIN_PAGES = 5
 SHARE_ANY = 0.8
@@ -526,15 +530,32 @@ def _dropped(blocks: Sequence[Block], strong: set[int], weak: set[int]) -> set[i
         return after is not None and after.hash not in strong and after.hash not in weak \
             and after.links < LINK_DOMINATED and not after.nav
 
+    # a weak paragraph in trafilatura's main text marked up as the page's opening
+    # paragraph (the first under its title, past a dateline) is the page's text: a
+    # stock paragraph of its notices, or the opening itself, which teasers on other pages
+    # quote; it stays whatever box of the template stands next to it. Answers and
+    # comments, marked up otherwise than the question they follow, still go with the box
+    # they stand in
+    at = [i for i, b in enumerate(blocks) if b.title]
+    body = next((b.markup for b in blocks[at[0] + 1:] if b.kind == "text" and b.main and
+                 b.links < LINK_DOMINATED and not b.nav and
+                 len(b.text.split()) > TAGLINE_MAX_WORDS), None) if len(at) == 1 else None
+
     changed = True
     while changed:  # a run of weak blocks goes when one end of it touches an anchor
         changed = False
         for i, block in enumerate(blocks):
             if anchored[i] or block.title or (block.kind == "heading" and block.main and
-                                               opens(i)):
+                                               opens(i)) or \
+                    (body and block.kind == "text" and block.main and block.markup == body):
                 continue
-            before = i > 0 and anchored[i - 1]
-            after = i + 1 < len(blocks) and anchored[i + 1]
+            # a table's cells and the blocks around the table do not anchor each other: a
+            # run of weak blocks ending in a box (a newsletter form) beside a table of the
+            # page's own stops at the table, whose header row recurs on many pages
+            before = i > 0 and anchored[i - 1] and \
+                (blocks[i - 1].kind == "cell") == (block.kind == "cell")
+            after = i + 1 < len(blocks) and anchored[i + 1] and \
+                (blocks[i + 1].kind == "cell") == (block.kind == "cell")
             # a short byline ("answered by A. N.", "posted by ...") between two blocks of
             # the template goes with them
             byline = (before or after) and block.links == 0 and block.kind == "text" and \

@@ -304,3 +304,26 @@ def test_an_estimate_near_the_threshold_gives_way_to_the_exact_jaccard():
     # without the texts, the estimate decides and the finding says it is one
     out = dup.evaluate([a, b], dup.DuplicatesSettings(threshold=round(estimate - 0.001, 4)))
     assert "estimated Jaccard" in out.findings["b"][0].message
+
+
+def test_a_held_document_is_named_under_the_closest_keeper_and_lists_every_other():
+    # invented texts: windows of 1,000 distinct words over one list, so the exact Jaccard
+    # of word 5-grams is computed by hand: x vs k1 906/1086 = 0.834, x vs k2 936/1056 =
+    # 0.886, k1 vs k2 846/1146 = 0.738 (both kept; x, ranked between them, is held by k1
+    # but closest to k2, which ranks below it)
+    tokens = [f"t{i}" for i in range(1200)]
+    texts = {"k1": " ".join(tokens[0:1000]), "x": " ".join(tokens[90:1090]),
+             "k2": " ".join(tokens[150:1150])}
+    items = [item("k1", texts["k1"], seen=(1, 0)), item("x", texts["x"], seen=(1, 1)),
+             item("k2", texts["k2"], seen=(1, 2)), item("h", texts["x"], candidate=False)]
+    out = dup.evaluate(items, SETTINGS, text_of=texts.get)
+    assert out.keepers == {"k1", "k2"}
+    for key in ("x", "h"):  # a candidate held, and a document held by another check
+        finding = out.findings[key][0]
+        assert finding.details["keeper"] == "k2.txt"
+        assert [o["keeper"] for o in finding.details["also_keepers"]] == ["k1.txt"]
+        assert "also a near-duplicate of k1.txt" in finding.message
+    # x lost to k1, which ranks above it: the why says so, not that k2 was seen first
+    assert "held because it also duplicates k1.txt, which is kept before it: it was " \
+        "seen first" in out.findings["x"][0].message
+    assert "seen first" in out.findings["h"][0].message

@@ -940,3 +940,96 @@ def test_a_recurring_block_goes_only_out_of_line_with_the_pages_text():
     # the stock paragraph is marked up as the notice's paragraphs, its heading heads it, and
     # a list item is the page's structure, not a box put into it
     assert cleaned == "\n".join(b.text for b in blocks if b is not blocks[1])
+
+
+def test_a_header_naming_the_source_above_the_texts_own_title_is_not_text():
+    """Invented data: an exporter's header in free wording (the organisation, "Text export
+    of <address>", the export date) over a blank line and the text's own underlined
+    title goes; short lines above a title that name no address stay (they may be the
+    document's own), and so does a header with no title of the text's own after it."""
+    from gate.extract.text import without_export_header
+
+    body = ("Lamp repairs on Elm Street\n==========================\n\n"
+            "The lamps on Elm Street are repaired on Monday.")
+    header = ("INVENTED LAMP TRUST\nText export of https://lamps.example.org/news/elm\n"
+              "Exported 6 June 2026 (plain text version)\n\n")
+    assert without_export_header(header + body) == body
+    atx = "# Lamp repairs on Elm Street\n\nThe lamps are repaired on Monday."
+    assert without_export_header(header + atx) == atx
+    no_address = "INVENTED LAMP TRUST\nNotice to residents\n\n" + body
+    assert without_export_header(no_address) == no_address
+    untitled = header + "The lamps on Elm Street are repaired on Monday."
+    assert without_export_header(untitled) == untitled
+    longer = "".join(f"Line {i} of www.lamps.example.org/{i}\n" for i in range(5))
+    assert without_export_header(longer + "\n" + body) == longer + "\n" + body
+
+
+def test_a_pdf_header_of_the_sites_name_and_the_title_without_a_mark_between_is_furniture():
+    # invented data: the header sets the site's name and the title side by side, and
+    # the page goes on with the title alone
+    from gate.extract.pdf import without_furniture
+
+    page = ("Invented Records Office Road closures this week\nRoad closures this week\n"
+            "Elm Street is closed on Monday.")
+    assert without_furniture([page]) == [
+        "Road closures this week\nElm Street is closed on Monday."]
+    # a two-word title at a first line's end is too little to call the line a header
+    short = "Report of the Annual Meeting\nAnnual Meeting\nThe meeting opened at 7pm."
+    assert without_furniture([short]) == [short]
+
+
+def test_a_table_of_the_pages_own_is_not_anchored_by_a_box_beside_it():
+    # invented data: a newsletter box (weak, beside a link) stands just above a table
+    # whose header row recurs on many notices of the site (weak too); the run of weak
+    # blocks stops at the table, whose cells do not anchor nor get anchored by the box
+    box = "Subscribe to daily alerts for a court of your choice."
+    head = ["Type of hearing", "Where it will be heard"]
+    blocks = _blocks(("Closure of the invented court", {"kind": "heading", "title": True}),
+                     prose(1, 30),
+                     ("Find out more", {"links": 1.0, "main": False}),
+                     (box, {"main": False}),
+                     *[(cell, {"kind": "cell", "main": False}) for cell in head],
+                     ("Urgent applications", {"kind": "cell", "main": False}))
+    weak = {block_hash(box)} | {block_hash(cell) for cell in head}
+    drop = templates._dropped(blocks, set(), weak)
+    assert block_hash(box) in drop
+    assert not drop & {block_hash(cell) for cell in head}
+
+
+def test_a_weak_paragraph_marked_up_as_the_pages_opening_stays_beside_a_box():
+    # invented data: a stock paragraph of a site's notices (weak: on a fifth of the pages)
+    # in the main text with the markup of the page's opening paragraph stays beside a
+    # promotion box on most pages; an answer marked up otherwise goes with the box
+    stock = "Sessions are free for members and cost five pounds for everyone else."
+    answer = "Have you tried a completely fresh profile? Old settings linger."
+    promo = "Members get ten per cent off parts this month."
+    title = ("Brake tuning evening", {"kind": "heading", "title": True, "markup": "h1"})
+    opening = (prose(2, 30), {"markup": "article>p"})
+    for text, markup, kept in ((stock, "article>p", True), (answer, "div.answer>p", False)):
+        blocks = _blocks(title, ("Published 2 April 2026", {"markup": "p.dateline"}),
+                         opening, (promo, {"main": False, "markup": "div.promo"}),
+                         (text, {"markup": markup}))
+        drop = templates._dropped(blocks, {block_hash(promo)}, {block_hash(text)})
+        assert (block_hash(text) not in drop) is kept
+
+
+def test_a_closing_markdown_link_back_and_a_header_title_cut_without_an_ellipsis_go():
+    # invented data: a Markdown export closes with one reference-style link back to the
+    # original (an HTML page's link-dominated block, no text in the HTML copy); a PDF's
+    # header cuts the title at a set width with no ellipsis, and the title then wraps
+    from gate.extract.pdf import without_furniture
+    from gate.extract.text import without_export_header
+
+    body = "# Lamp repairs\n\nThe lamps on Elm Street are repaired on Monday."
+    closing = "\n\n[Read the original notice][src]\n\n[src]: https://lamps.example.org/a\n"
+    assert without_export_header(body + closing) == body
+    # a link inside the text's last paragraph, or a link line with no reference after it,
+    # stays (from memory: CommonMark reference-style links)
+    inline = body + "\n\n[Apply for a permit](https://lamps.example.org/permit)"
+    assert without_export_header(inline) == inline
+    sentence = body + "\n\nSee [the map][m] for the streets.\n\n[m]: https://lamps.example.org/m"
+    assert without_export_header(sentence) == sentence
+    page = ("Invented Planning Register  |  AL/26/0412/FUL: Single storey rear extension "
+            "with roof lante\nAL/26/0412/FUL: Single storey rear\nextension with roof "
+            "lantern\nReceived 3 March")
+    assert without_furniture([page]) == [page.split("\n", 1)[1]]

@@ -33,8 +33,13 @@ shingle sets when both texts can be read (a finding says which it reports).
 Which one is kept: documents are ranked by the ``trust`` of their allow rule (higher
 first), then by date (newer first; undated last), then by first seen (earlier runs first,
 then inbox order), and taken greedily: a document is kept unless it is a near-duplicate of
-one already kept. The finding names the keeper, the similarity and, when the two differ in
-numbers, dates or amounts, the differing tokens side by side. When the keeper replaces a
+one already kept. Once every keeper is chosen, a held document is named under the kept
+document it is closest to (copies first, then the highest similarity; a keeper ranked below
+it can be closer than the one that held it, and the finding then says which one held it),
+and ``also_keepers`` lists every other kept document it is a copy or near-duplicate of, each
+with its similarity, so a reviewer sees all of them. The finding names the keeper, the
+similarity and, when the two differ in numbers, dates or amounts, the differing tokens side
+by side. When the keeper replaces a
 document accepted in an earlier run, that one is superseded.
 
 Example::
@@ -79,13 +84,13 @@ FAR_BELOW = 0.15  # at most this for a pair 0.3 below it
 EXACT_MARGIN = 0.06
 
 EXACT = define("duplicate.exact", "an exact copy of a kept document",
-               "this is an exact copy ({how}) of {keeper}, which is kept{why}{caveat}")
+               "this is an exact copy ({how}) of {keeper}, which is kept{why}{caveat}{also}")
 NEAR = define("duplicate.near", "a near-duplicate of a kept document",
               "this is a near-duplicate of {keeper} ({measure} {similarity:.2f}, "
-              "threshold {threshold:.2f}), which is kept{why}{diverging}")
+              "threshold {threshold:.2f}), which is kept{why}{diverging}{also}")
 SUPERSEDED = define("duplicate.superseded", "replaced by a newer or more trusted version",
                     "accepted in an earlier run, now replaced by {keeper} ({measure} "
-                    "{similarity:.2f}){why}{diverging}")
+                    "{similarity:.2f}){why}{diverging}{also}")
 
 
 class DuplicatesSettings(Section):
@@ -328,26 +333,35 @@ def evaluate(items: Sequence[Item], settings: DuplicatesSettings,
         common = np.intersect1d(mine, theirs, assume_unique=True).size
         return common / (mine.size + theirs.size - common), "near exact"
 
-    def find(item: Item) -> tuple[Item, str, float] | None:
+    def matches(item: Item) -> list[tuple[Item, str, float]]:
+        """Every kept document ``item`` is a copy or near-duplicate of, closest first
+        (copies first, then by similarity, then by rank)."""
+        found: dict[str, tuple[Item, str, float]] = {}
         if item.sha256 in by_bytes:
-            return by_bytes[item.sha256], "same bytes", 1.0
+            hit = by_bytes[item.sha256]
+            found[hit.key] = (hit, "same bytes", 1.0)
         if item.text_sha256 and item.text_sha256 in by_text:
-            return by_text[item.text_sha256], "same text", 1.0
-        if item.minhash is None:
-            return None
-        mine = lean(item.minhash)
-        best: tuple[Item, str, float] | None = None
-        for key in sorted(lsh.query(mine)):
-            # sketches are rebuilt from their bytes for the few candidates, rather than
-            # kept as objects for every kept document (memory grows with the corpus)
-            similarity, how = similar(item, key, float(mine.jaccard(lean(kept[key].minhash))))
-            if similarity >= settings.threshold and (best is None or similarity > best[2]):
-                best = (kept[key], how, similarity)
-        return best
+            hit = by_text[item.text_sha256]
+            found.setdefault(hit.key, (hit, "same text", 1.0))
+        if item.minhash is not None:
+            mine = lean(item.minhash)
+            for key in sorted(lsh.query(mine)):
+                if key in found or key == item.key:
+                    continue
+                # sketches are rebuilt from their bytes for the few candidates, rather
+                # than kept as objects for every kept document (memory grows with the
+                # corpus)
+                similarity, how = similar(item, key,
+                                          float(mine.jaccard(lean(kept[key].minhash))))
+                if similarity >= settings.threshold:
+                    found[key] = (kept[key], how, similarity)
+        return sorted(found.values(), key=lambda hit: (
+            hit[1].startswith("near"), -hit[2], _rank(hit[0])))
 
+    lost: dict[str, tuple[Item, str, float]] = {}  # the keeper ranked above that held it
     for item in competing:
-        hit = find(item)
-        if hit is None:
+        hits = matches(item)
+        if not hits:
             kept[item.key] = item
             by_bytes.setdefault(item.sha256, item)
             if item.text_sha256:
@@ -355,26 +369,52 @@ def evaluate(items: Sequence[Item], settings: DuplicatesSettings,
             if item.minhash is not None:
                 lsh.insert(item.key, lean(item.minhash), check_duplication=False)
             continue
-        keeper, how, similarity = hit
-        finding = _finding(item, keeper, how, similarity, settings, text_of)
+        lost[item.key] = hits[0]
+    # with every keeper chosen, each held document is named under the kept document it
+    # is closest to, and its finding lists every other kept one it duplicates too (a
+    # keeper ranked below it can be closer than the one that held it)
+    for item in competing:
+        if item.key in kept:
+            continue
+        hits = matches(item) or [lost[item.key]]
+        if not item.in_batch:  # superseded: named under the keeper that replaced it
+            hits = [lost[item.key]] + [h for h in hits if h[0].key != lost[item.key][0].key]
+        finding = _finding(item, hits, settings, text_of, lost[item.key][0])
         if not item.in_batch:
             outcome.superseded[item.key] = finding
         else:
             outcome.findings.setdefault(item.key, []).append(finding)
     for item in held:
-        hit = find(item)
-        if hit is not None:
-            keeper, how, similarity = hit
+        hits = matches(item)
+        if hits:
             outcome.findings.setdefault(item.key, []).append(
-                _finding(item, keeper, how, similarity, settings, text_of))
+                _finding(item, hits, settings, text_of, hits[0][0]))
     outcome.keepers = set(kept)
     return outcome
 
 
-def _finding(item: Item, keeper: Item, how: str, similarity: float,
-             settings: DuplicatesSettings, text_of: Callable[[str], str | None] | None
-             ) -> Finding:
-    why = _why(keeper, item)
+def _finding(item: Item, hits: Sequence[tuple[Item, str, float]],
+             settings: DuplicatesSettings, text_of: Callable[[str], str | None] | None,
+             held_by: Item) -> Finding:
+    """The finding for ``item``: named under ``hits[0]`` (the closest kept document),
+    listing the other kept documents it duplicates; ``held_by`` is the keeper ranked above
+    it that kept it out (the why names it when the closest one ranks below it)."""
+    keeper, how, similarity = hits[0]
+    if keeper.key == held_by.key or _rank(keeper) < _rank(item):
+        why = _why(keeper, item)
+    else:
+        why = (f" (this one is held because it also duplicates {held_by.path}, which is "
+               f"kept before it{_why(held_by, item).replace(' (', ': ', 1)}")
+    others = [{"keeper": other.path, "keeper_id": other.key, "similarity": round(value, 4),
+               "measure": {"same bytes": "same bytes", "same text": "same text",
+                           "near exact": "exact Jaccard"}.get(kind, "estimated Jaccard")}
+              for other, kind, value in hits[1:]]
+    also = ""
+    if others:
+        also = "; it is also a near-duplicate of " + ", ".join(
+            f"{o['keeper']} ({o['measure']}" + ("" if o["measure"].startswith("same") else
+                                                 f" {o['similarity']:.2f}") + ")"
+            for o in others) + ", which " + ("is" if len(others) == 1 else "are") + " kept"
     pairs: list[list[str]] = []
     near = how.startswith("near")
     if near and text_of is not None:
@@ -388,7 +428,7 @@ def _finding(item: Item, keeper: Item, how: str, similarity: float,
     details = dict(keeper=keeper.path, keeper_id=keeper.key, similarity=round(similarity, 4),
                    measure="exact Jaccard" if how == "near exact" else "estimated Jaccard",
                    threshold=settings.threshold, why=why, diverging=diverging,
-                   differences=pairs)
+                   differences=pairs, also=also, also_keepers=others)
     if item.accepted_before and not keeper.accepted_before:
         return SUPERSEDED(**details)
     if not near:

@@ -20,7 +20,7 @@ __all__ = ["EXTRACT_VERSION", "TYPES", "Extracted", "Extraction", "extract"]
 # Every type extraction produces, in the order the policy reference lists them.
 TYPES = ("html", "pdf", "text", *OFFICE_TYPES, "email", "mbox")
 # Part of the cache key: bump when an extractor's output changes for the same bytes.
-EXTRACT_VERSION = 9
+EXTRACT_VERSION = 10
 
 
 def extract(data: bytes, *, max_pages: int, max_nesting: int,

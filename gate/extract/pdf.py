@@ -211,6 +211,7 @@ _HEADER_PARTS = re.compile(r"\s+[|·•\-–—:]\s+")
 _ADDRESS = re.compile(r"^(?:[a-z][a-z0-9+.-]*://|www\.)\S+$|^\S+@\S+\.\S+$", re.IGNORECASE)
 FURNITURE_LINES = 2  # lines at the top and at the bottom of a page that may be furniture
 FURNITURE_MAX_WORDS = 8
+TITLE_MIN_WORDS = 3  # a title this long repeated at a header's end makes it a header
 
 
 def without_furniture(texts: list[str]) -> list[str]:
@@ -255,12 +256,22 @@ def _title_header(lines: list[str], drop: set[int]) -> bool:
         return False
     first = lines[filled[0]].strip()
     after = words(" ".join(lines[i] for i in filled[1:4]))
+    # the site's name and the title set side by side with no mark between them
+    # ("Invented Records Office Road closures this week"), the next line that title alone
+    title = words(lines[filled[1]])
+    head = words(first)
+    if len(title) >= TITLE_MIN_WORDS and len(head) > len(title) and \
+            head[len(head) - len(title):] == title:
+        return True
     for m in _HEADER_PARTS.finditer(first):
         part = first[m.end():].rstrip()
         cut = part.endswith(("...", "\u2026"))  # a title cut short: "Restoring a narrowb..."
         title = words(part.rstrip(".\u2026"))
         if len(title) < 2 or not words(first[:m.start()]) or len(after) < len(title):
             continue
+        # a title cut short at a set width without an ellipsis ("... with roof lante"):
+        # three words or more, its last a part of the title's word
+        cut = cut or len(title) >= TITLE_MIN_WORDS
         if after[:len(title)] == title or (cut and after[:len(title) - 1] == title[:-1] and
                                            after[len(title) - 1].startswith(title[-1])):
             return True

@@ -97,14 +97,52 @@ def without_export_header(text: str) -> str:
             if banner > BANNER_MAX_WORDS and not (
                     banner <= LONG_BANNER_MAX_WORDS and _titled(lines[start:])):
                 start = 0
+    if start == 0:
+        start = _source_header(lines)
     end = len(lines)
     while end > start and not lines[end - 1].strip():
         end -= 1
     if end > start + 1 and _MARKER.match(lines[end - 1]):
         end -= 1
+    # a closing line that is one Markdown link and nothing else ("[Read the original
+    # notice][src]", then its reference): a link back, navigation as a link-dominated
+    # block of an HTML page is, which the HTML copy does not give as text
+    last = end
+    while last > start and (not lines[last - 1].strip() or _LINK_REFERENCE.match(lines[last - 1])):
+        last -= 1
+    if last > start + 1 and last < end and _LINK_ONLY.match(lines[last - 1]):
+        end = last - 1
     if start == 0 and end == len(lines):
         return text
     return "\n".join(lines[start:end]).strip("\n")
+
+
+_LINK_REFERENCE = re.compile(r"^\s{0,3}\[[^\]]+\]:\s*\S+")  # "[src]: https://..."
+_LINK_ONLY = re.compile(r"^\s*\[[^\]]+\](?:\[[^\]]*\]|\([^)\s]+\))\s*$")
+_ADDRESS = re.compile(r"\b(?:https?|ftp)://\S+|\bwww\.\S+\.\S+", re.IGNORECASE)
+SOURCE_HEADER_MAX_LINES = 4
+SOURCE_HEADER_MAX_WORDS = 14
+
+
+def _source_header(lines: list[str]) -> int:
+    """Where the text starts after an exporter's header in free wording ("<organisation>",
+    "Text export of https://...", "Exported 27 June 2026"): at most
+    ``SOURCE_HEADER_MAX_LINES`` short lines at the very start, one of them naming an
+    address (where the document came from), then a blank line and the text's own title
+    (a "#" heading or an underlined line). 0 when there is no such header: a line of
+    the document above its title stays unless the block names its source."""
+    first = 0
+    while first < len(lines) and not lines[first].strip():
+        first += 1
+    end = first
+    while end < len(lines) and lines[end].strip():
+        end += 1
+    head = lines[first:end]
+    if not 2 <= len(head) <= SOURCE_HEADER_MAX_LINES or end >= len(lines) or \
+            any(len(line.split()) > SOURCE_HEADER_MAX_WORDS for line in head) or \
+            not any(_ADDRESS.search(line) for line in head) or not _titled(lines[end:]):
+        return 0
+    return end
 
 
 # a word broken at a line's end ("resi-" + "dents"): letters, one hyphen (or a soft
