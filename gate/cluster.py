@@ -27,7 +27,8 @@ What crosses the coordinator is kept to what it reads: a page measured again onc
 site's template is known gets the reference to its first text's file, which its node
 reads (:func:`earlier_read`); the answers leave out the measures of documents the node
 evaluated and the blocks of pages measured again, and carry block hashes as arrays
-(:func:`lighten`), a batch's answers pickled into one buffer (:class:`Answers`); once the entries are placed, a Dask worker removes the staged copies
+(:func:`lighten`), a batch's answers pickled into one buffer (:class:`Answers`); once
+the entries are placed, a Dask worker removes the staged copies
 (:meth:`ClusterExecutor.remove_tree`).
 """
 
