@@ -38,7 +38,7 @@ from gate.manifest import Manifest, ManifestRecord
 from gate.policy import LoadedPolicy
 from gate.record import Slim
 from gate.state import dumps
-from gate.templates import Page, learn, removal, removal_key, site_of, stored_pages
+from gate.templates import Page, Removals, learn_quick, removal_key, site_of, stored_pages
 from gate.work import Params
 
 CACHE_BATCH = 64  # results written to the cache and the state per transaction, at least
@@ -317,9 +317,10 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
 
     def cleaning(learnt: dict) -> Any:
         """Pages holding template blocks, to be extracted again from the staged bytes."""
+        removal = Removals(learnt)
         for at in largest_first(waiting, lambda item: item.intake.size):
             item = waiting[at]
-            drop = removal(item.page, learnt) if item.page is not None else ()
+            drop = removal(item.page) if item.page is not None else ()
             if not drop and item.measured:  # measured at once, and nothing to remove
                 evaluated(item)
                 continue
@@ -355,9 +356,9 @@ def check_documents(inbox: Path, manifest: Manifest, loaded: LoadedPolicy, outpu
             answered(item, answer)
     flush()
     if waiting:
-        learnt = learn([item.page for item in waiting if item.page is not None] +
-                       (stored_pages(state, {doc_id(e.path) for e in entries})
-                        if incremental else []))
+        learnt = learn_quick([item.page for item in waiting if item.page is not None] +
+                             (stored_pages(state, {doc_id(e.path) for e in entries})
+                              if incremental else []))
         reporter.stage("removing site templates", None)
         for item, answer in pool.run(cleaning(learnt)):
             item.page = None

@@ -442,3 +442,27 @@ def test_answers_are_lightened_without_losing_what_the_coordinator_reads():
     assert second["blocks"] == {}
     assert first["timings"] == {"extract": 1.5, "quality": 0.75}
     assert "timings" not in second and "timings" not in third
+
+
+def test_a_batchs_answers_travel_in_one_frame():
+    """Dask sends every NumPy array of a result as a frame of its own; a batch's answers
+    (gate.cluster.Answers) go as one buffer, and arrive equal (invented values)."""
+    import numpy as np
+    from distributed.protocol import deserialize, serialize
+
+    from gate.cluster import Answers
+
+    items = [(i, {"result": {"blocks": {"main": np.arange(i, i + 40, dtype=np.uint64),
+                                         "other": np.array([2 ** 64 - 1], dtype=np.uint64),
+                                         "nav": np.zeros(0, dtype=np.uint64)},
+                             "cache": ("{}", "{}", b"x" * i)}}) for i in range(200)]
+    assert len(serialize(items, serializers=("dask", "pickle"))[1]) > 200  # arrays apart
+    header, frames = serialize(Answers(items), serializers=("dask", "pickle"))
+    assert len(frames) == 1
+    back = deserialize(header, frames).items
+    assert [index for index, _answer in back] == list(range(200))
+    for (_i, sent), (_j, got) in zip(items, back, strict=True):
+        for key, array in sent["result"]["blocks"].items():
+            assert got["result"]["blocks"][key].dtype == np.uint64
+            assert np.array_equal(got["result"]["blocks"][key], array)
+        assert got["result"]["cache"] == sent["result"]["cache"]
