@@ -46,6 +46,7 @@ import os
 import pickle
 import resource
 import shutil
+import subprocess
 import sys
 import time
 from collections import defaultdict
@@ -61,6 +62,7 @@ AS_OF = "2026-12-01T00:00:00Z"
 
 _acc: dict[str, float] = defaultdict(float)  # exclusive CPU seconds per label
 _incl: dict[str, float] = defaultdict(float)  # inclusive CPU seconds (transparent probes)
+_calls: dict[str, int] = defaultdict(int)  # calls per label (how often a page is parsed, walked)
 _stack: list[str] = []
 _last = [0.0]
 _clock = [time.process_time]  # the worker's own thread clock after a fork (see above)
@@ -70,6 +72,7 @@ def _forked() -> None:
     """A worker starts with nothing charged: the parent's figures stay the parent's."""
     _acc.clear()
     _incl.clear()
+    _calls.clear()
     _stack.clear()
     _clock[0] = time.thread_time
     _last[0] = _clock[0]()
@@ -95,6 +98,7 @@ def _leave() -> None:
 def _probe(fn: Any, label: str) -> Any:
     @functools.wraps(fn)
     def probed(*args: Any, **kwargs: Any) -> Any:
+        _calls[label] += 1
         _enter(label)
         try:
             return fn(*args, **kwargs)
@@ -131,7 +135,9 @@ def _install_worker_probes() -> None:
     import gate.extract.html as html
     import gate.extract.pdf as pdf
     import gate.extract.text as text
+    import gate.extract.model
     import gate.intake
+    import gate.judge
     import gate.langid
     import gate.placement
     import gate.templates
@@ -143,14 +149,18 @@ def _install_worker_probes() -> None:
     _everywhere(html, "decode_html", "extract html: decoding")
     _everywhere(lxml.html, "document_fromstring", "extract html: lxml parse")
     _everywhere(trafilatura, "extract", "extract html: trafilatura")
-    _everywhere(html, "fallback_text", "extract html: trafilatura")
+    _everywhere(html, "fallback_text", "extract html: fallback text (trafilatura gave none)")
     _everywhere(html, "max_depth", "extract html: nesting depth")
-    _everywhere(html, "_meta_dates", "extract html: metadata")
-    _everywhere(html, "_first", "extract html: metadata")
+    _everywhere(html, "_meta_dates", "extract html: metadata (xpath queries)")
+    _everywhere(html, "_first", "extract html: metadata (xpath queries)")
     _everywhere(html, "page_blocks", "blocks: page blocks (html walk)")
     _everywhere(html, "_walk", "blocks: page blocks (html walk)")
     _everywhere(html, "_marked", "blocks: marking the main text's blocks")
     _everywhere(html, "complete_main", "blocks: completing main text")
+    _everywhere(html, "without_teasers", "blocks: teaser lists")
+    _everywhere(html, "with_title", "blocks: the page's title")
+    _everywhere(html, "_line_digests", "blocks: line digests")
+    _everywhere(gate.extract.model, "line_hashes", "blocks: line digests")
     _everywhere(gate.extract, "line_blocks", "blocks: line blocks (pdf, text)")
     _everywhere(pdf, "_extract", "extract pdf: pypdf")
     _everywhere(text, "extract_text", "extract text: decoding")
@@ -171,6 +181,7 @@ def _install_worker_probes() -> None:
     _everywhere(gate.intake, "stage", "worker: staging the bytes")
     _everywhere(gate.intake, "packed", "worker: packing the result (compress, JSON)")
     _everywhere(gate.placement, "build_entry", "worker: building entries (placement)")
+    _everywhere(gate.judge, "judged", "worker: verdict (evaluation, record, Slim)")
     for check in gate.checks.all_checks():
         if check.measure is not None and not getattr(check.measure, "__probed__", False):
             object.__setattr__(check, "measure", _probe(check.measure, f"measure {check.id}"))
@@ -178,6 +189,7 @@ def _install_worker_probes() -> None:
 
 def _install_parent_probes() -> None:
     from multiprocessing.connection import Connection
+    from multiprocessing.process import BaseProcess
 
     import gate.commit
     import gate.containers
@@ -208,6 +220,7 @@ def _install_parent_probes() -> None:
     _everywhere(gate.commit, "finish", "parent: commit: placing, report files")
     _everywhere(Connection, "recv", "parent: receiving results (unpickling)")
     _everywhere(Connection, "send", "parent: sending tasks (pickling)")
+    _everywhere(BaseProcess, "start", "parent: forking workers")
 
 
 def _collecting(phase: str, info: dict[str, Any]) -> None:
@@ -235,8 +248,12 @@ def _worker_process(original: Any, task: Any) -> Any:
         for label, seconds in _acc.items():
             timings[f"probe|{label}"] = seconds
         _acc.clear()
-        timings[f"whole|{kind}|{'measure' if result.get('measured') else 'blocks'}"] = whole
-        timings[f"count|{kind}|{'measure' if result.get('measured') else 'blocks'}"] = 1.0
+        step = f"{kind}|{'measure' if result.get('measured') else 'blocks'}"
+        for label, calls in _calls.items():
+            timings[f"calls|{step}|{label}"] = float(calls)
+        _calls.clear()
+        timings[f"whole|{step}"] = whole
+        timings[f"count|{step}"] = 1.0
     return result
 
 
@@ -365,8 +382,11 @@ def run_once(docs: int, workers: int, timeline: bool = False) -> dict[str, Any]:
     worker: dict[str, float] = defaultdict(float)
     whole: dict[str, float] = defaultdict(float)
     counts: dict[str, float] = defaultdict(float)
+    calls: dict[str, float] = defaultdict(float)
     for key, seconds in result.timings.items():
-        if key.startswith("probe|"):
+        if key.startswith("calls|"):
+            calls[key[len("calls|"):]] += seconds
+        elif key.startswith("probe|"):
             worker[key[len("probe|"):]] += seconds
         elif key.startswith("whole|"):
             whole[key[len("whole|"):]] += seconds
@@ -378,8 +398,33 @@ def run_once(docs: int, workers: int, timeline: bool = False) -> dict[str, Any]:
     return {"docs": report["summary"]["documents"], "workers": workers, "wall_s": wall,
             "parent_cpu_s": parent_cpu, "worker_cpu_s": worker_cpu,
             "parent": dict(_acc), "worker": dict(worker), "whole": dict(whole),
-            "counts": dict(counts), "stages": stages, "decisions": decisions,
+            "counts": dict(counts), "calls": dict(calls), "stages": stages,
+            "decisions": decisions, "startup": startup_cpu(),
             "timeline": _timeline(start, end) if timeline else None}
+
+
+_STARTUP = """
+import json, time
+t0 = time.process_time()
+import gate.cli  # what the command loads (typer, pydantic, the checks)
+import gate.pipeline  # noqa: F401 - and what a run loads (datasketch, lxml, trafilatura)
+t1 = time.process_time()
+from gate.work import warm_up
+warm_up()
+print(json.dumps([t1 - t0, time.process_time() - t1]))
+"""
+
+
+def startup_cpu() -> dict[str, float]:
+    """The CPU seconds a `gate run` spends before its first document, on one core: the
+    imports and the warm-up (language profiles, extractors) that every forked worker
+    inherits, measured in a fresh interpreter (best of two: a cold page cache reads more)."""
+    best = [float("inf"), float("inf")]
+    for _ in range(2):
+        out = subprocess.run([sys.executable, "-c", _STARTUP], cwd=ROOT, text=True,
+                             capture_output=True, check=True).stdout
+        best = [min(a, b) for a, b in zip(best, json.loads(out))]
+    return {"imports": best[0], "warm_up": best[1]}
 
 
 def _occupancy(spans: list[tuple[float, float]], begin: float, end: float,
@@ -500,6 +545,7 @@ def show(now: dict[str, Any], before: dict[str, Any] | None) -> None:
     for key, seconds in sorted(now["whole"].items()):
         count = int(now["counts"].get(key, 0))
         print(f"    {key:40s} {count:5d} docs {1000 * seconds / max(count, 1):8.2f} ms each")
+    show_calls(now)
     print(f"parent side: {_ms(now['parent_cpu_s'], docs):.2f} ms/doc of CPU in the parent "
           f"(getrusage), probes cover {_ms(sum(now['parent'].values()), docs):.2f}")
     old = before["parent"] if before else {}
@@ -524,6 +570,42 @@ def show(now: dict[str, Any], before: dict[str, Any] | None) -> None:
               + (": " + ", ".join(changed[:20]) if changed else ""))
 
 
+# the probes that read a page's whole tree (or parse it): how often each runs per page
+_TREE_READS = ("extract html: lxml parse", "extract html: trafilatura",
+               "extract html: fallback text (trafilatura gave none)",
+               "extract html: nesting depth", "blocks: page blocks (html walk)",
+               "extract html: metadata (xpath queries)", "blocks: the page's title",
+               "measure injection: hidden HTML (collect)", "measure injection: raw page text",
+               "extract pdf: pypdf", "tokenising: words()", "tokenising: block hashes",
+               "measure language: langid.identify", "blocks: block summary")
+
+
+def show_calls(now: dict[str, Any]) -> None:
+    """Calls per document of the probes that parse or walk a whole page, per pass."""
+    calls = now.get("calls") or {}
+    steps = sorted({key.rsplit("|", 1)[0] for key in calls})
+    if not steps:
+        return
+    print("  calls per document and pass (how often a page is parsed, walked, tokenised):")
+    print(f"    {'':52s}" + "".join(f"{step:>15s}" for step in steps))
+    for label in _TREE_READS:
+        row = [calls.get(f"{step}|{label}", 0.0) / max(now["counts"].get(step, 0.0), 1.0)
+               for step in steps]
+        if any(row):
+            print(f"    {label:52s}" + "".join(f"{value:15.2f}" for value in row))
+
+
+def show_startup(now: dict[str, Any], before: dict[str, Any] | None) -> None:
+    start = now.get("startup")
+    if not start:
+        return
+    old = (before or {}).get("startup")
+    print(f"start-up on one core before the first document (a fresh interpreter, CPU s): "
+          f"imports {start['imports']:.2f}, warm-up {start['warm_up']:.2f}"
+          + (f" (before {old['imports']:.2f}, {old['warm_up']:.2f})" if old else "")
+          + "; the workers are forked after it and inherit both")
+
+
 def main() -> None:
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     parser.add_argument("--docs", type=int, default=600)
@@ -537,6 +619,7 @@ def main() -> None:
     now = run_once(args.docs, args.workers, args.timeline)
     before = json.loads(args.before.read_text()) if args.before else None
     show(now, before)
+    show_startup(now, before)
     if now["timeline"]:
         show_timeline(now["timeline"])
     if args.json:

@@ -173,6 +173,23 @@ def test_deep_nesting_is_refused():
     assert result.summary.problem == "too-deep" and result.summary.nesting_depth > 250
 
 
+@pytest.mark.parametrize("page, depth", [
+    (b"<p>x", 3),  # html > body > p
+    (b"<html><body><div><!-- a comment is a node --></div></body></html>", 4),
+    (b"<html><body><div><!-- c --><p><b><!--d--></b></p></div></body></html>", 6),
+    (b"<!-- before --><html><body><svg><g><!--z--></g></svg></body></html>", 5),
+    (b"<html><body>" + b"<div>" * 600 + b"x" + b"</div>" * 600 + b"</body></html>", 602),
+])
+def test_nesting_depth_counts_every_node(page, depth):
+    # the depth a page reports: elements and comments below the root, the root at 1
+    # (the values are counted by hand from the markup)
+    import lxml.html
+
+    from gate.extract.html import max_depth
+    parser = lxml.html.HTMLParser(huge_tree=True, remove_comments=False, remove_pis=True)
+    assert max_depth(lxml.html.document_fromstring(page, parser=parser)) == depth
+
+
 def test_short_page_uses_fallback_text():
     result = extract(b"<html><body><p>Closed on 24 December.</p></body></html>", **LIMITS)
     assert result.summary.ok and result.text == "Closed on 24 December."

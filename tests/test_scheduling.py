@@ -33,3 +33,18 @@ def test_occupancy_clips_spans_to_the_window_and_a_window_never_full_has_all_tai
     assert busy[1] == pytest.approx(3.0)  # 0-2 and 9-10
     assert busy[0] == pytest.approx(7.0)
     assert tail == pytest.approx(10.0)
+
+
+def test_calls_per_document_and_pass_by_hand(capsys):
+    # invented counts: 4 pages in pass 1 parsed 12 times in all (3 a page), 2 of them
+    # measured in pass 2 and parsed once each; a probe no page called is left out
+    from benchmarks.breakdown import show_calls
+    now = {"counts": {"html|blocks": 4.0, "html|measure": 2.0},
+           "calls": {"html|blocks|extract html: lxml parse": 12.0,
+                     "html|measure|extract html: lxml parse": 2.0,
+                     "html|blocks|blocks: page blocks (html walk)": 4.0}}
+    show_calls(now)
+    lines = {line.split("  ")[2].strip(): line.split()[-2:]
+             for line in capsys.readouterr().out.splitlines()[2:]}
+    assert lines == {"extract html: lxml parse": ["3.00", "1.00"],
+                     "blocks: page blocks (html walk)": ["1.00", "0.00"]}

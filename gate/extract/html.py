@@ -96,14 +96,18 @@ def _lookup_name(label: str) -> str:
 
 
 def max_depth(root: lxml.etree._Element) -> int:
-    """Deepest element nesting below ``root`` (iterative: no recursion limit)."""
-    deepest = 0
-    stack = [(root, 1)]
-    while stack:
-        node, depth = stack.pop()
-        if depth > deepest:
-            deepest = depth
-        stack.extend((child, depth + 1) for child in node)
+    """Deepest element nesting below ``root``, ``root`` at depth 1 (comments count as
+    elements, as processing instructions would; iterative: no recursion limit)."""
+    deepest = depth = 0
+    for event, _node in lxml.etree.iterwalk(root, events=("start", "end", "comment", "pi")):
+        if event == "start":
+            depth += 1
+            if depth > deepest:
+                deepest = depth
+        elif event == "end":
+            depth -= 1
+        elif depth >= deepest:  # a comment or processing instruction: a leaf below depth
+            deepest = depth + 1
     return deepest
 
 
@@ -370,21 +374,21 @@ PAGE_MIN_WORDS = 15  # fewer left without the teaser lists: the lists are the pa
 LINKED = 0.5  # a block with this share of linked characters is a link (of a site map)
 
 
-def _card(blocks: Sequence[Block], i: int) -> int:
+def _card(blocks: Sequence[Block], i: int, sizes: Sequence[int]) -> int:
     """The number of blocks of a teaser card starting at ``blocks[i]`` (0: none): a title
     that is wholly a link to another page followed by a short unlinked snippet (or by a
     date or a byline and a snippet; a snippet is a paragraph, never a heading nor a term's
     definition), or a list item that begins with such a link and goes on unlinked ("Title
-    - snippet ...": negative, such cards count only in a run of ``TEASER_MIN_CARDS``)."""
+    - snippet ...": negative, such cards count only in a run of ``TEASER_MIN_CARDS``).
+    ``sizes``: each block's number of words."""
     block = blocks[i]
-    size = len(block.text.split())
+    size = sizes[i]
     if block.lead >= 0.9 and size <= TITLE_MAX_WORDS:
         def snippet(j: int, least: int) -> bool:  # not a heading, nor a term's definition
             return j < len(blocks) and blocks[j].links < 0.5 and blocks[j].lead == 0 and \
-                blocks[j].kind == "text" and \
-                least <= len(blocks[j].text.split()) <= SNIPPET_MAX_WORDS
+                blocks[j].kind == "text" and least <= sizes[j] <= SNIPPET_MAX_WORDS
 
-        if snippet(i + 1, 1) and len(blocks[i + 1].text.split()) <= BYLINE_MAX_WORDS and \
+        if snippet(i + 1, 1) and sizes[i + 1] <= BYLINE_MAX_WORDS and \
                 snippet(i + 2, SNIPPET_MIN_WORDS):
             return 3  # a title, a date or a byline, a snippet
         if snippet(i + 1, SNIPPET_MIN_WORDS):
@@ -405,12 +409,13 @@ def teaser_lists(blocks: Sequence[Block]) -> set[int]:
     navigation whatever its words are, and it differs from page to page, so learning a
     site's template cannot name it."""
     found: set[int] = set()
+    sizes = [len(block.text.split()) for block in blocks]  # words, counted once
     i = 0
     while i < len(blocks):
         start, cards, items = i, 0, 0
         end = i  # after the last card
         while i < len(blocks):
-            size = _card(blocks, i)
+            size = _card(blocks, i, sizes)
             if size:
                 i = end = i + abs(size)
                 cards += 1
@@ -420,16 +425,19 @@ def teaser_lists(blocks: Sequence[Block]) -> set[int]:
             else:
                 break
         i = end
+        if not cards:  # no list starts here
+            i = start + 1
+            continue
         before = start - 1
         headed = before >= 0 and blocks[before].links < 0.5 and \
-            len(blocks[before].text.split()) <= LIST_HEADING_MAX_WORDS
+            sizes[before] <= LIST_HEADING_MAX_WORDS
         if headed and blocks[before].kind == "heading" and blocks[before].main:
             headed = False  # a heading of the main text (a page's title) is no list's
         # a shorter run counts under a heading of its own ("Related articles") and
         # before another short heading, a link or the end of the page
         closed = i >= len(blocks) or blocks[i].links >= 0.5 or \
-            len(blocks[i].text.split()) <= LIST_HEADING_MAX_WORDS
-        if cards >= TEASER_MIN_CARDS or (cards and not items and headed and closed):
+            sizes[i] <= LIST_HEADING_MAX_WORDS
+        if cards >= TEASER_MIN_CARDS or (not items and headed and closed):
             found.update(range(start, i))
             if headed:
                 found.add(before)
