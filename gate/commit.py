@@ -15,7 +15,8 @@ import functools
 import hashlib
 import json
 import os
-from collections.abc import Iterator
+import threading
+from collections.abc import Callable, Iterator
 from dataclasses import dataclass
 from pathlib import Path
 from typing import Any, Protocol
@@ -32,7 +33,7 @@ from gate.record import DocRecord, Slim
 from gate.state import Rows, State
 
 CHUNK = 500  # documents decided per read of the run_docs table
-PLACE_BATCH = 1024  # placements per pair of syncs
+PLACE_BATCH = 4096  # placements per pair of syncs
 BUILD_GROUP = 32  # placements decided before the workers may take them to assemble
 
 
@@ -315,6 +316,16 @@ def finish(output: Output, run_id: str, reporter: Reporter, pool: Any = None,
         for _doc, _target, payload in batch:
             reporter.advance(payload_head(payload)[0])
         after = batch[-1][0]
+    remove = getattr(pool, "remove_tree", None)
+
+    def tidy() -> None:
+        placer.empty_trash()
+        output.blobs.clear(remove)
+
+    # every placement is durable: the trash and the staged copies go in a thread while
+    # the page is rendered (removing files waits on the disk, not on this process's CPU);
+    # on a cluster its pool removes them
+    tidying = _Background(tidy) if remove is None else None
     if output.index is not None:
         reporter.stage("indexing", None)
         output.index.sync(state)
@@ -326,7 +337,30 @@ def finish(output: Output, run_id: str, reporter: Reporter, pool: Any = None,
         write_atomic(output.out / "report.html", page.encode("utf-8"))
     write_atomic(output.out / "changes.jsonl",
                  "".join(line + "\n" for line in state.change_lines()).encode("utf-8"))
-    placer.empty_trash()
-    output.blobs.clear(getattr(pool, "remove_tree", None))
+    if tidying is None:
+        tidy()
+    else:
+        tidying.join()
     state.complete_run(run_id)
+
+
+class _Background(threading.Thread):
+    """Runs a function in a thread; :meth:`join` waits for it and raises what it raised."""
+
+    def __init__(self, work: Callable[[], None]):
+        super().__init__(daemon=True)
+        self.work = work
+        self.error: BaseException | None = None
+        self.start()
+
+    def run(self) -> None:
+        try:
+            self.work()
+        except BaseException as err:  # noqa: BLE001 - raised again in the caller's thread
+            self.error = err
+
+    def join(self, timeout: float | None = None) -> None:
+        super().join(timeout)
+        if self.error is not None:
+            raise self.error
 
