@@ -171,7 +171,9 @@ def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
                 reporter.advance(slim.path)
             yield [row[1:] for row in rows.placements[handed:]]
 
-    os.sync()  # the staged blobs must be durable before the decision refers to them
+    # the staged blobs must be durable before the decision that refers to them commits:
+    # flushed in a thread while the documents are decided, waited for before the commit
+    syncing = _Background(os.sync)
     # the entries assembled ahead (state/tmp, not visible) are removed if this raises
     with output.placer.ahead() as built, state.transaction():
         state.restart_rows(run.id)
@@ -200,6 +202,7 @@ def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
         writer.finish(rest)
         state.put_report_rest(run.id, {**rest, "cautions": cautions})
         state.mark_decided(run.id, summary)
+        syncing.join()  # before the transaction commits
     finish(output, run.id, reporter, pool, built)
 
 

@@ -213,7 +213,11 @@ class Placer:
     @contextlib.contextmanager
     def ahead(self) -> Iterator[dict[str, str]]:
         """A record of entries :meth:`build_ahead` assembles; they are removed from
-        state/tmp if the block raises (their decisions were never committed)."""
+        state/tmp if the block raises (their decisions were never committed). What
+        state/tmp holds on entering is a killed run's (before a commit, no placement is
+        outstanding): removed first."""
+        for leftover in os.listdir(self.tmp):
+            shutil.rmtree(self.tmp / leftover, ignore_errors=True)
         built: dict[str, str] = {}
         try:
             yield built

@@ -127,3 +127,19 @@ def test_a_braked_run_leaves_no_entry_assembled_ahead(tmp_path):
         _go(inbox, out, policy_path)
     assert list((out / "state" / "tmp").iterdir()) == []  # the two left were assembled
     assert _entries(out) == before
+
+
+def test_a_killed_runs_entries_assembled_ahead_are_removed_by_the_next(tmp_path):
+    policy_path = tmp_path / "policy.yaml"
+    policy_path.write_text("version: 1\nname: ahead-test\n", encoding="utf-8")
+    inbox, out = tmp_path / "inbox", tmp_path / "out"
+    _notes(inbox, 3)
+    _go(inbox, out, policy_path)
+    # what a run killed while deciding leaves: an entry assembled for a document that
+    # the next run (its inbox changed meanwhile) does not place
+    stale = out / "state" / "tmp" / "0123456789abcdef0123"
+    stale.mkdir()
+    (stale / "reasons.json").write_text("{}\n", encoding="utf-8")
+    (inbox / "note-2.txt").write_text("Note 2, edited. " + NOTE, encoding="utf-8")
+    _go(inbox, out, policy_path)
+    assert list((out / "state" / "tmp").iterdir()) == []
