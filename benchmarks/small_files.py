@@ -144,13 +144,16 @@ def step_figures(folder: Path, docs: int) -> str:
                      for label, seconds in sorted(total.items(), key=lambda kv: -kv[1]))
 
 
-PARALLEL = ("extracting", "removing site templates", "placing")  # stages workers share
+# stages workers share: they read, extract and measure while the parent files their
+# answers, and assemble the entries while it decides (gate.placement.Placer.build_ahead)
+# and places (an entry not assembled ahead)
+PARALLEL = ("extracting", "removing site templates", "deciding", "placing")
 
 
 def _idle_seconds(stages: dict[str, float], workers_cpu: float, cores: int) -> float:
     """Elapsed time the run would take on ``cores`` otherwise idle cores: in the stages
-    the workers share (they read, extract, measure and assemble the entries) the parent
-    overlaps with them; the other stages run in the parent alone."""
+    the workers share the parent overlaps with them; the other stages run in the parent
+    alone."""
     shared = sum(stages.get(name, 0.0) for name in PARALLEL)
     rest = sum(spent for name, spent in stages.items() if name not in PARALLEL)
     return max(shared, (shared + workers_cpu) / cores) + rest

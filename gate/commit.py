@@ -15,6 +15,8 @@ import functools
 import hashlib
 import json
 import os
+import threading
+from collections.abc import Callable, Iterator
 from dataclasses import dataclass
 from pathlib import Path
 from typing import Any, Protocol
@@ -31,7 +33,8 @@ from gate.record import DocRecord, Slim
 from gate.state import Rows, State
 
 CHUNK = 500  # documents decided per read of the run_docs table
-PLACE_BATCH = 1024  # placements per pair of syncs
+PLACE_BATCH = 4096  # placements per pair of syncs
+BUILD_GROUP = 32  # placements decided before the workers may take them to assemble
 
 
 class Reporter(Protocol):
@@ -137,13 +140,17 @@ def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
     tally = report.Tally()
     seen_ids: dict[str, str] = {}
     change_no = 0
-    os.sync()  # the staged blobs must be durable before the decision refers to them
-    with state.transaction():
-        state.restart_rows(run.id)
+
+    def decided() -> Iterator[list[tuple[str, str, str]]]:
+        """Decide the documents in inbox order, recorded chunk by chunk; yields their
+        placements (document id, target, payload) in groups of about BUILD_GROUP, so the
+        workers assemble the entries while the next ones are decided."""
+        nonlocal change_no
         for start in range(0, len(slims), CHUNK):
             chunk = slims[start:start + CHUNK]
             records = state.run_docs(run.id, chunk[0].index, chunk[-1].index)
             rows = Rows()
+            handed = 0
             for slim in chunk:
                 if slim.doc_id in seen_ids:  # 80-bit ids: a collision is astronomically rare
                     raise OutputError(f"document id collision between "
@@ -155,11 +162,29 @@ def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
                                     rows)
                 writer.document(entry)
                 tally.add(entry)
+                if len(rows.placements) - handed >= BUILD_GROUP:
+                    yield [row[1:] for row in rows.placements[handed:]]
+                    handed = len(rows.placements)
             state.write(run.id, rows, change_no)
             change_no += len(rows.changes)
             for slim in chunk:
                 reporter.advance(slim.path)
+            yield [row[1:] for row in rows.placements[handed:]]
+
+    # the staged blobs must be durable before the decision that refers to them commits:
+    # flushed in a thread while the documents are decided, waited for before the commit
+    syncing = _Background(os.sync)
+    # the entries assembled ahead (state/tmp, not visible) are removed if this raises
+    with output.placer.ahead() as built, state.transaction():
+        state.restart_rows(run.id)
+        if pool is None:
+            for _group in decided():
+                pass
+        else:
+            output.placer.build_ahead(decided(), pool, built)
         removed_report, rows = _removals(run, corpus)
+        for _run_id, doc_id, *_rest in rows.placements:  # placed as these rows say
+            built.pop(doc_id, None)
         unmatched = sorted(set(manifest.records) - set(seen_ids.values()) -
                            {containers.container_of(p) for p in seen_ids.values()})
         summary = tally.summary(removed_report)
@@ -177,7 +202,8 @@ def commit(output: Output, run: Run, slims: list[Slim], corpus: CorpusResult,
         writer.finish(rest)
         state.put_report_rest(run.id, {**rest, "cautions": cautions})
         state.mark_decided(run.id, summary)
-    finish(output, run.id, reporter, pool)
+        syncing.join()  # before the transaction commits
+    finish(output, run.id, reporter, pool, built)
 
 
 def _decide_one(record: DocRecord, slim: Slim, run: Run, loaded: LoadedPolicy,
@@ -279,18 +305,30 @@ def _superseded(run: Run, key: str, row: dict[str, Any], finding: Finding, rows:
                            "why": finding.message, "location": f"quarantine/{key}"})
 
 
-def finish(output: Output, run_id: str, reporter: Reporter, pool: Any = None) -> None:
+def finish(output: Output, run_id: str, reporter: Reporter, pool: Any = None,
+           built: dict[str, str] | None = None) -> None:
     """Apply the run's outstanding placements (assembled by ``pool``'s workers when
-    given), then write the report and change set."""
+    given; ``built``: document id -> target of the entries already assembled in
+    state/tmp while deciding), then write the report and change set."""
     state, placer = output.state, output.placer
     reporter.stage("placing", state.pending_count(run_id))
     after = ""
     while batch := state.pending_batch(run_id, after, PLACE_BATCH):
-        placer.apply_batch(batch, pool)
+        placer.apply_batch(batch, pool, built)
         state.mark_placed([(run_id, doc) for doc, _target, _payload in batch])
         for _doc, _target, payload in batch:
             reporter.advance(payload_head(payload)[0])
         after = batch[-1][0]
+    remove = getattr(pool, "remove_tree", None)
+
+    def tidy() -> None:
+        placer.empty_trash()
+        output.blobs.clear(remove)
+
+    # every placement is durable: the trash and the staged copies go in a thread while
+    # the page is rendered (removing files waits on the disk, not on this process's CPU);
+    # on a cluster its pool removes them
+    tidying = _Background(tidy) if remove is None else None
     if output.index is not None:
         reporter.stage("indexing", None)
         output.index.sync(state)
@@ -302,7 +340,30 @@ def finish(output: Output, run_id: str, reporter: Reporter, pool: Any = None) ->
         write_atomic(output.out / "report.html", page.encode("utf-8"))
     write_atomic(output.out / "changes.jsonl",
                  "".join(line + "\n" for line in state.change_lines()).encode("utf-8"))
-    placer.empty_trash()
-    output.blobs.clear(getattr(pool, "remove_tree", None))
+    if tidying is None:
+        tidy()
+    else:
+        tidying.join()
     state.complete_run(run_id)
+
+
+class _Background(threading.Thread):
+    """Runs a function in a thread; :meth:`join` waits for it and raises what it raised."""
+
+    def __init__(self, work: Callable[[], None]):
+        super().__init__(daemon=True)
+        self.work = work
+        self.error: BaseException | None = None
+        self.start()
+
+    def run(self) -> None:
+        try:
+            self.work()
+        except BaseException as err:  # noqa: BLE001 - raised again in the caller's thread
+            self.error = err
+
+    def join(self, timeout: float | None = None) -> None:
+        super().join(timeout)
+        if self.error is not None:
+            raise self.error
 

@@ -15,11 +15,13 @@ document's existing entry; they are hard-linked where possible and made read-onl
 
 from __future__ import annotations
 
+import contextlib
 import json
 import os
 import re
 import shutil
 import zlib
+from collections.abc import Iterable, Iterator
 from dataclasses import dataclass
 from pathlib import Path
 from typing import Any
@@ -153,7 +155,7 @@ class Placer:
         self._aside(self.entry(other, doc_id))
 
     def apply_batch(self, placements: list[tuple[str, str, Any]],
-                    pool: Any = None) -> None:
+                    pool: Any = None, prebuilt: dict[str, str] | None = None) -> None:
         """Apply placements durably with two syncs for the whole batch, not per file:
         every entry is written in state/tmp, everything is flushed to disk, only then are
         the entries renamed into place, and the renames are flushed before the caller
@@ -163,11 +165,16 @@ class Placer:
         A payload may be its JSON text. With a ``pool`` (the run's worker pool, local or
         on the cluster) the entries are assembled by its workers (:class:`BuildTask`),
         this process only renames them into place; one a worker could not build is built
-        here."""
+        here. ``prebuilt``: document id -> target of the entries :meth:`build_ahead`
+        already assembled in state/tmp for these placements."""
         tmp = self.tmp
         built: list[tuple[str, str, Path | None]] = []
+        prebuilt = prebuilt or {}
         if pool is None:
             for doc_id, target, payload in placements:
+                if target != "absent" and prebuilt.get(doc_id) == target:
+                    built.append((doc_id, target, tmp / doc_id))
+                    continue
                 payload = json.loads(payload) if isinstance(payload, str) else payload
                 built.append((doc_id, target, self.build(doc_id, target, payload)))
         else:
@@ -175,16 +182,11 @@ class Placer:
             for doc_id, target, payload in placements:
                 if target == "absent":
                     built.append((doc_id, target, None))
-                    continue
-                raw = payload if isinstance(payload, str) else json.dumps(payload)
-                todo.append((doc_id, target, raw, _text_key(raw)))
-            texts = self.state.cache_texts_stored(key for *_, key in todo if key)
-            out, sync = str(self.out), getattr(pool, "remote", False)
-            tasks = [((doc_id, target, raw),
-                      BuildTask(out, doc_id, target, raw, texts.get(key) if key else None,
-                                sync=sync))
-                     for doc_id, target, raw, key in todo]
-            for (doc_id, target, raw), answer in pool.run(tasks):
+                elif prebuilt.get(doc_id) == target:
+                    built.append((doc_id, target, tmp / doc_id))
+                else:
+                    todo.append((doc_id, target, payload))
+            for (doc_id, target, raw), answer in pool.run(self._build_tasks(todo, pool)):
                 if answer is not True:  # the worker failed: build it here
                     self.build(doc_id, target, json.loads(raw))
                 built.append((doc_id, target, tmp / doc_id))
@@ -192,6 +194,56 @@ class Placer:
         for doc_id, target, path in built:
             self.install(doc_id, target, path)
         os.sync()
+
+    def _build_tasks(self, placements: list[tuple[str, str, Any]], pool: Any
+                     ) -> list[tuple[tuple[str, str, str], BuildTask]]:
+        """(tag, task) for each entry a worker of ``pool`` is to assemble (no removals),
+        their texts read from the cache in one query."""
+        todo = []
+        for doc_id, target, payload in placements:
+            raw = payload if isinstance(payload, str) else json.dumps(payload)
+            todo.append((doc_id, target, raw, _text_key(raw)))
+        texts = self.state.cache_texts_stored(key for *_, key in todo if key)
+        out, sync = str(self.out), getattr(pool, "remote", False)
+        return [((doc_id, target, raw),
+                 BuildTask(out, doc_id, target, raw, texts.get(key) if key else None,
+                           sync=sync))
+                for doc_id, target, raw, key in todo]
+
+    @contextlib.contextmanager
+    def ahead(self) -> Iterator[dict[str, str]]:
+        """A record of entries :meth:`build_ahead` assembles; they are removed from
+        state/tmp if the block raises (their decisions were never committed). What
+        state/tmp holds on entering is a killed run's (before a commit, no placement is
+        outstanding): removed first."""
+        for leftover in os.listdir(self.tmp):
+            shutil.rmtree(self.tmp / leftover, ignore_errors=True)
+        built: dict[str, str] = {}
+        try:
+            yield built
+        except BaseException:
+            for doc_id in built:
+                shutil.rmtree(self.tmp / doc_id, ignore_errors=True)
+            raise
+
+    def build_ahead(self, groups: Iterable[list[tuple[str, str, str]]], pool: Any,
+                    built: dict[str, str]) -> None:
+        """Have ``pool``'s workers assemble entries in state/tmp (not visible) while the
+        groups of placements (document id, target, payload JSON) are still being decided:
+        the pool takes the next group when a worker is free, so deciding and assembling
+        overlap. Adds document id -> target of each entry assembled to ``built``
+        (:meth:`ahead`); the caller applies them with :meth:`apply_batch` once the
+        decisions are committed (an entry not assembled is assembled then)."""
+
+        def tasks() -> Iterator[tuple[tuple[str, str, str], BuildTask]]:
+            for group in groups:
+                yield from self._build_tasks(
+                    [(doc_id, target, raw) for doc_id, target, raw in group
+                     if target != "absent"], pool)
+
+        for (doc_id, target, _raw), answer in pool.run(tasks()):
+            if answer is True:
+                built[doc_id] = target
 
     def empty_trash(self) -> None:
         for item in self.trash.iterdir():
