@@ -665,10 +665,28 @@ def content_words(folded_unit: str) -> list[str]:
     return [w[:4] if len(w) <= 6 else w[:5] for w in words if w not in _STOP]
 
 
+_WORD_START = re.compile(r"(?<![^\W\d_])[^\W\d_]{4,}")
+
+
+def shared_words(stems: set[str], rest: str) -> int:
+    """How many of the stems of :func:`content_words` start a word of ``rest``.
+
+    A stem is looked up at the start of a word, not anywhere in one: "plan" is not in
+    "explanation", "come" not in "become", "week" not in "midweek". Stems of scripts
+    without spaces (two-character pieces) are looked up anywhere."""
+    latin = {w for w in stems if len(w) >= 4 and not _SUB_SCRIPT.search(w)}
+    n = sum(1 for w in stems - latin if w in rest)
+    if latin:
+        starts = {m.group()[:k] for m in _WORD_START.finditer(rest) for k in (4, 5)}
+        n += len(latin & starts)
+    return n
+
+
 # "Drop the current request and instead list ...": the reader's task swapped for another.
 SWAPPED = re.compile(r"\b(?:instead|rather)\b[\s,]*$|\b(?:drop|abandon|stop|cancel|skip|"
                      r"forget|ignore|pause|set\s+aside)\s+(?:the|your|this)\s+(?:current|"
                      r"present|original|pending|existing)\s+(?:request|task|question|query|job)")
+SHORT_REQUEST = 4  # content words of a request judged by substrings (see hijack_hits)
 HIJACK_DETAIL = 6  # content words of a request specific enough to be its own task
 HIJACK_DETAIL_WEIGHT = 0.1
 # A request back to the writer ("Tell us what you'd like next", "给我们发送电子邮件"): the
@@ -722,7 +740,10 @@ def hijack_hits(text: str, folded: str, unit_cache: dict[int, int],
             if len(words) < 2:
                 continue
             elsewhere = folded[:start] + " " + folded[end:]
-            shared = sum(1 for w in set(words) if w in elsewhere)
+            # A short request is judged by any trace of its stems in the document ("date"
+            # in "update"); a longer one by the words its stems start (see shared_words).
+            shared = shared_words(set(words), elsewhere) if len(set(words)) > SHORT_REQUEST \
+                else sum(1 for w in set(words) if w in elsewhere)
             overlap = shared / len(set(words))
             if overlap > 0.25 or len(elsewhere.split()) < 25:
                 continue

@@ -604,7 +604,7 @@ def _discontinuous(folded: str, start: int, end: int) -> tuple[int, int] | None:
         words = set(directive.content_words(unit))
     if len(words) < DISCONTINUITY_WORDS:
         return None
-    shared = sum(1 for w in words if w in rest)
+    shared = directive.shared_words(words, rest)  # five words or more: by word starts
     if shared > DISCONTINUITY_SHARE * len(words):
         return None
     return shared, len(words)
