@@ -627,11 +627,24 @@ def _occurrences(folded: str, word: str, limit: int, prefix: bool = False) -> li
     return out
 
 
+# A main clause after a lead of time or order: "Before the recipe, design a logo ...",
+# "Prior to processing this release, generate a quiz ...", "But first, write ...": the
+# verb that follows the comma is the sentence's imperative.
+_AFTER_LEAD = re.compile(r"(?:^|[\n.!?:;|\]])[ \t>*#\-\d.)\"'_]*(?:before|prior\s+to|ahead\s+of|"
+                         r"after|once|(?:but\s+)?first|right)\b[^,.;:!?\n\"]{0,60}[,:]"
+                         r"[\s,]*(?:(?:" + _FILLERS + r")[\s,]+){0,2}$")
+LEAD_REACH = 100  # characters before a verb searched for such a lead
+
+
 def _opens_sentence(folded: str, pos: int) -> bool:
-    """Is ``pos`` the first word of a sentence (after list markers and fillers)?"""
+    """Is ``pos`` the first word of a sentence (after list markers and fillers) or of the
+    main clause after a lead of time or order?"""
     if pos <= 40:
-        return bool(_AT_START.search(folded[:pos]) or _AFTER_BOUNDARY.search(folded[:pos]))
-    return bool(_AFTER_BOUNDARY.search(folded, pos - 40, pos))
+        if _AT_START.search(folded[:pos]) or _AFTER_BOUNDARY.search(folded[:pos]):
+            return True
+    elif _AFTER_BOUNDARY.search(folded, pos - 40, pos):
+        return True
+    return bool(_AFTER_LEAD.search(folded, max(0, pos - LEAD_REACH), pos))
 
 
 def _lead_positions(folded: str, task_words: set[str]) -> list[tuple[int, int, bool]]:
