@@ -962,11 +962,15 @@ def _scan_folded(text: str, folded: str, words: set[str] | None = None,
 # is what a model in a retrieval pipeline does. Such a sentence is a directive when it is
 # in the directive mood (should, must, is required to, always, never, only, "end with"
 # ...) or when the naming is a lead before a colon. English only.
+# What a document calls itself ("this guide", "this timetable"); not "this command",
+# "this endpoint" or "this function", whose output a manual describes.
 _DOC_NOUN = (r"(?:document|page|report|guide|newsletter|research|article|recipe|text|file|"
              r"paragraph|section|release|post|notice|e-?mail|message|material|content|project|"
-             r"site|policy|manual|study|paper|thread|chat|conversation|entry|listing|faq|"
-             r"write-?up|briefing|memo|update|changelog|readme|sheet|brochure|leaflet|bulletin|"
-             r"announcement|outline|newsletter|transcript|handbook|datasheet|minutes)s?")
+             r"site|website|wiki|policy|manual|study|paper|thread|chat|conversation|entry|"
+             r"listing|faq|write-?up|briefing|memo|update|changelog|readme|sheet|brochure|"
+             r"leaflet|bulletin|announcement|outline|transcript|handbook|datasheet|minutes|"
+             r"timetable|schedule|catalog(?:ue)?|menu|letter|chapter|book|course|lesson|"
+             r"statement|review|summary|overview|note|story|essay|thesis|proposal)s?")
 _OUT_NOUN = (r"(?:answers?|summar(?:y|ies)|responses?|repl(?:y|ies)|outputs?|overviews?|"
              r"digests?|synops[ie]s)")
 _ACTIVITY = (r"(?:summari[sz]\w*|relay\w*|condens\w*|paraphras\w*|"
