@@ -294,7 +294,8 @@ class Screen:
                     if kind in unicode.DISGUISED:  # show the line as written, tricks and all
                         hit["snippet"] = visible(text[start:end], 240)
                     content.append(hit)
-            for payload in encoded.find(text, self.budget):
+            for payload in encoded.find(text, self.budget,
+                                        words=self.tokens if source.indexed else None):
                 inner = Source(payload.text,
                                f"{payload.encoding} in {source.piece_at(payload.start)[2]}",
                                payload.encoding, "encoded", source.page,
