@@ -212,7 +212,7 @@ def why_missed(row: dict) -> str:
     if cls == "exfiltration":
         urls = [u.group() for u in _ANY_URL.finditer(text + " " + " ".join(s.text for s in
                                                                             sources))]
-        urls += [u for u, _ in links]
+        urls += [link[0] for link in links]
         hits = exfil.scan(text, links)
         if not urls:
             return f"no address read; score {m.get('score')} ({top})"

@@ -320,7 +320,7 @@ _RARE_TAGS = ("template", "noscript", "font", "details", "input", "textarea", "i
 @dataclass
 class Collected:
     pieces: list[Piece]
-    links: list[tuple[str, str]]  # (url, kind) for the exfiltration check
+    links: list[tuple[str, ...]]  # (url, kind[, words of its paragraph]) for exfil
     hidden_chars: int
 
 
@@ -438,13 +438,18 @@ def collect(root: lxml.etree._Element | None) -> Collected:
         if "javascript" in kind or kind in ("module", "text/ecmascript", ""):
             continue
         add(script.text or "", "script-data", f"<script type={kind[:40]}>")
-    links: list[tuple[str, str]] = []
+    links: list[tuple[str, ...]] = []
     for value in root.xpath("//@href|//@src|//@action|//@data|//@srcset")[:MAX_LINKS * 5]:
         v = str(value)
         if "?" in v or "{" in v or "%7" in v or "[" in v or "$" in v:
-            tag = value.getparent().tag
-            links.append((v[:4096], "image" if tag in ("img", "source", "embed", "video",
-                                                        "picture") else "link"))
+            el = value.getparent()
+            tag = el.tag
+            kind = "image" if tag in ("img", "source", "embed", "video", "picture") else "link"
+            holder = el.getparent() if v.endswith("=") else None
+            if holder is not None:  # a slot: the words of its paragraph say what goes in
+                links.append((v[:4096], kind, _text_of(holder, 600)))
+            else:
+                links.append((v[:4096], kind))
             if len(links) >= MAX_LINKS:
                 break
     return Collected(pieces, links, hidden_chars)

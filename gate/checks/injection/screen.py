@@ -254,7 +254,8 @@ class Screen:
                                      lang=m.lang, note=note, obfuscation=m.obfuscation))
         content.extend(self._sentences(source, text, visible_text, content))
         for u in exfil.scan(text, links):
-            weight = u.weight * (TOPIC_DAMPING if visible_text and self.topic else 1.0)
+            weight = u.weight * (TOPIC_DAMPING if visible_text and self.topic and
+                                 not u.direct else 1.0)
             why = u.why
             if visible_text and u.start >= 0 and wording._quoted(text, u.start, u.end):
                 weight *= QUOTED_URL_DAMPING  # an address quoted in a report or lesson
