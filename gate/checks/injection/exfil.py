@@ -255,8 +255,9 @@ def scan(text: str, links: list[tuple[str, ...]] | None = None,
             seen.add(url)
             hits.append(UrlHit(max(DIRECT_WEIGHT.get(kind, 0.6), verdict[0] if verdict
                                    else 0.0), start, end, url[:300], kind,
-                               f"the address has a slot, and the sentence around it asks for it to be filled "
-                               f"with the conversation ({carried!r})", direct=True))
+                               f"the address has a slot, and the sentence around it asks "
+                               f"for it to be filled with the conversation ({carried!r})",
+                               direct=True))
             return
         if verdict is None and carried and PUT_CUE.search(sentence) and \
                 TARGET_CUE.search(sentence) and not url.lower().startswith(("data:", "#")):
