@@ -365,6 +365,31 @@ def mix_share(n: int) -> None:
           f"extraction (target <= 50%); held {held}")
 
 
+def mix_cpu(n: int, rounds: int = 3) -> float:
+    """CPU time of the injection ``measure`` alone on the bench mix, per document (best of
+    ``rounds`` passes over the documents, extracted once beforehand): on a loaded machine
+    process time is steadier than wall time. Run it for two trees (``--tree``) one after
+    the other to compare them."""
+    from benchmarks.corpus import make_corpus
+    from gate.checks.injection import CHECK
+    from gate.extract import extract
+    inbox = make_corpus(ROOT / "bench-out" / f"injection-mix-{n}", n)
+    extractions = [extract(p.read_bytes(), max_pages=500, max_nesting=250)
+                   for p in sorted(inbox.rglob("*")) if p.is_file() and p.name != "manifest.jsonl"]
+    extractions = [e for e in extractions if e.summary.ok]
+    for e in extractions[:5]:
+        CHECK.measure(e)  # warm caches and imports
+    best = float("inf")
+    for _ in range(rounds):
+        t0 = time.process_time()
+        for e in extractions:
+            CHECK.measure(e)
+        best = min(best, (time.process_time() - t0) / len(extractions) * 1000)
+    print(f"bench mix ({len(extractions)} documents): injection measure {best:.2f} ms a document "
+          f"(CPU, best of {rounds})")
+    return best
+
+
 DUMP_SETS = BLIND_SETS + [ROOT / "benchmarks" / "data" / "injection_blind7"]
 LEAVE_OUT = "injection_blind7"  # compared in aggregate only: no document names printed
 DEBIAN_CACHE = Path("/tmp") / "gate-injection-debian-sample.pickle"
@@ -473,6 +498,9 @@ def main(argv: list[str] | None = None) -> int:
     parser.add_argument("--tree", default=None, metavar="DIR",
                         help="import gate from DIR (another version's source, e.g. main "
                         "from git archive) instead of this tree")
+    parser.add_argument("--mix-cpu", type=int, default=0, metavar="N",
+                        help="print the CPU time of measure() a document on an N-document "
+                        "bench mix (with --tree: of that tree), and stop")
     parser.add_argument("--compare", nargs=2, default=None, metavar=("A", "B"),
                         help="compare two --dump files; exit 1 when any document differs")
     parser.add_argument("--why", action="store_true",
@@ -491,6 +519,9 @@ def main(argv: list[str] | None = None) -> int:
         sys.path.insert(0, str(Path(args.tree).resolve()))
     if args.dump:
         dump(Path(args.dump), debian=not args.no_debian)
+        return 0
+    if args.mix_cpu:
+        mix_cpu(args.mix_cpu)
         return 0
     if args.weights:
         from gate.checks.injection import model as learnt

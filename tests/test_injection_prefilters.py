@@ -138,3 +138,21 @@ def test_pdf_hiding_prefilter_is_implied_by_every_hiding_operator():
     for data in streams:
         if pdf_hidden._HIDING_OPS.search(data):
             assert pdf_hidden._HIDING_GATE.search(data), data
+
+
+def test_pdf_operator_lookahead_gives_the_same_matches():
+    import re
+    n = pdf_hidden._N
+    unguarded = re.compile(
+        rb"/[^\s/]+\s+" + n + rb"\s+Tf\b|" + rb"\s+".join([n] * 6) + rb"\s+(Tm|cm)\b|" +
+        n + rb"\s+" + n + rb"\s+(T[dD])\b|(T[jJ]|')(?=\s|$)|(?:^|\s)(BT)\b")
+    rng = random.Random(5)
+    tokens = [b"BT", b"ET", b"/F1", b"12", b"0.1", b"-3", b".5", b"Tf", b"Tm", b"cm", b"Td",
+              b"TD", b"Tj", b"TJ", b"'", b"(x)", b"q", b"\n", b"1 0 0 1 5 5", b"(a 1 2 Td)"]
+    streams = [b"BT /F1 1 Tf (tiny) Tj ET", b"BT", b"0.1 0 0 0.1 0 0 cm"]
+    streams += [b" ".join(rng.choice(tokens) for _ in range(rng.randint(1, 40)))
+                for _ in range(1500)]
+    streams += [s.replace(b" ", b"") for s in streams[-300:]]
+    for data in streams:
+        assert [m.groups() for m in pdf_hidden._SIZE_OR_MATRIX.finditer(data)] == \
+            [m.groups() for m in unguarded.finditer(data)], data

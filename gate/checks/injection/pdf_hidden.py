@@ -50,9 +50,13 @@ _HIDING_GATE = re.compile(rb"[\d.]\s+(?:Tr|rg|scn?|g|k)\b")
 _N = rb"(-?\d*\.?\d+)"
 # Groups: 0 Tf size; 1-6 and 7 a Tm/cm matrix; 8-9 and 10 a Td/TD move; 11 a text-showing
 # operator; 12 BT.
+# The lookahead names every byte a match can start with ("/", a number, "T", "'", white
+# space, or "B" at the start): the same matches, and the engine gives up at once at any
+# other byte instead of trying each alternative there (the prose inside strings).
 _SIZE_OR_MATRIX = re.compile(
+    rb"(?=[/\-\d.T'B\s])(?:"
     rb"/[^\s/]+\s+" + _N + rb"\s+Tf\b|" + rb"\s+".join([_N] * 6) + rb"\s+(Tm|cm)\b|" +
-    _N + rb"\s+" + _N + rb"\s+(T[dD])\b|(T[jJ]|')(?=\s|$)|(?:^|\s)(BT)\b")
+    _N + rb"\s+" + _N + rb"\s+(T[dD])\b|(T[jJ]|')(?=\s|$)|(?:^|\s)(BT)\b)")
 MAX_SUSPECT_MATCHES = 50_000
 
 
