@@ -212,7 +212,7 @@ def why_missed(row: dict) -> str:
     if cls == "exfiltration":
         urls = [u.group() for u in _ANY_URL.finditer(text + " " + " ".join(s.text for s in
                                                                             sources))]
-        urls += [u for u, _ in links]
+        urls += [link[0] for link in links]
         hits = exfil.scan(text, links)
         if not urls:
             return f"no address read; score {m.get('score')} ({top})"
@@ -365,6 +365,105 @@ def mix_share(n: int) -> None:
           f"extraction (target <= 50%); held {held}")
 
 
+def mix_cpu(n: int, rounds: int = 3) -> float:
+    """CPU time of the injection ``measure`` alone on the bench mix, per document (best of
+    ``rounds`` passes over the documents, extracted once beforehand): on a loaded machine
+    process time is steadier than wall time. Run it for two trees (``--tree``) one after
+    the other to compare them."""
+    from benchmarks.corpus import make_corpus
+    from gate.checks.injection import CHECK
+    from gate.extract import extract
+    inbox = make_corpus(ROOT / "bench-out" / f"injection-mix-{n}", n)
+    extractions = [extract(p.read_bytes(), max_pages=500, max_nesting=250)
+                   for p in sorted(inbox.rglob("*")) if p.is_file() and p.name != "manifest.jsonl"]
+    extractions = [e for e in extractions if e.summary.ok]
+    for e in extractions[:5]:
+        CHECK.measure(e)  # warm caches and imports
+    best = float("inf")
+    for _ in range(rounds):
+        t0 = time.process_time()
+        for e in extractions:
+            CHECK.measure(e)
+        best = min(best, (time.process_time() - t0) / len(extractions) * 1000)
+    print(f"bench mix ({len(extractions)} documents): injection measure {best:.2f} ms a document "
+          f"(CPU, best of {rounds})")
+    return best
+
+
+DUMP_SETS = BLIND_SETS + [ROOT / "benchmarks" / "data" / "injection_blind7"]
+LEAVE_OUT = "injection_blind7"  # compared in aggregate only: no document names printed
+DEBIAN_CACHE = Path("/tmp") / "gate-injection-debian-sample.pickle"
+
+
+def _debian_docs() -> list[tuple[str, str, bytes]]:
+    """The default sample of benchmarks/debian_docs.py (rendered once, kept outside the
+    repository in :data:`DEBIAN_CACHE`; empty when the packages are not installed)."""
+    import pickle
+    if DEBIAN_CACHE.is_file():
+        return pickle.loads(DEBIAN_CACHE.read_bytes())
+    from benchmarks import debian_docs
+    docs = debian_docs.man_pages(100) + debian_docs.html_pages(150)
+    DEBIAN_CACHE.write_bytes(pickle.dumps(docs))
+    return docs
+
+
+def dump(out: Path, debian: bool = True) -> None:
+    """Every document's injection measure and findings (codes and messages) as JSON: the
+    fixtures, blind sets 1-7 and (``debian``) the Debian sample. Two dumps, one from each
+    version (``--tree``), compared with ``--compare``, prove a speed change left every
+    result the same."""
+    from gate.checks.base import Document, RunContext
+    from gate.checks.injection import CHECK, InjectionSettings
+    from gate.extract import extract
+
+    policy = SimpleNamespace(injection=InjectionSettings(threshold=0.5))
+    ctx = RunContext(as_of=datetime(2026, 12, 1, tzinfo=UTC))
+    groups: dict[str, list[tuple[str, bytes]]] = {
+        "fixtures": [(r["path"], r["data"]) for r in load_corpus("all")]}
+    for folder in DUMP_SETS:
+        groups[folder.name] = [(r["path"], r["data"]) for r in load_blind(folder)]
+    if debian:
+        groups["debian"] = [(path, data) for _, path, data in _debian_docs()]
+    result: dict[str, dict[str, object]] = {}
+    cpu = 0.0
+    for name, docs in groups.items():
+        result[name] = {}
+        for path, data in docs:
+            extraction = extract(data, max_pages=500, max_nesting=250)
+            if not extraction.summary.ok:
+                result[name][path] = {"problem": extraction.summary.problem}
+                continue
+            t0 = time.process_time()
+            measured = CHECK.measure(extraction)
+            cpu += time.process_time() - t0
+            document = Document(path=path, kind="file", size=len(data), sha256=None,
+                                manifest=None, extracted=extraction.summary,
+                                measures={"injection": measured})
+            findings = CHECK.evaluate(document, policy, ctx) or []
+            result[name][path] = {"measured": measured, "findings": [
+                [f.code, f.message] for f in findings]}
+        print(f"{name}: {len(docs)} documents")
+    out.write_text(json.dumps(result, sort_keys=True, default=str), encoding="utf-8")
+    print(f"wrote {out} (measure CPU {cpu:.1f} s, loaded)")
+
+
+def compare(a: Path, b: Path) -> int:
+    """Documents whose measure or findings differ between two dumps, per group (names only
+    outside the leave-out set). Exit 1 when any differ."""
+    one = json.loads(a.read_text(encoding="utf-8"))
+    two = json.loads(b.read_text(encoding="utf-8"))
+    differ = 0
+    for name in sorted(set(one) | set(two)):
+        x, y = one.get(name, {}), two.get(name, {})
+        diff = sorted(k for k in set(x) | set(y) if x.get(k) != y.get(k))
+        differ += len(diff)
+        print(f"{name:<22}{len(set(x) | set(y)):>6} documents, {len(diff)} differ")
+        if name != LEAVE_OUT:
+            for k in diff[:20]:
+                print(f"  DIFFERS {k}")
+    return 1 if differ else 0
+
+
 def main(argv: list[str] | None = None) -> int:
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     parser.add_argument("--split", default="all",
@@ -391,6 +490,19 @@ def main(argv: list[str] | None = None) -> int:
                         "(e.g. bench-out/leave-out-blind4.npz from train_injection_model.py "
                         "--leave-out blind4: the check on a set its model never saw)")
     parser.add_argument("--verbose", action="store_true")
+    parser.add_argument("--dump", default=None, metavar="FILE",
+                        help="write every document's measure and findings (fixtures, blind "
+                        "sets 1-7, the Debian sample) to FILE as JSON, and stop")
+    parser.add_argument("--no-debian", action="store_true",
+                        help="with --dump: leave the Debian sample out")
+    parser.add_argument("--tree", default=None, metavar="DIR",
+                        help="import gate from DIR (another version's source, e.g. main "
+                        "from git archive) instead of this tree")
+    parser.add_argument("--mix-cpu", type=int, default=0, metavar="N",
+                        help="print the CPU time of measure() a document on an N-document "
+                        "bench mix (with --tree: of that tree), and stop")
+    parser.add_argument("--compare", nargs=2, default=None, metavar=("A", "B"),
+                        help="compare two --dump files; exit 1 when any document differs")
     parser.add_argument("--why", action="store_true",
                         help="for each missed encoded, exfiltration, hidden-placement or "
                         "multilingual attack of a blind set, print its cause (tuning sets only)")
@@ -399,6 +511,18 @@ def main(argv: list[str] | None = None) -> int:
         parser.error("--verbose and --why list documents; the held half is read in aggregate "
                      "only")
     sys.path.insert(0, str(ROOT))
+    if args.compare:
+        return compare(Path(args.compare[0]), Path(args.compare[1]))
+    if args.tree:
+        if not (Path(args.tree) / "gate").is_dir():
+            parser.error(f"--tree {args.tree}: no gate package in that folder")
+        sys.path.insert(0, str(Path(args.tree).resolve()))
+    if args.dump:
+        dump(Path(args.dump), debian=not args.no_debian)
+        return 0
+    if args.mix_cpu:
+        mix_cpu(args.mix_cpu)
+        return 0
     if args.weights:
         from gate.checks.injection import model as learnt
         try:

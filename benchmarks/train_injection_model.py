@@ -62,6 +62,7 @@ BLIND_SETS = {"blind1": BLIND_DIR, **{f"blind{n}": ROOT / "benchmarks" / "data" 
                                       f"injection_blind{n}" for n in (2, 3, 4, 5, 6)}}
 TRAIN24 = "train24"  # the sub-folder of TRAIN_DIR holding the rows written for issue 15
 TRAIN26 = "train26"  # ... and the second batch (rows in its rows/ folder)
+TRAIN27 = "train27"  # ... and the third (rows/; read only with --with-train27)
 FIXTURES = ROOT / "tests" / "fixtures" / "injection"
 CACHE = ROOT / "bench-out" / "train-cache"
 OUT = M.WEIGHTS
@@ -141,7 +142,7 @@ def split_parts(rows: list[dict]) -> set[str]:
 
 
 def snippets(units: Units, stats: Counter, train24: bool = True,
-             train26: bool = True) -> list[dict]:
+             train26: bool = True, train27: bool = False) -> list[dict]:
     """The written snippets; returns the validation ones (scored as one-unit documents)."""
     val = []
     paths = sorted(TRAIN_DIR.glob("*.jsonl"))
@@ -149,13 +150,16 @@ def snippets(units: Units, stats: Counter, train24: bool = True,
         paths += sorted((TRAIN_DIR / TRAIN24).glob("*.jsonl"))
     if train26:
         paths += sorted((TRAIN_DIR / TRAIN26 / "rows").glob("*.jsonl"))
+    if train27:
+        paths += sorted((TRAIN_DIR / TRAIN27 / "rows").glob("*.jsonl"))
     for path in paths:
         source = "extra" if path.name.startswith("extra") else \
             TRAIN24 if path.parent.name == TRAIN24 else \
-            TRAIN26 if path.parent.parent.name == TRAIN26 else "snippet"
+            TRAIN26 if path.parent.parent.name == TRAIN26 else \
+            TRAIN27 if path.parent.parent.name == TRAIN27 else "snippet"
         items = [json.loads(line) for line in path.read_text(encoding="utf-8").splitlines()
                  if line.strip()]
-        parts = split_parts(items) if source == TRAIN26 else set()
+        parts = split_parts(items) if source in (TRAIN26, TRAIN27) else set()
         for item in items:
             if item["text"] in parts:
                 stats[f"{source} split parts left out"] += 1
@@ -164,7 +168,7 @@ def snippets(units: Units, stats: Counter, train24: bool = True,
             ident = f"snippet:{item['text']}"
             split = "val" if is_val(ident) else "train"
             stats[f"snippets {split} {item['label']}"] += 1
-            if source in (TRAIN24, TRAIN26):
+            if source in (TRAIN24, TRAIN26, TRAIN27):
                 stats[f"{source} {split} {item['label']}"] += 1
             if split == "val":
                 val.append(dict(item, group=ident))
@@ -432,6 +436,9 @@ def main(argv: list[str] | None = None) -> int:
                         help=f"leave out the rows in {TRAIN_DIR.relative_to(ROOT)}/{TRAIN24}")
     parser.add_argument("--no-train26", action="store_true",
                         help=f"leave out the rows in {TRAIN_DIR.relative_to(ROOT)}/{TRAIN26}")
+    parser.add_argument("--with-train27", action="store_true",
+                        help=f"add the rows in {TRAIN_DIR.relative_to(ROOT)}/{TRAIN27} "
+                        "(not in the shipped model)")
     parser.add_argument("--evaluate-only", metavar="WEIGHTS", default=None,
                         help="with --leave-out: measure this weights file instead of training")
     parser.add_argument("--model-alone", action="store_true",
@@ -460,7 +467,7 @@ def main(argv: list[str] | None = None) -> int:
     units = Units()
     stats: Counter = Counter()
     val_snippets = snippets(units, stats, train24=not args.no_train24,
-                            train26=not args.no_train26)
+                            train26=not args.no_train26, train27=args.with_train27)
     val_blind = []
     for name in sets:
         val_blind += blind(units, stats, name, BLIND_SETS[name])

@@ -68,8 +68,20 @@ class _Span:
         return self._end
 
 
+# Bytes of the base64 alphabets (standard and URL-safe) -> "a", any other byte -> "x": a
+# text holds a run of 20 such characters exactly when its translation holds "a" * 20
+# (characters beyond ASCII encode to bytes of 0x80 and over, never in the alphabet).
+_B64_CLASSES = bytes(97 if chr(c) in "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz"
+                     "0123456789+/_-" else 120 for c in range(256))
+
+
 def _long_runs(text: str, pattern: re.Pattern[str]):
-    """Matches of ``pattern`` inside tokens of 20 characters or more (cheap on prose)."""
+    """Matches of ``pattern`` inside tokens of 20 characters or more (cheap on prose).
+
+    Only for a pattern that needs 20 characters of the base64 alphabets in a row (as
+    :data:`_B64` does): a text without such a run is passed over without splitting it."""
+    if b"a" * 20 not in text.encode("utf-8", "surrogatepass").translate(_B64_CLASSES):
+        return
     tokens = text.split()
     if not tokens or max(map(len, tokens)) < 20:
         return
@@ -93,10 +105,10 @@ _HEX_CLASSES = bytes(104 if chr(c) in "0123456789abcdefABCDEF" else 115 if c in 
 
 def _maybe_hex(text: str) -> bool:
     """A run of 24 hex digits, or four pairs with separators (bytes.translate: fast)."""
-    digits = sum(map(text.count, "0123456789"))
-    if digits < 12:
-        return False
-    classes = text.encode("utf-8", "ignore").translate(_HEX_CLASSES)
+    data = text.encode("utf-8", "ignore")
+    if len(data) - len(data.translate(None, b"0123456789")) < 12:
+        return False  # fewer than 12 decimal digits
+    classes = data.translate(_HEX_CLASSES)
     return b"h" * 24 in classes or b"hhshhshhshhs" in classes
 
 
@@ -152,9 +164,16 @@ _WRAP_MARKS = re.compile(r"[0-9A-Za-z+/]{16}|%[0-9A-Fa-f]{2}|=[0-9A-F]{2}|\\[ux]
 MAX_WRAPPED = 20
 
 
+# What every match of _WRAPPED holds: a line of 16 or more characters of its alphabet and
+# the start of the next line. "\n" leads it, so the engine skips to each newline fast; a
+# text is searched with "\n" before it, so its first line is a line like the others.
+_WRAPPED_GATE = re.compile(r"\n[ \t]*[A-Za-z0-9+/=%\\&#;:,_~.\-]{16,}[ \t]*\r?\n"
+                           r"[ \t]*[A-Za-z0-9+/=%\\&#;:,_~.\-]")
+
+
 def _wrapped(text: str) -> list[tuple[int, int, str]]:
     """(start, end, joined) for each hard-wrapped run of two or more lines."""
-    if "\n" not in text:
+    if "\n" not in text or not _WRAPPED_GATE.search("\n" + text):
         return []
     out = []
     for m in _WRAPPED.finditer(text):
@@ -171,8 +190,18 @@ def _wrapped(text: str) -> list[tuple[int, int, str]]:
     return out
 
 
-def find(text: str, budget: list[int], _joined: bool = False) -> list[Payload]:
-    """Decoded payloads in ``text``. ``budget`` is ``[decoded characters left]``, shared."""
+def _may_hold(cue: str, words: set[bytes] | None) -> bool:
+    """False when ``words`` (the word tokens of the text's fold) rule out the cue."""
+    return words is None or not _CUE_TOKENS[cue].isdisjoint(words)
+
+
+def find(text: str, budget: list[int], _joined: bool = False,
+         words: set[bytes] | None = None) -> list[Payload]:
+    """Decoded payloads in ``text``. ``budget`` is ``[decoded characters left]``, shared.
+
+    ``words``, when given, are the word tokens of the fold of ``text``
+    (``wording.tokens_of``): the caller has them already, and they let the ROT13 and
+    reversed-text readers pass over a text that holds none of their cue words."""
     found: list[Payload] = []
     if budget[0] <= 0:
         return found
@@ -248,13 +277,13 @@ def find(text: str, budget: list[int], _joined: bool = False) -> list[Payload]:
             if m.group().startswith("\\x"):
                 end = m.end()
             keep(encoding, start, end, _decode(encoding, text[start:end][:MAX_RUN]))
-    if _REVERSED_CUE.search(text, 0, 200_000):
+    if _may_hold("reversed", words) and _REVERSED_CUE.search(text, 0, 200_000):
         for start, end in _reversed_lines(text[:200_000]):
             if tried >= MAX_CANDIDATES:
                 break
             tried += 1
             keep("reversed text", start, end, text[start:end][::-1])
-    for start, end in _rot13_lines(text[:200_000]):
+    for start, end in (_rot13_lines(text[:200_000]) if _may_hold("rot13", words) else ()):
         if tried >= MAX_CANDIDATES:
             break
         tried += 1
@@ -328,8 +357,9 @@ _REVERSED = frozenset("eht dna ot fo ni si uoy ruoy rof taht htiw eb siht no sa 
                       "resu eseht lla ton od nehw".split())
 _FORWARD = frozenset("the and to of in is you your for that with be this on as at or by it are "
                      "user these all not do when".split())
-_REVERSED_CUE = re.compile(r" (?:eht|dna|ot|fo|uoy|ruoy|ni|si|lla|siht|yas|htiw|rof|taht|"
-                           r"dluohs|tsum|nehw|ton) ")
+_REVERSED_CUE_WORDS = ("eht", "dna", "ot", "fo", "uoy", "ruoy", "ni", "si", "lla", "siht", "yas",
+                       "htiw", "rof", "taht", "dluohs", "tsum", "nehw", "ton")
+_REVERSED_CUE = re.compile(r" (?:" + "|".join(_REVERSED_CUE_WORDS) + ") ")
 _LETTERS = re.compile(r"[a-z]+")
 
 
@@ -353,7 +383,14 @@ _ROT13_CUE = re.compile(r"\b(?:" + "|".join(sorted(w for w in _ROT13_COMMON if l
                         + r"|gb|va|vf|bs|ab|vg|jr|ur|zr)\b")
 ROT13_MIN = 3  # ROT13 words of common English in one line, at least
 # ROT13 English holds one of these almost always ("the", "to", "and", "a", "you" ...).
-_ROT13_GATE = re.compile(r" (?:gur|gb|naq|n|lbh|lbhe|bs|vf|va|sbe|nobhg|jvgu|guvf|nyy) ")
+_ROT13_GATE_WORDS = ("gur", "gb", "naq", "n", "lbh", "lbhe", "bs", "vf", "va", "sbe", "nobhg",
+                     "jvgu", "guvf", "nyy")
+_ROT13_GATE = re.compile(r" (?:" + "|".join(_ROT13_GATE_WORDS) + ") ")
+# The cue words as the word tokens of a folded text (wording.tokens_of): a cue " eht "
+# in a text makes "eht" one of the tokens of its fold, so a caller that has the tokens
+# lets a text without them pass without searching it.
+_CUE_TOKENS = {"reversed": frozenset(w.encode("ascii") for w in _REVERSED_CUE_WORDS),
+               "rot13": frozenset(w.encode("ascii") for w in _ROT13_GATE_WORDS)}
 _LABEL = re.compile(r"[:\u2014\u2013]\s")  # "Build id: <rot13>", "For the assistant — <rot13>"
 
 
@@ -437,10 +474,19 @@ def _leet_word(token: str) -> str:
     return plain
 
 
+# _LEET_PAIR by bytes: its digits -> "d", ASCII letters -> "l", any other byte -> "x"; a
+# text holds a pair exactly when its translation holds "dl" (bytes.find is far quicker
+# than a regular-expression scan of a long text).
+_LEET_PAIR_CLASSES = bytes(100 if c in b"013457" else 108 if chr(c).isascii() and
+                           chr(c).isalpha() else 120 for c in range(256))
+
+
 def _leet_lines(text: str) -> list[tuple[int, int, str]]:
     """Lines in leetspeak: at least three tokens mixing letters with digits read as letters,
     making up at least a third of the line's words, at least three of them reading as words
     and two of those common English words (a part number or a version list reads as none)."""
+    if b"dl" not in text.encode("utf-8", "surrogatepass").translate(_LEET_PAIR_CLASSES):
+        return []
     pairs: dict[int, int] = {}
     for n, m in enumerate(_LEET_PAIR.finditer(text)):
         if n > 4000:

@@ -84,6 +84,60 @@ DATA_CUE = re.compile(
     r"kullanici|kullanıcı|sohbet|pengguna|percakapan)", re.I)
 
 
+# Words that name what only the conversation holds: its messages, what the user said or
+# shared in it, secrets mentioned earlier ("the user's question", "a compact copy of the
+# conversation", "passwords mentioned earlier", "earlier parts of this chat"), in the
+# languages of the lexicon. An address whose slot the words around fill with this is
+# carrying the conversation out: an operative instruction, not a page about the topic, so
+# the screen does not damp it for the topic (it still does for quotations and examples).
+CONVERSATION_CUE = re.compile(
+    r"\b(?:(?:this|the|our|current|whole|entire|full)\s+(?:conversation|dialogue)|"
+    r"(?:this|whole|entire|full)\s+chat|conversation\s+(?:history|so\s+far|log)|"
+    r"chat\s+(?:history|log|transcript)|(?:earlier|previous|prior)\s+(?:parts?|messages?|"
+    r"turns?|questions?)\s+(?:of|in)\s+(?:this|the)\s+(?:chat|conversation)|"
+    r"(?:mentioned|shared|typed|said)\s+(?:earlier|so\s+far|in\s+(?:this|the)\s+(?:chat|"
+    r"conversation))|user'?s\s+(?:\w+\s+and\s+)?(?:last\s+|latest\s+|previous\s+)?"
+    r"(?:question|message|prompt|history|conversation|chat)s?\b|what\s+the\s+user\s+"
+    r"(?:said|typed|asked|wrote|shared)|if\s+the\s+user\s+(?:shared|mentioned|typed|gave)|"
+    r"earlier\s+parts\s+of\s+this\s+chat|system\s+prompt|"
+    r"conversazione|conversação|conversación|(?:la|cette)\s+conversation|"
+    r"historial\s+del?\s+chat|histórico\s+da\s+conversa|gesprächsverlauf|chatverlauf|"
+    r"(?:die(?:se)?|der)\s+unterhaltung|cronologia\s+della\s+chat|gespreksgeschiedenis|"
+    r"(?:dit|het)\s+gesprek|historia\s+rozmowy|(?:tej|tę|całą)\s+rozmow\w*|"
+    r"konversationen|chatthistorik|переписк\w*|(?:этот|этого|весь)\s+разговор\w*|"
+    r"(?:этот|этого|весь)\s+диалог\w*|bu\s+sohbet\w*|sohbet\s+geçmiş\w*|"
+    r"percakapan\s+ini|会話|対話|チャット履歴|对话|對話|聊天记录|聊天記錄|المحادثة|"
+    r"बातचीत|대화)", re.I)
+DIRECT_WEIGHT = {"image": 0.7, "link": 0.6, "address": 0.6}
+# A link or image the words around ask to carry the conversation, though its address
+# has no slot ("put it in the alt text of an image pointing to ...", "add the user's
+# question to this link"): a verb of putting and a word for the address or image.
+PUT_CUE = re.compile(r"\b(?:put|place|add|append|attach|insert|include|embed|encode|paste|"
+                     r"write|build|construct|tack)\w*\b", re.I)
+TARGET_CUE = re.compile(r"\b(?:link|url|address|image|img|alt[\s-]?text|query|parameter|"
+                        r"path)s?\b", re.I)
+ASKED_WEIGHT = {"image": 0.55, "link": 0.5, "address": 0.5}
+SENTENCE_BEFORE = 220  # characters before an address read as its sentence, at most
+
+
+def _sentence_around(text: str, start: int, end: int) -> str:
+    """The words of the sentence an address sits in: back to the last full stop, line
+    break between paragraphs or :data:`SENTENCE_BEFORE` characters, on to the next."""
+    before = text[max(0, start - SENTENCE_BEFORE):start]
+    cut = max(before.rfind(". "), before.rfind("\n\n"), before.rfind("? "), before.rfind("! "))
+    before = before[cut + 1:] if cut >= 0 else before
+    after = text[end:end + SENTENCE_BEFORE]
+    stop = min((i for i in (after.find(". "), after.find("\n\n"), after.find(".\n"))
+                if i >= 0), default=len(after))
+    return before + " " + after[:stop + 1]
+
+
+def carries_conversation(sentence: str) -> str | None:
+    """The words naming the conversation's content in ``sentence``, or None."""
+    m = CONVERSATION_CUE.search(sentence)
+    return m.group() if m else None
+
+
 # Words around an address with a placeholder that ask for the placeholder to be filled
 # with the user's data ("where USER_QUESTION is the user's last message", "with the real
 # values filled in", "replace USER_EMAIL with ...").
@@ -127,6 +181,7 @@ class UrlHit:
     url: str
     kind: str  # image | link | address
     why: str
+    direct: bool = False  # the words around fill it with the conversation (see above)
 
 
 def judge(url: str, kind: str) -> tuple[float, str] | None:
@@ -174,7 +229,7 @@ def judge(url: str, kind: str) -> tuple[float, str] | None:
     return None
 
 
-def scan(text: str, links: list[tuple[str, str]] | None = None,
+def scan(text: str, links: list[tuple[str, ...]] | None = None,
          ) -> list[UrlHit]:
     """Suspicious addresses in ``text`` (Markdown, inline HTML, bare URLs) and ``links``.
 
@@ -185,12 +240,32 @@ def scan(text: str, links: list[tuple[str, str]] | None = None,
     seen: set[str] = set()
     count = 0
 
-    def consider(url: str, kind: str, start: int, end: int) -> None:
+    def consider(url: str, kind: str, start: int, end: int, around: str = "") -> None:
         nonlocal count
         count += 1
         if count > MAX_URLS or url in seen:
             return
         verdict = judge(url, kind)
+        sentence = _sentence_around(text, start, end) if start >= 0 else around
+        carried = carries_conversation(sentence) if sentence else None
+        if carried and (EMPTY_SLOT.search(url) and (verdict is None or verdict[0] < 0.5) and
+                        (APPEND_CUE.search(sentence) or PUT_CUE.search(sentence)) or
+                        verdict is not None and filled(sentence)):
+            # a slot, or a placeholder, that the sentence fills with the conversation
+            seen.add(url)
+            hits.append(UrlHit(max(DIRECT_WEIGHT.get(kind, 0.6), verdict[0] if verdict
+                                   else 0.0), start, end, url[:300], kind,
+                               f"the address has a slot, and the sentence around it asks "
+                               f"for it to be filled with the conversation ({carried!r})",
+                               direct=True))
+            return
+        if verdict is None and carried and PUT_CUE.search(sentence) and \
+                TARGET_CUE.search(sentence) and not url.lower().startswith(("data:", "#")):
+            seen.add(url)
+            hits.append(UrlHit(ASKED_WEIGHT.get(kind, 0.5), start, end, url[:300], kind,
+                               f"the sentence around the address asks for the conversation "
+                               f"({carried!r}) to be put into a link or image", direct=True))
+            return
         if verdict is None and start >= 0:
             verdict = slot(url, text[max(0, start - SLOT_CONTEXT):end + SLOT_CONTEXT])
         elif verdict is not None and verdict[0] < 0.7 and start >= 0:
@@ -227,6 +302,6 @@ def scan(text: str, links: list[tuple[str, str]] | None = None,
     if "mailto:" in text.lower():
         for m in _MAILTO.finditer(text):
             consider(m.group(), "link", m.start(), m.end())
-    for url, kind in links or []:
-        consider(url, kind, -1, -1)
+    for link in links or []:  # (url, kind) or (url, kind, the words of its block)
+        consider(link[0], link[1], -1, -1, link[2] if len(link) > 2 else "")
     return hits

@@ -312,10 +312,15 @@ def _css_texts(root: lxml.etree._Element) -> list[str]:
     return out
 
 
+# Elements whose queries below are skipped when a page has none ("{*}svg": in any
+# namespace or none, as local-name() matches).
+_RARE_TAGS = ("template", "noscript", "font", "details", "input", "textarea", "iframe", "{*}svg")
+
+
 @dataclass
 class Collected:
     pieces: list[Piece]
-    links: list[tuple[str, str]]  # (url, kind) for the exfiltration check
+    links: list[tuple[str, ...]]  # (url, kind[, words of its paragraph]) for exfil
     hidden_chars: int
 
 
@@ -324,6 +329,10 @@ def collect(root: lxml.etree._Element | None) -> Collected:
     if root is None:
         return Collected([], [], 0)
     hidden_classes, hidden_ids, page_bg = _css_rules(root)
+    # Which of the rarer elements the page has at all (one walk in C, no element objects
+    # made for the others): a query for an element the page lacks is skipped unasked.
+    present = {el.tag.rpartition("}")[2] if el.tag.startswith("{") else el.tag
+               for el in root.iter(*_RARE_TAGS)}
     pieces: list[Piece] = []
     budget = [MAX_CHARS]
     hidden_chars = 0
@@ -339,8 +348,11 @@ def collect(root: lxml.etree._Element | None) -> Collected:
         pieces.append(Piece(text, technique, where))
 
     # Elements that hide their whole subtree.
-    queries = ["//template", "//noscript", "//*[@hidden]", "//*[@style]", "//font[@color]",
-               "//details[not(@open)]"]
+    queries = [q for q, tag in (("//template", "template"), ("//noscript", "noscript"),
+                                ("//*[@hidden]", None), ("//*[@style]", None),
+                                ("//font[@color]", "font"),
+                                ("//details[not(@open)]", "details")) if tag is None or
+               tag in present]
     queries.append("//*[@class]")  # checked in Python: cheaper than XPath string tests
     if hidden_ids:
         ids = sorted(hidden_ids)[:80]
@@ -386,24 +398,32 @@ def collect(root: lxml.etree._Element | None) -> Collected:
         if len(value) >= 12:
             add(str(value), "attribute", f"{value.attrname}= on <{value.getparent().tag}>")
     for value in root.xpath("//input[translate(@type,'HIDEN','hiden')='hidden']/@value"
-                            )[:MAX_NODES]:
+                            )[:MAX_NODES] if "input" in present else ():
         add(str(value), "hidden-input", "<input type=hidden>")
     for meta in root.xpath("//meta[@content]")[:MAX_NODES]:
         content = meta.get("content") or ""
         key = meta.get("name") or meta.get("property") or meta.get("itemprop") or ""
         if content.count(" ") >= 2 and key.lower() not in ("viewport", "robots"):
             add(content, "meta", f"<meta {('name=' + key[:40]) if key else ''}>")
-    headings = {" ".join(_text_of(h, 2_000).split()) for h in
-                root.xpath("//h1|//h2|//h3")[:30]}
+    headings: dict[str, None] = {}  # the first 30 headings' texts, read as far as needed
+    heading_els = itertools.islice(root.iter("h1", "h2", "h3"), 30)
     for el in root.xpath("//title[not(ancestor::*[local-name()='svg'])]")[:3]:
         title = _text_of(el, 2_000)
-        if " ".join(title.split()) not in headings:  # a title the page shows is no secret
+        words = " ".join(title.split())
+        while words not in headings:
+            heading = next(heading_els, None)
+            if heading is None:
+                break
+            headings[" ".join(_text_of(heading, 2_000).split())] = None
+        if words not in headings:  # a title the page shows is no secret
             add(title, "title-element", "the page <title> (shown in the browser tab)")
     for el in root.xpath("//*[local-name()='svg']//*[local-name()='text' or "
-                         "local-name()='title' or local-name()='desc']")[:MAX_NODES]:
+                         "local-name()='title' or local-name()='desc']")[:MAX_NODES] \
+            if "svg" in present else ():
         add(_text_of(el, 20_000), "svg-text", f"<svg> <{el.tag}>")
     for value in root.xpath("//input[not(translate(@type,'HIDEN','hiden')='hidden')]/@value|"
-                            "//textarea/text()|//iframe/@srcdoc")[:MAX_NODES]:
+                            "//textarea/text()|//iframe/@srcdoc")[:MAX_NODES] \
+            if present & {"input", "textarea", "iframe"} else ():
         if len(value) >= 12:
             add(str(value), "form-value", f"<{value.getparent().tag}> value")
     for value in root.xpath("//@*[starts-with(name(), 'data-')]")[:MAX_NODES]:
@@ -418,13 +438,18 @@ def collect(root: lxml.etree._Element | None) -> Collected:
         if "javascript" in kind or kind in ("module", "text/ecmascript", ""):
             continue
         add(script.text or "", "script-data", f"<script type={kind[:40]}>")
-    links: list[tuple[str, str]] = []
+    links: list[tuple[str, ...]] = []
     for value in root.xpath("//@href|//@src|//@action|//@data|//@srcset")[:MAX_LINKS * 5]:
         v = str(value)
         if "?" in v or "{" in v or "%7" in v or "[" in v or "$" in v:
-            tag = value.getparent().tag
-            links.append((v[:4096], "image" if tag in ("img", "source", "embed", "video",
-                                                        "picture") else "link"))
+            el = value.getparent()
+            tag = el.tag
+            kind = "image" if tag in ("img", "source", "embed", "video", "picture") else "link"
+            holder = el.getparent() if v.endswith("=") else None
+            if holder is not None:  # a slot: the words of its paragraph say what goes in
+                links.append((v[:4096], kind, _text_of(holder, 600)))
+            else:
+                links.append((v[:4096], kind))
             if len(links) >= MAX_LINKS:
                 break
     return Collected(pieces, links, hidden_chars)

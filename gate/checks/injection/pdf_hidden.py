@@ -43,12 +43,20 @@ _HIDING_OPS = re.compile(
     rb"|(?:^|[\s\]])(?:0?\.9[4-9]\d*|1(?:\.0*)?)\s+(?:g|sc|scn)\b"  # white grey fill
     rb"|(?:^|[\s\]])(?:0?\.0[0-6]?\d*|0)\s+(?:0?\.0[0-6]?\d*|0)\s+(?:0?\.0[0-6]?\d*|0)\s+"
     rb"(?:0?\.0[0-6]?\d*|0)\s+(?:k|sc|scn)\b")  # white CMYK fill
+# What every match of _HIDING_OPS ends with: a number, white space and the operator. Its
+# search starts with a character set, which the engine skips to fast; a stream without it
+# is not searched with the whole pattern.
+_HIDING_GATE = re.compile(rb"[\d.]\s+(?:Tr|rg|scn?|g|k)\b")
 _N = rb"(-?\d*\.?\d+)"
 # Groups: 0 Tf size; 1-6 and 7 a Tm/cm matrix; 8-9 and 10 a Td/TD move; 11 a text-showing
 # operator; 12 BT.
+# The lookahead names every byte a match can start with ("/", a number, "T", "'", white
+# space, or "B" at the start): the same matches, and the engine gives up at once at any
+# other byte instead of trying each alternative there (the prose inside strings).
 _SIZE_OR_MATRIX = re.compile(
+    rb"(?=[/\-\d.T'B\s])(?:"
     rb"/[^\s/]+\s+" + _N + rb"\s+Tf\b|" + rb"\s+".join([_N] * 6) + rb"\s+(Tm|cm)\b|" +
-    _N + rb"\s+" + _N + rb"\s+(T[dD])\b|(T[jJ]|')(?=\s|$)|(?:^|\s)(BT)\b")
+    _N + rb"\s+" + _N + rb"\s+(T[dD])\b|(T[jJ]|')(?=\s|$)|(?:^|\s)(BT)\b)")
 MAX_SUSPECT_MATCHES = 50_000
 
 
@@ -58,7 +66,7 @@ def _suspect(data: bytes, box: tuple[float, float, float, float]) -> bool:
     Besides hiding colours and render modes, it follows font size times text-matrix scale in
     stream order (tiny text) and absolute positions (``Tm``, ``cm``, large ``Td`` moves).
     """
-    if _HIDING_OPS.search(data):
+    if _HIDING_GATE.search(data) and _HIDING_OPS.search(data):
         return True
     x0, y0, x1, y1 = box
     size, scale = 12.0, 1.0

@@ -254,7 +254,8 @@ class Screen:
                                      lang=m.lang, note=note, obfuscation=m.obfuscation))
         content.extend(self._sentences(source, text, visible_text, content))
         for u in exfil.scan(text, links):
-            weight = u.weight * (TOPIC_DAMPING if visible_text and self.topic else 1.0)
+            weight = u.weight * (TOPIC_DAMPING if visible_text and self.topic and
+                                 not u.direct else 1.0)
             why = u.why
             if visible_text and u.start >= 0 and wording._quoted(text, u.start, u.end):
                 weight *= QUOTED_URL_DAMPING  # an address quoted in a report or lesson
@@ -294,7 +295,8 @@ class Screen:
                     if kind in unicode.DISGUISED:  # show the line as written, tricks and all
                         hit["snippet"] = visible(text[start:end], 240)
                     content.append(hit)
-            for payload in encoded.find(text, self.budget):
+            for payload in encoded.find(text, self.budget,
+                                        words=self.tokens if source.indexed else None):
                 inner = Source(payload.text,
                                f"{payload.encoding} in {source.piece_at(payload.start)[2]}",
                                payload.encoding, "encoded", source.page,
@@ -604,7 +606,7 @@ def _discontinuous(folded: str, start: int, end: int) -> tuple[int, int] | None:
         words = set(directive.content_words(unit))
     if len(words) < DISCONTINUITY_WORDS:
         return None
-    shared = sum(1 for w in words if w in rest)
+    shared = directive.shared_words(words, rest)  # five words or more: by word starts
     if shared > DISCONTINUITY_SHARE * len(words):
         return None
     return shared, len(words)
