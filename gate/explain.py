@@ -40,7 +40,7 @@ from gate.intake import read_entry
 from gate.manifest import Manifest, ManifestRecord
 from gate.policy import LoadedPolicy
 from gate.record import doc_record, slim
-from gate.templates import Page, learn, removal, site_of, stored_pages
+from gate.templates import Page, Removals, learn_quick, site_of, stored_pages
 from gate.work import Params, process, warm_up
 
 _BULKY = {"minhash"}
@@ -186,7 +186,7 @@ def _on_own_text(pool: WorkerPool, rel: str, data: bytes | None, params: Params,
                 pages.append(page)
     if against is not None:
         pages += [p for p in _stored_template_pages(against, members) if p.site == own.site]
-    drop = removal(own, learn(pages))
+    drop = Removals(learn_quick(pages))(own)
     [(_tag, result)] = list(pool.run([(rel, (rel, data, params, drop, first["text"]))]))
     return result, {"site": site, "pages": len({p.signature() for p in pages}),
                     "removed": len(drop[0]) + len(drop[1]) if drop else 0}
